@@ -1,0 +1,5 @@
+#!/usr/bin/env node
+// The `bulkhead` command: runs the TypeScript sources through tsx, so there is no build step.
+import { register } from 'tsx/esm/api';
+register();
+await import('../src/main.ts');

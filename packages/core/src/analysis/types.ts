@@ -1,0 +1,159 @@
+// The data that flows between analysis stages: traces, findings and assessments. Renderers and the
+// viewer read only these shapes, so they are plain data (no classes, no Maps) and JSON-serialisable.
+import type { ElementGroup, ElementKind, FunctionKind, LinkField } from '../model/kinds.ts';
+import type { SeverityLevel } from '../model/schema.ts';
+
+/** How a function reaches an element: through one of its roles, or through an element's link. */
+export type EdgeRole = 'sensor' | 'solver' | 'final' | 'raisedIn' | 'console' | 'operator' | 'device' | LinkField;
+
+export interface TracedElement {
+  tag: string;
+  kind: ElementKind;
+  group: ElementGroup;
+  /** Tags from the function (first) to this element (last): the shortest explanation of why it is there. */
+  path: string[];
+  /** The link taken at each step; `links.length === path.length - 1`. */
+  links: EdgeRole[];
+}
+
+export interface ChannelTrace {
+  role: 'sensor' | 'final';
+  /** The channel's own element (the transmitter or valve). */
+  head: string;
+  /** Every element the channel relies on, the head included, sorted by tag. */
+  elements: string[];
+}
+
+export type MissingPart = 'sensor' | 'process-connection' | 'solver' | 'final-element' | 'operator';
+
+export interface FunctionTrace {
+  function: string;
+  kind: FunctionKind;
+  /** Every element the function relies on, sorted by tag. Tracing stops at process equipment. */
+  elements: TracedElement[];
+  channels: ChannelTrace[];
+  /** Parts an instrumented layer needs but the model does not give: the layer is unverified. */
+  missing: MissingPart[];
+}
+
+/** One side of a finding: the initiating cause, or a claimed layer. */
+export interface Party {
+  role: 'cause' | 'layer';
+  /** The function (or, for an element cause, the element) on this side; absent for an external cause. */
+  tag?: string;
+}
+
+export interface Acceptance {
+  by: string;
+  date: string;
+  reason: string;
+}
+
+export interface Finding {
+  /** Stable key: justifications and report diffs refer to it. */
+  key: string;
+  rule: string;
+  title: string;
+  severity: SeverityLevel;
+  scenario?: string;
+  /** One party (a finding about a layer alone) or two (cause and layer, or layer and layer). */
+  parties: Party[];
+  /** The shared element, when there is one. */
+  element?: string;
+  /** For each party, the path of tags from it to the shared element. */
+  paths: string[][];
+  message: string;
+  rationale: string;
+  source: string;
+  /** Present when a justification in the model accepts the finding. */
+  accepted?: Acceptance;
+}
+
+export type LayerVerdict = 'independent' | 'voided' | 'unverified' | 'open' | 'accepted' | 'not-selected';
+
+export interface RuleInForce {
+  id: string;
+  title: string;
+  severity: SeverityLevel;
+  defaultSeverity: SeverityLevel;
+  source: string;
+  /** Why the severity differs from the default, when the model changed it. */
+  reason?: string;
+}
+
+/** Where a number came from: the model, a SIL band edge, or the built-in defaults table. */
+export interface Sourced {
+  value: number;
+  origin: 'model' | 'sil-band' | 'default';
+  /** The user's basis text, or the defaults table row's source. */
+  basis?: string;
+}
+
+export interface LayerAssessment {
+  function: string;
+  kind: FunctionKind;
+  title?: string;
+  claimedPfd: Sourced;
+  /** The PFD the rules allow (a BPCS layer capped at 0.1, an alarm with too little time: 1). */
+  allowedPfd: number;
+  verdict: LayerVerdict;
+  /** Whether the headline "after independence" figure credits this layer. */
+  credited: boolean;
+  /** Whether the "if open findings are accepted" figure credits it. */
+  creditedIfAccepted: boolean;
+  /** Keys of the findings that decide the verdict. */
+  findings: string[];
+}
+
+export interface SifRequirement {
+  /** PFD the SIF must achieve (strictly below it when the edge is "below"). */
+  requiredPfd: number;
+  requiredRrf: number;
+  /** 0 when no SIL is needed (RRF at most 10), else 1 to 4; 5 when beyond SIL 4. */
+  sil: number;
+  demandRate: number;
+  mode: 'low-demand' | 'high-demand';
+  /** High demand only: the PFH band (per hour) that applies instead. */
+  pfhBand?: { sil: number; low: number; high: number };
+  note: string;
+}
+
+export interface CreditAlternative {
+  layers: string[];
+  pfdProduct: number;
+}
+
+export interface ScenarioAssessment {
+  scenario: string;
+  title?: string;
+  category: string;
+  harm: 'people' | 'containment' | 'asset';
+  tolerable: number;
+  edge: 'below' | 'at-most';
+  cause: { label: string; frequency: Sourced };
+  enablers: { title: string; probability: number; basis?: string }[];
+  modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean }[];
+  layers: LayerAssessment[];
+  /** Mitigated frequency with every claim taken at face value, per year. */
+  mitigatedClaimed: number;
+  /** After independence: only credited layers, per year. The headline figure. */
+  mitigatedAfter: number;
+  /** As after independence, but with every open (needs-justification) finding accepted. */
+  mitigatedIfAccepted: number;
+  /** mitigatedAfter / tolerable: above 1 (or at 1 with edge "below") the scenario falls short. */
+  gap: number;
+  meetsClaimed: boolean;
+  meetsAfter: boolean;
+  /** The SIF requirement: for the scenario's SIF, or for a SIF that would close the gap. */
+  sif?: SifRequirement & { function?: string };
+  /** Other sets of mutually independent layers considered, best first. */
+  alternatives: CreditAlternative[];
+  findings: string[];
+}
+
+export interface Analysis {
+  traces: FunctionTrace[];
+  findings: Finding[];
+  assessments: ScenarioAssessment[];
+  rules: RuleInForce[];
+}

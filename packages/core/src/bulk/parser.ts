@@ -1,0 +1,158 @@
+// The .bulk parser: groups lexed lines into statements `keyword [name] key=value ...`, with indented
+// lines continuing the statement above (more attributes, or a scenario's cause, layer, ... lines).
+import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
+import { splitLines } from '../diagnostics/render.ts';
+import { lexLine, type LexedLine, type Token } from './lexer.ts';
+
+export interface Attribute {
+  key: Token;
+  values: Token[];
+}
+
+export interface Statement {
+  keyword: Token;
+  name?: Token;
+  attributes: Attribute[];
+  /** Comment lines directly above, in order, without their `#`. */
+  comments: string[];
+  trailingComment?: string;
+  children: Statement[];
+  indented: boolean;
+}
+
+export interface ParsedFile {
+  statements: Statement[];
+  endComments: string[];
+}
+
+export function tokenSpan(token: Token): Span {
+  return { line: token.line, column: token.column, length: token.length };
+}
+
+function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): Omit<Statement, 'comments' | 'children' | 'indented'> | undefined {
+  const tokens = lexed.tokens;
+  const first = tokens[0];
+  if (!first) return undefined;
+  let i = 0;
+  let keyword: Token;
+  if (first.type === 'word' && tokens[1]?.type !== 'equals') {
+    keyword = first;
+    i = 1;
+  } else if (first.type === 'word') {
+    // An attribute line: the caller decides whether it continues a statement.
+    keyword = { ...first, value: '', length: 0 };
+  } else {
+    diagnostics.push(error('BH116', 'a statement starts with a keyword', tokenSpan(first), {
+      help: 'start the line with a keyword such as `transmitter`, `sif` or `scenario`',
+    }));
+    return undefined;
+  }
+  let name: Token | undefined;
+  const maybeName = tokens[i];
+  if (keyword.value !== '' && maybeName && maybeName.type !== 'equals' && tokens[i + 1]?.type !== 'equals') {
+    if (maybeName.type === 'word' || maybeName.type === 'string') {
+      name = maybeName;
+      i++;
+    }
+  }
+  const attributes: Attribute[] = [];
+  while (i < tokens.length) {
+    const key = tokens[i]!;
+    if (key.type !== 'word' || tokens[i + 1]?.type !== 'equals') {
+      diagnostics.push(error('BH116', `expected \`key=value\`, found \`${key.value}\``, tokenSpan(key), {
+        help: 'write attributes as key=value; quote text that contains spaces',
+      }));
+      return { keyword, ...(name ? { name } : {}), attributes };
+    }
+    const equals = tokens[i + 1]!;
+    i += 2;
+    const values: Token[] = [];
+    for (;;) {
+      const value = tokens[i];
+      if (!value || (value.type !== 'word' && value.type !== 'string') || tokens[i + 1]?.type === 'equals') {
+        diagnostics.push(error('BH116', `missing value after \`${key.value}=\``, tokenSpan(value && value.type !== 'word' ? value : equals), {
+          help: 'give a value right after `=`, such as level, 0.1 or "text in quotes"',
+        }));
+        return { keyword, ...(name ? { name } : {}), attributes };
+      }
+      values.push(value);
+      i++;
+      if (tokens[i]?.type === 'comma') {
+        i++;
+        continue;
+      }
+      break;
+    }
+    attributes.push({ key, values });
+  }
+  return { keyword, ...(name ? { name } : {}), attributes };
+}
+
+export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
+  const lines = splitLines(text);
+  const statements: Statement[] = [];
+  let pending: string[] = [];
+  let current: Statement | undefined;
+  let last: Statement | undefined;
+  let indentStyle: ' ' | '\t' | undefined;
+  lines.forEach((rawLine, index) => {
+    const lineNo = index + 1;
+    const lexed = lexLine(rawLine, lineNo, diagnostics);
+    if (lexed.tokens.length === 0) {
+      if (lexed.comment !== undefined) pending.push(lexed.comment);
+      return;
+    }
+    const indented = lexed.indent.length > 0;
+    if (indented) {
+      const mixed = lexed.indent.includes(' ') && lexed.indent.includes('\t');
+      const style = lexed.indent[0] as ' ' | '\t';
+      if (mixed || (indentStyle !== undefined && style !== indentStyle)) {
+        diagnostics.push(error('BH113', 'indentation mixes tabs and spaces', { line: lineNo, column: 1, length: lexed.indent.length }, {
+          help: 'indent continuation lines with spaces only (or tabs only) throughout the file',
+        }));
+      }
+      indentStyle ??= style;
+    }
+    const parsed = parseLineTokens(lexed, diagnostics);
+    if (!parsed) return;
+    const isAttributeLine = parsed.keyword.value === '';
+    if (indented && !current) {
+      diagnostics.push(error('BH114', 'indented line with no statement above it to continue', tokenSpan(lexed.tokens[0]!), {
+        help: 'remove the indentation, or put this line under the statement it belongs to',
+      }));
+      return;
+    }
+    if (!indented && isAttributeLine) {
+      diagnostics.push(error('BH116', 'a statement starts with a keyword', tokenSpan(lexed.tokens[0]!), {
+        help: 'indent this line to continue the statement above, or start it with a keyword',
+      }));
+      return;
+    }
+    if (isAttributeLine) {
+      last!.attributes.push(...parsed.attributes);
+      if (lexed.comment !== undefined) last!.trailingComment = joinComment(last!.trailingComment, lexed.comment);
+      if (pending.length) last!.comments.push(...pending.splice(0));
+      return;
+    }
+    const statement: Statement = {
+      ...parsed,
+      comments: pending,
+      children: [],
+      indented,
+      ...(lexed.comment !== undefined ? { trailingComment: lexed.comment } : {}),
+    };
+    pending = [];
+    if (indented) {
+      current!.children.push(statement);
+    } else {
+      statements.push(statement);
+      current = statement;
+    }
+    last = statement;
+  });
+  return { statements, endComments: pending };
+}
+
+function joinComment(existing: string | undefined, added: string): string {
+  return existing === undefined ? added : `${existing} #${added}`;
+}

@@ -1,0 +1,85 @@
+// The canonical .bulk printer: one statement per line, attributes in schema order, sections in a
+// fixed order, every comment kept. Printing a parsed file and parsing it again gives the same model.
+import { COMMENT_FIELDS, ELEMENT_SPECS, fieldsOf, FUNCTION_SPECS, kebab, LIST_SPECS, SCENARIO_LINE_SPECS, SINGLE_SPECS, TEXT_FIELDS, type StatementSpec } from '../model/fields.ts';
+import type { Model } from '../model/schema.ts';
+
+const BARE = /^[A-Za-z0-9][A-Za-z0-9_.\-/+:]*$/;
+
+export function formatNumber(n: number): string {
+  if (n !== 0 && Math.abs(n) <= 1e-3) return n.toExponential();
+  return String(n);
+}
+
+function quote(text: string): string {
+  return `"${text.replace(/\\/g, '\\\\').replace(/"/g, '\\"').replace(/\n/g, '\\n').replace(/\t/g, '\\t')}"`;
+}
+
+function printValue(field: string, value: unknown): string {
+  if (typeof value === 'number') return formatNumber(value);
+  const text = String(value);
+  return !TEXT_FIELDS.has(field) && BARE.test(text) ? text : quote(text);
+}
+
+type Item = Record<string, unknown>;
+
+function commentLines(item: Item, indent: string): string[] {
+  const comments = (item.comments as string[] | undefined) ?? [];
+  return comments.map((c) => `${indent}#${c}`);
+}
+
+function printLine(keyword: string, spec: StatementSpec, item: Item, indent: string): string[] {
+  const parts = [keyword];
+  if (spec.positional && item[spec.positional] !== undefined) parts.push(printValue(spec.positional, item[spec.positional]));
+  for (const [name, field] of fieldsOf(spec.schema)) {
+    if (name === spec.positional || name === 'kind' || COMMENT_FIELDS.has(name) || field.type === 'literal' || field.type === 'nested') continue;
+    const value = item[name];
+    if (value === undefined || name === '$schema') continue;
+    const printed = Array.isArray(value) ? value.map((v) => printValue(name, v)).join(',') : printValue(name, value);
+    parts.push(`${kebab(name)}=${printed}`);
+  }
+  const trailing = item.trailingComment === undefined ? '' : ` #${String(item.trailingComment)}`;
+  return [...commentLines(item, indent), `${indent}${parts.join(' ')}${trailing}`];
+}
+
+interface Block {
+  section: string;
+  lines: string[];
+  commented: boolean;
+}
+
+function block(section: string, item: Item, lines: string[]): Block {
+  return { section, lines, commented: ((item.comments as string[] | undefined) ?? []).length > 0 };
+}
+
+export function printBulk(model: Model): string {
+  const blocks: Block[] = [];
+  const m = model as unknown as Record<string, unknown>;
+  blocks.push(block('head', m.site as Item, printLine('site', SINGLE_SPECS.site, m.site as Item, '')));
+  if (m.policy) blocks.push(block('head', m.policy as Item, printLine('policy', SINGLE_SPECS.policy, m.policy as Item, '')));
+  for (const c of model.categories) blocks.push(block('head', c, printLine('category', LIST_SPECS.category, c, '')));
+  for (const r of model.rules ?? []) blocks.push(block('head', r, printLine('rule', LIST_SPECS.rule, r, '')));
+  for (const e of model.elements) blocks.push(block('elements', e, printLine(e.kind, ELEMENT_SPECS.get(e.kind)!, e, '')));
+  for (const f of model.functions) blocks.push(block('functions', f, printLine(f.kind, FUNCTION_SPECS.get(f.kind)!, f, '')));
+  for (const s of model.scenarios) {
+    const lines = printLine('scenario', LIST_SPECS.scenario, s, '');
+    const item = s as unknown as Item;
+    for (const [keyword, spec] of Object.entries(SCENARIO_LINE_SPECS)) {
+      const value = item[spec.collection];
+      const children = (spec.single ? [value] : ((value as Item[] | undefined) ?? [])) as (Item | undefined)[];
+      for (const child of children) if (child) lines.push(...printLine(keyword, spec, child, '  '));
+    }
+    blocks.push({ section: 'scenario', lines, commented: true });
+  }
+  for (const j of model.justifications ?? []) blocks.push(block('accept', j, printLine('accept', LIST_SPECS.accept, j, '')));
+  const out: string[] = [];
+  blocks.forEach((b, i) => {
+    const previous = blocks[i - 1];
+    if (previous && (b.commented || previous.section !== b.section || previous.section === 'scenario')) out.push('');
+    out.push(...b.lines);
+  });
+  if (model.endComments?.length) {
+    out.push('');
+    out.push(...model.endComments.map((c) => `#${c}`));
+  }
+  return out.join('\n') + '\n';
+}

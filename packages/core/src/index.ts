@@ -1,0 +1,14 @@
+// The public API of @bulkhead/core: model schema, .bulk language, loader and diagnostics.
+// Pure TypeScript with no Node APIs, so the same code runs in the CLI and in the viewer.
+export * from './model/schema.ts';
+export * from './model/kinds.ts';
+export { kebab, camel } from './model/fields.ts';
+export * from './diagnostics/diagnostic.ts';
+export { renderDiagnostic, renderDiagnostics, position, splitLines, type SourceText } from './diagnostics/render.ts';
+export { parseBulk, type ParsedFile, type Statement } from './bulk/parser.ts';
+export { printBulk, formatNumber } from './bulk/printer.ts';
+export type { SpanMap } from './bulk/to-model.ts';
+export { loadModelText, detectFormat, MAX_FILE_BYTES, type LoadResult, type ModelFormat } from './loader/load.ts';
+export { spanAt } from './loader/schema-issues.ts';
+export { printJson } from './json/printer.ts';
+export { summarize, type ModelSummary } from './model/summary.ts';

@@ -1,0 +1,150 @@
+// The loader: bytes in, a validated Model (or diagnostics) out. It detects .bulk or JSON, checks the
+// bytes are sane text, parses with spans, validates against the schema and then beyond it.
+import { error, hasErrors, sortDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.ts';
+import { splitLines, type SourceText } from '../diagnostics/render.ts';
+import { parseBulk } from '../bulk/parser.ts';
+import { statementsToRaw, type SpanMap } from '../bulk/to-model.ts';
+import { readJson } from '../json/reader.ts';
+import { kebab } from '../model/fields.ts';
+import { Category, Element, Function, Model, Scenario } from '../model/schema.ts';
+import { issueToDiagnostics, type FieldNamer } from './schema-issues.ts';
+import { validateModel, type Origins } from './validate.ts';
+
+export const MAX_FILE_BYTES = 50 * 1024 * 1024;
+
+export type ModelFormat = 'bulk' | 'json';
+
+export interface LoadResult {
+  /** Present only when there are no errors. */
+  model?: Model;
+  format: ModelFormat;
+  diagnostics: Diagnostic[];
+  spans: SpanMap;
+  source: SourceText;
+}
+
+export function detectFormat(file: string, text: string): ModelFormat {
+  if (/\.json$/i.test(file)) return 'json';
+  if (/\.bulk$/i.test(file)) return 'bulk';
+  return text.trimStart().startsWith('{') ? 'json' : 'bulk';
+}
+
+/** Decodes bytes as UTF-8, refusing what is not text. */
+function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefined {
+  if (bytes.length > MAX_FILE_BYTES) {
+    diagnostics.push(error('BH103', `the file is ${(bytes.length / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, {
+      help: 'split the site into units, one model file each',
+    }));
+    return undefined;
+  }
+  if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf) {
+    diagnostics.push(error('BH101', 'the file starts with a UTF-8 byte-order mark', { line: 1, column: 1, length: 1 }, {
+      help: 'save the file as UTF-8 without BOM; Bulkhead does not strip it for you so that nothing changes unseen',
+    }));
+    return undefined;
+  }
+  const nul = bytes.indexOf(0);
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    diagnostics.push(error('BH102', 'the file is not UTF-8 text', undefined, { help: 'is this a model file? models are UTF-8 text (.bulk) or JSON' }));
+    return undefined;
+  }
+  if (nul !== -1) {
+    const before = text.slice(0, text.indexOf('\u0000'));
+    const lines = splitLines(before);
+    diagnostics.push(error('BH102', 'the file holds a NUL byte, so it is binary, not text', { line: lines.length, column: lines[lines.length - 1]!.length + 1, length: 1 }, {
+      help: 'is this a model file? models are UTF-8 text (.bulk) or JSON',
+    }));
+    return undefined;
+  }
+  if (text.trim() === '') {
+    diagnostics.push(error('BH100', 'the file is empty', { line: 1, column: 1, length: 1 }, { help: 'a model needs at least a `site` statement' }));
+    return undefined;
+  }
+  return text;
+}
+
+const COLLECTIONS = [
+  ['elements', Element],
+  ['functions', Function],
+  ['scenarios', Scenario],
+  ['categories', Category],
+] as const;
+
+/** When the model as a whole fails the schema, keeps the items that pass so later checks still run. */
+function salvage(raw: unknown): { model: Model; origins: Origins; brokenTags: Set<string> } | undefined {
+  if (typeof raw !== 'object' || raw === null) return undefined;
+  const top = raw as Record<string, unknown>;
+  const origins: Origins = { elements: [], functions: [], scenarios: [], categories: [] };
+  const brokenTags = new Set<string>();
+  const out: Record<string, unknown> = { site: { name: '' }, categories: [], elements: [], functions: [], scenarios: [] };
+  for (const [collection, schema] of COLLECTIONS) {
+    const items = Array.isArray(top[collection]) ? (top[collection] as unknown[]) : [];
+    const kept: unknown[] = [];
+    items.forEach((item, i) => {
+      const parsed = schema.safeParse(item);
+      if (parsed.success) {
+        kept.push(parsed.data);
+        origins[collection].push(i);
+      } else if (item && typeof item === 'object') {
+        const tag = (item as Record<string, unknown>).tag ?? (item as Record<string, unknown>).id;
+        if (typeof tag === 'string') brokenTags.add(tag);
+      }
+    });
+    out[collection] = kept;
+  }
+  const policy = Model.shape.policy.safeParse(top.policy);
+  if (policy.success && policy.data) out.policy = policy.data;
+  return { model: out as Model, origins, brokenTags };
+}
+
+export function loadModelText(file: string, bytes: Uint8Array | string): LoadResult {
+  const diagnostics: Diagnostic[] = [];
+  const text = typeof bytes === 'string' ? bytes : decode(bytes, diagnostics);
+  const source: SourceText = { file, lines: text === undefined ? [] : splitLines(text) };
+  const format = detectFormat(file, text ?? '');
+  const spans: SpanMap = new Map();
+  const done = (model?: Model): LoadResult => ({
+    ...(model && !hasErrors(diagnostics) ? { model } : {}),
+    format,
+    diagnostics: sortDiagnostics(diagnostics),
+    spans,
+    source,
+  });
+  if (text === undefined) return done();
+  if (typeof bytes === 'string' && text.charCodeAt(0) === 0xfeff) {
+    diagnostics.push(error('BH101', 'the text starts with a byte-order mark', { line: 1, column: 1, length: 1 }));
+    return done();
+  }
+  if (text.trim() === '') {
+    diagnostics.push(error('BH100', 'the file is empty', { line: 1, column: 1, length: 1 }, { help: 'a model needs at least a `site` statement' }));
+    return done();
+  }
+  let raw: unknown;
+  if (format === 'json') {
+    const read = readJson(text, diagnostics);
+    if (!read) return done();
+    raw = read.raw;
+    for (const [k, v] of read.spans) spans.set(k, v);
+  } else {
+    const parsed = parseBulk(text, diagnostics);
+    const built = statementsToRaw(parsed, diagnostics);
+    raw = built.raw;
+    for (const [k, v] of built.spans) spans.set(k, v);
+  }
+  const name: FieldNamer = format === 'bulk' ? kebab : (f) => f;
+  const parsed = Model.safeParse(raw);
+  if (parsed.success) {
+    const identity = (list: unknown[]) => list.map((_, i) => i);
+    const m = parsed.data;
+    const origins: Origins = { elements: identity(m.elements), functions: identity(m.functions), scenarios: identity(m.scenarios), categories: identity(m.categories) };
+    diagnostics.push(...validateModel({ model: m, spans, name, origins, brokenTags: new Set() }));
+    return done(m);
+  }
+  for (const issue of parsed.error.issues) diagnostics.push(...issueToDiagnostics(issue, spans, name));
+  const salvaged = salvage(raw);
+  if (salvaged) diagnostics.push(...validateModel({ ...salvaged, spans, name }));
+  return done();
+}

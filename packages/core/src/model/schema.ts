@@ -1,0 +1,291 @@
+// The model schema: the single source of truth for the shape of a Bulkhead model.
+// Types are inferred from it, the JSON Schema is exported from it, and the .bulk language maps onto it.
+import { z } from 'zod';
+import { ELEMENT_GROUPS, FUNCTION_KINDS } from './kinds.ts';
+
+/** ISA-5.1-style tags and our own ids: letters, digits and a few joiners; never a bare `__proto__`. */
+export const TAG_PATTERN = /^[A-Za-z0-9][A-Za-z0-9_.\-/+:]*$/;
+export const TAG_MAX_LENGTH = 64;
+
+export const Tag = z
+  .string()
+  .meta({ id: 'Tag', description: 'A tag such as LT-101 or a scenario id: letters, digits and _ . - / + :' });
+export const Text = z.string().meta({ id: 'Text', description: 'Free text, quoted in .bulk files' });
+export const TagList = z.array(Tag);
+/** A probability, checked to lie in (0, 1] by the loader so the error carries a span. */
+export const Probability = z.number().meta({ id: 'Probability', description: 'A probability in (0, 1]' });
+export const PerYear = z.number().meta({ id: 'PerYear', description: 'A frequency in events per year' });
+export const Voting = z.string().meta({ id: 'Voting', description: 'MooN voting such as 1oo1, 1oo2, 2oo3' });
+
+/** Comments kept from a .bulk file so that conversion and formatting lose nothing the user wrote. */
+const commentFields = {
+  comments: z.array(z.string()).optional(),
+  trailingComment: z.string().optional(),
+};
+
+export const Site = z
+  .strictObject({
+    name: Text,
+    description: Text.optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'Site' });
+
+export const HARMS = ['people', 'containment', 'asset'] as const;
+export const EDGES = ['below', 'at-most'] as const;
+
+export const Category = z
+  .strictObject({
+    id: Tag,
+    title: Text.optional(),
+    tolerable: PerYear.meta({ description: 'Tolerable frequency, per year' }),
+    harm: z.enum(HARMS).meta({
+      description: 'people: conditional modifiers allowed; containment or asset: they are not',
+    }),
+    edge: z.enum(EDGES).optional().meta({
+      description: 'below (default): mitigated frequency must be strictly below tolerable; at-most: may equal it',
+    }),
+    basis: Text.optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'Category' });
+
+export const Policy = z
+  .strictObject({
+    sameControllerLayers: z.enum(['one-credit', 'both', 'none']).optional().meta({
+      description:
+        'BPCS layers in one controller: one-credit (IEC 61511-1:2016 9.3, default), both (older CCPS practice), none',
+    }),
+    sharedSolver: z.enum(['void', 'allow']).optional().meta({
+      description: 'A logic solver shared by cause and layer: void (IEC 61511 reading, default) or allow',
+    }),
+    minResponseMinutes: z.number().optional().meta({ description: 'Least time available for operator response' }),
+    presenceLimit: Probability.optional().meta({ description: 'Highest presence probability creditable' }),
+    basis: Text.optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'Policy' });
+
+export const SEVERITIES = ['voids-credit', 'needs-justification', 'note'] as const;
+export const Severity = z.enum(SEVERITIES).meta({ id: 'Severity' });
+
+export const RuleSetting = z
+  .strictObject({ id: Tag, severity: Severity, reason: Text.optional(), ...commentFields })
+  .meta({ id: 'RuleSetting' });
+
+const linkFields = {
+  mountedOn: TagList.optional(),
+  connectedThrough: TagList.optional(),
+  signalVia: TagList.optional(),
+  housedIn: TagList.optional(),
+  poweredBy: TagList.optional(),
+  airFrom: TagList.optional(),
+  hydraulicFrom: TagList.optional(),
+};
+const identityFields = { make: Text.optional(), model: Text.optional(), technology: Text.optional() };
+
+export const VARIABLES = ['level', 'pressure', 'flow', 'temperature', 'analysis', 'position', 'speed', 'other'] as const;
+export const SYSTEMS = ['bpcs', 'sis', 'machine', 'relay'] as const;
+export const FAIL_POSITIONS = ['closed', 'open', 'in-place', 'off', 'on'] as const;
+
+function elementOf<const K extends readonly [string, ...string[]], X extends z.ZodRawShape>(kinds: K, extra: X) {
+  return z.strictObject({
+    kind: z.enum(kinds),
+    tag: Tag,
+    title: Text.optional(),
+    ...extra,
+    ...linkFields,
+    ...commentFields,
+  });
+}
+
+export const Element = z
+  .discriminatedUnion('kind', [
+    elementOf(ELEMENT_GROUPS.equipment, {}),
+    elementOf(ELEMENT_GROUPS.connection, {}),
+    elementOf(ELEMENT_GROUPS.impulse, {}),
+    elementOf(ELEMENT_GROUPS.sensor, { variable: z.enum(VARIABLES).optional(), ...identityFields }),
+    elementOf(ELEMENT_GROUPS.signal, identityFields),
+    elementOf(ELEMENT_GROUPS.housing, {}),
+    elementOf(ELEMENT_GROUPS.solver, { system: z.enum(SYSTEMS), ...identityFields }),
+    elementOf(ELEMENT_GROUPS.final, {
+      failsTo: z.enum(FAIL_POSITIONS).optional().meta({
+        description: 'Position taken on loss of power, signal or air; absent means unknown (worst case)',
+      }),
+      ...identityFields,
+    }),
+    elementOf(ELEMENT_GROUPS.actuation, { failsTo: z.enum(FAIL_POSITIONS).optional(), ...identityFields }),
+    elementOf(ELEMENT_GROUPS.support, identityFields),
+    elementOf(ELEMENT_GROUPS.mechanical, identityFields),
+    elementOf(ELEMENT_GROUPS.people, {}),
+  ])
+  .meta({ id: 'Element' });
+
+export const TRIP_ACTIONS = ['close', 'open', 'stop', 'start'] as const;
+export const TRIP_MODES = ['de-energise', 'energise'] as const;
+
+const functionCommon = { tag: Tag, title: Text.optional() };
+const claimedPfd = { pfd: Probability.optional(), pfdBasis: Text.optional() };
+const instrumentedFields = {
+  sensors: TagList,
+  sensorVoting: Voting.optional(),
+  solver: Tag,
+  finals: TagList,
+  finalVoting: Voting.optional(),
+  trip: z.enum(TRIP_ACTIONS).optional().meta({ description: 'What the final elements must do to reach the safe state' }),
+  tripMode: z.enum(TRIP_MODES).optional(),
+};
+
+export const ControlLoop = z
+  .strictObject({ kind: z.literal('loop'), ...functionCommon, sensors: TagList, solver: Tag, finals: TagList, ...claimedPfd, ...commentFields })
+  .meta({ id: 'ControlLoop', description: 'A BPCS control loop' });
+
+export const Sif = z
+  .strictObject({
+    kind: z.literal('sif'),
+    ...functionCommon,
+    ...instrumentedFields,
+    sil: z.number().optional().meta({ description: 'SIL claimed, 1 to 4' }),
+    ...claimedPfd,
+    ...commentFields,
+  })
+  .meta({ id: 'Sif', description: 'A safety instrumented function' });
+
+export const InstrumentedTrip = z
+  .strictObject({ kind: z.literal('trip'), ...functionCommon, ...instrumentedFields, ...claimedPfd, ...commentFields })
+  .meta({ id: 'InstrumentedTrip', description: 'Another instrumented safeguard: a BPCS interlock, a machine panel trip' });
+
+export const AlarmResponse = z
+  .strictObject({
+    kind: z.literal('alarm'),
+    ...functionCommon,
+    sensors: TagList,
+    raisedIn: Tag.meta({ description: 'The controller or logic solver that raises the alarm' }),
+    console: Tag.optional(),
+    operator: Tag,
+    finals: TagList.optional(),
+    minutes: z.number().meta({ description: 'Time available for the response, minutes' }),
+    ...claimedPfd,
+    ...commentFields,
+  })
+  .meta({ id: 'AlarmResponse', description: 'An alarm with operator response' });
+
+export const MechanicalDevice = z
+  .strictObject({
+    kind: z.literal('device'),
+    ...functionCommon,
+    device: Tag,
+    creditBasis: Text.optional().meta({ description: 'Why a check valve deserves credit' }),
+    ...claimedPfd,
+    ...commentFields,
+  })
+  .meta({ id: 'MechanicalDevice', description: 'A relief valve, rupture disc or check valve as a layer' });
+
+export const Function = z
+  .discriminatedUnion('kind', [ControlLoop, Sif, InstrumentedTrip, AlarmResponse, MechanicalDevice])
+  .meta({ id: 'Function' });
+
+/** Rows of the typical-frequency table (see assess/defaults), usable instead of a number. */
+export const TYPICAL_CAUSES = [
+  'bpcs-loop-failure',
+  'regulator-failure',
+  'pump-seal-failure',
+  'cooling-water-failure',
+  'hose-failure',
+  'relief-spurious-open',
+  'external-fire',
+  'third-party-impact',
+  'lightning',
+  'atmospheric-tank-failure',
+  'piping-leak',
+  'piping-breach',
+  'vessel-failure',
+] as const;
+
+export const Cause = z
+  .strictObject({
+    function: Tag.optional(),
+    only: Tag.optional().meta({ description: 'Narrow a loop-failure cause to one of its elements' }),
+    element: Tag.optional(),
+    external: Text.optional(),
+    frequency: PerYear.optional(),
+    typical: z.enum(TYPICAL_CAUSES).optional(),
+    basis: Text.optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'Cause', description: 'Exactly one of function, element or external' });
+
+export const Enabler = z
+  .strictObject({ title: Text, probability: Probability, basis: Text.optional(), ...commentFields })
+  .meta({ id: 'Enabler' });
+
+export const MODIFIER_KINDS = ['ignition', 'presence', 'injury', 'other'] as const;
+export const Modifier = z
+  .strictObject({
+    kind: z.enum(MODIFIER_KINDS),
+    title: Text.optional(),
+    probability: Probability,
+    basis: Text.optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'Modifier' });
+
+export const LayerClaim = z
+  .strictObject({ function: Tag, pfd: Probability.optional(), basis: Text.optional(), ...commentFields })
+  .meta({ id: 'LayerClaim' });
+
+export const Scenario = z
+  .strictObject({
+    id: Tag,
+    title: Text.optional(),
+    category: Tag,
+    cause: Cause,
+    enablers: z.array(Enabler).optional(),
+    modifiers: z.array(Modifier).optional(),
+    layers: z.array(LayerClaim).optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'Scenario' });
+
+export const Justification = z
+  .strictObject({
+    finding: Text.meta({ description: 'The stable key of the finding accepted' }),
+    by: Text,
+    date: Text.meta({ description: 'YYYY-MM-DD' }),
+    reason: Text,
+    ...commentFields,
+  })
+  .meta({ id: 'Justification' });
+
+export const Model = z
+  .strictObject({
+    $schema: z.string().optional(),
+    site: Site,
+    policy: Policy.optional(),
+    categories: z.array(Category),
+    rules: z.array(RuleSetting).optional(),
+    elements: z.array(Element),
+    functions: z.array(Function),
+    scenarios: z.array(Scenario),
+    justifications: z.array(Justification).optional(),
+    endComments: z.array(z.string()).optional(),
+  })
+  .meta({ id: 'BulkheadModel', title: 'Bulkhead model', description: 'A Bulkhead plant model' });
+
+export type Model = z.infer<typeof Model>;
+export type Site = z.infer<typeof Site>;
+export type Category = z.infer<typeof Category>;
+export type Policy = z.infer<typeof Policy>;
+export type RuleSetting = z.infer<typeof RuleSetting>;
+export type Element = z.infer<typeof Element>;
+export type PlantFunction = z.infer<typeof Function>;
+export type Scenario = z.infer<typeof Scenario>;
+export type Cause = z.infer<typeof Cause>;
+export type LayerClaim = z.infer<typeof LayerClaim>;
+export type Justification = z.infer<typeof Justification>;
+export type SeverityLevel = (typeof SEVERITIES)[number];
+export type FunctionKindOf<K extends (typeof FUNCTION_KINDS)[number]> = Extract<PlantFunction, { kind: K }>;
+
+export function modelJsonSchema(): Record<string, unknown> {
+  return z.toJSONSchema(Model, { target: 'draft-2020-12' }) as Record<string, unknown>;
+}

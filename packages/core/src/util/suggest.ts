@@ -1,0 +1,41 @@
+// "Did you mean" suggestions for misspelt tags, keywords and attribute names.
+
+/** Levenshtein distance, with an early exit once it exceeds `limit`. */
+export function editDistance(a: string, b: string, limit = Infinity): number {
+  if (a === b) return 0;
+  if (Math.abs(a.length - b.length) > limit) return limit + 1;
+  let previous = Array.from({ length: b.length + 1 }, (_, i) => i);
+  for (let i = 1; i <= a.length; i++) {
+    const current = [i];
+    let rowMin = i;
+    for (let j = 1; j <= b.length; j++) {
+      const cost = a[i - 1]!.toLowerCase() === b[j - 1]!.toLowerCase() ? 0 : 1;
+      const value = Math.min(previous[j]! + 1, current[j - 1]! + 1, previous[j - 1]! + cost);
+      current.push(value);
+      rowMin = Math.min(rowMin, value);
+    }
+    if (rowMin > limit) return limit + 1;
+    previous = current;
+  }
+  return previous[b.length]!;
+}
+
+/** The closest candidate within a third of the word's length (at least 1, at most 3 edits). */
+export function suggest(word: string, candidates: Iterable<string>): string | undefined {
+  const limit = Math.max(1, Math.min(3, Math.floor(word.length / 3)));
+  let best: string | undefined;
+  let bestDistance = limit + 1;
+  for (const candidate of candidates) {
+    const d = editDistance(word, candidate, limit);
+    if (d < bestDistance || (d === bestDistance && best !== undefined && candidate < best)) {
+      best = candidate;
+      bestDistance = d;
+    }
+  }
+  return bestDistance <= limit ? best : undefined;
+}
+
+export function didYouMean(word: string, candidates: Iterable<string>): string | undefined {
+  const s = suggest(word, candidates);
+  return s === undefined ? undefined : `did you mean \`${s}\`?`;
+}
