@@ -103,6 +103,27 @@ export interface LayerAssessment {
   creditedIfAccepted: boolean;
   /** Keys of the findings that decide the verdict. */
   findings: string[];
+  /** The PFD the "if open findings are accepted" figure allows, when it differs from allowedPfd. */
+  allowedPfdIfAccepted?: number;
+  /** The controller or logic solver the layer runs in, and its system. */
+  solver?: string;
+  system?: 'bpcs' | 'sis' | 'machine' | 'relay';
+  /** Each finding that bears on the layer and what it does, in the order the assessment applied them. */
+  reasons?: LayerReason[];
+}
+
+/** What one finding does to a layer's credit. */
+export interface LayerReason {
+  key: string;
+  rule: string;
+  severity: SeverityLevel;
+  /** voids: no credit; caps: PFD limited to `cap`; unverified: incomplete trace; conflict: with the layer `with`. */
+  effect: 'voids' | 'caps' | 'unverified' | 'conflict' | 'note';
+  accepted?: boolean;
+  element?: string;
+  /** The other party: 'cause' or another layer's tag. */
+  with?: string;
+  cap?: number;
 }
 
 export interface SifRequirement {
@@ -116,11 +137,16 @@ export interface SifRequirement {
   /** High demand only: the PFH band (per hour) that applies instead. */
   pfhBand?: { sil: number; low: number; high: number };
   note: string;
+  /** High demand only: the PFH (per hour) the SIF must reach, and the SIL the low-demand table would give. */
+  requiredPfh?: number;
+  lowDemandSil?: number;
 }
 
 export interface CreditAlternative {
   layers: string[];
   pfdProduct: number;
+  /** The scenario's mitigated frequency with this set credited, per year. */
+  mitigated?: number;
 }
 
 export interface ScenarioAssessment {
@@ -130,9 +156,11 @@ export interface ScenarioAssessment {
   harm: 'people' | 'containment' | 'asset';
   tolerable: number;
   edge: 'below' | 'at-most';
-  cause: { label: string; frequency: Sourced };
+  /** frequencyAfter / frequencyIfAccepted: present when a limit rule replaces the claimed frequency. */
+  cause: { label: string; frequency: Sourced; frequencyAfter?: number; frequencyIfAccepted?: number };
   enablers: { title: string; probability: number; basis?: string }[];
-  modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean }[];
+  /** allowed: in the headline figure; allowedIfAccepted: in the "if accepted" figure; finding: the key that bars it. */
+  modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
   layers: LayerAssessment[];
   /** Mitigated frequency with every claim taken at face value, per year. */
   mitigatedClaimed: number;
@@ -144,6 +172,7 @@ export interface ScenarioAssessment {
   gap: number;
   meetsClaimed: boolean;
   meetsAfter: boolean;
+  meetsIfAccepted?: boolean;
   /** The SIF requirement: for the scenario's SIF, or for a SIF that would close the gap. */
   sif?: SifRequirement & { function?: string };
   /** Other sets of mutually independent layers considered, best first. */
