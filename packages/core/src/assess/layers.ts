@@ -1,0 +1,161 @@
+// The PFD rules for each claimed layer: where its PFD comes from (claim, SIL band or defaults table) and the
+// limits on it (SIL band, BPCS cap, operator response time, check valve, no number), each limit a finding.
+import type { Finding, LayerReason, Sourced } from '../analysis/types.ts';
+import type { LayerClaim, Model, PlantFunction, Scenario } from '../model/schema.ts';
+import { lowDemandBand } from './bands.ts';
+import { SIF_BAND_SOURCE, TYPICAL_LAYER_PFDS, sifDefaultPfd, type LayerDefaultKey } from './defaults.ts';
+import { causeIsBpcsFailure, isBpcsLayer, type BpcsFacts } from './facts.ts';
+import { formatProbability } from './format.ts';
+import { inForce, limitFinding, type AssessRuleId, type Figure } from './limits.ts';
+import { above, below } from './numbers.ts';
+import { resolvedPolicy, BPCS_LAYER_BEST_PFD } from './policy.ts';
+
+export const FIGURES: readonly Figure[] = ['after', 'if-accepted'];
+
+export interface PerFigure<T> {
+  after: T;
+  'if-accepted': T;
+}
+
+/** One claimed layer as the assessment works on it. */
+export interface LayerWork {
+  claim: LayerClaim;
+  fn: PlantFunction;
+  claimed: Sourced;
+  /** Whether any number (claim, band or default) backs the claim. */
+  hasPfd: boolean;
+  pfd: PerFigure<number>;
+  /** A finding in force removes the layer's credit in this figure. */
+  noCredit: PerFigure<boolean>;
+  bpcs: boolean;
+  findings: Finding[];
+  reasons: LayerReason[];
+}
+
+function defaultKeyOf(fn: PlantFunction, facts: BpcsFacts): LayerDefaultKey | undefined {
+  if (fn.kind === 'alarm') return 'human-response';
+  if (fn.kind === 'loop' || fn.kind === 'trip') return isBpcsLayer(fn, facts) ? 'bpcs-layer' : undefined;
+  if (fn.kind === 'device') {
+    const kind = facts[fn.tag]?.deviceKind;
+    if (kind === 'relief-valve' || kind === 'rupture-disc' || kind === 'check-valve') return kind;
+  }
+  return undefined;
+}
+
+/** The claimed PFD and where it came from: the scenario's claim, the function, the SIL band, or the defaults. */
+export function claimedPfdOf(claim: LayerClaim, fn: PlantFunction, facts: BpcsFacts): { claimed: Sourced; hasPfd: boolean } {
+  if (claim.pfd !== undefined) {
+    const basis = claim.basis ?? fn.pfdBasis;
+    return { claimed: { value: claim.pfd, origin: 'model', ...(basis !== undefined ? { basis } : {}) }, hasPfd: true };
+  }
+  if (fn.pfd !== undefined) {
+    return { claimed: { value: fn.pfd, origin: 'model', ...(fn.pfdBasis !== undefined ? { basis: fn.pfdBasis } : {}) }, hasPfd: true };
+  }
+  if (fn.kind === 'sif' && fn.sil !== undefined) {
+    const pfd = sifDefaultPfd(fn.sil);
+    if (pfd !== undefined) return { claimed: { value: pfd, origin: 'sil-band', basis: `SIL ${fn.sil}: ${SIF_BAND_SOURCE}` }, hasPfd: true };
+  }
+  const key = defaultKeyOf(fn, facts);
+  const row = key !== undefined ? TYPICAL_LAYER_PFDS[key] : undefined;
+  if (row?.pfd !== undefined) return { claimed: { value: row.pfd, origin: 'default', basis: `${row.title}: ${row.source}` }, hasPfd: true };
+  const basis = row ? `${row.title}: ${row.source}` : 'no PFD given and no default applies';
+  return { claimed: { value: 1, origin: 'default', basis }, hasPfd: false };
+}
+
+interface LayerContext {
+  model: Model;
+  scenario: Scenario;
+  facts: BpcsFacts;
+}
+
+class LayerBuilder {
+  readonly work: LayerWork;
+  constructor(private readonly ctx: LayerContext, claim: LayerClaim, fn: PlantFunction) {
+    const { claimed, hasPfd } = claimedPfdOf(claim, fn, ctx.facts);
+    this.work = {
+      claim,
+      fn,
+      claimed,
+      hasPfd,
+      pfd: { after: claimed.value, 'if-accepted': claimed.value },
+      noCredit: { after: false, 'if-accepted': false },
+      bpcs: isBpcsLayer(fn, ctx.facts),
+      findings: [],
+      reasons: [],
+    };
+  }
+
+  private finding(rule: AssessRuleId, message: string, element?: string): Finding {
+    const tag = this.work.fn.tag;
+    const f = limitFinding(this.ctx.model, this.ctx.scenario.id, rule, {
+      tags: [tag],
+      parties: [{ role: 'layer', tag }],
+      ...(element !== undefined ? { element } : {}),
+      message,
+    });
+    this.work.findings.push(f);
+    return f;
+  }
+
+  private reason(f: Finding, effect: LayerReason['effect'], cap?: number): void {
+    this.work.reasons.push({
+      key: f.key,
+      rule: f.rule,
+      severity: f.severity,
+      effect: f.severity === 'note' ? 'note' : effect,
+      ...(f.accepted ? { accepted: true } : {}),
+      ...(cap !== undefined ? { cap } : {}),
+    });
+  }
+
+  cap(rule: AssessRuleId, limit: number, message: string): void {
+    const f = this.finding(rule, message);
+    this.reason(f, 'caps', limit);
+    for (const figure of FIGURES) if (inForce(f, figure)) this.work.pfd[figure] = Math.max(this.work.pfd[figure], limit);
+  }
+
+  void(rule: AssessRuleId, message: string): void {
+    const f = this.finding(rule, message);
+    this.reason(f, 'voids');
+    for (const figure of FIGURES) if (inForce(f, figure)) this.work.noCredit[figure] = true;
+  }
+
+  /** A finding that changes no number (a SIL claim that the PFD contradicts on the safe side). */
+  flag(rule: AssessRuleId, message: string): void {
+    this.reason(this.finding(rule, message), 'note');
+  }
+}
+
+/** Applies the PFD rules to one claimed layer, in the order the brief of issue 4 gives. */
+export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: PlantFunction): LayerWork {
+  const b = new LayerBuilder(ctx, claim, fn);
+  const w = b.work;
+  const policy = resolvedPolicy(ctx.model);
+  const value = w.claimed.value;
+
+  if (fn.kind === 'sif' && fn.sil !== undefined && w.claimed.origin === 'model') {
+    const band = lowDemandBand(fn.sil);
+    // The band's conservative edge is the conventional value for it (SIL 2 at 0.01), so it counts as inside.
+    if (band && below(value, band.low)) {
+      b.cap('sif-pfd-outside-sil', band.low, `\`${fn.tag}\` claims PFD ${formatProbability(value)}, better than its SIL ${fn.sil} band (${formatProbability(band.low)} to ${formatProbability(band.high)}); credited at ${formatProbability(band.low)}`);
+    } else if (band && above(value, band.high)) {
+      b.flag('sif-pfd-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFD ${formatProbability(value)}, worse than the band (${formatProbability(band.low)} to ${formatProbability(band.high)}); the PFD is used`);
+    }
+  }
+  if (w.bpcs && w.hasPfd && below(value, BPCS_LAYER_BEST_PFD)) {
+    b.cap('bpcs-layer-cap', BPCS_LAYER_BEST_PFD, `BPCS layer \`${fn.tag}\` claims PFD ${formatProbability(value)}; a BPCS layer is credited at ${formatProbability(BPCS_LAYER_BEST_PFD)} at best (model it as a SIF if it is designed to IEC 61511)`);
+  }
+  if (w.bpcs && policy.sameControllerLayers === 'none' && causeIsBpcsFailure(ctx.model, ctx.scenario, ctx.facts)) {
+    b.void('bpcs-layer-with-bpcs-cause', `a BPCS failure is the cause, and the policy (same-controller-layers=none) credits no BPCS layer: \`${fn.tag}\` earns no credit`);
+  }
+  if (fn.kind === 'alarm' && below(fn.minutes, policy.minResponseMinutes)) {
+    b.void('alarm-response-time', `\`${fn.tag}\` allows ${fn.minutes} minutes for the response; the criteria ask for at least ${policy.minResponseMinutes}`);
+  }
+  const isCheckValve = fn.kind === 'device' && ctx.facts[fn.tag]?.deviceKind === 'check-valve';
+  if (isCheckValve && fn.kind === 'device' && fn.creditBasis === undefined) {
+    b.void('check-valve-no-credit', `\`${fn.tag}\` relies on check valve \`${fn.device}\`, which earns no credit unless credit-basis says why`);
+  } else if (!w.hasPfd) {
+    b.void('layer-no-pfd', `\`${fn.tag}\` has no PFD, and no default applies to a ${fn.kind} of this kind: give pfd= with its basis`);
+  }
+  return w;
+}

@@ -1,0 +1,177 @@
+// The assessment's own limit checks (PFD rules, BPCS limits, modifier and cause checks) as one table of
+// rule records, so the rule set in force can list them beside the independence rules, and the findings they make.
+import type { Finding, RuleInForce } from '../analysis/types.ts';
+import type { Model, SeverityLevel } from '../model/schema.ts';
+
+export interface AssessRule {
+  id: string;
+  title: string;
+  rationale: string;
+  source: string;
+  defaultSeverity: SeverityLevel;
+}
+
+export const ASSESS_RULES = [
+  {
+    id: 'sif-pfd-outside-sil',
+    title: 'SIF PFD outside its claimed SIL band',
+    rationale:
+      'A PFD better than the claimed SIL band is credited only down to the band (the SIL, not the figure, sets the design and test regime); a PFD worse than the band is used as claimed and the SIL claim is wrong.',
+    source: 'IEC 61511-1:2016 Table 4',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'bpcs-layer-cap',
+    title: 'BPCS layer claims a PFD better than 0.1',
+    rationale:
+      'A protection layer in a BPCS not designed to IEC 61511 may claim at most a risk reduction of 10; more makes it a SIF, to be modelled as one.',
+    source: 'IEC 61511-1:2016 9.3 (2003: 9.4)',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'bpcs-layer-count',
+    title: 'More than two BPCS layers in one scenario',
+    rationale: 'Total reliance on the BPCS in one scenario is at most two layers (two orders of magnitude).',
+    source: 'IEC 61511-1:2016 9.3',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'bpcs-same-controller',
+    title: 'Two BPCS layers in the same controller',
+    rationale:
+      'Two BPCS layers in one controller earn at most one credit (policy same-controller-layers=one-credit, the default); older CCPS practice (policy both) allowed both under conditions.',
+    source: 'IEC 61511-1:2016 9.3; CCPS, Layer of Protection Analysis (2001) for the policy "both"',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'bpcs-layer-with-bpcs-cause',
+    title: 'BPCS layer credited although a BPCS failure is the cause',
+    rationale: 'The owner\'s policy (same-controller-layers=none) allows no BPCS layer when a BPCS failure starts the scenario.',
+    source: "owner's policy, stricter than IEC 61511-1:2016 9.3 (common practice, no source)",
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'alarm-response-time',
+    title: 'Too little time for the operator response',
+    rationale:
+      'An alarm with operator response earns credit only when the time available is at least the minimum in the criteria (policy min-response-minutes, default 10).',
+    source: 'CCPS, Layer of Protection Analysis (2001), human response with at least 10 minutes (from memory)',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'check-valve-no-credit',
+    title: 'Check valve credited without a stated basis',
+    rationale: 'A single check valve earns little or no credit unless the model says why (credit-basis) and gives a PFD.',
+    source: 'CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory)',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'layer-no-pfd',
+    title: 'Layer with no PFD and no default',
+    rationale: 'A layer with neither a claimed PFD nor a row in the defaults table earns no credit: no number is taken as given.',
+    source: 'common practice, no source',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'modifier-not-allowed',
+    title: 'Conditional modifier on a criterion that is not harm to people',
+    rationale:
+      'Conditional modifiers (ignition, presence, injury) apply only when the consequence criterion is harm to people, not loss of containment or asset damage; the modifier is not applied.',
+    source: 'CCPS, Layer of Protection Analysis (2001), conditional modifiers',
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'presence-above-limit',
+    title: 'Presence modifier above the policy limit',
+    rationale:
+      'Credit for the presence of people needs presence well below all of the time; above the policy limit (presence-limit, default 0.1) the modifier is not applied until justified.',
+    source: "owner's policy (common practice, no source)",
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'bpcs-cause-frequency-low',
+    title: 'BPCS loop failure claimed below 0.1 per year',
+    rationale:
+      'A BPCS not designed to IEC 61511 may not be assumed to fail dangerously less often than 1e-5 per hour (about 0.0876 per year, conventionally 0.1 per year); a lower figure needs a justification and 0.1 is used until then.',
+    source: 'IEC 61511-1:2003 8.2.2 (kept in 2016)',
+    defaultSeverity: 'needs-justification',
+  },
+] as const satisfies readonly AssessRule[];
+
+export type AssessRuleId = (typeof ASSESS_RULES)[number]['id'];
+
+const RULES_BY_ID = new Map<string, AssessRule>(ASSESS_RULES.map((r) => [r.id, r]));
+
+export function assessRule(id: AssessRuleId): AssessRule {
+  return RULES_BY_ID.get(id)!;
+}
+
+/** The severity in force: the model's override for the rule id, else the rule's default. */
+export function severityInForce(model: Model, rule: AssessRule): { severity: SeverityLevel; reason?: string } {
+  const setting = model.rules?.find((r) => r.id === rule.id);
+  if (!setting) return { severity: rule.defaultSeverity };
+  return { severity: setting.severity, ...(setting.reason !== undefined ? { reason: setting.reason } : {}) };
+}
+
+/** The assessment's rules as the rule set in force lists them, in table order. */
+export function assessRulesInForce(model: Model): RuleInForce[] {
+  return ASSESS_RULES.map((rule) => {
+    const { severity, reason } = severityInForce(model, rule);
+    return {
+      id: rule.id,
+      title: rule.title,
+      severity,
+      defaultSeverity: rule.defaultSeverity,
+      source: rule.source,
+      ...(reason !== undefined && severity !== rule.defaultSeverity ? { reason } : {}),
+    };
+  });
+}
+
+/** Stable finding key: rule id, scenario id and the tags involved, joined by colons. */
+export function findingKey(rule: string, scenario: string, tags: readonly string[]): string {
+  return [rule, scenario, ...tags].join(':');
+}
+
+export interface LimitFindingInput {
+  /** Tags that make the key unique within the scenario, in a stable order. */
+  tags: string[];
+  parties: Finding['parties'];
+  element?: string;
+  paths?: string[][];
+  message: string;
+}
+
+export function limitFinding(model: Model, scenario: string, id: AssessRuleId, input: LimitFindingInput): Finding {
+  const rule = assessRule(id);
+  const key = findingKey(rule.id, scenario, input.tags);
+  const justification = model.justifications?.find((j) => j.finding === key);
+  return {
+    key,
+    rule: rule.id,
+    title: rule.title,
+    severity: severityInForce(model, rule).severity,
+    scenario,
+    parties: input.parties,
+    ...(input.element !== undefined ? { element: input.element } : {}),
+    paths: input.paths ?? [],
+    message: input.message,
+    rationale: rule.rationale,
+    source: rule.source,
+    ...(justification ? { accepted: { by: justification.by, date: justification.date, reason: justification.reason } } : {}),
+  };
+}
+
+/** Which of the two figures a finding's effect applies to. */
+export type Figure = 'after' | 'if-accepted';
+
+/**
+ * Whether a finding's effect applies to a figure. voids-credit applies to both (a justification does not lift
+ * it; a severity override with a reason does); needs-justification applies to the headline "after" figure
+ * until accepted; a note changes nothing.
+ */
+export function inForce(finding: Finding, figure: Figure): boolean {
+  if (finding.severity === 'voids-credit') return true;
+  if (finding.severity === 'note') return false;
+  return figure === 'after' && finding.accepted === undefined;
+}

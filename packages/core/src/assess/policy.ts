@@ -1,0 +1,34 @@
+// The owner's policy switches with their defaults and the source of each default, resolved once per model
+// so every rule reads the same values.
+import type { Model } from '../model/schema.ts';
+
+export interface ResolvedPolicy {
+  sameControllerLayers: 'one-credit' | 'both' | 'none';
+  sharedSolver: 'void' | 'allow';
+  minResponseMinutes: number;
+  presenceLimit: number;
+}
+
+export const POLICY_DEFAULTS: ResolvedPolicy = {
+  sameControllerLayers: 'one-credit', // IEC 61511-1:2016 9.3
+  sharedSolver: 'void', // IEC 61511 reading
+  minResponseMinutes: 10, // CCPS, Layer of Protection Analysis (2001) (from memory)
+  presenceLimit: 0.1, // owner's policy, common practice
+};
+
+/** Best PFD a BPCS layer may claim: RRF 10 (IEC 61511-1:2016 9.3). */
+export const BPCS_LAYER_BEST_PFD = 0.1;
+/** Most BPCS layers credited in one scenario (IEC 61511-1:2016 9.3). */
+export const BPCS_LAYERS_PER_SCENARIO = 2;
+/** Lowest frequency a BPCS loop-failure cause may claim without a justification (IEC 61511-1:2003 8.2.2). */
+export const BPCS_CAUSE_LOWEST_FREQUENCY = 0.1;
+
+export function resolvedPolicy(model: Model): ResolvedPolicy {
+  const p = model.policy ?? {};
+  return {
+    sameControllerLayers: p.sameControllerLayers ?? POLICY_DEFAULTS.sameControllerLayers,
+    sharedSolver: p.sharedSolver ?? POLICY_DEFAULTS.sharedSolver,
+    minResponseMinutes: p.minResponseMinutes ?? POLICY_DEFAULTS.minResponseMinutes,
+    presenceLimit: p.presenceLimit ?? POLICY_DEFAULTS.presenceLimit,
+  };
+}

@@ -1,0 +1,123 @@
+// The plain-text lines `bulkhead check` prints for one scenario assessment: criterion, cause, modifiers, each
+// layer with claimed and allowed PFD and verdict, the three mitigated figures, gap, SIF requirement, demand mode.
+import type { LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
+import { BEYOND_SIL_4, lowDemandBand } from './bands.ts';
+import { edgeRelation, edgeText, formatFrequency, formatPerHour, formatProbability, formatRatio } from './format.ts';
+import { sameFigure } from './numbers.ts';
+
+/** Printed once by a command that shows assessments: the tool supports a LOPA team, it does not replace one. */
+export const ASSESSMENT_CAUTION =
+  'Bulkhead checks independence and LOPA arithmetic from the model as written; it supports, and does not replace, ' +
+  'a competent LOPA team. Defer to IEC 61511, local codes and licensed practice.';
+
+const LABEL_WIDTH = 13;
+const INDENT = '  ';
+
+function row(label: string, text: string): string {
+  return `${INDENT}${label.padEnd(LABEL_WIDTH)}${text}`;
+}
+
+function continuation(text: string): string {
+  return `${INDENT}${' '.repeat(LABEL_WIDTH)}${text}`;
+}
+
+function origin(s: Sourced): string {
+  if (s.origin === 'model') return s.basis !== undefined ? `basis: ${s.basis}` : 'no basis given';
+  if (s.origin === 'sil-band') return `from the SIL band (${s.basis ?? ''})`;
+  return `default (${s.basis ?? 'defaults table'})`;
+}
+
+function reasonText(r: LayerReason): string {
+  const where = r.element !== undefined ? ` at ${r.element}` : '';
+  const other = r.with === 'cause' ? ' with the cause' : r.with !== undefined ? ` with ${r.with}` : '';
+  const cap = r.effect === 'caps' && r.cap !== undefined ? ` (capped at ${formatProbability(r.cap)})` : '';
+  const state = r.accepted ? ', accepted' : r.severity === 'needs-justification' ? ', open' : '';
+  return `${r.rule}${where}${other}${cap}${state}`;
+}
+
+function creditText(l: LayerAssessment): string {
+  if (l.credited) return 'yes';
+  return l.creditedIfAccepted ? 'if accepted' : 'no';
+}
+
+function verdictText(l: LayerAssessment): string {
+  const reasons = (l.reasons ?? []).filter((r) => r.effect !== 'note').map(reasonText);
+  return reasons.length > 0 ? `${l.verdict}: ${reasons.join('; ')}` : l.verdict;
+}
+
+function table(rows: string[][]): string[] {
+  const widths: number[] = [];
+  for (const r of rows) r.forEach((cell, i) => (widths[i] = Math.max(widths[i] ?? 0, cell.length)));
+  return rows.map((r) => r.map((cell, i) => (i === r.length - 1 ? cell : cell.padEnd(widths[i]! + 2))).join('').trimEnd());
+}
+
+function layerLines(a: ScenarioAssessment): string[] {
+  if (a.layers.length === 0) return [row('layers', 'none claimed')];
+  const mark = (s: Sourced) => (s.origin === 'default' ? ' (default)' : s.origin === 'sil-band' ? ' (SIL band)' : '');
+  const rows = [['layer', 'kind', 'claimed', 'allowed', 'credit', 'verdict']];
+  for (const l of a.layers) {
+    const allowed = l.allowedPfdIfAccepted !== undefined ? `${formatProbability(l.allowedPfd)} (${formatProbability(l.allowedPfdIfAccepted)} if accepted)` : formatProbability(l.allowedPfd);
+    rows.push([l.function, l.kind, `${formatProbability(l.claimedPfd.value)}${mark(l.claimedPfd)}`, allowed, creditText(l), verdictText(l)]);
+  }
+  const [head, ...body] = table(rows);
+  return [row('layers', head!), ...body.map(continuation)];
+}
+
+function verdictWord(meets: boolean): string {
+  return meets ? 'meets the criterion' : 'falls short';
+}
+
+function requirementLines(a: ScenarioAssessment): string[] {
+  const sif = a.sif;
+  if (!sif) return [];
+  const who = sif.function ?? 'a new SIF';
+  const rel = edgeRelation(a.edge);
+  const rrfRel = a.edge === 'below' ? '>' : '>=';
+  const need = `PFD ${rel} ${formatProbability(sif.requiredPfd)}, RRF ${rrfRel} ${formatRatio(sif.requiredRrf)}`;
+  let verdict: string;
+  const sil = sif.mode === 'high-demand' ? (sif.lowDemandSil ?? sif.sil) : sif.sil;
+  if (sif.requiredPfd >= 1) verdict = 'no risk reduction needed from it';
+  else if (sil === 0) verdict = 'no SIL needed (RRF up to 10)';
+  else if (sil === BEYOND_SIL_4) verdict = 'beyond SIL 4: not achievable by one SIF; add independent layers or change the design';
+  else {
+    const band = lowDemandBand(sil)!;
+    const whole = a.edge === 'below' ? sameFigure(sif.requiredPfd, band.high) : false;
+    verdict = `SIL ${sil} (band ${formatProbability(band.low)} to ${formatProbability(band.high)})` + (whole ? '' : `; verify PFD ${rel} ${formatProbability(sif.requiredPfd)}`);
+  }
+  const lines = [row('required', `${who}: ${need}: ${verdict}`)];
+  if (sif.mode === 'high-demand') {
+    const pfh = sif.requiredPfh !== undefined ? `PFH ${rel} ${formatPerHour(sif.requiredPfh)}` : 'PFH';
+    const band = sif.pfhBand ? `SIL ${sif.pfhBand.sil} (PFH ${formatPerHour(sif.pfhBand.low)} to ${formatPerHour(sif.pfhBand.high)})` : sif.sil === BEYOND_SIL_4 ? 'beyond SIL 4' : 'no SIL needed';
+    lines.push(row('high demand', `${pfh}: ${band}, IEC 61511-1:2016 Table 5; the PFD line above does not apply`));
+  }
+  lines.push(row('demand', sif.note));
+  return lines;
+}
+
+export function renderAssessmentText(a: ScenarioAssessment): string[] {
+  const lines = [`${a.scenario}${a.title !== undefined ? `  ${a.title}` : ''}`];
+  const harm = a.harm === 'people' ? 'harm to people' : a.harm === 'containment' ? 'loss of containment' : 'asset damage';
+  lines.push(row('criterion', `${a.category} (${harm}): tolerable ${formatFrequency(a.tolerable)}; the mitigated frequency ${edgeText(a.edge)} it`));
+  lines.push(row('cause', `${a.cause.label}: ${formatFrequency(a.cause.frequency.value)}, ${origin(a.cause.frequency)}`));
+  if (a.cause.frequencyAfter !== undefined) lines.push(continuation(`${formatFrequency(a.cause.frequencyAfter)} used after independence until a justification accepts the claim`));
+  for (const e of a.enablers) lines.push(row('enabler', `${e.title} ${formatProbability(e.probability)}${e.basis !== undefined ? `, basis: ${e.basis}` : ''}`));
+  for (const m of a.modifiers) {
+    const name = m.title !== undefined ? `${m.kind} (${m.title})` : m.kind;
+    const state = m.allowed ? '' : m.allowedIfAccepted ? ', not applied until accepted' : ', not applied';
+    lines.push(row('modifier', `${name} ${formatProbability(m.probability)}${m.basis !== undefined ? `, basis: ${m.basis}` : ''}${state}${m.finding !== undefined && !m.allowed ? ` (${m.finding})` : ''}`));
+  }
+  lines.push(...layerLines(a));
+  const figures = table([
+    ['as claimed', formatFrequency(a.mitigatedClaimed), verdictWord(a.meetsClaimed)],
+    ['after independence', formatFrequency(a.mitigatedAfter), verdictWord(a.meetsAfter)],
+    ['if open findings accepted', formatFrequency(a.mitigatedIfAccepted), verdictWord(a.meetsIfAccepted ?? a.mitigatedIfAccepted < a.tolerable)],
+  ]);
+  lines.push(row('mitigated', figures[0]!), ...figures.slice(1).map(continuation));
+  lines.push(row('gap', `${formatRatio(a.gap)} x tolerable, after independence`));
+  lines.push(...requirementLines(a));
+  for (const alt of a.alternatives) {
+    const set = alt.layers.length > 0 ? alt.layers.join(' + ') : 'no layer';
+    lines.push(row('alternative', `${set}: PFD product ${formatProbability(alt.pfdProduct)}${alt.mitigated !== undefined ? `, mitigated ${formatFrequency(alt.mitigated)}` : ''}`));
+  }
+  return lines;
+}

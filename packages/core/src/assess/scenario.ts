@@ -1,0 +1,320 @@
+// assessScenario: one scenario's LOPA after independence. Applies the PFD and BPCS limits, then the independence
+// findings, then picks the best creditable set, and computes the figures, the gap and the SIF requirement.
+import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
+import type { Model, Scenario } from '../model/schema.ts';
+import { bestCreditableSet, type CreditProblem } from './credit.ts';
+import { TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
+import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
+import { formatFrequency, formatProbability } from './format.ts';
+import { FIGURES, assessLayerLimits, type LayerWork, type PerFigure } from './layers.ts';
+import { inForce, limitFinding, type Figure } from './limits.ts';
+import { above, below, meetsCriterion, product } from './numbers.ts';
+import { BPCS_CAUSE_LOWEST_FREQUENCY, BPCS_LAYERS_PER_SCENARIO, resolvedPolicy } from './policy.ts';
+import { sifRequirement } from './requirement.ts';
+
+export interface AssessInput {
+  model: Model;
+  scenario: Scenario;
+  /** The independence findings; those of other scenarios are ignored. */
+  findings: readonly Finding[];
+  /** Controller and system of each function; read from the model when absent. */
+  bpcs?: BpcsFacts;
+  /** How many alternative credit sets to list (default 5). */
+  alternatives?: number;
+}
+
+export interface AssessOutput {
+  assessment: ScenarioAssessment;
+  /** The findings the assessment's own limit rules made for this scenario, sorted by key. */
+  findings: Finding[];
+}
+
+/** The rule id the trace rules use for a layer whose trace is incomplete: its verdict is "unverified". */
+export const INCOMPLETE_TRACE_RULE = 'incomplete-trace';
+
+interface CauseWork {
+  label: string;
+  frequency: Sourced;
+  perFigure: PerFigure<number>;
+}
+
+function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, mine: Finding[]): CauseWork {
+  const cause = scenario.cause;
+  const fn = cause.function !== undefined ? model.functions.find((f) => f.tag === cause.function) : undefined;
+  const label =
+    cause.function !== undefined
+      ? `failure of ${cause.function}${fn?.title ? ` (${fn.title})` : ''}${cause.only !== undefined ? `, narrowed to ${cause.only}` : ''}`
+      : cause.element !== undefined
+        ? `failure of ${cause.element}`
+        : (cause.external ?? 'unnamed cause');
+  let frequency: Sourced;
+  if (cause.frequency !== undefined) {
+    frequency = { value: cause.frequency, origin: 'model', ...(cause.basis !== undefined ? { basis: cause.basis } : {}) };
+  } else if (cause.typical !== undefined) {
+    const row = TYPICAL_CAUSE_FREQUENCIES[cause.typical];
+    frequency = { value: row.frequency, origin: 'default', basis: `${row.title}: ${row.source}` };
+  } else {
+    throw new Error(`scenario ${scenario.id}: the cause has no frequency (the loader should have refused the model)`);
+  }
+  const perFigure = { after: frequency.value, 'if-accepted': frequency.value };
+  if (frequency.origin === 'model' && causeIsBpcsLoopFailure(model, scenario, facts) && below(frequency.value, BPCS_CAUSE_LOWEST_FREQUENCY)) {
+    const f = limitFinding(model, scenario.id, 'bpcs-cause-frequency-low', {
+      tags: cause.function !== undefined ? [cause.function] : [],
+      parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : {}) }],
+      message: `the BPCS loop failure is claimed at ${formatFrequency(frequency.value)}, below ${formatFrequency(BPCS_CAUSE_LOWEST_FREQUENCY)}; ${formatFrequency(BPCS_CAUSE_LOWEST_FREQUENCY)} is used until a justification accepts it`,
+    });
+    mine.push(f);
+    for (const figure of FIGURES) if (inForce(f, figure)) perFigure[figure] = BPCS_CAUSE_LOWEST_FREQUENCY;
+  }
+  return { label, frequency, perFigure };
+}
+
+type ModifierEntry = ScenarioAssessment['modifiers'][number];
+
+function assessModifiers(model: Model, scenario: Scenario, harm: string, mine: Finding[]): ModifierEntry[] {
+  const presenceLimit = resolvedPolicy(model).presenceLimit;
+  const seen = new Map<string, number>();
+  return (scenario.modifiers ?? []).map((m) => {
+    const count = (seen.get(m.kind) ?? 0) + 1;
+    seen.set(m.kind, count);
+    const tag = count === 1 ? m.kind : `${m.kind}-${count}`;
+    const entry: ModifierEntry = {
+      kind: m.kind,
+      ...(m.title !== undefined ? { title: m.title } : {}),
+      probability: m.probability,
+      ...(m.basis !== undefined ? { basis: m.basis } : {}),
+      allowed: true,
+    };
+    let f: Finding | undefined;
+    if (harm !== 'people') {
+      f = limitFinding(model, scenario.id, 'modifier-not-allowed', {
+        tags: [tag],
+        parties: [],
+        message: `the ${m.kind} modifier (${formatProbability(m.probability)}) applies only to harm to people; category \`${scenario.category}\` is ${harm}, so it is not applied`,
+      });
+    } else if (m.kind === 'presence' && above(m.probability, presenceLimit)) {
+      f = limitFinding(model, scenario.id, 'presence-above-limit', {
+        tags: [tag],
+        parties: [],
+        message: `presence ${formatProbability(m.probability)} is above the policy limit ${formatProbability(presenceLimit)}; it is not applied until a justification accepts it`,
+      });
+    }
+    if (f) {
+      mine.push(f);
+      entry.allowed = !inForce(f, 'after');
+      entry.allowedIfAccepted = !inForce(f, 'if-accepted');
+      entry.finding = f.key;
+    }
+    return entry;
+  });
+}
+
+interface Conflict {
+  a: string;
+  b: string;
+  finding: Finding;
+}
+
+/** The BPCS limits that bind layers together: at most two BPCS layers, at most one per controller. */
+function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[], facts: BpcsFacts, mine: Finding[]) {
+  const bpcs = works.filter((w) => w.bpcs);
+  const conflicts: Conflict[] = [];
+  let countFinding: Finding | undefined;
+  if (bpcs.length > BPCS_LAYERS_PER_SCENARIO) {
+    countFinding = limitFinding(model, scenario.id, 'bpcs-layer-count', {
+      tags: [],
+      parties: bpcs.map((w) => ({ role: 'layer' as const, tag: w.fn.tag })),
+      message: `${bpcs.length} BPCS layers are claimed (${bpcs.map((w) => `\`${w.fn.tag}\``).join(', ')}); at most ${BPCS_LAYERS_PER_SCENARIO} are credited`,
+    });
+    mine.push(countFinding);
+  }
+  if (resolvedPolicy(model).sameControllerLayers !== 'both') {
+    for (let i = 0; i < bpcs.length; i++) {
+      for (let j = i + 1; j < bpcs.length; j++) {
+        const [x, y] = [bpcs[i]!.fn.tag, bpcs[j]!.fn.tag].sort() as [string, string];
+        const controller = facts[x]?.solver;
+        if (controller === undefined || controller !== facts[y]?.solver) continue;
+        const f = limitFinding(model, scenario.id, 'bpcs-same-controller', {
+          tags: [x, y],
+          parties: [
+            { role: 'layer', tag: x },
+            { role: 'layer', tag: y },
+          ],
+          element: controller,
+          paths: [
+            [x, controller],
+            [y, controller],
+          ],
+          message: `BPCS layers \`${x}\` and \`${y}\` both run in controller \`${controller}\`: at most one of them is credited`,
+        });
+        mine.push(f);
+        conflicts.push({ a: x, b: y, finding: f });
+      }
+    }
+  }
+  return { countFinding, conflicts };
+}
+
+function reasonOf(f: Finding, effect: LayerReason['effect'], other?: string): LayerReason {
+  return {
+    key: f.key,
+    rule: f.rule,
+    severity: f.severity,
+    effect: f.severity === 'note' ? 'note' : effect,
+    ...(f.accepted ? { accepted: true } : {}),
+    ...(f.element !== undefined ? { element: f.element } : {}),
+    ...(other !== undefined ? { with: other } : {}),
+  };
+}
+
+/** Sorts the independence findings into single-layer effects and layer-layer conflicts. */
+function applyIndependence(findings: readonly Finding[], works: Map<string, LayerWork>, conflicts: Conflict[]): Map<string, Finding[]> {
+  const againstLayer = new Map<string, Finding[]>();
+  for (const f of findings) {
+    const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    const withCause = f.parties.some((p) => p.role === 'cause');
+    if (layers.length === 2 && layers[0] !== layers[1]) {
+      const [a, b] = layers as [string, string];
+      conflicts.push({ a, b, finding: f });
+      works.get(a)!.reasons.push(reasonOf(f, 'conflict', b));
+      works.get(b)!.reasons.push(reasonOf(f, 'conflict', a));
+    } else if (layers.length >= 1) {
+      const tag = layers[0]!;
+      const effect = f.rule === INCOMPLETE_TRACE_RULE ? 'unverified' : 'voids';
+      works.get(tag)!.reasons.push(reasonOf(f, effect, withCause ? 'cause' : undefined));
+      againstLayer.set(tag, [...(againstLayer.get(tag) ?? []), f]);
+    }
+  }
+  return againstLayer;
+}
+
+function verdictOf(w: LayerWork, eligible: boolean, selected: boolean): LayerAssessment['verdict'] {
+  const removes = (r: LayerReason) => r.effect === 'voids' || r.effect === 'unverified';
+  const open = (r: LayerReason) => r.severity === 'needs-justification' && !r.accepted;
+  if (w.reasons.some((r) => r.effect === 'voids' && r.severity === 'voids-credit')) return 'voided';
+  if (w.reasons.some((r) => r.effect === 'unverified' && (r.severity === 'voids-credit' || open(r)))) return 'unverified';
+  if (w.reasons.some((r) => removes(r) && open(r))) return 'open';
+  if (eligible && w.pfd.after < 1 && !selected) return 'not-selected';
+  if (w.reasons.some((r) => r.effect !== 'note' && r.severity === 'needs-justification' && r.accepted)) return 'accepted';
+  return 'independent';
+}
+
+export function assessScenario(input: AssessInput): AssessOutput {
+  const { model, scenario } = input;
+  const facts = input.bpcs ?? bpcsFactsOf(model);
+  const category = model.categories.find((c) => c.id === scenario.category);
+  if (!category) throw new Error(`scenario ${scenario.id}: unknown category ${scenario.category} (the loader should have refused the model)`);
+  const edge = category.edge ?? 'below';
+  const mine: Finding[] = [];
+
+  const cause = assessCause(model, scenario, facts, mine);
+  const modifiers = assessModifiers(model, scenario, category.harm, mine);
+  const enablers = (scenario.enablers ?? []).map((e) => ({ title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}) }));
+
+  const functions = new Map(model.functions.map((f) => [f.tag, f]));
+  const works: LayerWork[] = [];
+  for (const claim of scenario.layers ?? []) {
+    const fn = functions.get(claim.function);
+    if (fn) works.push(assessLayerLimits({ model, scenario, facts }, claim, fn));
+  }
+  for (const w of works) mine.push(...w.findings);
+  const byTag = new Map(works.map((w) => [w.fn.tag, w]));
+  const { countFinding, conflicts } = bpcsGroupFindings(model, scenario, works, facts, mine);
+  for (const c of conflicts) {
+    byTag.get(c.a)!.reasons.push(reasonOf(c.finding, 'conflict', c.b));
+    byTag.get(c.b)!.reasons.push(reasonOf(c.finding, 'conflict', c.a));
+  }
+  if (countFinding) for (const w of works.filter((x) => x.bpcs)) w.reasons.push(reasonOf(countFinding, 'conflict'));
+
+  const scenarioFindings = input.findings.filter((f) => f.scenario === scenario.id);
+  const againstLayer = applyIndependence(scenarioFindings, byTag, conflicts);
+
+  const eligible = (w: LayerWork, figure: Figure) =>
+    !w.noCredit[figure] && !(againstLayer.get(w.fn.tag) ?? []).some((f) => inForce(f, figure));
+  const problemFor = (figure: Figure): CreditProblem => ({
+    candidates: works.filter((w) => eligible(w, figure)).map((w) => ({ tag: w.fn.tag, pfd: w.pfd[figure], ...(w.bpcs ? { group: 'bpcs' } : {}) })),
+    conflicts: conflicts.filter((c) => inForce(c.finding, figure)).map((c) => [c.a, c.b] as const),
+    ...(countFinding && inForce(countFinding, figure) ? { groupLimits: { bpcs: BPCS_LAYERS_PER_SCENARIO } } : {}),
+  });
+  const after = bestCreditableSet(problemFor('after'), input.alternatives ?? 5);
+  const ifAccepted = bestCreditableSet(problemFor('if-accepted'), 0);
+  const selectedAfter = new Set(after.best);
+  const selectedIfAccepted = new Set(ifAccepted.best);
+
+  const enablerProduct = product(enablers.map((e) => e.probability));
+  const modifierProduct = (figure: Figure | 'claimed') =>
+    product(modifiers.filter((m) => figure === 'claimed' || (figure === 'after' ? m.allowed : m.allowedIfAccepted ?? m.allowed)).map((m) => m.probability));
+  const creditedPfds = (figure: Figure, selected: Set<string>) => works.filter((w) => selected.has(w.fn.tag)).map((w) => w.pfd[figure]);
+  const mitigatedClaimed = product([cause.frequency.value, enablerProduct, modifierProduct('claimed'), ...works.map((w) => w.claimed.value)]);
+  const unprotectedAfter = product([cause.perFigure.after, enablerProduct, modifierProduct('after')]);
+  const mitigatedAfter = product([unprotectedAfter, ...creditedPfds('after', selectedAfter)]);
+  const mitigatedIfAccepted = product([
+    cause.perFigure['if-accepted'],
+    enablerProduct,
+    modifierProduct('if-accepted'),
+    ...creditedPfds('if-accepted', selectedIfAccepted),
+  ]);
+  const meetsAfter = meetsCriterion(mitigatedAfter, category.tolerable, edge);
+
+  const layers: LayerAssessment[] = works.map((w) => {
+    const f = facts[w.fn.tag];
+    return {
+      function: w.fn.tag,
+      kind: w.fn.kind,
+      ...(w.fn.title !== undefined ? { title: w.fn.title } : {}),
+      claimedPfd: w.claimed,
+      allowedPfd: w.noCredit.after ? 1 : w.pfd.after,
+      verdict: verdictOf(w, eligible(w, 'after'), selectedAfter.has(w.fn.tag)),
+      credited: selectedAfter.has(w.fn.tag),
+      creditedIfAccepted: selectedIfAccepted.has(w.fn.tag),
+      findings: [...new Set(w.reasons.filter((r) => r.effect !== 'note').map((r) => r.key))],
+      ...(!w.noCredit['if-accepted'] && w.pfd['if-accepted'] !== (w.noCredit.after ? 1 : w.pfd.after) ? { allowedPfdIfAccepted: w.pfd['if-accepted'] } : {}),
+      ...(f?.solver !== undefined ? { solver: f.solver } : {}),
+      ...(f?.system !== undefined ? { system: f.system } : {}),
+      reasons: w.reasons,
+    };
+  });
+
+  const sifTag = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag))?.fn.tag ?? works.find((w) => w.fn.kind === 'sif')?.fn.tag;
+  const sif = sifRequirement({
+    tolerable: category.tolerable,
+    edge,
+    causeFrequency: cause.perFigure.after,
+    enablers: enablerProduct,
+    modifiers: modifierProduct('after'),
+    credited: works.filter((w) => selectedAfter.has(w.fn.tag)).map((w) => ({ tag: w.fn.tag, kind: w.fn.kind, pfd: w.pfd.after })),
+    ...(sifTag !== undefined ? { sif: sifTag } : {}),
+    meets: meetsAfter,
+  });
+
+  const alternatives: CreditAlternative[] = after.alternatives.map((a) => ({ ...a, mitigated: unprotectedAfter * a.pfdProduct }));
+  mine.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
+  const assessment: ScenarioAssessment = {
+    scenario: scenario.id,
+    ...(scenario.title !== undefined ? { title: scenario.title } : {}),
+    category: category.id,
+    harm: category.harm,
+    tolerable: category.tolerable,
+    edge,
+    cause: {
+      label: cause.label,
+      frequency: cause.frequency,
+      ...(cause.perFigure.after !== cause.frequency.value ? { frequencyAfter: cause.perFigure.after } : {}),
+      ...(cause.perFigure['if-accepted'] !== cause.frequency.value ? { frequencyIfAccepted: cause.perFigure['if-accepted'] } : {}),
+    },
+    enablers,
+    modifiers,
+    layers,
+    mitigatedClaimed,
+    mitigatedAfter,
+    mitigatedIfAccepted,
+    gap: mitigatedAfter / category.tolerable,
+    meetsClaimed: meetsCriterion(mitigatedClaimed, category.tolerable, edge),
+    meetsAfter,
+    meetsIfAccepted: meetsCriterion(mitigatedIfAccepted, category.tolerable, edge),
+    ...(sif ? { sif } : {}),
+    alternatives,
+    findings: [...new Set([...scenarioFindings, ...mine].map((f) => f.key))].sort(),
+  };
+  return { assessment, findings: mine };
+}

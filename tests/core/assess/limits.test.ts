@@ -1,0 +1,352 @@
+// Each of the assessment's limit rules as a table of cases: a small model, the finding ids it must produce,
+// and the verdict, allowed PFD and credit of each layer. One harness runs every table.
+import { describe, expect, it } from 'vitest';
+import { ASSESS_RULES, assessRulesInForce } from '../../../packages/core/src/assess/index.ts';
+import { assess, load, verdicts } from './kit.ts';
+
+interface Case {
+  name: string;
+  model: string;
+  rules: string[];
+  verdicts?: Record<string, string>;
+  allowed?: Record<string, number>;
+  credited?: string[];
+  creditedIfAccepted?: string[];
+}
+
+const SCENARIO = (category: string, ...lines: string[]) =>
+  `scenario S-1 category=${category}\n  cause function=LIC-1 frequency=0.1\n${lines.map((l) => `  ${l}`).join('\n')}\n`;
+
+const TABLES: Record<string, Case[]> = {
+  'sif-pfd-outside-sil': [
+    {
+      name: 'a PFD inside the band raises nothing',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: [],
+      allowed: { 'SIF-1': 0.005 },
+    },
+    {
+      name: 'the conservative edge of the band counts as inside it',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfd=0.01\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: [],
+      allowed: { 'SIF-1': 0.01 },
+    },
+    {
+      name: 'a PFD better than the band is credited at the band edge until accepted',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfd=0.002\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: ['sif-pfd-outside-sil'],
+      verdicts: { 'SIF-1': 'independent' },
+      allowed: { 'SIF-1': 0.01 },
+    },
+    {
+      name: 'accepted, the claimed PFD is credited',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfd=0.002\n${SCENARIO('loc', 'layer SIF-1')}accept "sif-pfd-outside-sil:S-1:SIF-1" by="A. Reviewer" date=2026-01-01 reason="verified as SIL 2 hardware"\n`,
+      rules: ['sif-pfd-outside-sil'],
+      verdicts: { 'SIF-1': 'accepted' },
+      allowed: { 'SIF-1': 0.002 },
+    },
+    {
+      name: 'a PFD worse than the band is used as claimed, with a finding',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfd=0.05\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: ['sif-pfd-outside-sil'],
+      allowed: { 'SIF-1': 0.05 },
+    },
+    {
+      name: 'a PFD given in the scenario is checked too',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=3\n${SCENARIO('loc', 'layer SIF-1 pfd=0.005')}`,
+      rules: ['sif-pfd-outside-sil'],
+      allowed: { 'SIF-1': 0.005 },
+    },
+  ],
+  'bpcs-layer-cap': [
+    {
+      name: 'a BPCS alarm claiming 0.01 is capped at 0.1',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.01\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: ['bpcs-layer-cap'],
+      verdicts: { 'LAH-2': 'independent' },
+      allowed: { 'LAH-2': 0.1 },
+      credited: ['LAH-2'],
+    },
+    {
+      name: 'a BPCS trip at 0.1 is not capped',
+      model: `trip LSHH-2 sensors=LT-2 solver=C2 finals=MS-1 pfd=0.1\n${SCENARIO('loc', 'layer LSHH-2')}`,
+      rules: [],
+      allowed: { 'LSHH-2': 0.1 },
+    },
+    {
+      name: 'a trip in the SIS is not a BPCS layer',
+      model: `trip LSHH-2 sensors=LT-2 solver=SIS-1 finals=MS-1 pfd=0.01\n${SCENARIO('loc', 'layer LSHH-2')}`,
+      rules: [],
+      allowed: { 'LSHH-2': 0.01 },
+    },
+  ],
+  'bpcs-layer-count': [
+    {
+      name: 'three BPCS layers in three controllers: two credited, the tie broken by tags',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C3 finals=MS-1 pfd=0.1
+alarm LAH-4 sensors=LT-4 raised-in=C1 operator=OP-1 minutes=20 pfd=0.1
+${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3', 'layer LAH-4')}`,
+      rules: ['bpcs-layer-count'],
+      verdicts: { 'LAH-2': 'independent', 'LSHH-3': 'not-selected', 'LAH-4': 'independent' },
+      credited: ['LAH-2', 'LAH-4'],
+    },
+  ],
+  'bpcs-same-controller': [
+    {
+      name: 'two BPCS layers in one controller: one credit (the default policy)',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
+${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`,
+      rules: ['bpcs-same-controller'],
+      verdicts: { 'LAH-2': 'independent', 'LSHH-3': 'not-selected' },
+      credited: ['LAH-2'],
+    },
+    {
+      name: 'policy both: both credited, no finding',
+      model: `policy same-controller-layers=both
+alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
+${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`,
+      rules: [],
+      credited: ['LAH-2', 'LSHH-3'],
+    },
+    {
+      name: 'severity lowered to note: both credited, the finding listed',
+      model: `rule bpcs-same-controller severity=note reason="site policy MF-P-7 (invented)"
+alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
+${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`,
+      rules: ['bpcs-same-controller'],
+      credited: ['LAH-2', 'LSHH-3'],
+    },
+    {
+      name: 'severity raised to needs-justification: one credit now, both if accepted',
+      model: `rule bpcs-same-controller severity=needs-justification
+alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
+${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`,
+      rules: ['bpcs-same-controller'],
+      credited: ['LAH-2'],
+      creditedIfAccepted: ['LAH-2', 'LSHH-3'],
+    },
+  ],
+  'bpcs-layer-with-bpcs-cause': [
+    {
+      name: 'policy none with a BPCS loop as the cause: no BPCS layer credited',
+      model: `policy same-controller-layers=none
+alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+device PSV-IPL device=PSV-1
+${SCENARIO('loc', 'layer LAH-2', 'layer PSV-IPL')}`,
+      rules: ['bpcs-layer-with-bpcs-cause'],
+      verdicts: { 'LAH-2': 'voided', 'PSV-IPL': 'independent' },
+      allowed: { 'LAH-2': 1 },
+      credited: ['PSV-IPL'],
+    },
+    {
+      name: 'policy none with an external cause: the BPCS layer keeps its credit',
+      model: `policy same-controller-layers=none
+alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+scenario S-1 category=loc
+  cause external="Tanker delivers to the wrong tank" frequency=0.1
+  layer LAH-2
+`,
+      rules: [],
+      credited: ['LAH-2'],
+    },
+  ],
+  'alarm-response-time': [
+    {
+      name: 'five minutes: no credit',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=5 pfd=0.1\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: ['alarm-response-time'],
+      verdicts: { 'LAH-2': 'voided' },
+      allowed: { 'LAH-2': 1 },
+      credited: [],
+    },
+    {
+      name: 'exactly ten minutes: credited',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=10 pfd=0.1\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: [],
+      credited: ['LAH-2'],
+    },
+    {
+      name: 'the policy minimum applies: 15 minutes asked, 12 available',
+      model: `policy min-response-minutes=15\nalarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=12 pfd=0.1\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: ['alarm-response-time'],
+      verdicts: { 'LAH-2': 'voided' },
+    },
+  ],
+  'check-valve-no-credit': [
+    {
+      name: 'a check valve without a credit basis: no credit',
+      model: `device NRV-IPL device=NRV-1 pfd=0.1\n${SCENARIO('loc', 'layer NRV-IPL')}`,
+      rules: ['check-valve-no-credit'],
+      verdicts: { 'NRV-IPL': 'voided' },
+      allowed: { 'NRV-IPL': 1 },
+    },
+    {
+      name: 'with a credit basis and a PFD: credited',
+      model: `device NRV-IPL device=NRV-1 pfd=0.1 credit-basis="Dual check valves, tested yearly (invented)"\n${SCENARIO('loc', 'layer NRV-IPL')}`,
+      rules: [],
+      credited: ['NRV-IPL'],
+    },
+    {
+      name: 'with a credit basis but no PFD: no number, no credit',
+      model: `device NRV-IPL device=NRV-1 credit-basis="Dual check valves (invented)"\n${SCENARIO('loc', 'layer NRV-IPL')}`,
+      rules: ['layer-no-pfd'],
+      verdicts: { 'NRV-IPL': 'voided' },
+    },
+  ],
+  'layer-no-pfd': [
+    {
+      name: 'a SIF with neither PFD nor SIL: no credit',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: ['layer-no-pfd'],
+      verdicts: { 'SIF-1': 'voided' },
+      credited: [],
+    },
+    {
+      name: 'a SIF with a SIL only: credited at the band edge, no finding',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=3\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: [],
+      allowed: { 'SIF-1': 0.001 },
+    },
+  ],
+  'modifier-not-allowed': [
+    {
+      name: 'ignition on a loss-of-containment criterion: not applied',
+      model: SCENARIO('loc', 'modifier ignition probability=0.5'),
+      rules: ['modifier-not-allowed'],
+    },
+    {
+      name: 'on an asset criterion: not applied',
+      model: SCENARIO('asset', 'modifier injury probability=0.5'),
+      rules: ['modifier-not-allowed'],
+    },
+    {
+      name: 'on harm to people: applied',
+      model: SCENARIO('people', 'modifier ignition probability=0.5'),
+      rules: [],
+    },
+  ],
+  'presence-above-limit': [
+    {
+      name: 'presence 0.5 above the default limit 0.1',
+      model: SCENARIO('people', 'modifier presence probability=0.5'),
+      rules: ['presence-above-limit'],
+    },
+    {
+      name: 'presence exactly at the limit is allowed',
+      model: SCENARIO('people', 'modifier presence probability=0.1'),
+      rules: [],
+    },
+    {
+      name: 'the policy limit applies',
+      model: `policy presence-limit=0.6\n${SCENARIO('people', 'modifier presence probability=0.5')}`,
+      rules: [],
+    },
+  ],
+  'bpcs-cause-frequency-low': [
+    {
+      name: 'a BPCS loop failure at 0.01 per year needs a justification',
+      model: `scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.01\n`,
+      rules: ['bpcs-cause-frequency-low'],
+    },
+    {
+      name: 'at 0.1 per year it does not',
+      model: `scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.1\n`,
+      rules: [],
+    },
+    {
+      name: 'an external cause at 0.01 per year is not bounded by this rule',
+      model: `scenario S-1 category=loc\n  cause external="Lifting accident" frequency=0.01\n`,
+      rules: [],
+    },
+  ],
+};
+
+describe('limit rule tables', () => {
+  it('has a table for every rule in the rule table, and only for those', () => {
+    expect(Object.keys(TABLES).sort()).toEqual(ASSESS_RULES.map((r) => r.id).sort());
+  });
+
+  it('rejects duplicate case names within a table', () => {
+    for (const cases of Object.values(TABLES)) expect(new Set(cases.map((c) => c.name)).size).toBe(cases.length);
+  });
+
+  for (const [rule, cases] of Object.entries(TABLES)) {
+    describe(rule, () => {
+      it.each(cases.map((c) => [c.name, c] as const))('%s', (_, c) => {
+        const out = assess(c.model);
+        expect(out.findings.map((f) => f.rule).sort()).toEqual([...c.rules].sort());
+        for (const f of out.findings) expect(f.key.startsWith(`${f.rule}:S-1`)).toBe(true);
+        if (c.verdicts) expect(verdicts(out)).toMatchObject(c.verdicts);
+        if (c.allowed) expect(Object.fromEntries(out.assessment.layers.map((l) => [l.function, l.allowedPfd]))).toMatchObject(c.allowed);
+        if (c.credited) expect(out.assessment.layers.filter((l) => l.credited).map((l) => l.function)).toEqual(c.credited);
+        if (c.creditedIfAccepted) expect(out.assessment.layers.filter((l) => l.creditedIfAccepted).map((l) => l.function)).toEqual(c.creditedIfAccepted);
+      });
+    });
+  }
+});
+
+describe('the figures the limit rules change', () => {
+  it('does not apply a modifier on a containment criterion to the headline figure', () => {
+    const out = assess(SCENARIO('loc', 'modifier ignition probability=0.5'));
+    expect(out.assessment.mitigatedClaimed).toBeCloseTo(0.05, 15);
+    expect(out.assessment.mitigatedAfter).toBe(0.1);
+    expect(out.assessment.modifiers[0]).toMatchObject({ allowed: false, allowedIfAccepted: false, finding: 'modifier-not-allowed:S-1:ignition' });
+  });
+
+  it('applies a presence modifier above the limit only in the "if accepted" figure', () => {
+    const out = assess(SCENARIO('people', 'modifier presence probability=0.5'));
+    expect(out.assessment.mitigatedAfter).toBe(0.1);
+    expect(out.assessment.mitigatedIfAccepted).toBeCloseTo(0.05, 15);
+  });
+
+  it('uses 0.1 per year for a low BPCS loop-failure claim until accepted', () => {
+    const out = assess(`scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.01\n`);
+    expect(out.assessment.cause).toMatchObject({ frequency: { value: 0.01, origin: 'model' }, frequencyAfter: 0.1 });
+    expect(out.assessment.mitigatedAfter).toBe(0.1);
+    expect(out.assessment.mitigatedIfAccepted).toBe(0.01);
+    const accepted = assess(`scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.01\naccept "bpcs-cause-frequency-low:S-1:LIC-1" by="A. Reviewer" date=2026-01-01 reason="field data (invented)"\n`);
+    expect(accepted.assessment.mitigatedAfter).toBe(0.01);
+    expect(accepted.findings[0]!.accepted).toMatchObject({ by: 'A. Reviewer' });
+  });
+
+  it('keys findings by rule, scenario and tags', () => {
+    const out = assess(`alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.01
+${SCENARIO('loc', 'layer LSHH-3', 'layer LAH-2', 'modifier ignition probability=0.5', 'modifier ignition probability=0.3')}`);
+    expect(out.findings.map((f) => f.key)).toEqual([
+      'bpcs-layer-cap:S-1:LSHH-3',
+      'bpcs-same-controller:S-1:LAH-2:LSHH-3',
+      'modifier-not-allowed:S-1:ignition',
+      'modifier-not-allowed:S-1:ignition-2',
+    ]);
+    const same = out.findings.find((f) => f.rule === 'bpcs-same-controller')!;
+    expect(same).toMatchObject({ element: 'C2', parties: [{ role: 'layer', tag: 'LAH-2' }, { role: 'layer', tag: 'LSHH-3' }] });
+  });
+});
+
+describe('the rule set in force', () => {
+  it('lists every rule with its default, and the model override with its reason', () => {
+    const model = load('rule alarm-response-time severity=needs-justification reason="site procedure MF-OP-3 (invented)"\n');
+    const rules = assessRulesInForce(model);
+    expect(rules.map((r) => r.id)).toEqual(ASSESS_RULES.map((r) => r.id));
+    expect(rules.find((r) => r.id === 'alarm-response-time')).toMatchObject({
+      severity: 'needs-justification',
+      defaultSeverity: 'voids-credit',
+      reason: 'site procedure MF-OP-3 (invented)',
+    });
+  });
+
+  it('gives every rule a kebab-case id, a title, a rationale and a source', () => {
+    for (const r of ASSESS_RULES) {
+      expect(r.id).toMatch(/^[a-z]+(-[a-z0-9]+)*$/);
+      expect(r.title.length).toBeGreaterThan(0);
+      expect(r.rationale.length).toBeGreaterThan(0);
+      expect(r.source.length).toBeGreaterThan(0);
+    }
+  });
+});
