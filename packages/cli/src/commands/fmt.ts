@@ -1,26 +1,29 @@
-// `bulkhead fmt FILE [--check]`: rewrites a .bulk file in canonical form, keeping every comment.
-import { writeFileSync } from 'node:fs';
-import { printBulk, printJson } from '@bulkhead/core';
-import { printDiagnostics, readModel } from '../io.ts';
+// `bulkhead fmt FILE... [--check]`: rewrites model files in canonical form, keeping every comment.
+// A file is rewritten only when its canonical text differs byte for byte and reads back as the same model.
+import { printDiagnostics, printVerified, readModel, writeFileAtomic } from '../io.ts';
 
 export function fmtCommand(files: string[], check: boolean): number {
   let unformatted = 0;
+  let bad = 0;
   for (const file of files) {
     const result = readModel(file);
-    if (!result.model) {
+    if (!result.model || !result.bytes) {
+      // Report every bad file, and go on with the others, so one run shows all that is wrong.
       printDiagnostics(result);
-      return 2;
+      bad++;
+      continue;
     }
-    const canonical = result.format === 'json' ? printJson(result.model) : printBulk(result.model);
-    const current = result.source.lines.join('\n');
-    if (current === canonical || current + '\n' === canonical) continue;
+    const canonical = printVerified(result.model, result.format, file);
+    // Compare the bytes, not the lines: CRLF line ends or a missing final newline are not canonical.
+    if (Buffer.from(result.bytes).equals(Buffer.from(canonical, 'utf8'))) continue;
     if (check) {
       unformatted++;
       process.stdout.write(`${file}: not in canonical form (run \`bulkhead fmt ${file}\`)\n`);
     } else {
-      writeFileSync(file, canonical);
+      writeFileAtomic(file, canonical);
       process.stdout.write(`${file}: formatted\n`);
     }
   }
+  if (bad > 0) return 2;
   return unformatted > 0 ? 1 : 0;
 }

@@ -20,10 +20,14 @@ export interface LexedLine {
   /** Text after `#`, without the `#`; undefined when the line has no comment. */
   comment?: string;
   commentColumn?: number;
+  /** True when an unterminated string swallowed the rest of the line, so later attributes are lost. */
+  truncated?: boolean;
 }
 
 const WORD_CHAR = /[A-Za-z0-9_.\-/+:]/;
-const ESCAPES: Record<string, string> = { '"': '"', '\\': '\\', n: '\n', t: '\t' };
+const ESCAPES: Record<string, string> = { '"': '"', '\\': '\\', n: '\n', r: '\r', t: '\t' };
+/** `\u{1F600}`: any code point by its hex value, for characters a file cannot show plainly. */
+const CODE_POINT_ESCAPE = /^u\{([0-9A-Fa-f]{1,6})\}/;
 
 export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): LexedLine {
   const indentMatch = /^[ \t]*/.exec(text);
@@ -55,11 +59,17 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
         }
         if (c === '\\') {
           const next = text[j + 1];
+          const codePoint = CODE_POINT_ESCAPE.exec(text.slice(j + 1, j + 11));
+          if (codePoint && Number.parseInt(codePoint[1]!, 16) <= 0x10ffff) {
+            value += String.fromCodePoint(Number.parseInt(codePoint[1]!, 16));
+            j += 1 + codePoint[0].length;
+            continue;
+          }
           const escaped = next === undefined ? undefined : ESCAPES[next];
           if (escaped === undefined) {
             diagnostics.push(
               error('BH110', `unknown escape \`\\${next ?? ''}\` in string`, { line, column: j + 1, length: 2 }, {
-                help: 'inside quotes write \\" for a quote, \\\\ for a backslash, \\n for a new line, \\t for a tab',
+                help: 'inside quotes write \\" for a quote, \\\\ for a backslash, \\n for a new line, \\t for a tab, \\u{e9} for any character by its code',
               }),
             );
             j += 2;
@@ -79,6 +89,7 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
           }),
         );
         tokens.push({ type: 'string', value, line, column, length: text.length - i });
+        result.truncated = true;
         break;
       }
       tokens.push({ type: 'string', value, line, column, length: j + 1 - i });

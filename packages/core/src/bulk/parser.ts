@@ -18,6 +18,11 @@ export interface Statement {
   trailingComment?: string;
   children: Statement[];
   indented: boolean;
+  /**
+   * True when a syntax error cut the statement short: what it lacks was lost, not left out, so the
+   * loader does not also report it as missing.
+   */
+  incomplete?: boolean;
 }
 
 export interface ParsedFile {
@@ -29,7 +34,9 @@ export function tokenSpan(token: Token): Span {
   return { line: token.line, column: token.column, length: token.length };
 }
 
-function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): Omit<Statement, 'comments' | 'children' | 'indented'> | undefined {
+type LineParse = Omit<Statement, 'comments' | 'children' | 'indented'>;
+
+function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): LineParse | undefined {
   const tokens = lexed.tokens;
   const first = tokens[0];
   if (!first) return undefined;
@@ -62,7 +69,7 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): Omit<Stat
       diagnostics.push(error('BH116', `expected \`key=value\`, found \`${key.value}\``, tokenSpan(key), {
         help: 'write attributes as key=value; quote text that contains spaces',
       }));
-      return { keyword, ...(name ? { name } : {}), attributes };
+      return { keyword, ...(name ? { name } : {}), attributes, incomplete: true };
     }
     const equals = tokens[i + 1]!;
     i += 2;
@@ -73,7 +80,7 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): Omit<Stat
         diagnostics.push(error('BH116', `missing value after \`${key.value}=\``, tokenSpan(value && value.type !== 'word' ? value : equals), {
           help: 'give a value right after `=`, such as level, 0.1 or "text in quotes"',
         }));
-        return { keyword, ...(name ? { name } : {}), attributes };
+        return { keyword, ...(name ? { name } : {}), attributes, incomplete: true };
       }
       values.push(value);
       i++;
@@ -102,7 +109,7 @@ export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
       if (lexed.comment !== undefined) pending.push(lexed.comment);
       return;
     }
-    const indented = lexed.indent.length > 0;
+    let indented = lexed.indent.length > 0;
     if (indented) {
       const mixed = lexed.indent.includes(' ') && lexed.indent.includes('\t');
       const style = lexed.indent[0] as ' ' | '\t';
@@ -115,12 +122,15 @@ export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
     }
     const parsed = parseLineTokens(lexed, diagnostics);
     if (!parsed) return;
+    if (lexed.truncated) parsed.incomplete = true;
     const isAttributeLine = parsed.keyword.value === '';
     if (indented && !current) {
       diagnostics.push(error('BH114', 'indented line with no statement above it to continue', tokenSpan(lexed.tokens[0]!), {
         help: 'remove the indentation, or put this line under the statement it belongs to',
       }));
-      return;
+      if (isAttributeLine) return;
+      // Read it as the statement it plainly is, so the one mistake is not followed by "missing" ones.
+      indented = false;
     }
     if (!indented && isAttributeLine) {
       diagnostics.push(error('BH116', 'a statement starts with a keyword', tokenSpan(lexed.tokens[0]!), {
@@ -130,6 +140,7 @@ export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
     }
     if (isAttributeLine) {
       last!.attributes.push(...parsed.attributes);
+      if (parsed.incomplete) last!.incomplete = true;
       if (lexed.comment !== undefined) last!.trailingComment = joinComment(last!.trailingComment, lexed.comment);
       if (pending.length) last!.comments.push(...pending.splice(0));
       return;

@@ -6,12 +6,23 @@ import type { Model } from '../model/schema.ts';
 const BARE = /^[A-Za-z0-9][A-Za-z0-9_.\-/+:]*$/;
 
 export function formatNumber(n: number): string {
+  if (Object.is(n, -0)) return '-0';
   if (n !== 0 && Math.abs(n) <= 1e-3) return n.toExponential();
   return String(n);
 }
 
+const SHORT_ESCAPES: Record<string, string> = { '\\': '\\\\', '"': '\\"', '\n': '\\n', '\r': '\\r', '\t': '\\t' };
+
+/**
+ * Quotes text so the lexer reads back exactly the same string: control characters, which would break
+ * the line or hide in a terminal, and lone UTF-16 surrogates, which UTF-8 cannot store, become \u{...}.
+ */
 function quote(text: string): string {
-  return `"${text.replace(/\\/g, '\\\\').replace(/"/g, '\\"').replace(/\n/g, '\\n').replace(/\t/g, '\\t')}"`;
+  // eslint-disable-next-line no-control-regex
+  const escaped = text.replace(/[\\"\u0000-\u001f\u007f]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, (c) =>
+    SHORT_ESCAPES[c] ?? `\\u{${c.charCodeAt(0).toString(16)}}`,
+  );
+  return `"${escaped}"`;
 }
 
 function printValue(field: string, value: unknown): string {

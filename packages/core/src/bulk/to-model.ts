@@ -22,6 +22,18 @@ import { tokenSpan, type ParsedFile, type Statement } from './parser.ts';
 export type SpanMap = Map<string, Span>;
 type Raw = Record<string, unknown>;
 
+/** What reading the statements produced besides the raw model, so the loader does not report twice. */
+export interface RawModel {
+  raw: Raw;
+  spans: SpanMap;
+  /** Paths of values already reported as malformed (left out of `raw`, so the schema would call them missing). */
+  reportedPaths: Set<string>;
+  /** Names given to statements with an unknown keyword: references to them are not reported again. */
+  unknownNames: Set<string>;
+  /** Paths of items a syntax error cut short: fields they lack were lost, not left out. */
+  incompletePaths: Set<string>;
+}
+
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
 function joinSpans(first: Token, last: Token): Span {
@@ -33,18 +45,22 @@ class StatementReader {
   constructor(
     private readonly diagnostics: Diagnostic[],
     private readonly spans: SpanMap,
+    private readonly reportedPaths: Set<string>,
+    private readonly incompletePaths: Set<string>,
   ) {}
 
-  private convert(token: Token, field: FieldType, key: string): unknown {
+  private convert(token: Token, field: FieldType, key: string, path: string): unknown {
     if (field.type !== 'number') return token.value;
     if (token.type === 'word' && NUMBER.test(token.value)) return Number(token.value);
+    this.reportedPaths.add(path);
     if (token.type === 'word' && /^[+-]?[\d.]/.test(token.value)) {
       this.diagnostics.push(error('BH112', `malformed number \`${token.value}\``, tokenSpan(token), {
         help: 'write numbers like 0.1, 1e-4 or 2.5E-3 (an exponent needs digits after the e)',
       }));
       return undefined;
     }
-    this.diagnostics.push(error('BH201', `\`${key}\` takes a number, found \`${token.value}\``, tokenSpan(token)));
+    this.diagnostics.push(error('BH201', `\`${key}\` takes a number, found \`${token.value}\``, tokenSpan(token),
+      token.type === 'string' ? { help: 'write the number without quotes' } : {}));
     return undefined;
   }
 
@@ -52,6 +68,7 @@ class StatementReader {
   read(statement: Statement, spec: StatementSpec, path: string, target: Raw): void {
     const fields = fieldsOf(spec.schema);
     this.spans.set(path, tokenSpan(statement.name ?? statement.keyword));
+    if (statement.incomplete) this.incompletePaths.add(path);
     if (statement.comments.length) target.comments = statement.comments;
     if (statement.trailingComment !== undefined) target.trailingComment = statement.trailingComment;
     if (statement.name) {
@@ -59,13 +76,15 @@ class StatementReader {
         this.diagnostics.push(error('BH116', `\`${statement.keyword.value}\` takes no name, only key=value attributes`, tokenSpan(statement.name)));
       } else {
         const field = fields.get(spec.positional)!;
-        const value = this.convert(statement.name, field, spec.positional);
+        const value = this.convert(statement.name, field, spec.positional, `${path}.${spec.positional}`);
         if (value !== undefined) target[spec.positional] = value;
         this.spans.set(`${path}.${spec.positional}`, tokenSpan(statement.name));
       }
     }
+    // `kind` is the statement's keyword, never an attribute: `vessel V-1 kind=pump` must not make a pump.
     const allowed = [...fields.entries()].filter(
-      ([name, f]) => name !== spec.positional && !COMMENT_FIELDS.has(name) && f.type !== 'literal' && f.type !== 'nested' && name !== '$schema',
+      ([name, f]) =>
+        name !== spec.positional && name !== 'kind' && !COMMENT_FIELDS.has(name) && f.type !== 'literal' && f.type !== 'nested' && name !== '$schema',
     );
     const allowedKeys = new Map(allowed.map(([name, f]) => [kebab(name), { name, f }]));
     const seen = new Map<string, Token>();
@@ -100,9 +119,12 @@ class StatementReader {
           return token.value;
         });
       } else if (attribute.values.length > 1) {
-        this.diagnostics.push(error('BH201', `\`${key}\` takes one value, found a list`, tokenSpan(attribute.values[1]!)));
+        this.reportedPaths.add(fieldPath);
+        this.diagnostics.push(error('BH201', `\`${key}\` takes one value, found a list`, tokenSpan(attribute.values[1]!), {
+          help: 'quote text that contains a comma: key="a, b"',
+        }));
       } else {
-        const value = this.convert(attribute.values[0]!, entry.f, key);
+        const value = this.convert(attribute.values[0]!, entry.f, key, fieldPath);
         if (value !== undefined) target[entry.name] = value;
       }
     }
@@ -110,9 +132,15 @@ class StatementReader {
 }
 
 /** Builds the raw model object (not yet validated) and its span map from parsed statements. */
-export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): { raw: Raw; spans: SpanMap } {
+export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): RawModel {
   const spans: SpanMap = new Map();
-  const reader = new StatementReader(diagnostics, spans);
+  const reportedPaths = new Set<string>();
+  const unknownNames = new Set<string>();
+  const incompletePaths = new Set<string>();
+  const reader = new StatementReader(diagnostics, spans, reportedPaths, incompletePaths);
+  // Problems with the model as a whole (no `site`) point at the first statement.
+  const first = parsed.statements[0];
+  spans.set('', first ? tokenSpan(first.keyword) : { line: 1, column: 1, length: 1 });
   const raw: Raw = { categories: [], elements: [], functions: [], scenarios: [] };
   const firstSeen = new Map<string, Token>();
   const push = (collection: string, item: Raw): number => {
@@ -152,12 +180,13 @@ export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): 
       diagnostics.push(error('BH115', `unknown statement \`${keyword}\``, tokenSpan(statement.keyword), {
         help: didYouMean(keyword, TOP_KEYWORDS) ?? 'see `bulkhead --help` and the README for the statements of the language',
       }));
+      if (statement.name) unknownNames.add(statement.name.value);
       continue;
     }
     if (keyword !== 'scenario') rejectChildren(statement, diagnostics);
   }
   if (parsed.endComments.length) raw.endComments = parsed.endComments;
-  return { raw, spans };
+  return { raw, spans, reportedPaths, unknownNames, incompletePaths };
 }
 
 function rejectChildren(statement: Statement, diagnostics: Diagnostic[]): void {

@@ -27,7 +27,7 @@ function excerpt(source: SourceText, span: Span, gutter: number, label = ''): st
   // Long lines (a 2,000-character tag) are cut around the span so the caret stays in view.
   if (text.length > MAX_EXCERPT) {
     const start = Math.max(0, column - 1 - 20);
-    text = (start > 0 ? '…' : '') + text.slice(start, start + MAX_EXCERPT) + '…';
+    text = (start > 0 ? '…' : '') + text.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < text.length ? '…' : '');
     column = column - start + (start > 0 ? 1 : 0);
   }
   const width = Math.max(1, Math.min(span.length, text.length - column + 1, MAX_EXCERPT));

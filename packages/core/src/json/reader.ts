@@ -44,16 +44,17 @@ const MESSAGES: Record<string, string> = {
   InvalidCharacter: 'invalid character in string',
 };
 
-function describe(e: ParseError, text: string): { message: string; help?: string } {
+/** The message and the place to point at: a trailing comma is shown at the comma, not at the `}` after it. */
+function describe(e: ParseError, text: string): { message: string; offset: number; length: number; help?: string } {
   const name = printParseErrorCode(e.error);
   const before = text.slice(0, e.offset).trimEnd();
-  if ((name === 'ValueExpected' || name === 'PropertyNameExpected') && before.endsWith(',')) {
-    return { message: 'trailing comma', help: 'JSON allows no comma after the last item; remove it' };
+  if ((name === 'ValueExpected' || name === 'PropertyNameExpected') && before.endsWith(',') && /^\s*[}\]]/.test(text.slice(e.offset))) {
+    return { message: 'trailing comma', offset: before.length - 1, length: 1, help: 'JSON allows no comma after the last item; remove it' };
   }
-  return { message: MESSAGES[name] ?? name };
+  return { message: MESSAGES[name] ?? name, offset: e.offset, length: e.length };
 }
 
-function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex): unknown {
+function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, diagnostics: Diagnostic[]): unknown {
   spans.set(path, index.span(node.offset, node.type === 'object' || node.type === 'array' ? 1 : node.length));
   switch (node.type) {
     case 'object': {
@@ -64,13 +65,23 @@ function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex): un
         if (!keyNode || !valueNode) continue;
         const key = String(keyNode.value);
         const childPath = path === '' ? key : `${path}.${key}`;
-        spans.set(`${childPath}#key`, index.span(keyNode.offset, keyNode.length));
-        Object.defineProperty(out, key, { value: toValue(valueNode, childPath, spans, index), enumerable: true, writable: true, configurable: true });
+        const keySpan = index.span(keyNode.offset, keyNode.length);
+        // JSON.parse would keep the last of two equal keys without a word; the user must choose.
+        const first = spans.get(`${childPath}#key`);
+        if (first && Object.prototype.hasOwnProperty.call(out, key)) {
+          diagnostics.push(error('BH117', `field \`${key}\` given twice`, keySpan, {
+            related: [{ message: 'first given here', span: first }],
+            help: 'keep one of them',
+          }));
+          continue;
+        }
+        spans.set(`${childPath}#key`, keySpan);
+        Object.defineProperty(out, key, { value: toValue(valueNode, childPath, spans, index, diagnostics), enumerable: true, writable: true, configurable: true });
       }
       return out;
     }
     case 'array':
-      return (node.children ?? []).map((child, i) => toValue(child, path === '' ? String(i) : `${path}.${i}`, spans, index));
+      return (node.children ?? []).map((child, i) => toValue(child, path === '' ? String(i) : `${path}.${i}`, spans, index, diagnostics));
     default:
       return node.value;
   }
@@ -81,13 +92,18 @@ export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknow
   const tree = parseTree(text, errors, { allowTrailingComma: false, disallowComments: true, allowEmptyContent: false });
   const index = new LineIndex(text);
   if (errors.length) {
+    // The parser may report one mistake twice at one offset (a trailing comma in an object is both
+    // "property name expected" and "value expected"); keep the first.
+    const seen = new Set<number>();
     for (const e of errors) {
-      const { message, help } = describe(e, text);
-      diagnostics.push(error('BH119', message, index.span(e.offset, e.length), help ? { help } : {}));
+      const { message, offset, length, help } = describe(e, text);
+      if (seen.has(offset)) continue;
+      seen.add(offset);
+      diagnostics.push(error('BH119', message, index.span(offset, length), help ? { help } : {}));
     }
     return undefined;
   }
   if (!tree) return undefined;
   const spans: SpanMap = new Map();
-  return { raw: toValue(tree, '', spans, index), spans };
+  return { raw: toValue(tree, '', spans, index, diagnostics), spans };
 }

@@ -4,6 +4,8 @@ import { error, hasErrors, sortDiagnostics, type Diagnostic } from '../diagnosti
 import { splitLines, type SourceText } from '../diagnostics/render.ts';
 import { parseBulk } from '../bulk/parser.ts';
 import { statementsToRaw, type SpanMap } from '../bulk/to-model.ts';
+import { firstInvalidUtf8, positionOfByte } from '../util/utf8.ts';
+import type { z } from 'zod';
 import { readJson } from '../json/reader.ts';
 import { kebab } from '../model/fields.ts';
 import { Category, Element, Function, Model, Scenario } from '../model/schema.ts';
@@ -38,33 +40,28 @@ function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefine
     return undefined;
   }
   if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf) {
-    diagnostics.push(error('BH101', 'the file starts with a UTF-8 byte-order mark', { line: 1, column: 1, length: 1 }, {
-      help: 'save the file as UTF-8 without BOM; Bulkhead does not strip it for you so that nothing changes unseen',
-    }));
+    diagnostics.push(error('BH101', 'the file starts with a UTF-8 byte-order mark', { line: 1, column: 1, length: 1 }, { help: BOM_HELP }));
     return undefined;
   }
+  // The first of a NUL byte or a broken UTF-8 sequence is reported, at its own line and column.
+  const invalid = firstInvalidUtf8(bytes);
   const nul = bytes.indexOf(0);
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-  } catch {
-    diagnostics.push(error('BH102', 'the file is not UTF-8 text', undefined, { help: 'is this a model file? models are UTF-8 text (.bulk) or JSON' }));
+  if (nul !== -1 && (invalid === -1 || nul < invalid)) {
+    diagnostics.push(error('BH102', 'the file holds a NUL byte, so it is binary, not text', { ...positionOfByte(bytes, nul), length: 1 }, { help: NOT_TEXT_HELP }));
     return undefined;
   }
-  if (nul !== -1) {
-    const before = text.slice(0, text.indexOf('\u0000'));
-    const lines = splitLines(before);
-    diagnostics.push(error('BH102', 'the file holds a NUL byte, so it is binary, not text', { line: lines.length, column: lines[lines.length - 1]!.length + 1, length: 1 }, {
-      help: 'is this a model file? models are UTF-8 text (.bulk) or JSON',
+  if (invalid !== -1) {
+    const byte = bytes[invalid]!.toString(16).toUpperCase().padStart(2, '0');
+    diagnostics.push(error('BH102', `the file is not UTF-8 text (byte 0x${byte} at offset ${invalid})`, { ...positionOfByte(bytes, invalid), length: 1 }, {
+      help: `${NOT_TEXT_HELP}; a file saved in a legacy code page must be re-saved as UTF-8`,
     }));
     return undefined;
   }
-  if (text.trim() === '') {
-    diagnostics.push(error('BH100', 'the file is empty', { line: 1, column: 1, length: 1 }, { help: 'a model needs at least a `site` statement' }));
-    return undefined;
-  }
-  return text;
+  return new TextDecoder('utf-8').decode(bytes);
 }
+
+const BOM_HELP = 'save the file as UTF-8 without BOM; Bulkhead does not strip it for you so that nothing changes unseen';
+const NOT_TEXT_HELP = 'is this a model file? models are UTF-8 text (.bulk) or JSON';
 
 const COLLECTIONS = [
   ['elements', Element],
@@ -74,11 +71,11 @@ const COLLECTIONS = [
 ] as const;
 
 /** When the model as a whole fails the schema, keeps the items that pass so later checks still run. */
-function salvage(raw: unknown): { model: Model; origins: Origins; brokenTags: Set<string> } | undefined {
-  if (typeof raw !== 'object' || raw === null) return undefined;
+function salvage(raw: unknown, brokenTags: Set<string>): { model: Model; origins: Origins; brokenTags: Set<string>; brokenCategories: Set<string> } | undefined {
+  if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) return undefined;
   const top = raw as Record<string, unknown>;
   const origins: Origins = { elements: [], functions: [], scenarios: [], categories: [] };
-  const brokenTags = new Set<string>();
+  const brokenCategories = new Set<string>();
   const out: Record<string, unknown> = { site: { name: '' }, categories: [], elements: [], functions: [], scenarios: [] };
   for (const [collection, schema] of COLLECTIONS) {
     const items = Array.isArray(top[collection]) ? (top[collection] as unknown[]) : [];
@@ -90,14 +87,20 @@ function salvage(raw: unknown): { model: Model; origins: Origins; brokenTags: Se
         origins[collection].push(i);
       } else if (item && typeof item === 'object') {
         const tag = (item as Record<string, unknown>).tag ?? (item as Record<string, unknown>).id;
-        if (typeof tag === 'string') brokenTags.add(tag);
+        if (typeof tag === 'string') (collection === 'categories' ? brokenCategories : brokenTags).add(tag);
       }
     });
     out[collection] = kept;
   }
   const policy = Model.shape.policy.safeParse(top.policy);
   if (policy.success && policy.data) out.policy = policy.data;
-  return { model: out as Model, origins, brokenTags };
+  return { model: out as Model, origins, brokenTags, brokenCategories };
+}
+
+/** A field that is absent (as opposed to present with a wrong value). */
+function isMissing(issue: z.core.$ZodIssue): boolean {
+  if (issue.code === 'invalid_type') return (issue as { input?: unknown }).input === undefined;
+  return issue.code === 'invalid_union' && !!(issue as { discriminator?: string }).discriminator;
 }
 
 export function loadModelText(file: string, bytes: Uint8Array | string): LoadResult {
@@ -115,7 +118,7 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
   });
   if (text === undefined) return done();
   if (typeof bytes === 'string' && text.charCodeAt(0) === 0xfeff) {
-    diagnostics.push(error('BH101', 'the text starts with a byte-order mark', { line: 1, column: 1, length: 1 }));
+    diagnostics.push(error('BH101', 'the text starts with a byte-order mark', { line: 1, column: 1, length: 1 }, { help: BOM_HELP }));
     return done();
   }
   if (text.trim() === '') {
@@ -123,6 +126,11 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     return done();
   }
   let raw: unknown;
+  // Values the reader already reported (a malformed number) and names of unknown statements, so
+  // that one mistake gives one diagnostic, not a cascade of "missing" and "unknown tag" ones.
+  let reportedPaths = new Set<string>();
+  let incompletePaths = new Set<string>();
+  const brokenTags = new Set<string>();
   if (format === 'json') {
     const read = readJson(text, diagnostics);
     if (!read) return done();
@@ -132,19 +140,26 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     const parsed = parseBulk(text, diagnostics);
     const built = statementsToRaw(parsed, diagnostics);
     raw = built.raw;
+    reportedPaths = built.reportedPaths;
+    incompletePaths = built.incompletePaths;
+    for (const tag of built.unknownNames) brokenTags.add(tag);
     for (const [k, v] of built.spans) spans.set(k, v);
   }
   const name: FieldNamer = format === 'bulk' ? kebab : (f) => f;
-  const parsed = Model.safeParse(raw);
+  const parsed = Model.safeParse(raw, { reportInput: true });
   if (parsed.success) {
     const identity = (list: unknown[]) => list.map((_, i) => i);
     const m = parsed.data;
     const origins: Origins = { elements: identity(m.elements), functions: identity(m.functions), scenarios: identity(m.scenarios), categories: identity(m.categories) };
-    diagnostics.push(...validateModel({ model: m, spans, name, origins, brokenTags: new Set() }));
+    diagnostics.push(...validateModel({ model: m, spans, name, origins, brokenTags, brokenCategories: new Set() }));
     return done(m);
   }
-  for (const issue of parsed.error.issues) diagnostics.push(...issueToDiagnostics(issue, spans, name));
-  const salvaged = salvage(raw);
+  for (const issue of parsed.error.issues) {
+    if (reportedPaths.has(issue.path.map(String).join('.'))) continue;
+    if (isMissing(issue) && issue.path.some((_, n) => incompletePaths.has(issue.path.slice(0, n).map(String).join('.')))) continue;
+    diagnostics.push(...issueToDiagnostics(issue, spans, name));
+  }
+  const salvaged = salvage(raw, brokenTags);
   if (salvaged) diagnostics.push(...validateModel({ ...salvaged, spans, name }));
   return done();
 }

@@ -16,32 +16,85 @@ export function spanAt(spans: SpanMap, path: readonly PropertyKey[]): Span | und
   return undefined;
 }
 
+/** The statement (or JSON item) a collection holds, in the words a user writes. */
+const ITEM_NAMES: Record<string, string> = {
+  categories: 'category',
+  elements: 'element',
+  functions: 'function',
+  scenarios: 'scenario',
+  rules: 'rule',
+  justifications: 'accept',
+  enablers: 'enabler',
+  modifiers: 'modifier',
+  layers: 'layer',
+  comments: 'comment',
+  endComments: 'comment',
+};
+
+/** "element 3", "layer 2 of scenario 1": the innermost numbered item on the path, and its parent. */
 function describeItem(path: readonly PropertyKey[]): string {
+  const parts: string[] = [];
+  for (let i = 0; i + 1 < path.length; i++) {
+    const key = path[i];
+    const index = path[i + 1];
+    if (typeof key === 'string' && typeof index === 'number') parts.unshift(`${ITEM_NAMES[key] ?? key} ${index + 1}`);
+  }
+  if (parts.length) return parts.slice(0, 2).join(' of ');
   const head = path[0];
-  if (typeof head === 'string' && typeof path[1] === 'number') return `${head.replace(/s$/, '')} ${path[1] + 1}`;
-  return String(head ?? 'model');
+  return typeof head === 'string' ? head : 'the model';
 }
+
+function article(type: string): string {
+  return type === 'array' ? 'a list' : `${/^[aeiou]/.test(type) ? 'an' : 'a'} ${type}`;
+}
+
+const POSITIONAL = ['tag', 'id', 'name', 'function', 'title', 'finding'];
 
 export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name: FieldNamer): Diagnostic[] {
   const path = issue.path;
   const last = path[path.length - 1];
   const field = typeof last === 'string' ? name(last) : describeItem(path);
   const span = spanAt(spans, path);
+  const input = (issue as { input?: unknown }).input;
+  // .bulk names fields in kebab case, JSON in camel case; the hints differ with the syntax.
+  const isBulk = name('aB') === 'a-b';
   switch (issue.code) {
-    case 'invalid_type':
-      if (issue.input === undefined) {
-        return [error('BH200', `missing \`${field}\` in ${describeItem(path)}`, span, {
-          help: typeof last === 'string' && ['tag', 'id', 'name', 'function', 'title', 'kind', 'finding'].includes(last)
-            ? `give the ${last} right after the keyword`
-            : `add ${field}=...`,
+    case 'invalid_type': {
+      const received = (issue as { received?: string }).received;
+      if (issue.expected === 'number' && (received === 'Infinity' || received === 'NaN')) {
+        return [error('BH305', `\`${field}\` is not a finite number`, span, {
+          help: 'the value is too large to hold; write a number such as 1e-4 or 0.1',
         })];
       }
-      return [error('BH201', `\`${field}\` should be ${issue.expected === 'array' ? 'a list' : `a ${issue.expected}`}`, span)];
+      if (input === undefined) {
+        if (path.length === 1 && typeof last === 'string') {
+          return [error('BH200', `the model has no \`${field}\``, span, {
+            help: last === 'site' ? 'start the model with `site "Site name"`' : `add ${field}`,
+          })];
+        }
+        return [error('BH200', `missing \`${field}\` in ${describeItem(path)}`, span, {
+          help: typeof last !== 'string'
+            ? 'add the missing item'
+            : !isBulk
+              ? `add "${last}": ...`
+              : POSITIONAL.includes(last)
+                ? `give the ${last} right after the keyword`
+                : `add ${field}=...`,
+        })];
+      }
+      if (path.length === 0) {
+        return [error('BH201', `a JSON model is an object with \`site\`, \`elements\`, ...; found ${Array.isArray(input) ? 'a list' : input === null ? 'null' : `a ${typeof input}`}`, span, {
+          help: 'run `bulkhead convert FILE.bulk --to json` to see the shape',
+        })];
+      }
+      const quotedNumber = issue.expected === 'number' && typeof input === 'string' && input.trim() !== '' && Number.isFinite(Number(input));
+      return [error('BH201', `\`${field}\` should be ${article(issue.expected)}`, span, quotedNumber ? { help: 'write the number without quotes' } : {})];
+    }
     case 'invalid_value': {
       const options = issue.values.map(String);
-      const input = String((issue as { input?: unknown }).input ?? '');
-      return [error('BH202', `\`${input}\` is not allowed for \`${field}\``, span, {
-        help: didYouMean(input, options) ?? `use one of: ${options.join(', ')}`,
+      const given = String(input ?? '');
+      return [error('BH202', `\`${given}\` is not allowed for \`${field}\``, span, {
+        help: didYouMean(given, options) ?? `use one of: ${options.join(', ')}`,
       })];
     }
     case 'unrecognized_keys':
@@ -54,13 +107,31 @@ export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name
     case 'invalid_union': {
       const discriminator = (issue as { discriminator?: string }).discriminator;
       if (discriminator) {
+        // zod puts the discriminator on the path; the item is the path without it.
+        const itemPath = path[path.length - 1] === discriminator ? path.slice(0, -1) : path;
+        const what = describeItem(itemPath).replace(/ \d+( of .*)?$/, '');
         const options = ((issue as { options?: unknown[] }).options ?? []).map(String);
-        return [error('BH202', `unknown ${describeItem(path).replace(/ \d+$/, '')} ${discriminator}`, span, {
-          help: `use one of: ${options.join(', ')}`,
+        const value = input && typeof input === 'object' ? (input as Record<string, unknown>)[discriminator] : undefined;
+        if (value === undefined) {
+          return [error('BH200', `missing \`${name(discriminator)}\` in ${describeItem(itemPath)}`, span, {
+            help: `say which ${what} this is: one of ${options.join(', ')}`,
+          })];
+        }
+        return [error('BH202', `unknown ${what} ${discriminator} \`${String(value)}\``, span, {
+          help: didYouMean(String(value), options) ?? `use one of: ${options.join(', ')}`,
         })];
       }
       return [error('BH201', `\`${field}\` has the wrong shape`, span)];
     }
+    case 'too_small':
+      if (issue.origin === 'array') {
+        return [error('BH201', `\`${field}\` is an empty list`, span, { help: `leave \`${field}\` out instead of giving an empty list` })];
+      }
+      return [error('BH201', `\`${field}\`: ${issue.message.toLowerCase()}`, span)];
+    case 'invalid_format':
+      return [error('BH201', `${describeItem(path)} holds a line break or control character`, span, {
+        help: 'a comment is one line of plain text; split it into several comments',
+      })];
     default:
       return [error('BH201', `\`${field}\`: ${issue.message.toLowerCase()}`, span)];
   }

@@ -1,7 +1,7 @@
 // Checks beyond the schema: tags, references and their kinds, cycles, numbers in range, voting,
 // and the shape of each scenario. Every problem is reported, each at the narrowest span we have.
 import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
-import { groupOf, LINK_FIELDS, LINK_TARGETS, SUPPORT_LINK_KINDS, type ElementGroup } from '../model/kinds.ts';
+import { ELEMENT_GROUPS, groupOf, LINK_FIELDS, LINK_TARGETS, SUPPORT_LINK_KINDS, type ElementGroup } from '../model/kinds.ts';
 import { TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction } from '../model/schema.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { didYouMean } from '../util/suggest.ts';
@@ -23,6 +23,8 @@ export interface ValidationInput {
   origins: Origins;
   /** Tags of items that failed the schema, so references to them are not reported as unknown. */
   brokenTags: Set<string>;
+  /** Ids of categories that failed the schema, so scenarios naming them are not reported too. */
+  brokenCategories: Set<string>;
 }
 
 type Kindish = { kind: 'element'; element: Element } | { kind: 'function'; fn: PlantFunction };
@@ -155,7 +157,8 @@ class Validator {
       const element = this.element(tag, path, field);
       if (!element) return;
       if (!groups.includes(groupOf(element.kind)) || (kinds && !kinds.includes(element.kind))) {
-        this.push('BH315', `\`${tag}\` is a ${element.kind}; \`${this.input.name(field)}\` needs ${(kinds ?? groups).join(' or ')}`, path);
+        const wanted = kinds ?? groups.flatMap((g) => ELEMENT_GROUPS[g]);
+        this.push('BH315', `\`${tag}\` is a ${element.kind}; \`${this.input.name(field)}\` needs a ${wanted.join(' or ')}`, path);
       }
     });
   }
@@ -178,9 +181,14 @@ class Validator {
     }
     const m = Number(match[1]);
     const n = Number(match[2]);
-    if (m < 1 || m > n) this.push('BH306', `voting ${voting} needs M between 1 and N`, path);
-    else if (n !== channels) {
-      this.push('BH306', `voting ${voting} names ${n} channels but \`${this.input.name(list)}\` has ${channels}`, path);
+    if (m < 1 || m > n) {
+      this.push('BH306', `voting ${voting} needs M between 1 and N`, path, {
+        help: `MooN means M of the N channels must act; M=${m} cannot exceed N=${n}`,
+      });
+    } else if (n !== channels) {
+      this.push('BH306', `voting ${voting} names ${n} channels but \`${this.input.name(list)}\` has ${channels}`, path, {
+        help: `list ${n} tags in \`${this.input.name(list)}\`, or vote ${m <= channels ? `${m}oo${channels}` : `1oo${channels}`}`,
+      });
     }
   }
 
@@ -193,7 +201,11 @@ class Validator {
 
   private positive(value: number | undefined, path: string, what: string): void {
     if (value === undefined) return;
-    if (!(Number.isFinite(value) && value > 0)) this.push('BH305', `${what} ${value} must be positive and finite`, path);
+    if (!(Number.isFinite(value) && value > 0)) {
+      this.push('BH305', `${what} ${value} must be positive and finite`, path, {
+        help: 'frequencies are events per year and times are minutes, both above 0; leave out what does not apply',
+      });
+    }
   }
 
   private checkFunction(fn: PlantFunction, i: number): void {
@@ -241,7 +253,7 @@ class Validator {
     const { model, name } = this.input;
     const scenario = model.scenarios[i]!;
     const at = (...rest: (string | number)[]) => this.path('scenarios', i, ...rest);
-    if (!model.categories.some((c) => c.id === scenario.category)) {
+    if (!model.categories.some((c) => c.id === scenario.category) && !this.input.brokenCategories.has(scenario.category)) {
       this.push('BH311', `unknown consequence category \`${scenario.category}\``, at('category'), {
         help: didYouMean(scenario.category, model.categories.map((c) => c.id)) ?? 'define it with a `category` statement',
       });

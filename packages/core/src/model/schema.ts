@@ -11,16 +11,32 @@ export const Tag = z
   .string()
   .meta({ id: 'Tag', description: 'A tag such as LT-101 or a scenario id: letters, digits and _ . - / + :' });
 export const Text = z.string().meta({ id: 'Text', description: 'Free text, quoted in .bulk files' });
-export const TagList = z.array(Tag);
+// Lists are never empty: the .bulk language has no way to write an empty list, so JSON may not hold one
+// either (one-to-one mapping); an empty list is written by leaving the field out.
+export const TagList = z.array(Tag).min(1);
+/** A list of statements nested in another (a scenario's layers); empty is written by leaving it out. */
+function nonEmpty<T extends z.ZodType>(item: T) {
+  return z.array(item).min(1);
+}
 /** A probability, checked to lie in (0, 1] by the loader so the error carries a span. */
 export const Probability = z.number().meta({ id: 'Probability', description: 'A probability in (0, 1]' });
 export const PerYear = z.number().meta({ id: 'PerYear', description: 'A frequency in events per year' });
 export const Voting = z.string().meta({ id: 'Voting', description: 'MooN voting such as 1oo1, 1oo2, 2oo3' });
 
+/**
+ * One comment line without its `#`. A .bulk comment runs to the end of its line, so it may hold no
+ * line break or other control character (tabs aside); otherwise .bulk and JSON could not map one-to-one.
+ */
+export const CommentLine = z
+  .string()
+  // eslint-disable-next-line no-control-regex
+  .regex(/^[^\u0000-\u0008\u000a-\u001f\u007f]*$/)
+  .meta({ id: 'CommentLine', description: 'One comment line, without the #: no line breaks or control characters' });
+
 /** Comments kept from a .bulk file so that conversion and formatting lose nothing the user wrote. */
 const commentFields = {
-  comments: z.array(z.string()).optional(),
-  trailingComment: z.string().optional(),
+  comments: nonEmpty(CommentLine).optional(),
+  trailingComment: CommentLine.optional(),
 };
 
 export const Site = z
@@ -240,9 +256,9 @@ export const Scenario = z
     title: Text.optional(),
     category: Tag,
     cause: Cause,
-    enablers: z.array(Enabler).optional(),
-    modifiers: z.array(Modifier).optional(),
-    layers: z.array(LayerClaim).optional(),
+    enablers: nonEmpty(Enabler).optional(),
+    modifiers: nonEmpty(Modifier).optional(),
+    layers: nonEmpty(LayerClaim).optional(),
     ...commentFields,
   })
   .meta({ id: 'Scenario' });
@@ -263,12 +279,12 @@ export const Model = z
     site: Site,
     policy: Policy.optional(),
     categories: z.array(Category),
-    rules: z.array(RuleSetting).optional(),
+    rules: nonEmpty(RuleSetting).optional(),
     elements: z.array(Element),
     functions: z.array(Function),
     scenarios: z.array(Scenario),
-    justifications: z.array(Justification).optional(),
-    endComments: z.array(z.string()).optional(),
+    justifications: nonEmpty(Justification).optional(),
+    endComments: nonEmpty(CommentLine).optional(),
   })
   .meta({ id: 'BulkheadModel', title: 'Bulkhead model', description: 'A Bulkhead plant model' });
 

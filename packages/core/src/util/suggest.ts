@@ -20,19 +20,25 @@ export function editDistance(a: string, b: string, limit = Infinity): number {
   return previous[b.length]!;
 }
 
-/** The closest candidate within a third of the word's length (at least 1, at most 3 edits). */
+/**
+ * The closest candidate within a third of the word's length (at least 1, at most 3 edits); failing
+ * that, the one candidate the word begins (`mounted` for `mounted-on`), if only one does.
+ */
 export function suggest(word: string, candidates: Iterable<string>): string | undefined {
   const limit = Math.max(1, Math.min(3, Math.floor(word.length / 3)));
   let best: string | undefined;
   let bestDistance = limit + 1;
+  const extending: string[] = [];
   for (const candidate of candidates) {
+    if (word.length >= 3 && candidate.length > word.length && candidate.toLowerCase().startsWith(word.toLowerCase())) extending.push(candidate);
     const d = editDistance(word, candidate, limit);
     if (d < bestDistance || (d === bestDistance && best !== undefined && candidate < best)) {
       best = candidate;
       bestDistance = d;
     }
   }
-  return bestDistance <= limit ? best : undefined;
+  if (bestDistance <= limit) return best;
+  return extending.length === 1 ? extending[0] : undefined;
 }
 
 export function didYouMean(word: string, candidates: Iterable<string>): string | undefined {
