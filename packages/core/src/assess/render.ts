@@ -23,16 +23,24 @@ function continuation(text: string): string {
 
 function origin(s: Sourced): string {
   if (s.origin === 'model') return s.basis !== undefined ? `basis: ${s.basis}` : 'no basis given';
-  if (s.origin === 'sil-band') return `from the SIL band (${s.basis ?? ''})`;
-  return `default (${s.basis ?? 'defaults table'})`;
+  if (s.origin === 'sil-band') return `from the SIL band: ${s.basis ?? ''}`;
+  return `default: ${s.basis ?? 'defaults table'}`;
 }
+
+const EFFECT_TEXT: Record<LayerReason['effect'], string> = {
+  voids: 'no credit',
+  caps: 'capped',
+  unverified: 'trace incomplete, no credit',
+  conflict: 'not credited together',
+  note: 'noted',
+};
 
 function reasonText(r: LayerReason): string {
   const where = r.element !== undefined ? ` at ${r.element}` : '';
   const other = r.with === 'cause' ? ' with the cause' : r.with !== undefined ? ` with ${r.with}` : '';
-  const cap = r.effect === 'caps' && r.cap !== undefined ? ` (capped at ${formatProbability(r.cap)})` : '';
-  const state = r.accepted ? ', accepted' : r.severity === 'needs-justification' ? ', open' : '';
-  return `${r.rule}${where}${other}${cap}${state}`;
+  const effect = r.effect === 'caps' && r.cap !== undefined ? `capped at ${formatProbability(r.cap)}` : EFFECT_TEXT[r.effect];
+  const state = r.accepted ? ', accepted' : r.severity === 'needs-justification' ? ', open until accepted' : '';
+  return `- ${r.rule}${where}${other}: ${effect}${state}`;
 }
 
 function creditText(l: LayerAssessment): string {
@@ -40,9 +48,8 @@ function creditText(l: LayerAssessment): string {
   return l.creditedIfAccepted ? 'if accepted' : 'no';
 }
 
-function verdictText(l: LayerAssessment): string {
-  const reasons = (l.reasons ?? []).filter((r) => r.effect !== 'note').map(reasonText);
-  return reasons.length > 0 ? `${l.verdict}: ${reasons.join('; ')}` : l.verdict;
+function pfdText(pfd: number): string {
+  return pfd >= 1 ? 'none' : formatProbability(pfd);
 }
 
 function table(rows: string[][]): string[] {
@@ -56,15 +63,27 @@ function layerLines(a: ScenarioAssessment): string[] {
   const mark = (s: Sourced) => (s.origin === 'default' ? ' (default)' : s.origin === 'sil-band' ? ' (SIL band)' : '');
   const rows = [['layer', 'kind', 'claimed', 'allowed', 'credit', 'verdict']];
   for (const l of a.layers) {
-    const allowed = l.allowedPfdIfAccepted !== undefined ? `${formatProbability(l.allowedPfd)} (${formatProbability(l.allowedPfdIfAccepted)} if accepted)` : formatProbability(l.allowedPfd);
-    rows.push([l.function, l.kind, `${formatProbability(l.claimedPfd.value)}${mark(l.claimedPfd)}`, allowed, creditText(l), verdictText(l)]);
+    const allowed = l.allowedPfdIfAccepted !== undefined ? `${pfdText(l.allowedPfd)} (${pfdText(l.allowedPfdIfAccepted)} if accepted)` : pfdText(l.allowedPfd);
+    const claimed = l.claimedPfd.value >= 1 && l.claimedPfd.origin === 'default' ? 'none' : `${formatProbability(l.claimedPfd.value)}${mark(l.claimedPfd)}`;
+    rows.push([l.function, l.kind, claimed, allowed, creditText(l), l.verdict]);
   }
   const [head, ...body] = table(rows);
-  return [row('layers', head!), ...body.map(continuation)];
+  const lines = [row('layers', head!)];
+  a.layers.forEach((l, i) => {
+    lines.push(continuation(body[i]!));
+    for (const r of (l.reasons ?? []).filter((x) => x.effect !== 'note')) lines.push(continuation(`  ${reasonText(r)}`));
+  });
+  return lines;
 }
 
 function verdictWord(meets: boolean): string {
   return meets ? 'meets the criterion' : 'falls short';
+}
+
+function silText(sil: number, band: { low: number; high: number } | undefined, format: (x: number) => string): string {
+  if (sil === 0) return 'no SIL needed (RRF up to 10)';
+  if (sil === BEYOND_SIL_4 || !band) return 'beyond SIL 4: not achievable by one SIF; add independent layers or change the design';
+  return `SIL ${sil} (band ${format(band.low)} to ${format(band.high)})`;
 }
 
 function requirementLines(a: ScenarioAssessment): string[] {
@@ -73,25 +92,22 @@ function requirementLines(a: ScenarioAssessment): string[] {
   const who = sif.function ?? 'a new SIF';
   const rel = edgeRelation(a.edge);
   const rrfRel = a.edge === 'below' ? '>' : '>=';
-  const need = `PFD ${rel} ${formatProbability(sif.requiredPfd)}, RRF ${rrfRel} ${formatRatio(sif.requiredRrf)}`;
-  let verdict: string;
-  const sil = sif.mode === 'high-demand' ? (sif.lowDemandSil ?? sif.sil) : sif.sil;
-  if (sif.requiredPfd >= 1) verdict = 'no risk reduction needed from it';
-  else if (sil === 0) verdict = 'no SIL needed (RRF up to 10)';
-  else if (sil === BEYOND_SIL_4) verdict = 'beyond SIL 4: not achievable by one SIF; add independent layers or change the design';
-  else {
-    const band = lowDemandBand(sil)!;
-    const whole = a.edge === 'below' ? sameFigure(sif.requiredPfd, band.high) : false;
-    verdict = `SIL ${sil} (band ${formatProbability(band.low)} to ${formatProbability(band.high)})` + (whole ? '' : `; verify PFD ${rel} ${formatProbability(sif.requiredPfd)}`);
+  const pfdNeed = `PFD ${rel} ${formatProbability(sif.requiredPfd)}, RRF ${rrfRel} ${formatRatio(sif.requiredRrf)}`;
+  // Within a band a SIF of that SIL must still be verified to the figure; only the band's own edge is met by any SIF of it.
+  const verify = (what: string, need: number, band: { high: number } | undefined, format: (x: number) => string) =>
+    band && !(a.edge === 'below' && sameFigure(need, band.high)) ? `; verify ${what} ${rel} ${format(need)}` : '';
+  if (sif.requiredPfd >= 1) return [row('required', `${who}: no risk reduction needed from it`), row('demand', sif.note)];
+  if (sif.mode === 'low-demand') {
+    const band = lowDemandBand(sif.sil);
+    return [row('required', `${who}: ${pfdNeed}: ${silText(sif.sil, band, formatProbability)}${verify('PFD', sif.requiredPfd, band, formatProbability)}`), row('demand', sif.note)];
   }
-  const lines = [row('required', `${who}: ${need}: ${verdict}`)];
-  if (sif.mode === 'high-demand') {
-    const pfh = sif.requiredPfh !== undefined ? `PFH ${rel} ${formatPerHour(sif.requiredPfh)}` : 'PFH';
-    const band = sif.pfhBand ? `SIL ${sif.pfhBand.sil} (PFH ${formatPerHour(sif.pfhBand.low)} to ${formatPerHour(sif.pfhBand.high)})` : sif.sil === BEYOND_SIL_4 ? 'beyond SIL 4' : 'no SIL needed';
-    lines.push(row('high demand', `${pfh}: ${band}, IEC 61511-1:2016 Table 5; the PFD line above does not apply`));
-  }
-  lines.push(row('demand', sif.note));
-  return lines;
+  const pfh = sif.requiredPfh ?? 0;
+  const lowSil = sif.lowDemandSil ?? sif.sil;
+  return [
+    row('required', `${who}: PFH ${rel} ${formatPerHour(pfh)}: ${silText(sif.sil, sif.pfhBand, formatPerHour)}${verify('PFH', pfh, sif.pfhBand, formatPerHour)}`),
+    continuation(`in low-demand terms ${pfdNeed} (${lowSil === BEYOND_SIL_4 ? 'beyond SIL 4' : lowSil === 0 ? 'no SIL' : `SIL ${lowSil}`}), which does not apply at this demand`),
+    row('demand', sif.note),
+  ];
 }
 
 export function renderAssessmentText(a: ScenarioAssessment): string[] {
@@ -103,6 +119,7 @@ export function renderAssessmentText(a: ScenarioAssessment): string[] {
   for (const e of a.enablers) lines.push(row('enabler', `${e.title} ${formatProbability(e.probability)}${e.basis !== undefined ? `, basis: ${e.basis}` : ''}`));
   for (const m of a.modifiers) {
     const name = m.title !== undefined ? `${m.kind} (${m.title})` : m.kind;
+    // A modifier the rules bar is still shown, with the finding that bars it, so nothing the user wrote vanishes.
     const state = m.allowed ? '' : m.allowedIfAccepted ? ', not applied until accepted' : ', not applied';
     lines.push(row('modifier', `${name} ${formatProbability(m.probability)}${m.basis !== undefined ? `, basis: ${m.basis}` : ''}${state}${m.finding !== undefined && !m.allowed ? ` (${m.finding})` : ''}`));
   }

@@ -1,0 +1,98 @@
+// The text lines `bulkhead check` prints per scenario, pinned for a demo-like scenario whose numbers are
+// worked by hand in the comments, plus the properties every rendering keeps: plain, aligned, no trailing space.
+import { describe, expect, it } from 'vitest';
+import { renderAssessmentText } from '../../../packages/core/src/assess/index.ts';
+import { assess, cause, independenceFinding, layer } from './kit.ts';
+
+// The demo's S-101 in miniature: a BPCS loop failure (typical 0.1/yr), ignition 0.5, a SIF at 0.005 that shares a
+// bridle with the failing loop, and an alarm raised in the failing loop's controller; tolerable 1e-4/yr, strictly below.
+const DEMO_LIKE = `
+alarm LAH-1 sensors=LT-2 raised-in=C1 operator=OP-1 minutes=20
+sif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005 pfd-basis="SIL verification (invented)"
+scenario S-1 title="Vessel overfills" category=people
+  cause function=LIC-1 typical=bpcs-loop-failure
+  modifier ignition probability=0.5 basis="ignition study (invented)"
+  layer SIF-1
+  layer LAH-1 pfd=0.1 basis="20 minutes to respond"
+`;
+const VOIDING = [
+  independenceFinding('S-1', 'shared-connection', [cause('LIC-1'), layer('SIF-1')], { element: 'BR-1' }),
+  independenceFinding('S-1', 'shared-solver', [cause('LIC-1'), layer('LAH-1')], { element: 'C1' }),
+];
+
+describe('renderAssessmentText', () => {
+  it('prints the demo-like scenario as worked by hand', () => {
+    // By hand: as claimed 0.1 x 0.5 x 0.005 x 0.1 = 2.5e-5 /yr (meets 1e-4); both layers voided, so after
+    // independence 0.1 x 0.5 = 5.0e-2 /yr, 500 times the tolerable; the SIF must reach PFD < 1e-4 / 0.05 = 2.0e-3,
+    // RRF > 500, which is inside SIL 2 (1e-3 to 1e-2), so SIL 2 verified to 2.0e-3; demand on it 0.1 /yr, low demand.
+    expect(renderAssessmentText(assess(DEMO_LIKE, VOIDING).assessment)).toEqual([
+      'S-1  Vessel overfills',
+      '  criterion    people (harm to people): tolerable 1.0e-4 /yr; the mitigated frequency must be strictly below it',
+      '  cause        failure of LIC-1: 1.0e-1 /yr, default: BPCS instrument loop failure: CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)',
+      '  modifier     ignition 5.0e-1, basis: ignition study (invented)',
+      '  layers       layer  kind   claimed  allowed  credit  verdict',
+      '               SIF-1  sif    5.0e-3   5.0e-3   no      voided',
+      '                 - shared-connection at BR-1 with the cause: no credit',
+      '               LAH-1  alarm  1.0e-1   1.0e-1   no      voided',
+      '                 - shared-solver at C1 with the cause: no credit',
+      '  mitigated    as claimed                 2.5e-5 /yr  meets the criterion',
+      '               after independence         5.0e-2 /yr  falls short',
+      '               if open findings accepted  5.0e-2 /yr  falls short',
+      '  gap          500 x tolerable, after independence',
+      '  required     SIF-1: PFD < 2.0e-3, RRF > 500: SIL 2 (band 1.0e-3 to 1.0e-2); verify PFD < 2.0e-3',
+      '  demand       demand on SIF-1 1.0e-1 /yr: low demand, the PFDavg bands of IEC 61511-1:2016 Table 4 apply (demand = cause x enablers x the credited non-SIF layers, all taken to act before the SIF)',
+    ]);
+  });
+
+  it('states the "at most" convention and its relations', () => {
+    const text = renderAssessmentText(assess(DEMO_LIKE.replace('category=people', 'category=people-at-most'), VOIDING).assessment);
+    expect(text[1]).toContain('the mitigated frequency may equal it');
+    expect(text.find((l) => l.includes('required'))).toContain('PFD <= 2.0e-3, RRF >= 500: SIL 2');
+  });
+
+  it('shows the unvoided scenario meeting its criterion with the SIF requirement on the band edge', () => {
+    const lines = renderAssessmentText(assess(DEMO_LIKE).assessment);
+    expect(lines).toContain('               after independence         2.5e-5 /yr  meets the criterion');
+    // Required PFD = 1e-4 / (0.1 x 0.5 x 0.1) = 0.02: SIL 1, verified to 2.0e-2.
+    expect(lines.find((l) => l.includes('required'))).toBe('  required     SIF-1: PFD < 2.0e-2, RRF > 50: SIL 1 (band 1.0e-2 to 1.0e-1); verify PFD < 2.0e-2');
+  });
+
+  it('marks defaults, shows barred modifiers and open findings, and lists alternatives', () => {
+    const lines = renderAssessmentText(
+      assess(
+        `
+device PSV-IPL device=PSV-1
+alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20
+scenario S-2 category=loc
+  cause function=LIC-1 frequency=0.1
+  modifier ignition probability=0.5
+  layer PSV-IPL
+  layer LAH-2
+`,
+        [independenceFinding('S-2', 'shared-console', [layer('PSV-IPL'), layer('LAH-2')], { severity: 'needs-justification' })],
+      ).assessment,
+    );
+    expect(lines).toContain('  modifier     ignition 5.0e-1, not applied (modifier-not-allowed:S-2:ignition)');
+    expect(lines.find((l) => l.includes('PSV-IPL  device'))).toMatch(/1\.0e-2 \(default\)\s+1\.0e-2\s+yes\s+independent/);
+    expect(lines.find((l) => l.includes('LAH-2  '))).toMatch(/if accepted\s+not-selected/);
+    expect(lines).toContain('                 - shared-console with PSV-IPL: not credited together, open until accepted');
+    expect(lines).toContain('  alternative  LAH-2: PFD product 1.0e-1, mitigated 1.0e-2 /yr');
+  });
+
+  it('says so when no layer is claimed, and sizes a new SIF', () => {
+    const lines = renderAssessmentText(assess('scenario S-3 category=people\n  cause function=LIC-1 frequency=0.1\n').assessment);
+    expect(lines).toContain('  layers       none claimed');
+    expect(lines.find((l) => l.includes('required'))).toBe('  required     a new SIF: PFD < 1.0e-3, RRF > 1,000: SIL 3 (band 1.0e-4 to 1.0e-3)');
+  });
+
+  it('is plain text: no colour codes, no trailing spaces, layer columns aligned', () => {
+    const lines = renderAssessmentText(assess(DEMO_LIKE, VOIDING).assessment);
+    for (const l of lines) {
+      expect(l).not.toMatch(/\u001b/);
+      expect(l).toBe(l.trimEnd());
+    }
+    const table = lines.filter((l) => / (sif|alarm|kind) /.test(l));
+    const column = (l: string) => l.indexOf(l.includes('kind') ? 'claimed' : /\d\.\de-\d/.exec(l)![0]);
+    expect(new Set(table.map(column)).size).toBe(1);
+  });
+});
