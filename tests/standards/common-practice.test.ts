@@ -77,7 +77,8 @@ ${extra}  layer SIF-1
     const sif = assess(DEMAND(5)).assessment.sif!;
     expect(sif.mode).toBe('high-demand');
     expect(sif.demandRate).toBe(5);
-    // Required PFH = 1e-4 /yr / 8,760 h = 1.14e-8 /h: SIL 3 by IEC 61511-1:2016 Table 5 (>= 1e-8 to < 1e-7).
+    // Required PFH = 1e-4 /yr / 8,760 h = 1.14e-8 /h (this tool's conservative high-demand model: the SIF's own
+    // dangerous failures start the release; no outside source), SIL 3 by IEC 61511-1:2016 Table 5 (>= 1e-8 to < 1e-7).
     expect(sif.requiredPfh!.toPrecision(3)).toBe('1.14e-8');
     expect(sif.sil).toBe(3);
     expect(sif.pfhBand).toEqual({ sil: 3, low: 1e-8, high: 1e-7 });
@@ -95,6 +96,7 @@ ${extra}  layer SIF-1
   });
 });
 
+// Edge cases of this tool's own arithmetic (no outside source): they check robustness, not a published value.
 describe('edge cases of the arithmetic', () => {
   it('handles a cause of 1e-9 per year: no SIF needed', () => {
     const a = assess(`scenario S-1 category=people\n  cause external="Meteorite" frequency=1e-9\n`).assessment;

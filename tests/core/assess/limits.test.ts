@@ -2,7 +2,7 @@
 // and the verdict, allowed PFD and credit of each layer. One harness runs every table.
 import { describe, expect, it } from 'vitest';
 import { ASSESS_RULES, assessRulesInForce } from '../../../packages/core/src/assess/index.ts';
-import { assess, load, verdicts } from './kit.ts';
+import { assess, independenceFinding, layer, load, verdicts } from './kit.ts';
 
 interface Case {
   name: string;
@@ -326,6 +326,21 @@ ${SCENARIO('loc', 'layer LSHH-3', 'layer LAH-2', 'modifier ignition probability=
     ]);
     const same = out.findings.find((f) => f.rule === 'bpcs-same-controller')!;
     expect(same).toMatchObject({ element: 'C2', parties: [{ role: 'layer', tag: 'LAH-2' }, { role: 'layer', tag: 'LSHH-3' }] });
+  });
+});
+
+describe('one fact, one finding', () => {
+  it('leaves a same-controller pair to the trace rules when they already report it at that controller', () => {
+    const text = `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
+trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
+${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`;
+    const theirs = independenceFinding('S-1', 'shared-logic-solver', [layer('LSHH-3'), layer('LAH-2')], { element: 'C2' });
+    const out = assess(text, [theirs]);
+    expect(out.findings).toEqual([]);
+    expect(out.assessment.layers.filter((l) => l.credited)).toHaveLength(1);
+    // Reported at another element, the pair is still this rule's to report.
+    const elsewhere = independenceFinding('S-1', 'shared-console', [layer('LSHH-3'), layer('LAH-2')], { element: 'CON-1', severity: 'note' });
+    expect(assess(text, [elsewhere]).findings.map((f) => f.key)).toEqual(['bpcs-same-controller:S-1:LAH-2:LSHH-3']);
   });
 });
 

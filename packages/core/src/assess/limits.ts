@@ -166,12 +166,12 @@ export function limitFinding(model: Model, scenario: string, id: AssessRuleId, i
 export type Figure = 'after' | 'if-accepted';
 
 /**
- * Whether a finding's effect applies to a figure. voids-credit applies to both (a justification does not lift
- * it; a severity override with a reason does); needs-justification applies to the headline "after" figure
- * until accepted; a note changes nothing.
+ * Whether a finding's effect applies to a figure. An accepted finding (a justification names its key) binds
+ * neither figure, whatever its severity: the acceptance is the team's recorded decision and stays visible. Not
+ * accepted, voids-credit binds both figures and needs-justification binds only the headline "after" figure
+ * (the "if accepted" figure shows what accepting it is worth); a note binds nothing.
  */
 export function inForce(finding: Finding, figure: Figure): boolean {
-  if (finding.severity === 'voids-credit') return true;
-  if (finding.severity === 'note') return false;
-  return figure === 'after' && finding.accepted === undefined;
+  if (finding.accepted !== undefined || finding.severity === 'note') return false;
+  return finding.severity === 'voids-credit' || figure === 'after';
 }

@@ -115,8 +115,19 @@ interface Conflict {
   finding: Finding;
 }
 
-/** The BPCS limits that bind layers together: at most two BPCS layers, at most one per controller. */
-function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[], facts: BpcsFacts, mine: Finding[]) {
+/** Whether the trace rules already report this pair of layers at this element (their shared-solver rule does). */
+function reportedPair(findings: readonly Finding[], x: string, y: string, element: string): boolean {
+  return findings.some((f) => {
+    const tags = f.parties.filter((p) => p.role === 'layer').map((p) => p.tag);
+    return f.element === element && tags.length === 2 && tags.includes(x) && tags.includes(y);
+  });
+}
+
+/**
+ * The BPCS limits that bind layers together: at most two BPCS layers, at most one per controller. A pair the
+ * trace rules already report at the same controller is left to them, so one fact makes one finding.
+ */
+function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[], facts: BpcsFacts, reported: readonly Finding[], mine: Finding[]) {
   const bpcs = works.filter((w) => w.bpcs);
   const conflicts: Conflict[] = [];
   let countFinding: Finding | undefined;
@@ -133,7 +144,7 @@ function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[],
       for (let j = i + 1; j < bpcs.length; j++) {
         const [x, y] = [bpcs[i]!.fn.tag, bpcs[j]!.fn.tag].sort() as [string, string];
         const controller = facts[x]?.solver;
-        if (controller === undefined || controller !== facts[y]?.solver) continue;
+        if (controller === undefined || controller !== facts[y]?.solver || reportedPair(reported, x, y, controller)) continue;
         const f = limitFinding(model, scenario.id, 'bpcs-same-controller', {
           tags: [x, y],
           parties: [
@@ -190,12 +201,12 @@ function applyIndependence(findings: readonly Finding[], works: Map<string, Laye
 
 function verdictOf(w: LayerWork, eligible: boolean, selected: boolean): LayerAssessment['verdict'] {
   const removes = (r: LayerReason) => r.effect === 'voids' || r.effect === 'unverified';
-  const open = (r: LayerReason) => r.severity === 'needs-justification' && !r.accepted;
-  if (w.reasons.some((r) => r.effect === 'voids' && r.severity === 'voids-credit')) return 'voided';
-  if (w.reasons.some((r) => r.effect === 'unverified' && (r.severity === 'voids-credit' || open(r)))) return 'unverified';
-  if (w.reasons.some((r) => removes(r) && open(r))) return 'open';
+  const binding = (r: LayerReason) => !r.accepted && r.severity !== 'note';
+  if (w.reasons.some((r) => r.effect === 'voids' && binding(r) && r.severity === 'voids-credit')) return 'voided';
+  if (w.reasons.some((r) => r.effect === 'unverified' && binding(r))) return 'unverified';
+  if (w.reasons.some((r) => removes(r) && binding(r))) return 'open';
   if (eligible && w.pfd.after < 1 && !selected) return 'not-selected';
-  if (w.reasons.some((r) => r.effect !== 'note' && r.severity === 'needs-justification' && r.accepted)) return 'accepted';
+  if (w.reasons.some((r) => r.effect !== 'note' && r.accepted)) return 'accepted';
   return 'independent';
 }
 
@@ -219,14 +230,13 @@ export function assessScenario(input: AssessInput): AssessOutput {
   }
   for (const w of works) mine.push(...w.findings);
   const byTag = new Map(works.map((w) => [w.fn.tag, w]));
-  const { countFinding, conflicts } = bpcsGroupFindings(model, scenario, works, facts, mine);
+  const scenarioFindings = input.findings.filter((f) => f.scenario === scenario.id);
+  const { countFinding, conflicts } = bpcsGroupFindings(model, scenario, works, facts, scenarioFindings, mine);
   for (const c of conflicts) {
     byTag.get(c.a)!.reasons.push(reasonOf(c.finding, 'conflict', c.b));
     byTag.get(c.b)!.reasons.push(reasonOf(c.finding, 'conflict', c.a));
   }
   if (countFinding) for (const w of works.filter((x) => x.bpcs)) w.reasons.push(reasonOf(countFinding, 'conflict'));
-
-  const scenarioFindings = input.findings.filter((f) => f.scenario === scenario.id);
   const againstLayer = applyIndependence(scenarioFindings, byTag, conflicts);
 
   const eligible = (w: LayerWork, figure: Figure) =>
