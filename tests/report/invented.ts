@@ -2,6 +2,7 @@
 // and a hand-built Analysis for it. Not a real site, and not the output of the analysis pipeline.
 import { loadModelText, type LoadResult, type Model } from '@bulkhead/core';
 import type { Analysis, Finding } from '../../packages/core/src/analysis/types.ts';
+import { applyJustifications } from '../../packages/core/src/justify/index.ts';
 
 export const INVENTED_FILE = 'tests/invented/tiny.bulk';
 export const INVENTED_SHA = 'a'.repeat(64);
@@ -130,3 +131,17 @@ export function inventedAnalysis(findings: Finding[] = [sharedNozzle, sameMake])
 }
 
 export const INVENTED_FINDINGS = { sharedNozzle, sameMake };
+
+/** The invented model and analysis as `bulkhead report` would pass them, justifications applied. */
+export function inventedInput(text = INVENTED_TEXT, analysis = inventedAnalysis()) {
+  const loaded = loadInvented(text);
+  const justified = applyJustifications(analysis.findings, loaded.model.justifications, loaded.spans);
+  return {
+    model: loaded.model,
+    analysis: { ...analysis, findings: [...justified.findings, ...justified.stale] },
+    file: INVENTED_FILE,
+    sha256: INVENTED_SHA,
+    toolVersion: '0.0.0-test',
+    spans: loaded.spans,
+  };
+}

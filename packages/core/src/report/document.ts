@@ -1,0 +1,207 @@
+// The report document: one normalised, sorted view of a model's assessment that every report format
+// renders. Its zod schema is the documented, versioned shape of the JSON report (formatVersion below).
+import { z } from 'zod';
+import { SEVERITIES } from '../model/schema.ts';
+
+/**
+ * Raise when a field is removed or changes meaning; adding an optional field keeps the version.
+ * Readers should refuse a formatVersion they do not know.
+ */
+export const REPORT_FORMAT_VERSION = 1;
+
+const Severity = z.enum(SEVERITIES);
+const Tags = z.array(z.string());
+
+const Sourced = z
+  .strictObject({
+    value: z.number(),
+    origin: z.enum(['model', 'sil-band', 'default']).meta({
+      description: 'model: the user wrote it; sil-band: the conservative edge of the claimed SIL; default: the built-in table',
+    }),
+    basis: z.string().optional(),
+  })
+  .meta({ id: 'SourcedNumber', description: 'A number and where it came from' });
+
+const PolicySwitch = z
+  .strictObject({
+    name: z.string().meta({ description: 'The switch as written in a .bulk policy statement' }),
+    value: z.string(),
+    origin: z.enum(['model', 'default']),
+  })
+  .meta({ id: 'PolicySwitch' });
+
+const Rule = z
+  .strictObject({
+    id: z.string(),
+    title: z.string(),
+    severity: Severity,
+    defaultSeverity: Severity,
+    source: z.string(),
+    rationale: z.string().optional(),
+    reason: z.string().optional().meta({ description: "The model's reason for a severity other than the default" }),
+  })
+  .meta({ id: 'RuleInForce' });
+
+const Acceptance = z.strictObject({ by: z.string(), date: z.string(), reason: z.string() }).meta({ id: 'Acceptance' });
+
+const Finding = z
+  .strictObject({
+    key: z.string().meta({ description: 'Stable key: a justification names it to accept the finding' }),
+    rule: z.string(),
+    title: z.string(),
+    severity: Severity,
+    scenario: z.string().optional(),
+    parties: z.array(z.strictObject({ role: z.enum(['cause', 'layer']), tag: z.string().optional() })),
+    element: z.string().optional().meta({ description: 'The shared element, when there is one' }),
+    paths: z.array(Tags).meta({ description: 'For each party, the tags from it to the shared element' }),
+    message: z.string(),
+    rationale: z.string(),
+    source: z.string(),
+    accepted: Acceptance.optional(),
+  })
+  .meta({ id: 'Finding' });
+
+const TracedElement = z
+  .strictObject({
+    tag: z.string(),
+    kind: z.string(),
+    group: z.string(),
+    title: z.string().optional(),
+    path: Tags.meta({ description: 'From the function (first) to this element (last)' }),
+    links: Tags.meta({ description: 'The link taken at each step of the path' }),
+  })
+  .meta({ id: 'TracedElement' });
+
+const LayerElement = TracedElement.extend({
+  inCause: z.boolean().meta({ description: "The element is also in the initiating cause's element set" }),
+  findings: Tags.meta({ description: 'Keys of findings about this layer that name this element as shared' }),
+}).meta({ id: 'LayerElement' });
+
+export const LAYER_VERDICTS = ['independent', 'voided', 'unverified', 'open', 'accepted', 'not-selected'] as const;
+
+const Layer = z
+  .strictObject({
+    function: z.string(),
+    kind: z.string(),
+    title: z.string().optional(),
+    claimedPfd: Sourced,
+    allowedPfd: z.number().meta({ description: 'The PFD the rules allow (a BPCS layer capped at 0.1, for one)' }),
+    verdict: z.enum(LAYER_VERDICTS),
+    credited: z.boolean().meta({ description: 'Credited in the headline figure, after independence' }),
+    creditedIfAccepted: z.boolean(),
+    elements: z.array(LayerElement),
+    missing: Tags.meta({ description: 'Parts the layer needs but the model does not give (unverified)' }),
+    findings: Tags.meta({ description: 'Keys of the findings that decide the verdict' }),
+  })
+  .meta({ id: 'LayerReport' });
+
+const LopaLine = z
+  .strictObject({
+    figure: z.enum(['claimed', 'after-independence', 'if-accepted']),
+    layers: Tags.meta({ description: 'The layers credited in this figure' }),
+    mitigated: z.number().meta({ description: 'Mitigated frequency, per year' }),
+    meets: z.boolean(),
+  })
+  .meta({ id: 'LopaLine' });
+
+const SifRequirement = z
+  .strictObject({
+    function: z.string().optional(),
+    requiredPfd: z.number(),
+    requiredRrf: z.number(),
+    sil: z.number().meta({ description: '0: no SIL needed; 1 to 4; 5: beyond SIL 4' }),
+    demandRate: z.number(),
+    mode: z.enum(['low-demand', 'high-demand']),
+    pfhBand: z.strictObject({ sil: z.number(), low: z.number(), high: z.number() }).optional(),
+    note: z.string(),
+  })
+  .meta({ id: 'SifRequirement' });
+
+const Scenario = z
+  .strictObject({
+    id: z.string(),
+    title: z.string().optional(),
+    category: z.string(),
+    harm: z.enum(['people', 'containment', 'asset']),
+    tolerable: z.number(),
+    edge: z.enum(['below', 'at-most']),
+    cause: z.strictObject({
+      label: z.string(),
+      function: z.string().optional(),
+      only: z.string().optional(),
+      element: z.string().optional(),
+      external: z.string().optional(),
+      frequency: Sourced,
+      elements: Tags.nullable().meta({
+        description: "The cause's element set, sorted; null when the analysis did not give it",
+      }),
+    }),
+    enablers: z.array(z.strictObject({ title: z.string(), probability: z.number(), basis: z.string().optional() })),
+    modifiers: z.array(
+      z.strictObject({
+        kind: z.string(),
+        title: z.string().optional(),
+        probability: z.number(),
+        basis: z.string().optional(),
+        allowed: z.boolean(),
+      }),
+    ),
+    layers: z.array(Layer),
+    lopa: z.array(LopaLine),
+    gap: z.number().meta({ description: 'Mitigated frequency after independence over tolerable' }),
+    sif: SifRequirement.optional(),
+    alternatives: z.array(z.strictObject({ layers: Tags, pfdProduct: z.number() })),
+    findings: Tags,
+  })
+  .meta({ id: 'ScenarioReport' });
+
+const FunctionTrace = z
+  .strictObject({
+    function: z.string(),
+    kind: z.string(),
+    title: z.string().optional(),
+    elements: z.array(TracedElement),
+    channels: z.array(z.strictObject({ role: z.enum(['sensor', 'final']), head: z.string(), elements: Tags })),
+    missing: Tags,
+  })
+  .meta({ id: 'FunctionTraceReport' });
+
+export const ReportDocument = z
+  .strictObject({
+    formatVersion: z.literal(REPORT_FORMAT_VERSION),
+    tool: z.strictObject({ name: z.literal('bulkhead'), version: z.string() }),
+    model: z.strictObject({
+      file: z.string(),
+      sha256: z.string().regex(/^[0-9a-f]{64}$/),
+    }),
+    site: z.strictObject({ name: z.string(), description: z.string().optional() }),
+    date: z.string().optional().meta({ description: 'Only when given on the command line, so output stays reproducible' }),
+    cautions: Tags,
+    conventions: Tags,
+    policy: z.array(PolicySwitch),
+    rules: z.array(Rule),
+    summary: z.strictObject({
+      scenarios: z.number(),
+      scenariosMeetingAfter: z.number(),
+      findings: z.strictObject({ 'voids-credit': z.number(), 'needs-justification': z.number(), note: z.number() }),
+      accepted: z.number(),
+    }),
+    scenarios: z.array(Scenario),
+    functions: z.array(FunctionTrace),
+    findings: z.array(Finding),
+  })
+  .meta({
+    id: 'BulkheadReport',
+    title: 'Bulkhead report',
+    description: `The JSON report of a Bulkhead assessment, format version ${REPORT_FORMAT_VERSION}`,
+  });
+
+export type ReportDocument = z.infer<typeof ReportDocument>;
+export type ScenarioReport = ReportDocument['scenarios'][number];
+export type LayerReport = ScenarioReport['layers'][number];
+export type ReportFinding = ReportDocument['findings'][number];
+export type FunctionTraceReport = ReportDocument['functions'][number];
+
+export function reportJsonSchema(): Record<string, unknown> {
+  return z.toJSONSchema(ReportDocument, { target: 'draft-2020-12' }) as Record<string, unknown>;
+}

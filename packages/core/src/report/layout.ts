@@ -1,0 +1,282 @@
+// The evidence list's layout, shared by the Markdown and HTML reports: header, summary, one section per
+// scenario (cause, layers with their traced elements and verdicts, LOPA lines), then the appendices.
+import { justifiedKeyOf } from '../justify/apply.ts';
+import type { LayerReport, ReportDocument, ReportFinding, ScenarioReport } from './document.ts';
+import { code, codeList, richFromMessage, status, strong, type Block, type Rich } from './blocks.ts';
+import {
+  FIGURE_LABELS,
+  MISSING_LABELS,
+  SEVERITY_LABELS,
+  VERDICT_LABELS,
+  criterionText,
+  formatFrequency,
+  formatProbability,
+  formatRatio,
+  pathText,
+  policyText,
+  sifText,
+  silText,
+  sourcedFrequency,
+  sourcedProbability,
+  yesNo,
+} from './text.ts';
+
+export function anchorOf(kind: 'scenario' | 'finding' | 'function', tag: string): string {
+  return `${kind}-${tag.replace(/[^A-Za-z0-9_-]/g, (c) => `_${c.charCodeAt(0).toString(16)}`)}`;
+}
+
+function verdictCell(layer: LayerReport): Rich {
+  return [status(layer.verdict, VERDICT_LABELS[layer.verdict])];
+}
+
+function header(doc: ReportDocument): Block[] {
+  const rows: Rich[][] = [
+    [['Site'], [doc.site.name]],
+    ...(doc.site.description ? [[['Description'], [doc.site.description]]] : []),
+    [['Model file'], [code(doc.model.file)]],
+    [['SHA-256 of the model file'], [code(doc.model.sha256)]],
+    [['Tool'], [`bulkhead ${doc.tool.version}`]],
+    [['Report format version'], [String(doc.formatVersion)]],
+    ...(doc.date ? [[['Date'], [doc.date]]] : []),
+    [['Policy switches in force'], codeList(policyText(doc))],
+  ];
+  return [
+    { type: 'heading', level: 1, text: [`Independence evidence list: ${doc.site.name}`] },
+    { type: 'table', caption: 'What this report covers', head: ['Item', 'Value'], rows, rowHeaders: true },
+    { type: 'caution', title: 'Caution', items: doc.cautions.map((c) => [c]) },
+  ];
+}
+
+function summary(doc: ReportDocument): Block[] {
+  const f = doc.summary.findings;
+  return [
+    { type: 'heading', level: 2, text: ['Summary'] },
+    {
+      type: 'paragraph',
+      text: [
+        `${doc.summary.scenarios} scenario${doc.summary.scenarios === 1 ? '' : 's'}, ${doc.summary.scenariosMeetingAfter} meeting the criterion after independence. ` +
+          `Findings: ${f['voids-credit']} void credit, ${f['needs-justification']} need a justification, ${f.note} note${f.note === 1 ? '' : 's'}; ${doc.summary.accepted} accepted.`,
+      ],
+    },
+    {
+      type: 'table',
+      caption: 'Scenarios at a glance',
+      head: ['Scenario', 'Tolerable', 'As claimed', 'After independence', 'If accepted', 'Meets after independence', 'Required SIL'],
+      rows: doc.scenarios.map((s) => [
+        [code(s.id)],
+        [formatFrequency(s.tolerable)],
+        [formatFrequency(s.lopa[0]!.mitigated)],
+        [formatFrequency(s.lopa[1]!.mitigated)],
+        [formatFrequency(s.lopa[2]!.mitigated)],
+        [s.lopa[1]!.meets ? 'yes' : 'NO'],
+        [s.sif ? silText(s.sif.sil) : 'none asked'],
+      ]),
+      rowHeaders: true,
+    },
+  ];
+}
+
+function ruleSet(doc: ReportDocument): Block[] {
+  return [
+    { type: 'heading', level: 2, text: ['Rule set in force'] },
+    {
+      type: 'table',
+      caption: 'Rules applied, with the severity in force and its source',
+      head: ['Rule', 'Title', 'Severity', 'Default', 'Source'],
+      rows: doc.rules.map((r) => [
+        [code(r.id)],
+        [r.title],
+        [SEVERITY_LABELS[r.severity] + (r.reason ? ` (changed by the model: ${r.reason})` : '')],
+        [SEVERITY_LABELS[r.defaultSeverity]],
+        [r.source],
+      ]),
+      rowHeaders: true,
+    },
+    { type: 'heading', level: 2, text: ['Conventions'] },
+    { type: 'list', items: doc.conventions.map((c) => [c]) },
+  ];
+}
+
+function findingLines(f: ReportFinding): Rich[] {
+  const lines: Rich[] = [[strong(SEVERITY_LABELS[f.severity]), ' ', code(f.rule), ` (${f.title}): `, ...richFromMessage(f.message)]];
+  if (f.element) lines.push(['Shared element: ', code(f.element)]);
+  f.parties.forEach((p, i) => {
+    const path = f.paths[i];
+    const who = p.role === 'cause' ? 'From the cause' : 'From layer';
+    if (path && path.length > 0) lines.push([`${who}${p.tag && p.role === 'layer' ? ' ' : ''}`, ...(p.role === 'layer' && p.tag ? [code(p.tag)] : []), ': ', ...pathText(path)]);
+  });
+  lines.push([`Why: ${f.rationale} Source: ${f.source}.`]);
+  const justified = justifiedKeyOf(f);
+  if (justified !== undefined) lines.push(['To resolve: remove or correct the ', code('accept'), ' statement for ', code(justified), '; no justification can accept this finding.']);
+  else if (f.accepted) lines.push([strong('Accepted'), ` by ${f.accepted.by} on ${f.accepted.date}: ${f.accepted.reason}`]);
+  else lines.push(['Not accepted. Key for a justification: ', code(f.key)]);
+  return lines;
+}
+
+function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Block[] {
+  const out: Block[] = [];
+  const intro: Record<LayerReport['verdict'], string> = {
+    independent: 'No element the layer relies on is shared with the cause or another credited layer in a way that voids or withholds credit.',
+    voided: 'Credit voided by the findings below.',
+    unverified: 'Independence unverified: the model does not give every part the layer needs, so it earns no credit.',
+    open: 'Credit withheld until the findings below are accepted by a justification.',
+    accepted: 'Credited because the findings below are accepted by justifications in the model.',
+    'not-selected': 'Independent on its own, but a better set of mutually independent layers was credited (see alternatives).',
+  };
+  out.push({ type: 'paragraph', text: [strong(`Verdict: ${VERDICT_LABELS[layer.verdict]}.`), ` ${intro[layer.verdict]}`] });
+  if (layer.missing.length > 0) {
+    out.push({ type: 'paragraph', text: [`Missing from the model: ${layer.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`] });
+  }
+  for (const key of layer.findings) {
+    const f = byKey.get(key);
+    if (f) out.push({ type: 'list', items: findingLines(f) });
+  }
+  return out;
+}
+
+function layerBlocks(s: ScenarioReport, layer: LayerReport, byKey: Map<string, ReportFinding>): Block[] {
+  return [
+    { type: 'heading', level: 4, text: [code(layer.function), ` (${layer.kind})${layer.title ? `: ${layer.title}` : ''}`] },
+    ...explanation(layer, byKey),
+    {
+      type: 'table',
+      caption: `Elements ${layer.function} relies on, in scenario ${s.id}`,
+      head: ['Element', 'Kind', 'Title', 'In the cause', 'Path from the layer', 'Findings'],
+      rows: layer.elements.map((e) => [
+        [code(e.tag)],
+        [e.kind],
+        [e.title ?? ''],
+        [e.inCause ? 'YES' : 'no'],
+        pathText(e.path),
+        codeList(e.findings),
+      ]),
+      rowHeaders: true,
+    },
+  ];
+}
+
+function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): Block {
+  const blocks: Block[] = [
+    { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''], id: anchorOf('scenario', s.id) },
+    { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
+    { type: 'heading', level: 3, text: ['Initiating cause'] },
+    { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.`] },
+    {
+      type: 'paragraph',
+      text:
+        s.cause.elements === null
+          ? ['Element set: not given by the analysis.']
+          : s.cause.elements.length === 0
+            ? ['Element set: none (an external cause).']
+            : ['Element set: ', ...codeList(s.cause.elements), '.'],
+    },
+  ];
+  if (s.enablers.length > 0 || s.modifiers.length > 0) {
+    blocks.push({
+      type: 'table',
+      caption: `Enabling conditions and conditional modifiers of ${s.id}`,
+      head: ['Factor', 'Probability', 'Applied', 'Basis'],
+      rows: [
+        ...s.enablers.map((e) => [[`enabling condition: ${e.title}`], [formatProbability(e.probability)], ['yes'], [e.basis ?? '']]),
+        ...s.modifiers.map((m) => [
+          [`${m.kind} modifier${m.title ? `: ${m.title}` : ''}`],
+          [formatProbability(m.probability)],
+          [m.allowed ? 'yes' : 'no (not allowed for this criterion)'],
+          [m.basis ?? ''],
+        ]),
+      ],
+      rowHeaders: true,
+    });
+  }
+  blocks.push(
+    { type: 'heading', level: 3, text: ['Claimed layers'] },
+    {
+      type: 'table',
+      caption: `Layers claimed in ${s.id} and their verdicts`,
+      head: ['Layer', 'Kind', 'Claimed PFD', 'Allowed PFD', 'Verdict', 'Credited after independence', 'Credited if accepted'],
+      rows: s.layers.map((l) => [
+        [code(l.function)],
+        [l.kind],
+        [sourcedProbability(l.claimedPfd)],
+        [formatProbability(l.allowedPfd)],
+        verdictCell(l),
+        [yesNo(l.credited)],
+        [yesNo(l.creditedIfAccepted)],
+      ]),
+      rowHeaders: true,
+    },
+    ...s.layers.flatMap((l) => layerBlocks(s, l, byKey)),
+    { type: 'heading', level: 3, text: ['LOPA'] },
+    {
+      type: 'table',
+      caption: `Mitigated frequency of ${s.id} before and after independence`,
+      head: ['Figure', 'Layers credited', 'Mitigated frequency', 'Tolerable', 'Meets'],
+      rows: s.lopa.map((line) => [
+        [FIGURE_LABELS[line.figure]],
+        line.layers.length ? codeList(line.layers) : ['none'],
+        [formatFrequency(line.mitigated)],
+        [formatFrequency(s.tolerable)],
+        [line.meets ? 'yes' : 'NO'],
+      ]),
+      rowHeaders: true,
+    },
+    { type: 'paragraph', text: [`Gap after independence: ${formatRatio(s.gap)} times the tolerable frequency.`] },
+  );
+  const sif = sifText(s);
+  if (sif) blocks.push({ type: 'paragraph', text: sif });
+  if (s.alternatives.length > 0) {
+    blocks.push({
+      type: 'list',
+      items: s.alternatives.map((a) => ['Alternative credit set: ', ...(a.layers.length ? codeList(a.layers) : ['none']), `, PFD product ${formatProbability(a.pfdProduct)}`]),
+    });
+  }
+  return { type: 'section', kind: 'scenario', id: anchorOf('scenario', s.id), blocks };
+}
+
+function appendices(doc: ReportDocument): Block[] {
+  const traces: Block = {
+    type: 'section',
+    kind: 'appendix',
+    id: 'appendix-traces',
+    blocks: [
+      { type: 'heading', level: 2, text: ['Appendix A: what every function relies on'] },
+      ...doc.functions.flatMap((fn): Block[] => [
+        { type: 'heading', level: 3, text: [code(fn.function), ` (${fn.kind})${fn.title ? `: ${fn.title}` : ''}`], id: anchorOf('function', fn.function) },
+        ...(fn.missing.length
+          ? [{ type: 'paragraph' as const, text: [`Missing from the model: ${fn.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`] }]
+          : []),
+        {
+          type: 'table',
+          caption: `Elements ${fn.function} relies on`,
+          head: ['Element', 'Kind', 'Title', 'Path'],
+          rows: fn.elements.map((e) => [[code(e.tag)], [e.kind], [e.title ?? ''], pathText(e.path)]),
+          rowHeaders: true,
+        },
+      ]),
+    ],
+  };
+  const findings: Block = {
+    type: 'section',
+    kind: 'appendix',
+    id: 'appendix-findings',
+    blocks: [
+      { type: 'heading', level: 2, text: ['Appendix B: every finding'] },
+      ...(doc.findings.length === 0 ? [{ type: 'paragraph' as const, text: ['No findings.'] }] : []),
+      ...doc.findings.flatMap((f): Block[] => [
+        { type: 'heading', level: 3, text: [code(f.key)], id: anchorOf('finding', f.key) },
+        { type: 'paragraph', text: [f.scenario ? 'Scenario ' : 'Model-wide', ...(f.scenario ? [code(f.scenario)] : []), '.'] },
+        { type: 'list', items: findingLines(f) },
+      ]),
+    ],
+  };
+  return [traces, findings];
+}
+
+export function layoutReport(doc: ReportDocument): Block[] {
+  const byKey = new Map(doc.findings.map((f) => [f.key, f]));
+  return [
+    { type: 'section', kind: 'front', id: 'front', blocks: [...header(doc), ...summary(doc), ...ruleSet(doc)] },
+    ...doc.scenarios.map((s) => scenarioSection(s, byKey)),
+    ...appendices(doc),
+  ];
+}

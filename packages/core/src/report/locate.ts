@@ -1,0 +1,70 @@
+// Where each part of a report points in the model file: a claimed layer, a shared element's definition,
+// a cause, an `accept` statement. Spans come from the loader; a model built in code has none, and that is fine.
+import type { Span } from '../diagnostics/diagnostic.ts';
+import type { SpanMap } from '../bulk/to-model.ts';
+import { spanAt } from '../loader/schema-issues.ts';
+import type { Model } from '../model/schema.ts';
+
+export class ModelLocator {
+  private readonly scenarioIndex: Map<string, number>;
+  private readonly elementIndex: Map<string, number>;
+  private readonly functionIndex: Map<string, number>;
+  private readonly justificationIndex: Map<string, number>;
+
+  constructor(
+    private readonly model: Model,
+    private readonly spans: SpanMap | undefined,
+  ) {
+    const indexOf = <T>(list: readonly T[], key: (item: T) => string) => {
+      const map = new Map<string, number>();
+      list.forEach((item, i) => {
+        if (!map.has(key(item))) map.set(key(item), i);
+      });
+      return map;
+    };
+    this.scenarioIndex = indexOf(model.scenarios, (s) => s.id);
+    this.elementIndex = indexOf(model.elements, (e) => e.tag);
+    this.functionIndex = indexOf(model.functions, (f) => f.tag);
+    this.justificationIndex = indexOf(model.justifications ?? [], (j) => j.finding);
+  }
+
+  private at(path: (string | number)[]): Span | undefined {
+    return this.spans ? spanAt(this.spans, path) : undefined;
+  }
+
+  element(tag: string): Span | undefined {
+    const i = this.elementIndex.get(tag);
+    return i === undefined ? undefined : this.at(['elements', i, 'tag']);
+  }
+
+  function(tag: string): Span | undefined {
+    const i = this.functionIndex.get(tag);
+    return i === undefined ? undefined : this.at(['functions', i, 'tag']);
+  }
+
+  /** The `layer` line that claims a function in a scenario, or the function's definition if it is not claimed there. */
+  layer(scenario: string | undefined, tag: string): Span | undefined {
+    const i = scenario === undefined ? undefined : this.scenarioIndex.get(scenario);
+    const j = i === undefined ? -1 : (this.model.scenarios[i]!.layers ?? []).findIndex((l) => l.function === tag);
+    if (i !== undefined && j >= 0) return this.at(['scenarios', i, 'layers', j, 'function']);
+    return this.function(tag);
+  }
+
+  cause(scenario: string): Span | undefined {
+    const i = this.scenarioIndex.get(scenario);
+    if (i === undefined) return undefined;
+    const cause = this.model.scenarios[i]!.cause;
+    const field = cause.only !== undefined ? 'only' : cause.function !== undefined ? 'function' : cause.element !== undefined ? 'element' : 'external';
+    return this.at(['scenarios', i, 'cause', field]);
+  }
+
+  scenario(id: string): Span | undefined {
+    const i = this.scenarioIndex.get(id);
+    return i === undefined ? undefined : this.at(['scenarios', i, 'id']);
+  }
+
+  justification(findingKey: string): Span | undefined {
+    const i = this.justificationIndex.get(findingKey);
+    return i === undefined ? undefined : this.at(['justifications', i, 'finding']);
+  }
+}

@@ -1,0 +1,143 @@
+// Checks every report test applies, to invented inputs and to the demo alike: HTML parsed and its tables
+// read as a screen reader would, CSV parsed back and compared with the JSON report, SARIF against its schema.
+import { parse as parseCsv } from 'csv-parse/sync';
+import { parse as parseHtml, type HTMLElement } from 'node-html-parser';
+import { expect } from 'vitest';
+import { CSV_COLUMNS, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula, type ReportDocument } from '../../packages/core/src/report/index.ts';
+import { sarifValidator } from './sarif-schema.ts';
+
+const validateSarif = sarifValidator();
+
+/** HTML: one section per scenario, headed tables with captions, no script, nothing fetched, model text escaped. */
+export function checkHtml(html: string, doc: ReportDocument): HTMLElement {
+  const root = parseHtml(html, { comment: true });
+  expect(root.querySelectorAll('script')).toHaveLength(0);
+  expect(html).not.toMatch(/<script/i);
+  for (const el of root.querySelectorAll('[src], link[href], a[href]')) {
+    const url = el.getAttribute('src') ?? el.getAttribute('href') ?? '';
+    expect(url.startsWith('data:') || url.startsWith('#'), `external reference ${url}`).toBe(true);
+  }
+  expect(html).not.toMatch(/url\(\s*['"]?(https?:|\/\/)/i);
+  expect(root.querySelector('style')?.text).toMatch(/@media print/);
+
+  const sections = root.querySelectorAll('section.scenario');
+  expect(sections.map((s) => s.querySelector('h2')?.querySelector('code')?.text)).toEqual(doc.scenarios.map((s) => s.id));
+
+  for (const table of root.querySelectorAll('table')) {
+    expect(table.querySelector('caption')?.text.trim(), 'every table says what it holds').toBeTruthy();
+    const head = table.querySelectorAll('thead th');
+    expect(head.length).toBeGreaterThan(0);
+    for (const th of head) expect(th.getAttribute('scope')).toBe('col');
+    for (const row of table.querySelectorAll('tbody tr')) {
+      const cells = row.childNodes.filter((n): n is HTMLElement => n instanceof Object && 'tagName' in n && ['TH', 'TD'].includes((n as HTMLElement).tagName));
+      expect(cells).toHaveLength(head.length);
+      expect(cells[0]!.tagName).toBe('TH');
+      expect(cells[0]!.getAttribute('scope')).toBe('row');
+    }
+  }
+
+  // Model text comes back as text: the parser decodes what the renderer escaped, and adds no elements.
+  const title = root.querySelector('title')?.text;
+  expect(title).toBe(`Independence evidence list: ${doc.site.name}`);
+  for (const s of sections) {
+    const scenario = doc.scenarios.find((x) => x.id === s.querySelector('h2 code')?.text)!;
+    if (scenario.title) expect(s.querySelector('h2')!.text).toBe(`Scenario ${scenario.id}: ${scenario.title}`);
+  }
+  return root;
+}
+
+type Row = Record<(typeof CSV_COLUMNS)[number], string>;
+
+/** CSV: RFC 4180 records that csv-parse reads back into exactly the JSON report's layers and elements. */
+export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
+  expect(csv.endsWith('\r\n')).toBe(true);
+  expect(csv.replace(/\r\n/g, '')).not.toMatch(/\n/); // no bare LF: every record ends in CRLF
+  const rows = parseCsv(csv, { columns: true, record_delimiter: '\r\n', relax_quotes: false }) as Row[];
+  expect(Object.keys(rows[0] ?? {})).toEqual([...CSV_COLUMNS]);
+  const yes = (b: boolean) => (b ? 'yes' : 'no');
+  const expected: Row[] = [];
+  for (const s of doc.scenarios) {
+    for (const l of s.layers) {
+      const elements = l.elements.length ? l.elements : [undefined];
+      for (const e of elements) {
+        expected.push({
+          scenario: s.id,
+          scenario_title: guardFormula(s.title ?? ''),
+          category: s.category,
+          tolerable_per_year: String(s.tolerable),
+          cause: guardFormula(s.cause.label),
+          cause_frequency_per_year: String(s.cause.frequency.value),
+          layer: l.function,
+          layer_kind: l.kind,
+          layer_title: guardFormula(l.title ?? ''),
+          claimed_pfd: String(l.claimedPfd.value),
+          claimed_pfd_origin: l.claimedPfd.origin,
+          allowed_pfd: String(l.allowedPfd),
+          verdict: l.verdict,
+          credited_after_independence: yes(l.credited),
+          credited_if_accepted: yes(l.creditedIfAccepted),
+          layer_missing: l.missing.join(LIST_SEPARATOR),
+          layer_findings: l.findings.join(LIST_SEPARATOR),
+          element: e?.tag ?? '',
+          element_kind: e?.kind ?? '',
+          element_group: e?.group ?? '',
+          element_title: guardFormula(e?.title ?? ''),
+          element_in_cause: e ? yes(e.inCause) : '',
+          element_path: e?.path.join(PATH_SEPARATOR) ?? '',
+          element_findings: e?.findings.join(LIST_SEPARATOR) ?? '',
+          // The two derived columns are checked against the findings themselves below.
+          element_worst_severity: '',
+          element_findings_accepted: '',
+          mitigated_after_per_year: String(s.lopa[1]!.mitigated),
+          meets_after: yes(s.lopa[1]!.meets),
+          required_sil: s.sif ? String(s.sif.sil) : '',
+        });
+      }
+    }
+  }
+  const strip = (r: Row) => ({ ...r, element_worst_severity: '', element_findings_accepted: '' });
+  expect(rows.map(strip)).toEqual(expected);
+  const byKey = new Map(doc.findings.map((f) => [f.key, f]));
+  for (const r of rows) {
+    const fs = r.element_findings ? r.element_findings.split(LIST_SEPARATOR).map((k) => byKey.get(k)!) : [];
+    const worst = ['voids-credit', 'needs-justification', 'note'].find((sev) => fs.some((f) => f.severity === sev)) ?? '';
+    expect(r.element_worst_severity).toBe(worst);
+    const accepted = fs.filter((f) => f.accepted).length;
+    expect(r.element_findings_accepted).toBe(fs.length === 0 ? '' : accepted === fs.length ? 'all' : accepted === 0 ? 'none' : 'some');
+  }
+  return rows;
+}
+
+export interface SarifLog {
+  runs: {
+    tool: { driver: { rules: { id: string }[] } };
+    results: {
+      ruleId: string;
+      ruleIndex?: number;
+      level: string;
+      message: { text: string };
+      locations: { physicalLocation: { region?: { startLine: number; startColumn: number } } }[];
+      relatedLocations?: { message?: { text: string }; physicalLocation: { region?: { startLine: number; startColumn: number } } }[];
+      suppressions?: { status: string; justification: string }[];
+      partialFingerprints: Record<string, string>;
+    }[];
+  }[];
+}
+
+/** SARIF: valid against the published 2.1.0 schema, one result per finding with its rule and level. */
+export function checkSarif(text: string, doc: ReportDocument): SarifLog {
+  const log = JSON.parse(text) as SarifLog;
+  expect(validateSarif(log)).toEqual([]);
+  const run = log.runs[0]!;
+  const levels = { 'voids-credit': 'error', 'needs-justification': 'warning', note: 'note' } as const;
+  expect(run.results.map((r) => [r.partialFingerprints['bulkheadFindingKey/v1'], r.ruleId, r.level])).toEqual(
+    doc.findings.map((f) => [f.key, f.rule, levels[f.severity]]),
+  );
+  for (const r of run.results) expect(run.tool.driver.rules[r.ruleIndex!]!.id).toBe(r.ruleId);
+  run.results.forEach((r, i) => {
+    const f = doc.findings[i]!;
+    if (f.accepted) expect(r.suppressions).toEqual([expect.objectContaining({ status: 'accepted', justification: expect.stringContaining(f.accepted.reason) })]);
+    else expect(r.suppressions).toBeUndefined();
+  });
+  return log;
+}
