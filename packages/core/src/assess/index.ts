@@ -26,7 +26,7 @@ export {
   type LayerDefaultKey,
   type LayerDefaultRow,
 } from './defaults.ts';
-export { ASSESS_RULES, assessRulesInForce, severityInForce, findingKey, inForce, type AssessRule, type AssessRuleId, type Figure } from './limits.ts';
+export { ASSESS_RULES, assessRulesInForce, rulesInForce, severityInForce, findingKey, inForce, type AssessRule, type AssessRuleId, type Figure } from './limits.ts';
 export {
   POLICY_DEFAULTS,
   BPCS_LAYER_BEST_PFD,

@@ -113,9 +113,9 @@ export function severityInForce(model: Model, rule: AssessRule): { severity: Sev
   return { severity: setting.severity, ...(setting.reason !== undefined ? { reason: setting.reason } : {}) };
 }
 
-/** The assessment's rules as the rule set in force lists them, in table order. */
-export function assessRulesInForce(model: Model): RuleInForce[] {
-  return ASSESS_RULES.map((rule) => {
+/** Any table of rule records as the rule set in force lists them, in table order, with the model's overrides. */
+export function rulesInForce(model: Model, rules: readonly AssessRule[]): RuleInForce[] {
+  return rules.map((rule) => {
     const { severity, reason } = severityInForce(model, rule);
     return {
       id: rule.id,
@@ -126,6 +126,11 @@ export function assessRulesInForce(model: Model): RuleInForce[] {
       ...(reason !== undefined && severity !== rule.defaultSeverity ? { reason } : {}),
     };
   });
+}
+
+/** The assessment's own rules in force. */
+export function assessRulesInForce(model: Model): RuleInForce[] {
+  return rulesInForce(model, ASSESS_RULES);
 }
 
 /** Stable finding key: rule id, scenario id and the tags involved, joined by colons. */
