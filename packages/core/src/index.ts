@@ -12,3 +12,12 @@ export { loadModelText, detectFormat, MAX_FILE_BYTES, type LoadResult, type Mode
 export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';
 export { summarize, type ModelSummary } from './model/summary.ts';
+export * from './analysis/types.ts';
+export { analyze, independenceRulesInForce, type AnalyzeOptions } from './analysis/analyze.ts';
+export { buildPlantGraph, roleTargets, type PlantGraph, type NodeAttributes, type EdgeAttributes } from './graph/plant-graph.ts';
+export { Tracer } from './trace/trace.ts';
+export { RULES, RULE_IDS, ruleById } from './rules/registry.ts';
+export { runRules, scenarioContext, type RuleEnvironment } from './rules/run.ts';
+export { findingKey as independenceFindingKey, SEVERITY_RANK, type Rule, type SharedElementRule, type ScenarioRule, type Side, type ScenarioContext } from './rules/define.ts';
+export * from './assess/index.ts';
+export * from './justify/index.ts';

@@ -1,0 +1,70 @@
+// The analysis, one straight line: model -> graph -> traces -> independence findings -> justifications
+// -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
+import { assessRulesInForce, assessScenario, resolvedPolicy } from '../assess/index.ts';
+import { buildPlantGraph } from '../graph/plant-graph.ts';
+import { applyJustifications, JUSTIFICATION_RULES } from '../justify/index.ts';
+import type { SpanMap } from '../bulk/to-model.ts';
+import type { Model, SeverityLevel } from '../model/schema.ts';
+import { RULES } from '../rules/registry.ts';
+import { runRules, type RuleEnvironment } from '../rules/run.ts';
+import { Tracer } from '../trace/trace.ts';
+import type { Analysis, Finding, RuleInForce } from './types.ts';
+
+export interface AnalyzeOptions {
+  /** Spans from the loader, so findings about justifications can point at them. */
+  spans?: SpanMap;
+}
+
+/** The independence rules with the severity the model's policy and rule settings put in force. */
+export function independenceRulesInForce(model: Model): RuleInForce[] {
+  return RULES.map((rule) => {
+    const setting = model.rules?.find((r) => r.id === rule.id);
+    const severity: SeverityLevel = setting?.severity ?? rule.defaultSeverity;
+    return {
+      id: rule.id,
+      title: rule.title,
+      severity,
+      defaultSeverity: rule.defaultSeverity,
+      source: rule.source,
+      ...(setting?.reason !== undefined && severity !== rule.defaultSeverity ? { reason: setting.reason } : {}),
+    };
+  });
+}
+
+export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
+  const graph = buildPlantGraph(model);
+  const tracer = new Tracer(graph);
+  const traces = model.functions.map((f) => tracer.traceFunction(f.tag));
+  const independence = independenceRulesInForce(model);
+  const severities = new Map(independence.map((r) => [r.id, r.severity]));
+  const env: RuleEnvironment = {
+    model,
+    tracer,
+    elements: new Map(model.elements.map((e) => [e.tag, e])),
+    functions: new Map(model.functions.map((f) => [f.tag, f])),
+    policy: resolvedPolicy(model),
+    severity: (id) => severities.get(id) ?? 'voids-credit',
+    acceptedKeys: new Set((model.justifications ?? []).map((j) => j.finding)),
+  };
+  const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
+  const independent = applyJustifications(raw, model.justifications, options.spans).findings;
+  // The assessment's limit findings read their own acceptances; staleness is judged over all findings.
+  const assessed = model.scenarios.map((scenario) => assessScenario({ model, scenario, findings: independent }));
+  const all = [...independent, ...assessed.flatMap((a) => a.findings)];
+  const { stale } = applyJustifications(all, model.justifications, options.spans);
+  return {
+    traces,
+    findings: [...sortByScenario(model, all), ...stale],
+    assessments: assessed.map((a) => a.assessment),
+    rules: [...independence, ...assessRulesInForce(model), ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule)],
+  };
+}
+
+function sortByScenario(model: Model, findings: Finding[]): Finding[] {
+  const order = new Map(model.scenarios.map((s, i) => [s.id, i]));
+  const rank: Record<SeverityLevel, number> = { 'voids-credit': 0, 'needs-justification': 1, note: 2 };
+  return findings
+    .map((f, i) => ({ f, i }))
+    .sort((a, b) => (order.get(a.f.scenario ?? '') ?? 1e9) - (order.get(b.f.scenario ?? '') ?? 1e9) || rank[a.f.severity] - rank[b.f.severity] || a.i - b.i)
+    .map((x) => x.f);
+}

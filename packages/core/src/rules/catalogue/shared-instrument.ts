@@ -1,0 +1,74 @@
+// Shared-element rules for the instrument chain: sensors, I/O, controllers and logic solvers, final
+// elements and what actuates them. Any one of these failing defeats every function that uses it.
+import { defineSharedRule, type PairContext } from '../define.ts';
+import { sharedMessage } from './messages.ts';
+
+export const sharedSensor = defineSharedRule({
+  id: 'shared-sensor',
+  title: 'Shared sensor or transmitter',
+  rationale: 'A device used for control whose failure causes a demand may not also be used by the protection against it.',
+  source: 'IEC 61511-1:2016 11.2.10 (same number in 2003); CCPS, Layer of Protection Analysis (2001), ch. 6',
+  defaultSeverity: 'voids-credit',
+  groups: ['sensor'],
+  message: sharedMessage('sensor'),
+});
+
+export const sharedIo = defineSharedRule({
+  id: 'shared-io',
+  title: 'Shared I/O card, cable or network',
+  rationale: 'One failed card, cable or network segment cuts the signal of every function wired through it.',
+  source: 'ANSI/ISA-S84.01-1996 Annex B.1.3 (separation covers communication); IEC 61511-1:2016 9.4',
+  defaultSeverity: 'voids-credit',
+  groups: ['signal'],
+  message: sharedMessage('signal path'),
+});
+
+function bothBpcsLayers(pair: PairContext): boolean {
+  const isBpcs = (tag: string | undefined) => {
+    const fn = tag ? pair.fn(tag) : undefined;
+    if (!fn) return false;
+    const solver = fn.kind === 'alarm' ? fn.raisedIn : 'solver' in fn ? fn.solver : undefined;
+    const element = solver ? pair.element(solver) : undefined;
+    return element !== undefined && 'system' in element && element.system === 'bpcs';
+  };
+  return pair.a.party.role === 'layer' && isBpcs(pair.a.party.tag) && isBpcs(pair.b.party.tag);
+}
+
+export const sharedLogicSolver = defineSharedRule({
+  id: 'shared-logic-solver',
+  title: 'Shared controller or logic solver',
+  rationale:
+    'A controller that fails in the cause cannot be relied on to act against it, and two BPCS layers in one controller earn at most one credit. Older CCPS practice allowed a shared BPCS controller under conditions; set policy shared-solver=allow or same-controller-layers=both to follow it.',
+  source: 'IEC 61511-1:2016 9.3 (BPCS layers, one controller); CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance)',
+  defaultSeverity: 'voids-credit',
+  groups: ['solver'],
+  judge: (_element, pair, inForce) => {
+    // Two BPCS layers in one controller: the assessment's bpcs-same-controller rule limits their credit.
+    if (bothBpcsLayers(pair)) return 'note';
+    if (pair.a.party.role === 'cause' && pair.policy.sharedSolver === 'allow') return 'note';
+    return inForce;
+  },
+  message: (element, pair, severity) =>
+    sharedMessage('controller or logic solver')(element, pair, severity) +
+    (bothBpcsLayers(pair) ? '; as two BPCS layers in one controller their credit is limited by rule bpcs-same-controller' : ''),
+});
+
+export const sharedFinalElement = defineSharedRule({
+  id: 'shared-final-element',
+  title: 'Shared final element',
+  rationale: 'A valve or motor starter that fails in the cause, or is stuck, cannot also be what a layer relies on to act.',
+  source: 'IEC 61511-1:2016 11.2.10; ANSI/ISA-S84.01-1996 Annex B.1.3 (separation of final elements)',
+  defaultSeverity: 'voids-credit',
+  groups: ['final', 'mechanical'],
+  message: sharedMessage('final element'),
+});
+
+export const sharedActuation = defineSharedRule({
+  id: 'shared-actuation',
+  title: 'Shared actuator, solenoid or positioner',
+  rationale: 'A stuck actuator or a failed solenoid or positioner stops the valve whichever function commands it.',
+  source: 'CCPS, Layer of Protection Analysis (2001), ch. 6; IEC 61511-1:2016 9.4',
+  defaultSeverity: 'voids-credit',
+  groups: ['actuation'],
+  message: sharedMessage('actuator, solenoid or positioner'),
+});

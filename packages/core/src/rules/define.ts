@@ -1,0 +1,99 @@
+// What an independence rule is: data (id, title, rationale, source, default severity, messages) plus
+// a check. Shared-element rules claim the elements two sides have in common; scenario rules look at
+// a scenario as a whole. Rules never write free text into findings except through their messages.
+import type { Finding, Party, TracedElement } from '../analysis/types.ts';
+import type { ElementGroup } from '../model/kinds.ts';
+import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
+import type { ResolvedPolicy } from '../assess/policy.ts';
+import type { Tracer } from '../trace/trace.ts';
+
+/** One side of a comparison: the cause's element set, or a claimed layer's trace. */
+export interface Side {
+  party: Party;
+  fn?: PlantFunction;
+  /** Tag to traced element, with the path from this side's function (or cause element) to it. */
+  elements: ReadonlyMap<string, TracedElement>;
+  /** For a layer, its index in the scenario's layer list (for spans). */
+  layerIndex?: number;
+}
+
+export type { ResolvedPolicy };
+
+export interface ScenarioContext {
+  model: Model;
+  scenario: Scenario;
+  cause: Side;
+  layers: Side[];
+  tracer: Tracer;
+  element(tag: string): Element;
+  fn(tag: string): PlantFunction | undefined;
+  policy: ResolvedPolicy;
+  severity(ruleId: string): SeverityLevel;
+}
+
+export interface PairContext extends ScenarioContext {
+  a: Side;
+  b: Side;
+}
+
+/** A finding before the runner gives it its key, title, rationale and source. */
+export interface FindingDraft {
+  parties: Party[];
+  element?: string;
+  paths: string[][];
+  message: string;
+  severity?: SeverityLevel;
+  /** Extra words for the stable key when element alone does not make it unique. */
+  keyDetail?: string;
+}
+
+interface RuleMeta {
+  id: string;
+  title: string;
+  rationale: string;
+  source: string;
+  defaultSeverity: SeverityLevel;
+}
+
+export interface SharedElementRule extends RuleMeta {
+  type: 'shared';
+  /** Element groups this rule may claim; the runner asks rules in registry order. */
+  groups: readonly ElementGroup[];
+  claims?(element: Element, pair: PairContext): boolean;
+  /** Severity for this occurrence (e.g. a support that fails safe is a note); default: the rule's in force. */
+  judge?(element: Element, pair: PairContext, inForce: SeverityLevel): SeverityLevel;
+  message(element: Element, pair: PairContext, severity: SeverityLevel): string;
+}
+
+export interface ScenarioRule extends RuleMeta {
+  type: 'scenario';
+  check(ctx: ScenarioContext): FindingDraft[];
+}
+
+export type Rule = SharedElementRule | ScenarioRule;
+
+export function defineSharedRule(rule: Omit<SharedElementRule, 'type'>): SharedElementRule {
+  return { type: 'shared', ...rule };
+}
+
+export function defineScenarioRule(rule: Omit<ScenarioRule, 'type'>): ScenarioRule {
+  return { type: 'scenario', ...rule };
+}
+
+export const SEVERITY_RANK: Record<SeverityLevel, number> = { 'voids-credit': 3, 'needs-justification': 2, note: 1 };
+
+export function partyKey(party: Party): string {
+  return party.tag ?? 'external';
+}
+
+export function describeSide(side: Side): string {
+  if (side.party.role === 'layer') return `layer \`${side.party.tag}\``;
+  if (side.fn) return `the failing ${side.fn.kind === 'loop' ? 'loop' : side.fn.kind} \`${side.party.tag}\``;
+  return side.party.tag ? `the failing element \`${side.party.tag}\`` : 'the external cause';
+}
+
+export function findingKey(rule: string, scenario: string | undefined, parties: Party[], element?: string, detail?: string): string {
+  return [rule, scenario ?? '-', parties.map(partyKey).join('+'), ...(element ? [element] : []), ...(detail ? [detail] : [])].join(':');
+}
+
+export type { Finding };

@@ -1,0 +1,122 @@
+// Runs the independence rules over one scenario: builds each side's element set, compares every
+// pair (cause and layer, layer and layer), gives each shared element to the first rule that claims
+// it, and turns drafts into findings with stable keys and a stable order.
+import type { Finding, Party, TracedElement } from '../analysis/types.ts';
+import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
+import type { Tracer } from '../trace/trace.ts';
+import { findingKey, SEVERITY_RANK, type FindingDraft, type PairContext, type ResolvedPolicy, type Rule, type ScenarioContext, type SharedElementRule, type Side } from './define.ts';
+import { RULES } from './registry.ts';
+
+export interface RuleEnvironment {
+  model: Model;
+  tracer: Tracer;
+  elements: ReadonlyMap<string, Element>;
+  functions: ReadonlyMap<string, PlantFunction>;
+  policy: ResolvedPolicy;
+  severity(ruleId: string): SeverityLevel;
+  /** Finding keys accepted by a justification (needed before the run for a narrowed cause). */
+  acceptedKeys: ReadonlySet<string>;
+}
+
+function byTag(elements: TracedElement[]): Map<string, TracedElement> {
+  return new Map(elements.map((e) => [e.tag, e]));
+}
+
+function causeSide(env: RuleEnvironment, scenario: Scenario): Side {
+  const { cause } = scenario;
+  if (cause.function !== undefined) {
+    const fn = env.functions.get(cause.function);
+    const party: Party = { role: 'cause', tag: cause.function };
+    const narrowedKey = findingKey('cause-narrowed', scenario.id, [party], cause.only);
+    // A narrowed cause counts only once its finding is accepted; until then the whole loop fails.
+    const start = cause.only !== undefined && env.acceptedKeys.has(narrowedKey) ? cause.only : cause.function;
+    return { party, ...(fn ? { fn } : {}), elements: byTag(env.tracer.paths(start)) };
+  }
+  if (cause.element !== undefined) return { party: { role: 'cause', tag: cause.element }, elements: byTag(env.tracer.paths(cause.element)) };
+  return { party: { role: 'cause' }, elements: new Map() };
+}
+
+export function scenarioContext(env: RuleEnvironment, scenario: Scenario): ScenarioContext {
+  const layers: Side[] = (scenario.layers ?? []).map((claim, layerIndex) => {
+    const fn = env.functions.get(claim.function);
+    return {
+      party: { role: 'layer', tag: claim.function },
+      ...(fn ? { fn } : {}),
+      elements: fn ? byTag(env.tracer.traceFunction(fn.tag).elements) : new Map(),
+      layerIndex,
+    };
+  });
+  return {
+    model: env.model,
+    scenario,
+    cause: causeSide(env, scenario),
+    layers,
+    tracer: env.tracer,
+    element: (tag) => env.elements.get(tag)!,
+    fn: (tag) => env.functions.get(tag),
+    policy: env.policy,
+    severity: env.severity,
+  };
+}
+
+function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): (FindingDraft & { rule: Rule })[] {
+  const common = [...pair.b.elements.keys()].filter((tag) => pair.a.elements.has(tag) && pair.tracer.group(tag) !== 'equipment');
+  const claimed: { tag: string; rule: SharedElementRule; severity: SeverityLevel }[] = [];
+  for (const tag of common) {
+    const element = pair.element(tag);
+    const group = pair.tracer.group(tag)!;
+    const rule = shared.find((r) => r.groups.includes(group) && (r.claims?.(element, pair) ?? true));
+    if (!rule) continue;
+    const inForce = pair.severity(rule.id);
+    claimed.push({ tag, rule, severity: rule.judge ? rule.judge(element, pair, inForce) : inForce });
+  }
+  // What a shared element relies on is shared too. List it on its own only where one side reaches it
+  // directly, not through another shared element that is at least as serious.
+  const rank = new Map(claimed.map((c) => [c.tag, SEVERITY_RANK[c.severity]]));
+  const throughShared = (side: Side, c: (typeof claimed)[number]) =>
+    side.elements.get(c.tag)!.path.slice(0, -1).some((t) => (rank.get(t) ?? 0) >= SEVERITY_RANK[c.severity]);
+  const kept = claimed.filter((c) => !(throughShared(pair.a, c) && throughShared(pair.b, c)));
+  return kept.map((c) => {
+    const element = pair.element(c.tag);
+    const beneath = claimed.filter((o) => o.tag !== c.tag && !kept.includes(o) && pair.tracer.closure(c.tag).has(o.tag)).map((o) => o.tag).sort();
+    const also = beneath.length ? ` (and through it ${beneath.map((t) => `\`${t}\``).join(', ')})` : '';
+    return {
+      rule: c.rule,
+      parties: [pair.a.party, pair.b.party],
+      element: c.tag,
+      paths: [pair.a.elements.get(c.tag)!.path, pair.b.elements.get(c.tag)!.path],
+      message: c.rule.message(element, pair, c.severity) + also,
+      severity: c.severity,
+    };
+  });
+}
+
+export function runRules(env: RuleEnvironment, scenario: Scenario, rules: readonly Rule[] = RULES): Finding[] {
+  const ctx = scenarioContext(env, scenario);
+  const shared = rules.filter((r): r is SharedElementRule => r.type === 'shared');
+  const drafts: (FindingDraft & { rule: Rule })[] = [];
+  const sides = [ctx.cause, ...ctx.layers];
+  for (let i = 0; i < sides.length; i++) {
+    for (let j = i + 1; j < sides.length; j++) {
+      if (j === 0) continue;
+      drafts.push(...sharedDrafts({ ...ctx, a: sides[i]!, b: sides[j]! }, shared));
+    }
+  }
+  for (const rule of rules) if (rule.type === 'scenario') drafts.push(...rule.check(ctx).map((d) => ({ ...d, rule })));
+  const order = new Map(rules.map((r, i) => [r.id, i]));
+  return drafts
+    .map((d): Finding => ({
+      key: findingKey(d.rule.id, scenario.id, d.parties, d.element, d.keyDetail),
+      rule: d.rule.id,
+      title: d.rule.title,
+      severity: d.severity ?? env.severity(d.rule.id),
+      scenario: scenario.id,
+      parties: d.parties,
+      ...(d.element ? { element: d.element } : {}),
+      paths: d.paths,
+      message: d.message,
+      rationale: d.rule.rationale,
+      source: d.rule.source,
+    }))
+    .sort((a, b) => SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity] || order.get(a.rule)! - order.get(b.rule)! || (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
+}

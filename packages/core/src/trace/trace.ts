@@ -1,0 +1,102 @@
+// Traces each function to every element it relies on, with the shortest path that explains why each
+// one is there. Element closures are memoised once per element, so cost grows with the site, not with
+// functions times elements.
+import type { ChannelTrace, EdgeRole, FunctionTrace, MissingPart, TracedElement } from '../analysis/types.ts';
+import type { PlantGraph } from '../graph/plant-graph.ts';
+import type { ElementGroup } from '../model/kinds.ts';
+
+const PROCESS_SIDE: ReadonlySet<ElementGroup> = new Set(['connection', 'impulse', 'equipment']);
+
+export class Tracer {
+  private readonly closures = new Map<string, ReadonlySet<string>>();
+
+  constructor(readonly graph: PlantGraph) {}
+
+  group(tag: string): ElementGroup | undefined {
+    const a = this.graph.getNodeAttributes(tag);
+    return a.type === 'element' ? a.group : undefined;
+  }
+
+  /** Every element `tag` relies on, itself included. Process equipment is included but not expanded. */
+  closure(tag: string): ReadonlySet<string> {
+    const known = this.closures.get(tag);
+    if (known) return known;
+    // Iterative post-order walk: children's closures are built before their parent's.
+    const stack: { tag: string; expanded: boolean }[] = [{ tag, expanded: false }];
+    while (stack.length) {
+      const top = stack[stack.length - 1]!;
+      if (this.closures.has(top.tag)) {
+        stack.pop();
+        continue;
+      }
+      const children = this.group(top.tag) === 'equipment' ? [] : this.graph.outNeighbors(top.tag);
+      if (!top.expanded) {
+        top.expanded = true;
+        for (const child of children) if (!this.closures.has(child)) stack.push({ tag: child, expanded: false });
+        continue;
+      }
+      stack.pop();
+      const set = new Set<string>([top.tag]);
+      for (const child of children) for (const t of this.closures.get(child) ?? [child]) set.add(t);
+      this.closures.set(top.tag, set);
+    }
+    return this.closures.get(tag)!;
+  }
+
+  /** Breadth-first from `start` (a function or an element), keeping the first path to each element. */
+  paths(start: string): TracedElement[] {
+    const parent = new Map<string, { from: string; role: EdgeRole }>();
+    const queue = [start];
+    const seen = new Set([start]);
+    for (let i = 0; i < queue.length; i++) {
+      const node = queue[i]!;
+      if (node !== start && this.group(node) === 'equipment') continue;
+      this.graph.forEachOutEdge(node, (_edge, attributes, _source, target) => {
+        if (seen.has(target)) return;
+        seen.add(target);
+        parent.set(target, { from: node, role: attributes.role });
+        queue.push(target);
+      });
+    }
+    const out: TracedElement[] = [];
+    for (const tag of queue) {
+      const a = this.graph.getNodeAttributes(tag);
+      if (a.type !== 'element') continue;
+      const path = [tag];
+      const links: EdgeRole[] = [];
+      for (let step = parent.get(tag); step; step = parent.get(step.from)) {
+        path.unshift(step.from);
+        links.unshift(step.role);
+      }
+      out.push({ tag, kind: a.kind, group: a.group, path, links });
+    }
+    return out.sort((x, y) => (x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : 0));
+  }
+
+  traceFunction(tag: string): FunctionTrace {
+    const a = this.graph.getNodeAttributes(tag);
+    if (a.type !== 'function') throw new Error(`${tag} is not a function`);
+    const channels: ChannelTrace[] = [];
+    let solver = false;
+    this.graph.forEachOutEdge(tag, (_edge, attributes, _source, target) => {
+      if (attributes.role === 'sensor' || attributes.role === 'final') {
+        channels.push({ role: attributes.role, head: target, elements: [...this.closure(target)].sort() });
+      }
+      if (attributes.role === 'solver' || attributes.role === 'raisedIn') solver = true;
+    });
+    const missing: MissingPart[] = [];
+    const sensors = channels.filter((c) => c.role === 'sensor');
+    const finals = channels.filter((c) => c.role === 'final');
+    const reachesProcess = (elements: Iterable<string>) => [...elements].some((t) => PROCESS_SIDE.has(this.group(t)!));
+    if (a.kind === 'device') {
+      const device = this.graph.outNeighbors(tag)[0];
+      if (device === undefined || !reachesProcess(this.closure(device))) missing.push('process-connection');
+    } else {
+      if (sensors.length === 0) missing.push('sensor');
+      else if (sensors.some((c) => !reachesProcess(c.elements))) missing.push('process-connection');
+      if (!solver) missing.push('solver');
+      if (finals.length === 0) missing.push('final-element');
+    }
+    return { function: tag, kind: a.kind, elements: this.paths(tag), channels, missing };
+  }
+}
