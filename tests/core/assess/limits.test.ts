@@ -280,7 +280,10 @@ describe('limit rule tables', () => {
       it.each(cases.map((c) => [c.name, c] as const))('%s', (_, c) => {
         const out = assess(c.model);
         expect(out.findings.map((f) => f.rule).sort()).toEqual([...c.rules].sort());
-        for (const f of out.findings) expect(f.key.startsWith(`${f.rule}:S-1`)).toBe(true);
+        for (const f of out.findings) {
+          expect(f.key.startsWith(`${f.rule}:S-1`)).toBe(true);
+          expect(f.paths).toHaveLength(f.parties.length);
+        }
         if (c.verdicts) expect(verdicts(out)).toMatchObject(c.verdicts);
         if (c.allowed) expect(Object.fromEntries(out.assessment.layers.map((l) => [l.function, l.allowedPfd]))).toMatchObject(c.allowed);
         if (c.credited) expect(out.assessment.layers.filter((l) => l.credited).map((l) => l.function)).toEqual(c.credited);

@@ -159,7 +159,8 @@ export function limitFinding(model: Model, scenario: string, id: AssessRuleId, i
     scenario,
     parties: input.parties,
     ...(input.element !== undefined ? { element: input.element } : {}),
-    paths: input.paths ?? [],
+    // One path per party, as the independence findings give them; with no shared element a party's path is itself.
+    paths: input.paths ?? input.parties.map((p) => (p.tag !== undefined ? [p.tag] : [])),
     message: input.message,
     rationale: rule.rationale,
     source: rule.source,
