@@ -4,6 +4,7 @@ import { parseArgs } from 'node:util';
 import { checkCommand } from './commands/check.ts';
 import { convertCommand } from './commands/convert.ts';
 import { fmtCommand } from './commands/fmt.ts';
+import { reportCommand } from './commands/report.ts';
 import { schemaCommand } from './commands/schema.ts';
 import { UsageError } from './io.ts';
 import { HELP, commandHelp } from './help.ts';
@@ -33,6 +34,10 @@ function run(argv: string[]): number {
       check: { type: 'boolean' },
       to: { type: 'string' },
       out: { type: 'string', short: 'o' },
+      format: { type: 'string' },
+      date: { type: 'string' },
+      'fail-on': { type: 'string' },
+      'json-schema': { type: 'boolean' },
     },
   });
   if (values.help) {
@@ -46,7 +51,7 @@ function run(argv: string[]): number {
   };
   switch (command) {
     case 'check':
-      return checkCommand(file());
+      return checkCommand(file(), values['fail-on']);
     case 'schema':
       return schemaCommand();
     case 'fmt':
@@ -54,6 +59,15 @@ function run(argv: string[]): number {
       return fmtCommand(positionals, values.check ?? false);
     case 'convert':
       return convertCommand(file(), values.to, values.out);
+    case 'report':
+      if (positionals.length > 1) throw new UsageError('`bulkhead report` takes one model file');
+      return reportCommand(positionals[0], {
+        format: values.format,
+        out: values.out,
+        date: values.date,
+        failOn: values['fail-on'],
+        jsonSchema: values['json-schema'] ?? false,
+      });
     default:
       throw new UsageError(`unknown command \`${command}\``);
   }

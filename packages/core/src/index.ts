@@ -21,3 +21,5 @@ export { runRules, scenarioContext, type RuleEnvironment } from './rules/run.ts'
 export { findingKey as independenceFindingKey, SEVERITY_RANK, type Rule, type SharedElementRule, type ScenarioRule, type Side, type ScenarioContext } from './rules/define.ts';
 export * from './assess/index.ts';
 export * from './justify/index.ts';
+export * from './report/index.ts';
+export { ModelLocator } from './report/locate.ts';

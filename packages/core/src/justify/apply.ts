@@ -21,7 +21,7 @@ const COMMON_PRACTICE = 'common practice, no source';
 export const JUSTIFICATION_RULES = [
   {
     id: DUPLICATE_JUSTIFICATION,
-    title: 'finding accepted more than once',
+    title: 'Finding accepted more than once',
     severity: 'note',
     defaultSeverity: 'note',
     source: COMMON_PRACTICE,
@@ -30,7 +30,7 @@ export const JUSTIFICATION_RULES = [
   },
   {
     id: STALE_JUSTIFICATION,
-    title: 'justification matches no finding',
+    title: 'Justification matches no finding',
     severity: 'needs-justification',
     defaultSeverity: 'needs-justification',
     source: COMMON_PRACTICE,

@@ -50,7 +50,8 @@ function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], 
 }
 
 function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
-  const rationaleOf = new Map<string, string>();
+  // RuleInForce carries no rationale; a rule's findings do, and the justification rules have their own.
+  const rationaleOf = new Map<string, string>(JUSTIFICATION_RULES.map((r) => [r.id, r.rationale]));
   for (const f of [...analysis.findings].sort(compareFindings)) if (!rationaleOf.has(f.rule)) rationaleOf.set(f.rule, f.rationale);
   const rules = new Map<string, RuleInForce & { rationale?: string }>();
   for (const r of analysis.rules) rules.set(r.id, r);

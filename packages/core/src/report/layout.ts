@@ -131,6 +131,16 @@ function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Blo
     const f = byKey.get(key);
     if (f) out.push({ type: 'list', items: findingLines(f) });
   }
+  // Findings about the layer that did not decide its verdict (notes, fails-safe supports) stay in view.
+  const deciding = new Set(layer.findings);
+  const others = [...new Set(layer.elements.flatMap((e) => e.findings))].filter((k) => !deciding.has(k));
+  if (others.length > 0) {
+    out.push({ type: 'paragraph', text: ['Also reported about this layer, without effect on its verdict:'] });
+    out.push({
+      type: 'list',
+      items: others.map((k) => byKey.get(k)).filter((f) => f !== undefined).map((f) => [strong(SEVERITY_LABELS[f.severity]), ' ', code(f.key), ': ', ...richFromMessage(f.message)]),
+    });
+  }
   return out;
 }
 
@@ -146,7 +156,7 @@ function layerBlocks(s: ScenarioReport, layer: LayerReport, byKey: Map<string, R
         [code(e.tag)],
         [e.kind],
         [e.title ?? ''],
-        [e.inCause ? 'YES' : 'no'],
+        [e.inCause ? (e.group === 'equipment' ? 'yes (process equipment, shared by nature)' : 'YES') : 'no'],
         pathText(e.path),
         codeList(e.findings),
       ]),

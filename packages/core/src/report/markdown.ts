@@ -12,7 +12,7 @@ export function escapeMarkdown(text: string): string {
     .replace(/\r\n?|\n/g, ' ')
     .replace(/[\\`*_[\]|#~!]/g, (c) => `\\${c}`)
     .replace(/&(?=#?[A-Za-z0-9]+;)/g, '&amp;')
-    .replace(/</g, '&lt;');
+    .replace(/<(?=[A-Za-z/!?])/g, '&lt;');
 }
 
 /** A code span that survives backticks inside it (CommonMark: a longer fence), and pipes inside tables. */

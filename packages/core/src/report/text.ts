@@ -59,8 +59,10 @@ export function pathText(path: readonly string[]): Rich {
   return codeList(path, ' -> ');
 }
 
+const HARM_TEXT = { people: 'harm to people', containment: 'loss of containment', asset: 'asset damage' } as const;
+
 export function criterionText(s: ScenarioReport): string {
-  return `tolerable ${formatFrequency(s.tolerable)} for category ${s.category} (harm to ${s.harm === 'people' ? 'people' : s.harm === 'containment' ? 'containment (loss of containment)' : 'assets'}); the mitigated frequency ${edgeText(s.edge)} it`;
+  return `tolerable ${formatFrequency(s.tolerable)} for category ${s.category} (${HARM_TEXT[s.harm]}); the mitigated frequency ${edgeText(s.edge)} it`;
 }
 
 export function silText(sil: number): string {
@@ -69,17 +71,18 @@ export function silText(sil: number): string {
   return `SIL ${sil}`;
 }
 
-/** The SIF requirement as one sentence. */
+/** The SIF requirement as one sentence, then the assessment's own note on demand mode. */
 export function sifText(s: ScenarioReport): Rich | undefined {
   const sif = s.sif;
   if (!sif) return undefined;
   const who: Rich = sif.function ? ['Required of ', code(sif.function), ': '] : ['A SIF that closes the gap would need: '];
   const relation = edgeRelation(s.edge);
-  const mode =
+  const band =
     sif.mode === 'high-demand' && sif.pfhBand
-      ? `high demand (${formatFrequency(sif.demandRate)}): PFH band SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h`
-      : `${sif.mode} (demand ${formatFrequency(sif.demandRate)})`;
-  return [...who, `PFD ${relation} ${formatProbability(sif.requiredPfd)}, RRF ${relation === '<' ? '>' : '>='} ${formatRatio(sif.requiredRrf)}, ${silText(sif.sil)}; ${mode}. ${sif.note}`];
+      ? ` High demand: PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h.`
+      : '';
+  const note = sif.note ? ` ${sif.note[0]!.toUpperCase()}${sif.note.slice(1)}${/[.!?]$/.test(sif.note) ? '' : '.'}` : '';
+  return [...who, `PFD ${relation} ${formatProbability(sif.requiredPfd)} (RRF ${relation === '<' ? '>' : '>='} ${formatRatio(sif.requiredRrf)}): ${silText(sif.sil)}.${band}${note}`];
 }
 
 export function policyText(doc: ReportDocument): string[] {
