@@ -5,7 +5,9 @@ export const HELP = `bulkhead: checks that the protection layers claimed in a LO
 usage: bulkhead COMMAND [options]
 
 commands:
-  check FILE            validate a model and analyse every scenario
+  check FILE [--fail-on LEVEL]
+                        validate a model, analyse every scenario: findings, LOPA, verdicts
+  trace FILE TAG        what a function (or element) relies on, as a tree of paths
   schema                print the JSON Schema of the model
   fmt FILE... [--check] rewrite .bulk files in canonical form (--check: only report)
   convert FILE --to json|bulk [-o OUT]
@@ -19,6 +21,12 @@ Decision support only: it does not replace a competent LOPA team, IEC 61511, loc
 `;
 
 const COMMANDS: Record<string, string> = {
+  trace: `usage: bulkhead trace FILE TAG
+
+Prints everything function (or element) TAG relies on, as a tree: each element hangs under the element
+that brings it in, with the link that does (sensor, mounted-on, signal-via, powered-by, ...). Tracing stops
+at process equipment. For a function it also lists each voting channel and any part the model is missing.
+`,
   report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [-o OUT] [--date YYYY-MM-DD]
                        [--fail-on voids-credit|needs-justification|note]
        bulkhead report --json-schema
@@ -35,7 +43,14 @@ then every function's trace and every finding. Accepted findings stay in the rep
 
 exit codes: 0 no unaccepted finding at or above --fail-on, 1 there is one, 2 bad input or usage
 `,
-  check: 'usage: bulkhead check FILE\n\nLoads FILE (.bulk or .json), reports every problem with file:line:column, or summarises the model.\n',
+  check: `usage: bulkhead check FILE [--fail-on voids-credit|needs-justification|note]
+
+Loads FILE (.bulk or .json). Bad input: every problem with file:line:column, exit 2. Otherwise, per
+scenario: each independence finding (pointing at the claimed layer, with the path from each side to the
+shared element, the rule's rationale and source, and the finding's key for an \`accept\` statement), the
+LOPA as claimed, after independence and if open findings are accepted, the gap and the required SIL; then
+a one-line verdict per scenario. Exit 0, or 1 with --fail-on when an unaccepted finding reaches LEVEL.
+`,
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',
   convert: 'usage: bulkhead convert FILE --to json|bulk [-o OUT]\n\nConverts a model between .bulk and JSON without loss (comments included).\n',

@@ -6,6 +6,7 @@ import { convertCommand } from './commands/convert.ts';
 import { fmtCommand } from './commands/fmt.ts';
 import { reportCommand } from './commands/report.ts';
 import { schemaCommand } from './commands/schema.ts';
+import { traceCommand } from './commands/trace.ts';
 import { UsageError } from './io.ts';
 import { HELP, commandHelp } from './help.ts';
 
@@ -52,6 +53,8 @@ function run(argv: string[]): number {
   switch (command) {
     case 'check':
       return checkCommand(file(), values['fail-on']);
+    case 'trace':
+      return traceCommand(file(), positionals[1]);
     case 'schema':
       return schemaCommand();
     case 'fmt':

@@ -23,3 +23,4 @@ export * from './assess/index.ts';
 export * from './justify/index.ts';
 export * from './report/index.ts';
 export { ModelLocator } from './report/locate.ts';
+export { suggest as suggestTag } from './util/suggest.ts';
