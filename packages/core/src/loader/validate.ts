@@ -8,6 +8,11 @@ import { didYouMean } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
 import { spanAt } from './schema-issues.ts';
 import { findCycles } from './cycles.ts';
+import { RULE_IDS } from '../rules/registry.ts';
+import { ASSESS_RULES } from '../assess/limits.ts';
+import { JUSTIFICATION_RULES } from '../justify/apply.ts';
+
+const KNOWN_RULE_IDS: ReadonlySet<string> = new Set([...RULE_IDS, ...ASSESS_RULES.map((r) => r.id), ...JUSTIFICATION_RULES.map((r) => r.id)]);
 
 export interface Origins {
   elements: number[];
@@ -55,6 +60,7 @@ class Validator {
     this.checkCategoriesAndPolicy();
     this.input.model.scenarios.forEach((_, i) => this.checkScenario(i));
     this.checkJustifications();
+    this.checkRuleSettings();
     return this.diagnostics;
   }
 
@@ -311,6 +317,16 @@ class Validator {
       claimed.set(layer.function, j);
       if (causeFunction && causeFunction.tag === layer.function) {
         this.push('BH309', `\`${layer.function}\` fails in the cause and cannot also protect against it`, path);
+      }
+    });
+  }
+
+  private checkRuleSettings(): void {
+    (this.input.model.rules ?? []).forEach((rule, i) => {
+      if (!KNOWN_RULE_IDS.has(rule.id)) {
+        this.push('BH319', `unknown rule \`${rule.id}\``, `rules.${i}.id`, {
+          help: didYouMean(rule.id, KNOWN_RULE_IDS) ?? 'the rule set in force is listed in every report',
+        });
       }
     });
   }
