@@ -16,7 +16,7 @@ function step(name, command, args) {
 
 let ok = step('type check', 'npx', ['tsc', '--noEmit', '-p', '.']);
 const reports = [];
-const hasViewer = existsSync('apps/viewer/package.json');
+const hasViewer = existsSync('apps/viewer/vite.config.ts');
 if (hasViewer) {
   ok = step('viewer check', 'npm', ['run', 'check', '-w', '@bulkhead/viewer']) && ok;
   ok = step('viewer build', 'npm', ['run', 'build', '-w', '@bulkhead/viewer']) && ok;
