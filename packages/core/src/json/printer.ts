@@ -1,6 +1,7 @@
 // Canonical JSON for a model: two-space indent, fields in schema order, a final newline.
-import type { Model } from '../model/schema.ts';
+// Fields are put in schema order by the schema itself, so a model built in code prints like a loaded one.
+import { Model } from '../model/schema.ts';
 
 export function printJson(model: Model): string {
-  return JSON.stringify(model, null, 2) + '\n';
+  return JSON.stringify(Model.parse(model), null, 2) + '\n';
 }
