@@ -61,6 +61,7 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
       const elements = l.elements.length ? l.elements : [undefined];
       for (const e of elements) {
         expected.push({
+          row_kind: e ? 'element' : 'layer',
           scenario: s.id,
           scenario_title: guardFormula(s.title ?? ''),
           category: s.category,
@@ -96,9 +97,19 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
     }
   }
   const strip = (r: Row) => ({ ...r, element_worst_severity: '', element_findings_accepted: '' });
-  expect(rows.map(strip)).toEqual(expected);
+  const layerRows = rows.filter((r) => r.row_kind !== 'finding');
+  expect(layerRows.map(strip)).toEqual(expected);
+  // Every finding appears somewhere: on a layer row, or on a row of its own after them.
+  const shown = new Set(layerRows.flatMap((r) => [...r.layer_findings.split(' '), ...r.element_findings.split(' ')]));
+  const own = rows.slice(layerRows.length);
+  expect(own.every((r) => r.row_kind === 'finding')).toBe(true);
+  expect(own.map((r) => r.element_findings)).toEqual(doc.findings.filter((f) => !shown.has(f.key)).map((f) => f.key));
+  for (const r of own) {
+    const f = doc.findings.find((x) => x.key === r.element_findings)!;
+    expect([r.scenario, r.element, r.element_worst_severity, r.element_findings_accepted]).toEqual([f.scenario ?? '', f.element ?? '', f.severity, f.accepted ? 'all' : 'none']);
+  }
   const byKey = new Map(doc.findings.map((f) => [f.key, f]));
-  for (const r of rows) {
+  for (const r of layerRows) {
     const fs = r.element_findings ? r.element_findings.split(LIST_SEPARATOR).map((k) => byKey.get(k)!) : [];
     const worst = ['voids-credit', 'needs-justification', 'note'].find((sev) => fs.some((f) => f.severity === sev)) ?? '';
     expect(r.element_worst_severity).toBe(worst);

@@ -127,7 +127,9 @@ describe('formats (invented data)', () => {
 
   it('CSV: parses back into the JSON report, guarding formula-like text', () => {
     const rows = checkCsvAgainstJson(renderReport(input, 'csv'), doc);
-    expect(rows).toHaveLength(5); // IPL-PSV-1: 1 element, SIF-1: 4 elements
+    // IPL-PSV-1: 1 element, SIF-1: 4 elements, then the stale justification on a row of its own.
+    expect(rows.map((r) => r.row_kind)).toEqual(['element', 'element', 'element', 'element', 'element', 'finding']);
+    expect(rows[5]!.element_findings).toBe('stale-justification:no-such-finding:S-9');
     expect(rows.find((r) => r.element === 'LT-2')!.element_title).toBe("'=HYPERLINK(1)");
   });
 

@@ -1,9 +1,11 @@
 // The CSV report (RFC 4180, written by csv-stringify): one row per scenario, claimed layer and traced
-// element, with the verdict columns repeated on each row so an auditor can filter it in a spreadsheet.
+// element, with the verdict columns repeated on each row so an auditor can filter it in a spreadsheet;
+// then one row per finding that no layer row shows (about the cause, a modifier, or the model itself).
 import { stringify } from 'csv-stringify/browser/esm/sync';
 import type { LayerReport, ReportDocument, ScenarioReport } from './document.ts';
 
 export const CSV_COLUMNS = [
+  'row_kind',
   'scenario',
   'scenario_title',
   'category',
@@ -56,6 +58,7 @@ type Findings = Map<string, ReportDocument['findings'][number]>;
 
 function rowsOf(byKey: Findings, s: ScenarioReport, layer: LayerReport): Record<CsvColumn, string>[] {
   const common = {
+    row_kind: 'element',
     scenario: s.id,
     scenario_title: guardFormula(s.title ?? ''),
     category: s.category,
@@ -89,7 +92,7 @@ function rowsOf(byKey: Findings, s: ScenarioReport, layer: LayerReport): Record<
     element_findings_accepted: '',
   };
   // A layer with nothing traced still gets its row: an empty element list is itself evidence.
-  if (layer.elements.length === 0) return [{ ...common, ...noElement }];
+  if (layer.elements.length === 0) return [{ ...common, ...noElement, row_kind: 'layer' }];
   return layer.elements.map((e) => {
     const findings = e.findings.map((k) => byKey.get(k)).filter((f) => f !== undefined);
     const worst = SEVERITY_ORDER.find((sev) => findings.some((f) => f.severity === sev)) ?? '';
@@ -109,9 +112,25 @@ function rowsOf(byKey: Findings, s: ScenarioReport, layer: LayerReport): Record<
   });
 }
 
+/** A finding no layer row names: its key, severity and acceptance in the element finding columns. */
+function findingRow(f: ReportDocument['findings'][number]): Record<CsvColumn, string> {
+  const row = Object.fromEntries(CSV_COLUMNS.map((c) => [c, ''])) as Record<CsvColumn, string>;
+  return {
+    ...row,
+    row_kind: 'finding',
+    scenario: f.scenario ?? '',
+    element: f.element ?? '',
+    element_findings: f.key,
+    element_worst_severity: f.severity,
+    element_findings_accepted: f.accepted ? 'all' : 'none',
+  };
+}
+
 export function renderCsv(doc: ReportDocument): string {
   const byKey: Findings = new Map(doc.findings.map((f) => [f.key, f]));
   const records = doc.scenarios.flatMap((s) => s.layers.flatMap((layer) => rowsOf(byKey, s, layer)));
+  const shown = new Set(records.flatMap((r) => [...r.layer_findings.split(LIST_SEPARATOR), ...r.element_findings.split(LIST_SEPARATOR)]));
+  records.push(...doc.findings.filter((f) => !shown.has(f.key)).map(findingRow));
   // RFC 4180: CRLF line ends, a header row, fields quoted when they must be (and when a space at either
   // end would otherwise be trimmed by a spreadsheet).
   return stringify(records, { header: true, columns: [...CSV_COLUMNS], record_delimiter: '\r\n', quoted_match: /^\s|\s$/ });

@@ -21,7 +21,7 @@ h4 { font-size: 1rem; margin: 1.4rem 0 .4rem; }
 code { font-family: ui-monospace, "SFMono-Regular", Menlo, Consolas, monospace; font-size: .92em; overflow-wrap: anywhere; }
 table { border-collapse: collapse; width: 100%; margin: .5rem 0 1rem; table-layout: auto; }
 caption { text-align: left; font-weight: 600; padding: .2rem 0; color: var(--muted); }
-th, td { border: 1px solid var(--rule); padding: .3rem .45rem; text-align: left; vertical-align: top; overflow-wrap: anywhere; }
+th, td { border: 1px solid var(--rule); padding: .3rem .45rem; text-align: left; vertical-align: top; overflow-wrap: break-word; }
 thead th { background: var(--band); }
 tbody th { font-weight: 600; }
 aside.caution { border: 2px solid var(--warn); padding: .6rem 1rem; margin: 1rem 0; }
