@@ -5,6 +5,7 @@ import type { SpanMap } from '../bulk/to-model.ts';
 import { JUSTIFICATION_RULES } from '../justify/apply.ts';
 import type { Model } from '../model/schema.ts';
 import { meetsCriterion } from '../assess/numbers.ts';
+import { POLICY_DEFAULTS } from '../assess/policy.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';
 import { byTag, compareFindings, compareTags } from './order.ts';
 
@@ -37,12 +38,12 @@ export const CONVENTIONS = [
   'Figures in text are rounded to two significant figures; the JSON report holds them in full.',
 ] as const;
 
-/** Policy switches as the .bulk `policy` statement names them, with the defaults that apply when unset. */
+/** Policy switches as the .bulk `policy` statement names them; unset ones take the assessment's defaults. */
 const POLICY_SWITCHES = [
-  { field: 'sameControllerLayers', name: 'same-controller-layers', fallback: 'one-credit' },
-  { field: 'sharedSolver', name: 'shared-solver', fallback: 'void' },
-  { field: 'minResponseMinutes', name: 'min-response-minutes', fallback: '10' },
-  { field: 'presenceLimit', name: 'presence-limit', fallback: '0.1' },
+  { field: 'sameControllerLayers', name: 'same-controller-layers' },
+  { field: 'sharedSolver', name: 'shared-solver' },
+  { field: 'minResponseMinutes', name: 'min-response-minutes' },
+  { field: 'presenceLimit', name: 'presence-limit' },
 ] as const;
 
 function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], undefined> } {
@@ -123,6 +124,10 @@ function layerReport(
     })),
     missing: [...(trace?.missing ?? [])].sort(compareTags),
     findings: scenarioFindings.filter((f) => decided.has(f.key)).map((f) => f.key),
+    allowedPfdIfAccepted: layer.allowedPfdIfAccepted,
+    solver: layer.solver,
+    system: layer.system,
+    reasons: layer.reasons?.map((r) => present({ ...r })),
   });
 }
 
@@ -157,6 +162,8 @@ function scenarioReport(
       element: cause?.element,
       external: cause?.external,
       frequency: present({ ...assessment.cause.frequency }),
+      frequencyAfter: assessment.cause.frequencyAfter,
+      frequencyIfAccepted: assessment.cause.frequencyIfAccepted,
       elements,
     }),
     enablers: assessment.enablers.map((e) => present({ ...e })),
@@ -169,12 +176,12 @@ function scenarioReport(
         figure: 'if-accepted' as const,
         layers: tagsWhere((l) => l.creditedIfAccepted),
         mitigated: assessment.mitigatedIfAccepted,
-        meets: meetsCriterion(assessment.mitigatedIfAccepted, assessment.tolerable, assessment.edge),
+        meets: assessment.meetsIfAccepted ?? meetsCriterion(assessment.mitigatedIfAccepted, assessment.tolerable, assessment.edge),
       },
     ],
     gap: assessment.gap,
     sif: assessment.sif ? present({ ...assessment.sif, pfhBand: assessment.sif.pfhBand ? { ...assessment.sif.pfhBand } : undefined }) : undefined,
-    alternatives: assessment.alternatives.map((a) => ({ layers: [...a.layers], pfdProduct: a.pfdProduct })),
+    alternatives: assessment.alternatives.map((a) => present({ layers: [...a.layers], pfdProduct: a.pfdProduct, mitigated: a.mitigated })),
     findings: scenarioFindings.map((f) => f.key),
   });
 }
@@ -214,10 +221,10 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
     date: input.date,
     cautions: [...CAUTIONS],
     conventions: [...CONVENTIONS],
-    policy: POLICY_SWITCHES.map(({ field, name, fallback }) => {
+    policy: POLICY_SWITCHES.map(({ field, name }) => {
       const value = model.policy?.[field];
       return value === undefined
-        ? { name, value: fallback, origin: 'default' as const }
+        ? { name, value: String(POLICY_DEFAULTS[field]), origin: 'default' as const }
         : { name, value: String(value), origin: 'model' as const };
     }),
     rules: rulesInForce(analysis),

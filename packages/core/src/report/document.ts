@@ -77,6 +77,21 @@ const LayerElement = TracedElement.extend({
   findings: Tags.meta({ description: 'Keys of findings about this layer that name this element as shared' }),
 }).meta({ id: 'LayerElement' });
 
+const LayerReason = z
+  .strictObject({
+    key: z.string(),
+    rule: z.string(),
+    severity: Severity,
+    effect: z.enum(['voids', 'caps', 'unverified', 'conflict', 'note']).meta({
+      description: 'voids: no credit; caps: PFD limited to cap; unverified: incomplete trace; conflict: with the layer in `with`; note: none',
+    }),
+    accepted: z.boolean().optional(),
+    element: z.string().optional(),
+    with: z.string().optional().meta({ description: "The other party: 'cause' or another layer's tag" }),
+    cap: z.number().optional(),
+  })
+  .meta({ id: 'LayerReason' });
+
 export const LAYER_VERDICTS = ['independent', 'voided', 'unverified', 'open', 'accepted', 'not-selected'] as const;
 
 const Layer = z
@@ -92,6 +107,10 @@ const Layer = z
     elements: z.array(LayerElement),
     missing: Tags.meta({ description: 'Parts the layer needs but the model does not give (unverified)' }),
     findings: Tags.meta({ description: 'Keys of the findings that decide the verdict' }),
+    allowedPfdIfAccepted: z.number().optional().meta({ description: 'The PFD allowed in the "if accepted" figure, when it differs' }),
+    solver: z.string().optional().meta({ description: 'The controller or logic solver the layer runs in' }),
+    system: z.enum(['bpcs', 'sis', 'machine', 'relay']).optional(),
+    reasons: z.array(LayerReason).optional().meta({ description: 'What each finding that bears on the layer does to its credit' }),
   })
   .meta({ id: 'LayerReport' });
 
@@ -114,6 +133,8 @@ const SifRequirement = z
     mode: z.enum(['low-demand', 'high-demand']),
     pfhBand: z.strictObject({ sil: z.number(), low: z.number(), high: z.number() }).optional(),
     note: z.string(),
+    requiredPfh: z.number().optional().meta({ description: 'High demand only: the PFH (per hour) the SIF must reach' }),
+    lowDemandSil: z.number().optional(),
   })
   .meta({ id: 'SifRequirement' });
 
@@ -132,6 +153,8 @@ const Scenario = z
       element: z.string().optional(),
       external: z.string().optional(),
       frequency: Sourced,
+      frequencyAfter: z.number().optional().meta({ description: 'The frequency used after independence, when a limit rule replaces the claimed one' }),
+      frequencyIfAccepted: z.number().optional(),
       elements: Tags.nullable().meta({
         description: "The cause's element set, sorted; null when the analysis did not give it",
       }),
@@ -144,13 +167,15 @@ const Scenario = z
         probability: z.number(),
         basis: z.string().optional(),
         allowed: z.boolean(),
+        allowedIfAccepted: z.boolean().optional(),
+        finding: z.string().optional().meta({ description: 'The key of the finding that bars the modifier' }),
       }),
     ),
     layers: z.array(Layer),
     lopa: z.array(LopaLine),
     gap: z.number().meta({ description: 'Mitigated frequency after independence over tolerable' }),
     sif: SifRequirement.optional(),
-    alternatives: z.array(z.strictObject({ layers: Tags, pfdProduct: z.number() })),
+    alternatives: z.array(z.strictObject({ layers: Tags, pfdProduct: z.number(), mitigated: z.number().optional() })),
     findings: Tags,
   })
   .meta({ id: 'ScenarioReport' });

@@ -113,6 +113,29 @@ function findingLines(f: ReportFinding): Rich[] {
   return lines;
 }
 
+const SYSTEM_LABELS = { bpcs: 'BPCS', sis: 'SIS', machine: 'machine control panel', relay: 'relay logic' } as const;
+
+type Reason = NonNullable<LayerReport['reasons']>[number];
+
+/** What a finding does to this layer's credit, as the assessment applied it. */
+function effectLine(r: Reason): Rich {
+  const other: Rich = r.with === undefined ? [] : r.with === 'cause' ? [' (shared with the cause)'] : [' (shared with layer ', code(r.with), ')'];
+  const withLayer: Rich = r.with === undefined || r.with === 'cause' ? [] : [' with layer ', code(r.with)];
+  const effect: Record<Reason['effect'], Rich> = {
+    voids: [r.severity === 'needs-justification' && !r.accepted ? 'no credit until a justification accepts it' : 'no credit'],
+    caps: [`PFD limited to ${r.cap === undefined ? 'a cap' : formatProbability(r.cap)}`],
+    unverified: ['independence unverified, no credit'],
+    conflict: ['conflict', ...withLayer, ': the two are not credited together'],
+    note: ['none (listed for review)'],
+  };
+  return [
+    'Effect on this layer: ',
+    ...effect[r.effect],
+    ...(r.effect === 'voids' || r.effect === 'caps' ? other : []),
+    r.accepted ? '; lifted, because the finding is accepted.' : '.',
+  ];
+}
+
 function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Block[] {
   const out: Block[] = [];
   const intro: Record<LayerReport['verdict'], string> = {
@@ -127,13 +150,17 @@ function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Blo
   if (layer.missing.length > 0) {
     out.push({ type: 'paragraph', text: [`Missing from the model: ${layer.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`] });
   }
+  if (layer.solver) out.push({ type: 'paragraph', text: ['Runs in ', code(layer.solver), layer.system ? ` (${SYSTEM_LABELS[layer.system]}).` : '.'] });
+  const reasonOf = new Map((layer.reasons ?? []).map((r) => [r.key, r]));
   for (const key of layer.findings) {
     const f = byKey.get(key);
-    if (f) out.push({ type: 'list', items: findingLines(f) });
+    if (!f) continue;
+    const reason = reasonOf.get(key);
+    out.push({ type: 'list', items: [...findingLines(f), ...(reason ? [effectLine(reason)] : [])] });
   }
   // Findings about the layer that did not decide its verdict (notes, fails-safe supports) stay in view.
   const deciding = new Set(layer.findings);
-  const others = [...new Set(layer.elements.flatMap((e) => e.findings))].filter((k) => !deciding.has(k));
+  const others = [...new Set([...(layer.reasons ?? []).map((r) => r.key), ...layer.elements.flatMap((e) => e.findings)])].filter((k) => !deciding.has(k));
   if (others.length > 0) {
     out.push({ type: 'paragraph', text: ['Also reported about this layer, without effect on its verdict:'] });
     out.push({
@@ -165,12 +192,21 @@ function layerBlocks(s: ScenarioReport, layer: LayerReport, byKey: Map<string, R
   ];
 }
 
+/** When a limit rule replaces the claimed cause frequency, the figures actually used. */
+function causeFigures(s: ScenarioReport): string {
+  const { frequencyAfter, frequencyIfAccepted } = s.cause;
+  if (frequencyAfter === undefined && frequencyIfAccepted === undefined) return '';
+  const after = frequencyAfter !== undefined ? ` Used after independence: ${formatFrequency(frequencyAfter)}.` : '';
+  const accepted = frequencyIfAccepted !== undefined ? ` Used if the open findings are accepted: ${formatFrequency(frequencyIfAccepted)}.` : '';
+  return `${after}${accepted}`;
+}
+
 function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): Block {
   const blocks: Block[] = [
     { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''], id: anchorOf('scenario', s.id) },
     { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
     { type: 'heading', level: 3, text: ['Initiating cause'] },
-    { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.`] },
+    { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.${causeFigures(s)}`] },
     {
       type: 'paragraph',
       text:
@@ -191,7 +227,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
         ...s.modifiers.map((m) => [
           [`${m.kind} modifier${m.title ? `: ${m.title}` : ''}`],
           [formatProbability(m.probability)],
-          [m.allowed ? 'yes' : 'no (not allowed for this criterion)'],
+          [m.allowed ? 'yes' : `no${m.allowedIfAccepted ? ', yes if accepted' : ''}`, ...(m.finding ? [' (', code(m.finding), ')'] : [])],
           [m.basis ?? ''],
         ]),
       ],
@@ -208,7 +244,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
         [code(l.function)],
         [l.kind],
         [sourcedProbability(l.claimedPfd)],
-        [formatProbability(l.allowedPfd)],
+        [formatProbability(l.allowedPfd) + (l.allowedPfdIfAccepted !== undefined ? ` (${formatProbability(l.allowedPfdIfAccepted)} if accepted)` : '')],
         verdictCell(l),
         [yesNo(l.credited)],
         [yesNo(l.creditedIfAccepted)],
@@ -237,7 +273,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
   if (s.alternatives.length > 0) {
     blocks.push({
       type: 'list',
-      items: s.alternatives.map((a) => ['Alternative credit set: ', ...(a.layers.length ? codeList(a.layers) : ['none']), `, PFD product ${formatProbability(a.pfdProduct)}`]),
+      items: s.alternatives.map((a) => ['Alternative credit set: ', ...(a.layers.length ? codeList(a.layers) : ['none']), `, PFD product ${formatProbability(a.pfdProduct)}${a.mitigated !== undefined ? `, mitigated ${formatFrequency(a.mitigated)}` : ''}`]),
     });
   }
   return { type: 'section', kind: 'scenario', id: anchorOf('scenario', s.id), blocks };

@@ -77,9 +77,10 @@ export function sifText(s: ScenarioReport): Rich | undefined {
   if (!sif) return undefined;
   const who: Rich = sif.function ? ['Required of ', code(sif.function), ': '] : ['A SIF that closes the gap would need: '];
   const relation = edgeRelation(s.edge);
+  const pfh = sif.requiredPfh !== undefined ? ` PFH ${relation} ${formatProbability(sif.requiredPfh)} /h` : '';
   const band =
     sif.mode === 'high-demand' && sif.pfhBand
-      ? ` High demand: PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h.`
+      ? ` High demand:${pfh}, the PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h${sif.lowDemandSil !== undefined ? ` (the low-demand table would give ${silText(sif.lowDemandSil)})` : ''}.`
       : '';
   const note = sif.note ? ` ${sif.note[0]!.toUpperCase()}${sif.note.slice(1)}${/[.!?]$/.test(sif.note) ? '' : '.'}` : '';
   return [...who, `PFD ${relation} ${formatProbability(sif.requiredPfd)} (RRF ${relation === '<' ? '>' : '>='} ${formatRatio(sif.requiredRrf)}): ${silText(sif.sil)}.${band}${note}`];
