@@ -67,6 +67,7 @@ export const CORPUS: readonly CorpusRow[] = [
   { file: 'unknown-keyword.bulk', code: 'BH115', line: 5, column: 1, says: 'did you mean `vessel`?' },
   { file: 'unknown-kind.json', code: 'BH202', line: 14, column: 15, says: 'did you mean `vessel`?' },
   { file: 'unknown-reference.bulk', code: 'BH300', line: 16, column: 19, says: 'did you mean `LT-2`?' },
+  { file: 'unknown-rule.bulk', code: 'BH319', line: 4, column: 6, says: 'did you mean `shared-bridle`?' },
   { file: 'unknown-scenario-line.bulk', code: 'BH115', line: 20, column: 3, says: 'did you mean `layer`?' },
   { file: 'unterminated-string.bulk', code: 'BH110', line: 18, column: 20, says: 'unterminated string' },
   { file: 'voting-m-over-n.bulk', code: 'BH306', line: 16, column: 38, says: 'voting 2oo1 needs M between 1 and N' },
@@ -82,7 +83,6 @@ export const NOT_IN_CORPUS: Partial<Record<DiagnosticCode, string>> = {
   BH103: 'over 50 MB: generated in this file and in tests/cli/foundation-bad-corpus.test.ts',
   BH104: 'unreadable: a missing path in tests/cli/foundation-bad-corpus.test.ts',
   BH318: 'not emitted by the loader: a narrowed cause needs the traced loop (analysis stage)',
-  BH319: 'not emitted by the loader: rule ids are checked against the rule registry (analysis stage)',
 };
 
 export function corpusFiles(): string[] {
