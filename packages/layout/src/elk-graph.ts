@@ -1,0 +1,123 @@
+// Scene to ELK graph and ELK result to Drawing: the pure half of layout, with no ELK code in it, so
+// the viewer's main bundle can import it while elkjs itself runs only in the worker (or in Node).
+import type { ElkExtendedEdge, ElkNode } from 'elkjs/lib/elk-api.js';
+import { drawBox, boxSize, LANE_GAP, offsetPolyline, round, type DrawnCluster, type DrawnEdge, type Drawing, type Point } from './drawing.ts';
+import type { Scene, SceneNode } from './scene.ts';
+
+/** ELK layout options. Values must be strings (elkjs parses them). */
+const LAYERED: Record<string, string> = {
+  'elk.algorithm': 'layered',
+  'elk.direction': 'RIGHT',
+  'elk.edgeRouting': 'ORTHOGONAL',
+  'elk.spacing.nodeNode': '22',
+  'elk.layered.spacing.nodeNodeBetweenLayers': '52',
+  'elk.spacing.edgeEdge': '12',
+  'elk.spacing.edgeNode': '16',
+  'elk.layered.spacing.edgeEdgeBetweenLayers': '12',
+  'elk.layered.spacing.edgeNodeBetweenLayers': '16',
+  'elk.layered.considerModelOrder.strategy': 'NODES_AND_EDGES',
+  'elk.layered.crossingMinimization.forceNodeModelOrder': 'false',
+  'elk.layered.nodePlacement.strategy': 'BRANDES_KOEPF',
+  'elk.padding': '[top=28,left=28,bottom=28,right=28]',
+  'elk.json.shapeCoords': 'ROOT',
+  'elk.json.edgeCoords': 'ROOT',
+};
+
+const CLUSTER_PADDING = '[top=30,left=14,bottom=14,right=14]';
+
+function elkNode(node: SceneNode, scene: Scene): ElkNode {
+  const { width, height } = boxSize(node, scene.sides);
+  return { id: node.id, width, height };
+}
+
+/**
+ * The ELK graph for a scene. Edges are given to ELK from the lower rank to the higher, so layering
+ * reads process side, sensors, I/O, solvers, final elements from left to right. Ranks only orient
+ * edges; hard columns (ELK partitions) made drawings three times wider than tall, too small to read.
+ */
+export function toElk(scene: Scene): ElkNode {
+  const partitioned = scene.view === 'scenario';
+  const byId = new Map(scene.nodes.map((n) => [n.id, n]));
+  const inCluster = new Map<string, string>();
+  for (const c of scene.clusters) for (const child of c.children) if (byId.has(child)) inCluster.set(child, c.id);
+  const children: ElkNode[] = scene.nodes.filter((n) => !inCluster.has(n.id)).map((n) => elkNode(n, scene));
+  for (const c of scene.clusters) {
+    const kids = c.children.filter((id) => byId.has(id)).map((id) => elkNode(byId.get(id)!, scene));
+    if (kids.length > 0) children.push({ id: c.id, children: kids, layoutOptions: { 'elk.padding': CLUSTER_PADDING } });
+  }
+  const edges: ElkExtendedEdge[] = scene.edges
+    .filter((e) => byId.has(e.source) && byId.has(e.target) && e.source !== e.target)
+    .map((e) => {
+      const forward = byId.get(e.source)!.partition <= byId.get(e.target)!.partition;
+      // Within one column the process side reads from what is relied on to what relies on it.
+      const flip = partitioned ? !forward || (byId.get(e.source)!.partition === byId.get(e.target)!.partition && byId.get(e.source)!.partition <= 3) : false;
+      return { id: e.id, sources: [flip ? e.target : e.source], targets: [flip ? e.source : e.target] };
+    });
+  return {
+    id: 'root',
+    layoutOptions: {
+      ...LAYERED,
+      ...(scene.clusters.length > 0 ? { 'elk.hierarchyHandling': 'INCLUDE_CHILDREN' } : {}),
+    },
+    children,
+    edges,
+  };
+}
+
+function endpoints(edge: ElkExtendedEdge): Point[] {
+  const section = edge.sections?.[0];
+  if (!section) return [];
+  return [section.startPoint, ...(section.bendPoints ?? []), section.endPoint].map((p) => ({ x: round(p.x), y: round(p.y) }));
+}
+
+/** Reads ELK's result (coordinates relative to the root, as asked for in toElk) into a Drawing. */
+export function fromElk(scene: Scene, laidOut: ElkNode): Drawing {
+  const nodes = new Map(scene.nodes.map((n) => [n.id, n]));
+  const boxes: Drawing['boxes'] = [];
+  const clusters: DrawnCluster[] = [];
+  const clusterLabels = new Map(scene.clusters.map((c) => [c.id, c.label]));
+  const walk = (elk: ElkNode) => {
+    for (const child of elk.children ?? []) {
+      const x = round(child.x ?? 0);
+      const y = round(child.y ?? 0);
+      const node = nodes.get(child.id);
+      if (node) boxes.push(drawBox(node, scene.sides, x, y, child.width ?? 0, child.height ?? 0));
+      else if (clusterLabels.has(child.id)) clusters.push({ id: child.id, label: clusterLabels.get(child.id)!, x, y, width: round(child.width ?? 0), height: round(child.height ?? 0) });
+      walk(child);
+    }
+  };
+  walk(laidOut);
+  const routes = new Map<string, Point[]>();
+  const collect = (elk: ElkNode) => {
+    for (const e of elk.edges ?? []) routes.set(e.id, endpoints(e));
+    for (const child of elk.children ?? []) collect(child);
+  };
+  collect(laidOut);
+  const edges: DrawnEdge[] = scene.edges.flatMap((e) => {
+    const points = routes.get(e.id);
+    if (!points || points.length < 2) return [];
+    const lanes =
+      e.sides.length === 0
+        ? [{ points, classes: ['lane'] }]
+        : e.sides.map((side, i) => ({
+            side,
+            points: offsetPolyline(points, (i - (e.sides.length - 1) / 2) * LANE_GAP),
+            classes: ['lane', `side-${side}`, ...(e.onPath.includes(side) ? ['on-path'] : [])],
+          }));
+    return [{ id: e.id, source: e.source, target: e.target, link: e.link, lanes }];
+  });
+  boxes.sort((a, b) => a.id.localeCompare(b.id));
+  return {
+    view: scene.view,
+    title: scene.title,
+    ...(scene.scenario ? { scenario: scene.scenario } : {}),
+    width: Math.ceil(laidOut.width ?? 0),
+    height: Math.ceil(laidOut.height ?? 0),
+    sides: scene.sides,
+    boxes,
+    edges,
+    clusters,
+    findings: scene.findings,
+    notes: scene.notes,
+  };
+}
