@@ -1,0 +1,24 @@
+// The layout worker: runs elkjs off the main thread. elk.bundled.js installs its own `self.onmessage`
+// when evaluated in a worker, so we assign ours after the import (replacing it), never addEventListener.
+import ELK from 'elkjs/lib/elk.bundled.js';
+import { fromElk, toElk, type Scene } from '@bulkhead/layout';
+
+const elk = new ELK();
+
+type Request = { id: number; scene: Scene } | { id: number; ping: true };
+
+self.onmessage = async (ev: MessageEvent<Request>) => {
+  const request = ev.data;
+  if ('ping' in request) {
+    self.postMessage({ id: request.id, pong: true });
+    return;
+  }
+  try {
+    const started = performance.now();
+    const laidOut = await elk.layout(toElk(request.scene));
+    const drawing = fromElk(request.scene, laidOut);
+    self.postMessage({ id: request.id, drawing, ms: Math.round(performance.now() - started) });
+  } catch (e) {
+    self.postMessage({ id: request.id, error: e instanceof Error ? e.message : String(e) });
+  }
+};

@@ -1,0 +1,99 @@
+// Pan and zoom of the graph: a translate and a scale, changed by the wheel, by dragging, by the
+// buttons, and by "centre on this finding". The SVG applies `transform`.
+
+export interface Bounds {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+const MIN_SCALE = 0.08;
+const MAX_SCALE = 4;
+/** Below this scale the 13 px tags are too small to read. */
+export const READABLE_SCALE = 0.62;
+
+function clamp(k: number): number {
+  return Math.min(MAX_SCALE, Math.max(MIN_SCALE, k));
+}
+
+export class PanZoom {
+  x = $state(0);
+  y = $state(0);
+  k = $state(1);
+  /** Size of the viewport, bound from the element. */
+  width = $state(0);
+  height = $state(0);
+  private drag: { px: number; py: number; x: number; y: number; id: number } | undefined;
+
+  transform = $derived(`translate(${this.x} ${this.y}) scale(${this.k})`);
+  percent = $derived(Math.round(this.k * 100));
+
+  fit(content: Bounds, margin = 24): void {
+    if (this.width === 0 || this.height === 0 || content.width === 0) return;
+    const k = clamp(Math.min((this.width - 2 * margin) / content.width, (this.height - 2 * margin) / content.height, 1.2));
+    this.k = k;
+    this.x = (this.width - content.width * k) / 2 - content.x * k;
+    this.y = Math.max(margin, (this.height - content.height * k) / 2) - content.y * k;
+  }
+
+  /**
+   * The first view of a drawing: all of it when it fits at a readable scale; otherwise a readable
+   * scale centred on `focus` (the shared elements), and Fit shows the whole.
+   */
+  open(content: Bounds, focus: Bounds | undefined): void {
+    this.fit(content);
+    if (this.k >= READABLE_SCALE || !focus) return;
+    this.k = READABLE_SCALE;
+    this.x = this.width / 2 - (focus.x + focus.width / 2) * this.k;
+    this.y = this.height / 2 - (focus.y + focus.height / 2) * this.k;
+  }
+
+  /** Centres the view on `b`, zooming in or out so it fills at most most of the view. */
+  centre(b: Bounds): void {
+    if (this.width === 0) return;
+    const k = clamp(Math.min((this.width * 0.7) / Math.max(b.width, 1), (this.height * 0.7) / Math.max(b.height, 1), 1.1));
+    this.k = k;
+    this.x = this.width / 2 - (b.x + b.width / 2) * k;
+    this.y = this.height / 2 - (b.y + b.height / 2) * k;
+  }
+
+  zoomAt(factor: number, px = this.width / 2, py = this.height / 2): void {
+    const k = clamp(this.k * factor);
+    this.x = px - ((px - this.x) * k) / this.k;
+    this.y = py - ((py - this.y) * k) / this.k;
+    this.k = k;
+  }
+
+  wheel(e: WheelEvent, target: Element): void {
+    e.preventDefault();
+    const r = target.getBoundingClientRect();
+    this.zoomAt(Math.exp(-e.deltaY * 0.0015), e.clientX - r.left, e.clientY - r.top);
+  }
+
+  pointerDown(e: PointerEvent): void {
+    if (e.button !== 0) return;
+    this.drag = { px: e.clientX, py: e.clientY, x: this.x, y: this.y, id: e.pointerId };
+  }
+
+  pointerMove(e: PointerEvent, target: Element): void {
+    const d = this.drag;
+    if (!d || d.id !== e.pointerId) return;
+    const dx = e.clientX - d.px;
+    const dy = e.clientY - d.py;
+    // Only a real drag captures the pointer, so a plain click still reaches the box under it.
+    if (Math.abs(dx) + Math.abs(dy) > 3 && !target.hasPointerCapture(e.pointerId)) target.setPointerCapture(e.pointerId);
+    this.x = d.x + dx;
+    this.y = d.y + dy;
+  }
+
+  pointerUp(e: PointerEvent, target: Element): void {
+    if (this.drag?.id === e.pointerId) this.drag = undefined;
+    if (target.hasPointerCapture(e.pointerId)) target.releasePointerCapture(e.pointerId);
+  }
+
+  pan(dx: number, dy: number): void {
+    this.x += dx;
+    this.y += dy;
+  }
+}
