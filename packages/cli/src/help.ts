@@ -14,6 +14,7 @@ commands:
                         convert a model between .bulk and JSON
   report FILE --format md|html|csv|json|sarif [-o OUT] [--date YYYY-MM-DD] [--fail-on LEVEL]
                         write the evidence list (report --json-schema: the JSON report's schema)
+  view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
 
 exit codes: 0 clean, 1 findings at or above --fail-on (or fmt --check found changes),
             2 bad input or usage, 3 internal error
@@ -50,6 +51,18 @@ scenario: each independence finding (pointing at the claimed layer, with the pat
 shared element, the rule's rationale and source, and the finding's key for an \`accept\` statement), the
 LOPA as claimed, after independence and if open findings are accepted, the gap and the required SIL; then
 a one-line verdict per scenario. Exit 0, or 1 with --fail-on when an unaccepted finding reaches LEVEL.
+`,
+  view: `usage: bulkhead view FILE [--port N]
+
+Serves the viewer for FILE on http://127.0.0.1 (never another address) and prints the URL to open. The
+page lays out each scenario's cause and claimed layers, marks shared elements, and shows the findings and
+the LOPA as claimed and after independence. Every save of FILE reaches the page within a second; a save
+with errors shows them and keeps the last good view. Serves only the viewer's own files and FILE.
+
+  --port N     listen on port N (default 4780, or any free port if that one is taken; 0: any free port)
+
+Needs the built viewer: run \`npm run build -w @bulkhead/viewer\` once (exit 2 says so if it is missing).
+exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwise runs until Ctrl+C (0)
 `,
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',

@@ -7,6 +7,7 @@ import { fmtCommand } from './commands/fmt.ts';
 import { reportCommand } from './commands/report.ts';
 import { schemaCommand } from './commands/schema.ts';
 import { traceCommand } from './commands/trace.ts';
+import { viewCommand } from './commands/view.ts';
 import { UsageError } from './io.ts';
 import { HELP, commandHelp } from './help.ts';
 
@@ -39,6 +40,7 @@ function run(argv: string[]): number {
       date: { type: 'string' },
       'fail-on': { type: 'string' },
       'json-schema': { type: 'boolean' },
+      port: { type: 'string' },
     },
   });
   if (values.help) {
@@ -71,6 +73,8 @@ function run(argv: string[]): number {
         failOn: values['fail-on'],
         jsonSchema: values['json-schema'] ?? false,
       });
+    case 'view':
+      return viewCommand(file(), values.port);
     default:
       throw new UsageError(`unknown command \`${command}\``);
   }

@@ -1,0 +1,64 @@
+// `bulkhead view FILE [--port N]`: serves the built viewer for one model file on 127.0.0.1 and
+// pushes every save to the page. Builds nothing at run time: without apps/viewer/dist it says how.
+import { statSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { loadModelText } from '@bulkhead/core';
+import { UsageError } from '../io.ts';
+import { hasBuiltViewer } from '../view/assets.ts';
+import { startViewServer } from '../view/server.ts';
+
+export const DEFAULT_PORT = 4780;
+export const VIEWER_DIST = fileURLToPath(new URL('../../../../apps/viewer/dist/', import.meta.url));
+
+export function parsePort(text: string | undefined): number | undefined {
+  if (text === undefined) return undefined;
+  if (!/^\d{1,5}$/.test(text) || Number(text) > 65535) throw new UsageError(`--port takes a number from 0 to 65535 (0: any free port); found \`${text}\``);
+  return Number(text);
+}
+
+function describe(file: string, text: string): string {
+  const result = loadModelText(file, text);
+  const errors = result.diagnostics.filter((d) => d.severity === 'error');
+  if (errors.length === 0) return 'loads cleanly';
+  const first = errors[0]!.span;
+  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${file}:${first.line}:${first.column}` : ''}; the page keeps the last good view`;
+}
+
+export function viewCommand(file: string, portText: string | undefined, distDir = VIEWER_DIST): number {
+  const asked = parsePort(portText);
+  try {
+    if (!statSync(file).isFile()) throw new Error('not a file');
+  } catch {
+    process.stderr.write(`bulkhead view: cannot read \`${file}\`: no such file\n`);
+    return 2;
+  }
+  if (!hasBuiltViewer(distDir)) {
+    process.stderr.write(
+      `bulkhead view: the viewer is not built (no ${distDir}index.html).\n` +
+        'Build it once with:\n  npm run build -w @bulkhead/viewer\nthen run this command again.\n',
+    );
+    return 2;
+  }
+  const start = (port: number, fallback: boolean): void => {
+    startViewServer({
+      file,
+      distDir,
+      port,
+      onChange: (text) => process.stdout.write(`${new Date().toLocaleTimeString()} saved: ${file} ${text === undefined ? '' : describe(file, text)}\n`),
+    }).then(
+      (server) => {
+        process.stdout.write(`bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`);
+        const stop = () => void server.close().then(() => process.exit(0));
+        process.once('SIGINT', stop);
+        process.once('SIGTERM', stop);
+      },
+      (e: NodeJS.ErrnoException) => {
+        if (e.code === 'EADDRINUSE' && fallback) return start(0, false);
+        process.stderr.write(`bulkhead view: cannot listen on 127.0.0.1:${port}: ${e.code ?? e.message}${e.code === 'EADDRINUSE' ? ' (choose another with --port N, or --port 0 for any free port)' : ''}\n`);
+        process.exit(2);
+      },
+    );
+  };
+  start(asked ?? DEFAULT_PORT, asked === undefined);
+  return 0;
+}
