@@ -20,6 +20,8 @@ export function checkHtml(html: string, doc: ReportDocument): HTMLElement {
   expect(html).not.toMatch(/url\(\s*['"]?(https?:|\/\/)/i);
   expect(root.querySelector('style')?.text).toMatch(/@media print/);
 
+  const ids = root.querySelectorAll('[id]').map((el) => el.id);
+  expect(ids.filter((id, i) => ids.indexOf(id) !== i), 'ids are unique').toEqual([]);
   const sections = root.querySelectorAll('section.scenario');
   expect(sections.map((s) => s.querySelector('h2')?.querySelector('code')?.text)).toEqual(doc.scenarios.map((s) => s.id));
 

@@ -24,6 +24,7 @@ caption { text-align: left; font-weight: 600; padding: .2rem 0; color: var(--mut
 th, td { border: 1px solid var(--rule); padding: .3rem .45rem; text-align: left; vertical-align: top; overflow-wrap: break-word; }
 thead th { background: var(--band); }
 tbody th { font-weight: 600; }
+tbody th code { white-space: nowrap; }
 aside.caution { border: 2px solid var(--warn); padding: .6rem 1rem; margin: 1rem 0; }
 aside.caution h2 { border: 0; margin: 0 0 .3rem; font-size: 1.05rem; color: var(--warn); }
 ul { padding-left: 1.3rem; }

@@ -203,7 +203,7 @@ function causeFigures(s: ScenarioReport): string {
 
 function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): Block {
   const blocks: Block[] = [
-    { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''], id: anchorOf('scenario', s.id) },
+    { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''] },
     { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
     { type: 'heading', level: 3, text: ['Initiating cause'] },
     { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.${causeFigures(s)}`] },
