@@ -123,7 +123,7 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
 
 export interface SarifLog {
   runs: {
-    tool: { driver: { rules: { id: string }[] } };
+    tool: { driver: { rules: { id: string; name: string; shortDescription: { text: string }; fullDescription: { text: string }; help: { text: string } }[] } };
     results: {
       ruleId: string;
       ruleIndex?: number;
@@ -147,6 +147,15 @@ export function checkSarif(text: string, doc: ReportDocument): SarifLog {
     doc.findings.map((f) => [f.key, f.rule, levels[f.severity]]),
   );
   for (const r of run.results) expect(run.tool.driver.rules[r.ruleIndex!]!.id).toBe(r.ruleId);
+  // Every rule in force is described: its title, why it exists, and the help text with its source.
+  expect(run.tool.driver.rules.map((r) => r.id)).toEqual(doc.rules.map((r) => r.id));
+  for (const rule of run.tool.driver.rules) {
+    const inForce = doc.rules.find((r) => r.id === rule.id)!;
+    expect(rule.name).toMatch(/^[A-Z][A-Za-z0-9]*$/);
+    expect(rule.shortDescription.text).toBe(inForce.title);
+    expect(rule.fullDescription.text).not.toBe(inForce.title);
+    expect(rule.help.text).toContain(`Source: ${inForce.source}`);
+  }
   run.results.forEach((r, i) => {
     const f = doc.findings[i]!;
     if (f.accepted) expect(r.suppressions).toEqual([expect.objectContaining({ status: 'accepted', justification: expect.stringContaining(f.accepted.reason) })]);

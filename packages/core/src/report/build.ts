@@ -6,6 +6,8 @@ import { JUSTIFICATION_RULES } from '../justify/apply.ts';
 import type { Model } from '../model/schema.ts';
 import { meetsCriterion } from '../assess/numbers.ts';
 import { POLICY_DEFAULTS } from '../assess/policy.ts';
+import { ASSESS_RULES } from '../assess/limits.ts';
+import { RULES } from '../rules/registry.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';
 import { byTag, compareFindings, compareTags } from './order.ts';
 
@@ -51,8 +53,9 @@ function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], 
 }
 
 function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
-  // RuleInForce carries no rationale; a rule's findings do, and the justification rules have their own.
-  const rationaleOf = new Map<string, string>(JUSTIFICATION_RULES.map((r) => [r.id, r.rationale]));
+  // RuleInForce carries no rationale: take it from the rule tables, so a rule with no finding in this run
+  // still shows why it exists; a rule from elsewhere takes it from its first finding.
+  const rationaleOf = new Map<string, string>([...RULES, ...ASSESS_RULES, ...JUSTIFICATION_RULES].map((r) => [r.id, r.rationale]));
   for (const f of [...analysis.findings].sort(compareFindings)) if (!rationaleOf.has(f.rule)) rationaleOf.set(f.rule, f.rationale);
   const rules = new Map<string, RuleInForce & { rationale?: string }>();
   for (const r of analysis.rules) rules.set(r.id, r);
