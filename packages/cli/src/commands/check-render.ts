@@ -59,9 +59,15 @@ export function verdictLine(a: ScenarioAssessment): string {
   const after = formatFrequency(a.mitigatedAfter);
   const tolerable = formatFrequency(a.tolerable);
   if (a.meetsAfter) return `${a.scenario}: meets its criterion after independence (${after} against ${tolerable})`;
-  const sil = a.sif ? (a.sif.sil === 0 ? '; no SIL needed' : a.sif.sil > 4 ? '; beyond what one SIF can give' : `; ${a.sif.function ? `\`${a.sif.function}\`` : 'a SIF'} needs SIL ${a.sif.sil}`) : '';
-  const claimed = a.meetsClaimed ? ' (meets it only as claimed)' : '';
-  return `${a.scenario}: falls short after independence: ${after} against ${tolerable}, gap ${formatRatio(a.gap)} x${sil}${claimed}`;
+  const sifLayer = a.layers.find((l) => l.function === a.sif?.function);
+  const lost = sifLayer && !sifLayer.creditedIfAccepted ? ` (\`${sifLayer.function}\` as drawn is ${sifLayer.verdict})` : '';
+  const who = a.sif?.function && !lost ? `\`${a.sif.function}\`` : 'an independent SIF';
+  const sil = a.sif ? (a.sif.sil === 0 ? '; no SIL needed' : a.sif.sil > 4 ? '; beyond what one SIF can give' : `; ${who} needs SIL ${a.sif.sil}${lost}`) : '';
+  const open = a.layers.filter((l) => l.verdict === 'open').map((l) => `\`${l.function}\``);
+  const hint = a.meetsIfAccepted && open.length
+    ? ` (it would meet it if the open findings on ${open.join(', ')} were resolved or accepted)`
+    : a.meetsClaimed ? ' (it meets it only as claimed)' : '';
+  return `${a.scenario}: falls short after independence: ${after} against ${tolerable}, gap ${formatRatio(a.gap)} x${sil}${hint}`;
 }
 
 export function renderCheck(result: LoadResult & { model: Model }, analysis: Analysis): string {
