@@ -66,7 +66,7 @@ export function verdictLine(a: ScenarioAssessment): string {
   const open = a.layers.filter((l) => l.verdict === 'open').map((l) => `\`${l.function}\``);
   const hint = a.meetsIfAccepted && open.length
     ? ` (it would meet it if the open findings on ${open.join(', ')} were resolved or accepted)`
-    : a.meetsClaimed ? ' (it meets it only as claimed)' : '';
+    : a.meetsClaimed ? '; it meets it only as claimed' : '';
   return `${a.scenario}: falls short after independence: ${after} against ${tolerable}, gap ${formatRatio(a.gap)} x${sil}${hint}`;
 }
 
