@@ -13,6 +13,8 @@ type Reply = { id: number; drawing: Drawing; ms: number } | { id: number; error:
 export class LayoutClient {
   private readonly worker: Worker;
   private next = 1;
+  /** The layout request whose answer will be shown; older ones are superseded. */
+  private current: number | undefined;
   private readonly pending = new Map<number, { answer: (reply: Reply) => void; reject: (e: Error) => void }>();
 
   constructor() {
@@ -43,11 +45,12 @@ export class LayoutClient {
   /** `scene` must be plain data: callers pass `$state.snapshot(...)` of anything reactive. */
   layout(scene: Scene): Promise<LayoutAnswer> {
     const id = this.next++;
-    // Older requests will never be shown; drop them so their answers are ignored.
-    for (const [old, w] of this.pending) {
-      w.reject(new SupersededError());
-      this.pending.delete(old);
+    // An older layout will never be shown; drop it so its answer is ignored.
+    if (this.current !== undefined) {
+      this.pending.get(this.current)?.reject(new SupersededError());
+      this.pending.delete(this.current);
     }
+    this.current = id;
     return new Promise((resolve, reject) => {
       this.pending.set(id, {
         answer: (reply) => ('drawing' in reply ? resolve({ drawing: reply.drawing, ms: reply.ms }) : reject(new Error('unexpected worker reply'))),

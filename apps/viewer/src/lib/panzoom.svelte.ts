@@ -49,12 +49,16 @@ export class PanZoom {
     this.y = this.height / 2 - (focus.y + focus.height / 2) * this.k;
   }
 
-  /** Centres the view on `b`, zooming in or out so it fills at most most of the view. */
-  centre(b: Bounds): void {
+  /**
+   * Centres the view on `b`, zooming so it fills at most 70% of the view; `coverRight` pixels on the
+   * right are hidden by a card, so the centre is that of the part still visible.
+   */
+  centre(b: Bounds, coverRight = 0): void {
     if (this.width === 0) return;
-    const k = clamp(Math.min((this.width * 0.7) / Math.max(b.width, 1), (this.height * 0.7) / Math.max(b.height, 1), 1.1));
+    const visible = Math.max(this.width - coverRight, this.width * 0.4);
+    const k = clamp(Math.min((visible * 0.7) / Math.max(b.width, 1), (this.height * 0.7) / Math.max(b.height, 1), 1.1));
     this.k = k;
-    this.x = this.width / 2 - (b.x + b.width / 2) * k;
+    this.x = visible / 2 - (b.x + b.width / 2) * k;
     this.y = this.height / 2 - (b.y + b.height / 2) * k;
   }
 

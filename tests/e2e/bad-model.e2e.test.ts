@@ -1,0 +1,73 @@
+// A model that does not load shows the loader's diagnostics (line and column, code, excerpt), both
+// when `bulkhead view` serves it and when it is opened with the file picker; never a blank page.
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import { loadModelText } from '@bulkhead/core';
+import { DEMO, launch, screenshot, startView, tempDir, watchPage, type ViewProcess } from './harness.ts';
+
+const BAD = [
+  'site "Bad site"',
+  'category c tolerable=1e-4 harm=people',
+  'vessel V-1',
+  'transmitter LT-1 variable=level mounted-on=N-404',
+  'scenario S-1 category=c',
+  '  cause function=LIC-9 frequency=0.1',
+  '',
+].join('\n');
+
+describe('a model with errors', () => {
+  const dir = tempDir('bulkhead-bad-');
+  const file = join(dir, 'bad.bulk');
+  const expected = loadModelText('bad.bulk', BAD).diagnostics.filter((d) => d.severity === 'error');
+  let view: ViewProcess;
+  let context: BrowserContext;
+  let page: Page;
+  let seen: ReturnType<typeof watchPage>;
+
+  beforeAll(async () => {
+    writeFileSync(file, BAD);
+    view = await startView(file);
+    context = await launch();
+    page = await context.newPage();
+    seen = watchPage(page);
+    await page.goto(view.url);
+  });
+
+  afterAll(async () => {
+    await context?.close();
+    view?.stop();
+  });
+
+  it('is a model the loader rejects (the test needs errors to show)', () => {
+    expect(expected.length).toBeGreaterThanOrEqual(2);
+    expect(expected.every((d) => d.span)).toBe(true);
+  });
+
+  it('shows every error with its line and column when served', async () => {
+    await page.waitForSelector('[data-testid=diagnostics]');
+    const positions = await page.locator('[data-testid=diagnostic-position]').allInnerTexts();
+    expect(positions).toEqual(expected.map((d) => `line ${d.span!.line}, column ${d.span!.column}`));
+    const text = await page.innerText('[data-testid=diagnostics]');
+    for (const d of expected) {
+      expect(text).toContain(d.code);
+      expect(text).toContain(`bad.bulk:${d.span!.line}:${d.span!.column}`);
+    }
+    expect(await page.locator('svg[data-testid=graph]').count()).toBe(0);
+    await screenshot(page, 'bad-model-served');
+  });
+
+  it('shows the errors of a bad file opened with the picker, and then a good one', async () => {
+    const picked = join(dir, 'picked.bulk');
+    writeFileSync(picked, BAD.replace('N-404', 'N-405'));
+    await page.setInputFiles('[data-testid=open]', picked);
+    await page.waitForSelector('[data-testid=diagnostics] :text("picked.bulk")');
+    expect(await page.innerText('[data-testid=diagnostics]')).toContain('N-405');
+    await page.setInputFiles('[data-testid=open]', DEMO);
+    await page.waitForSelector('[data-testid=diagnostics]', { state: 'detached' });
+    await page.waitForSelector('svg[data-testid=graph] g.box');
+    expect(await page.innerText('[data-testid=live]')).toBe('opened from disk');
+    expect(seen.errors).toEqual([]);
+  });
+});

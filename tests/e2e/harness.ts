@@ -1,0 +1,141 @@
+// Shared set-up for the browser tests: a free 127.0.0.1 port, `bulkhead view` spawned in its own
+// process group (killed whole afterwards), headless Debian Chromium with a fresh profile, screenshots.
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { copyFileSync, mkdirSync, mkdtempSync, readFileSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
+
+export const ROOT = new URL('../../', import.meta.url).pathname;
+export const DEMO = join(ROOT, 'fixtures/demo/marrow-fen.bulk');
+export const ARTIFACTS = join(ROOT, 'test-artifacts/e2e');
+const BIN = join(ROOT, 'packages/cli/bin/bulkhead.js');
+
+export function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+export interface ViewProcess {
+  url: string;
+  port: number;
+  child: ChildProcess;
+  output: () => string;
+  stop: () => void;
+}
+
+/** Spawns `bulkhead view FILE --port N` and resolves once it prints its URL. */
+export async function startView(file: string): Promise<ViewProcess> {
+  const port = await freePort();
+  const child = spawn(process.execPath, [BIN, 'view', file, '--port', String(port)], { cwd: ROOT, detached: true, stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, NO_COLOR: '1' } });
+  let out = '';
+  child.stdout!.on('data', (b: Buffer) => (out += b.toString()));
+  child.stderr!.on('data', (b: Buffer) => (out += b.toString()));
+  const stop = () => {
+    try {
+      process.kill(-child.pid!, 'SIGTERM');
+    } catch {
+      // already gone
+    }
+  };
+  const url = `http://127.0.0.1:${port}/`;
+  const deadline = Date.now() + 30_000;
+  while (!out.includes(url)) {
+    if (child.exitCode !== null) throw new Error(`bulkhead view exited ${child.exitCode}: ${out}`);
+    if (Date.now() > deadline) {
+      stop();
+      throw new Error(`bulkhead view did not start: ${out}`);
+    }
+    await new Promise((r) => setTimeout(r, 50));
+  }
+  return { url, port, child, output: () => out, stop };
+}
+
+export async function launch(): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), 'chromium-profile-')), {
+    executablePath: '/usr/bin/chromium',
+    headless: true,
+    viewport: { width: 1440, height: 900 },
+    acceptDownloads: true,
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+/** Collects what would mean the page broke: uncaught errors, console errors, dialogs. */
+export function watchPage(page: Page): { errors: string[]; dialogs: string[] } {
+  const seen = { errors: [] as string[], dialogs: [] as string[] };
+  page.on('pageerror', (e) => seen.errors.push(e.message));
+  page.on('console', (m) => {
+    if (m.type() === 'error') seen.errors.push(m.text());
+  });
+  page.on('dialog', (d) => {
+    seen.dialogs.push(`${d.type()}: ${d.message()}`);
+    void d.dismiss();
+  });
+  return seen;
+}
+
+export async function screenshot(page: Page, name: string): Promise<string> {
+  mkdirSync(ARTIFACTS, { recursive: true });
+  const path = join(ARTIFACTS, `${name}.png`);
+  await page.screenshot({ path });
+  return path;
+}
+
+export function copyTo(from: string, to: string): void {
+  copyFileSync(from, to);
+}
+
+export function tempDir(prefix: string): string {
+  return mkdtempSync(join(tmpdir(), prefix));
+}
+
+export interface DemoTruth {
+  model: Model;
+  analysis: Analysis;
+  /** The CLI's own JSON report of the same file (`bulkhead report --format json`). */
+  report: CliReport;
+}
+
+export interface CliReport {
+  scenarios: {
+    id: string;
+    tolerable: number;
+    gap: number;
+    lopa: { figure: 'claimed' | 'after-independence' | 'if-accepted'; mitigated: number; meets: boolean }[];
+    layers: { function: string; claimedPfd: { value: number }; allowedPfd: number; verdict: string; credited: boolean; creditedIfAccepted: boolean }[];
+    sif?: { function?: string; requiredPfd: number; requiredRrf: number; sil: number };
+  }[];
+  findings: { key: string; scenario?: string; element?: string; severity: string }[];
+}
+
+/** The CLI's JSON report for a file, plus the analysis in this process for what the report does not carry. */
+export function truthFor(file: string): DemoTruth {
+  const run = spawnSync(process.execPath, [BIN, 'report', file, '--format', 'json'], { cwd: ROOT, encoding: 'utf8' });
+  // Exit 1 only says unaccepted findings exist (--fail-on defaults to voids-credit); the JSON is complete.
+  if (run.status !== 0 && run.status !== 1) throw new Error(`bulkhead report failed (${run.status}): ${run.stderr}`);
+  const report = JSON.parse(run.stdout) as CliReport;
+  const loaded = loadModelText(file, readFileSync(file));
+  if (!loaded.model) throw new Error(`${file} does not load`);
+  return { model: loaded.model, analysis: analyze(loaded.model, { spans: loaded.spans }), report };
+}
+
+/**
+ * A figure as shown (three significant figures, "2.5e-5" or "0.005") read back and compared with the
+ * exact value: equal within the rounding of three significant figures.
+ */
+export function sameFigure(shown: string, exact: number): boolean {
+  const value = Number(shown.trim());
+  if (!Number.isFinite(value)) return false;
+  if (exact === 0) return value === 0;
+  return Math.abs(value - exact) / Math.abs(exact) <= 0.005;
+}
