@@ -3,9 +3,9 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { loadModelText } from '@bulkhead/core';
-import { DEMO, launch, screenshot, startView, tempDir, watchPage, type ViewProcess } from './harness.ts';
+import { DEMO, GRAPH_BOX, openViewer, screenshot, type Session, tempDir } from './harness.ts';
 
 const BAD = [
   'site "Bad site"',
@@ -21,23 +21,17 @@ describe('a model with errors', () => {
   const dir = tempDir('bulkhead-bad-');
   const file = join(dir, 'bad.bulk');
   const expected = loadModelText('bad.bulk', BAD).diagnostics.filter((d) => d.severity === 'error');
-  let view: ViewProcess;
-  let context: BrowserContext;
+  let session: Session;
   let page: Page;
-  let seen: ReturnType<typeof watchPage>;
 
   beforeAll(async () => {
     writeFileSync(file, BAD);
-    view = await startView(file);
-    context = await launch();
-    page = await context.newPage();
-    seen = watchPage(page);
-    await page.goto(view.url);
+    session = await openViewer(file);
+    page = session.page;
   });
 
   afterAll(async () => {
-    await context?.close();
-    view?.stop();
+    await session?.close();
   });
 
   it('is a model the loader rejects (the test needs errors to show)', () => {
@@ -66,8 +60,8 @@ describe('a model with errors', () => {
     expect(await page.innerText('[data-testid=diagnostics]')).toContain('N-405');
     await page.setInputFiles('[data-testid=open]', DEMO);
     await page.waitForSelector('[data-testid=diagnostics]', { state: 'detached' });
-    await page.waitForSelector('svg[data-testid=graph] g.box');
+    await page.waitForSelector(GRAPH_BOX);
     expect(await page.innerText('[data-testid=live]')).toBe('opened from disk');
-    expect(seen.errors).toEqual([]);
+    expect(session.seen.errors).toEqual([]);
   });
 });

@@ -1,26 +1,20 @@
 // Canary for the browser tier: fails if the page did not load, if Svelte effects do not run in the
 // browser, or if the layout worker does not run (no boxes are ever drawn without it).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import { DEMO, launch, startView, watchPage, type ViewProcess } from './harness.ts';
+import type { Page } from 'playwright-core';
+import { DEMO, GRAPH_BOX, openViewer, type Session } from './harness.ts';
 
 describe('browser canary', () => {
-  let view: ViewProcess;
-  let context: BrowserContext;
+  let session: Session;
   let page: Page;
-  let seen: ReturnType<typeof watchPage>;
 
   beforeAll(async () => {
-    view = await startView(DEMO);
-    context = await launch();
-    page = await context.newPage();
-    seen = watchPage(page);
-    await page.goto(view.url);
+    session = await openViewer(DEMO);
+    page = session.page;
   });
 
   afterAll(async () => {
-    await context?.close();
-    view?.stop();
+    await session?.close();
   });
 
   it('loads the page with its title', async () => {
@@ -34,13 +28,13 @@ describe('browser canary', () => {
 
   it('runs the layout worker and draws what it returns', async () => {
     await page.waitForSelector('.app[data-worker=ready]', { timeout: 10_000 });
-    await page.waitForSelector('svg[data-testid=graph] g.box', { timeout: 20_000 });
+    await page.waitForSelector(GRAPH_BOX);
     const ms = Number(await page.textContent('[data-testid=layout-ms]'));
     expect(ms).toBeGreaterThanOrEqual(0);
-    expect(await page.locator('svg[data-testid=graph] g.box').count()).toBeGreaterThan(5);
+    expect(await page.locator(GRAPH_BOX).count()).toBeGreaterThan(5);
   });
 
   it('has thrown no error on the way', () => {
-    expect(seen.errors).toEqual([]);
+    expect(session.seen.errors).toEqual([]);
   });
 });

@@ -4,29 +4,22 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import { copyTo, DEMO, launch, ROOT, sameFigure, screenshot, startView, truthFor, watchPage, type DemoTruth, type ViewProcess } from './harness.ts';
+import type { Page } from 'playwright-core';
+import { copyTo, DEMO, type DemoTruth, GRAPH_BOX, openViewer, ROOT, sameFigure, screenshot, type Session, truthFor } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 
 describe('the demo in the viewer', () => {
-  let view: ViewProcess;
-  let context: BrowserContext;
+  let session: Session;
   let page: Page;
-  let seen: ReturnType<typeof watchPage>;
 
   beforeAll(async () => {
-    view = await startView(DEMO);
-    context = await launch();
-    page = await context.newPage();
-    seen = watchPage(page);
-    await page.goto(view.url);
-    await page.waitForSelector('svg[data-testid=graph] g.box', { timeout: 20_000 });
+    session = await openViewer(DEMO, GRAPH_BOX);
+    page = session.page;
   });
 
   afterAll(async () => {
-    await context?.close();
-    view?.stop();
+    await session?.close();
   });
 
   async function focus(id: string): Promise<void> {
@@ -170,7 +163,7 @@ describe('the demo in the viewer', () => {
   it('shows the site overview by unit and solver', async () => {
     await page.click('[data-testid=overview]');
     await page.waitForSelector('svg[data-testid=graph][data-scenario=overview]');
-    const tags = await page.locator('svg[data-testid=graph] g.box').evaluateAll((els) => els.map((e) => e.getAttribute('data-tag')).sort());
+    const tags = await page.locator(GRAPH_BOX).evaluateAll((els) => els.map((e) => e.getAttribute('data-tag')).sort());
     expect(tags).toEqual(['BPCS-C1', 'BPCS-C2', 'C-201', 'R-301', 'SIS-1', 'V-101']);
     await screenshot(page, 'demo-overview');
   });
@@ -184,7 +177,7 @@ describe('the demo in the viewer', () => {
     await page.mouse.move(0, 0);
     const shot = await screenshot(page, 'viewer');
     copyTo(shot, join(ROOT, 'docs/viewer.png'));
-    expect(seen.errors).toEqual([]);
-    expect(seen.dialogs).toEqual([]);
+    expect(session.seen.errors).toEqual([]);
+    expect(session.seen.dialogs).toEqual([]);
   });
 });

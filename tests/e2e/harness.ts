@@ -139,3 +139,33 @@ export function sameFigure(shown: string, exact: number): boolean {
   if (exact === 0) return value === 0;
   return Math.abs(value - exact) / Math.abs(exact) <= 0.005;
 }
+
+export interface Session {
+  view: ViewProcess;
+  context: BrowserContext;
+  page: Page;
+  seen: ReturnType<typeof watchPage>;
+  close: () => Promise<void>;
+}
+
+/** `bulkhead view FILE`, a browser, and a page opened on it (waiting for `waitFor` when given). */
+export async function openViewer(file: string, waitFor?: string): Promise<Session> {
+  const view = await startView(file);
+  const context = await launch();
+  const page = await context.newPage();
+  const seen = watchPage(page);
+  await page.goto(view.url);
+  if (waitFor) await page.waitForSelector(waitFor, { timeout: 20_000 });
+  return {
+    view,
+    context,
+    page,
+    seen,
+    close: async () => {
+      await context.close();
+      view.stop();
+    },
+  };
+}
+
+export const GRAPH_BOX = 'svg[data-testid=graph] g.box';

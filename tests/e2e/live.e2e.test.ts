@@ -3,31 +3,24 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
-import { DEMO, launch, screenshot, startView, tempDir, watchPage, type ViewProcess } from './harness.ts';
+import type { Page } from 'playwright-core';
+import { DEMO, GRAPH_BOX, openViewer, screenshot, type Session, tempDir } from './harness.ts';
 
 describe('live reload from bulkhead view', () => {
   const file = join(tempDir('bulkhead-live-'), 'marrow-fen.bulk');
   const original = readFileSync(DEMO, 'utf8');
-  let view: ViewProcess;
-  let context: BrowserContext;
+  let session: Session;
   let page: Page;
-  let seen: ReturnType<typeof watchPage>;
 
   beforeAll(async () => {
     writeFileSync(file, original);
-    view = await startView(file);
-    context = await launch();
-    page = await context.newPage();
-    seen = watchPage(page);
-    await page.goto(view.url);
-    await page.waitForSelector('svg[data-testid=graph] g.box');
+    session = await openViewer(file, GRAPH_BOX);
+    page = session.page;
     await page.waitForSelector('[data-testid=live]:has-text("live")');
   });
 
   afterAll(async () => {
-    await context?.close();
-    view?.stop();
+    await session?.close();
   });
 
   it('shows a saved change within a second', async () => {
@@ -64,6 +57,6 @@ describe('live reload from bulkhead view', () => {
     writeFileSync(file, original);
     await page.waitForSelector('[data-testid=diagnostics]', { state: 'detached', timeout: 5_000 });
     await page.waitForSelector('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")');
-    expect(seen.errors).toEqual([]);
+    expect(session.seen.errors).toEqual([]);
   });
 });

@@ -3,19 +3,17 @@
 import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { loadModelText } from '@bulkhead/core';
-import { DEMO, launch, screenshot, startView, tempDir, watchPage, type ViewProcess } from './harness.ts';
+import { DEMO, GRAPH_BOX, openViewer, screenshot, type Session, tempDir } from './harness.ts';
 
 const PAYLOAD = '<img src=x onerror=alert(1)>';
 const SVG_PAYLOAD = '<svg onload=alert(2)>';
 
 describe('markup in a model', () => {
   const file = join(tempDir('bulkhead-markup-'), 'markup.bulk');
-  let view: ViewProcess;
-  let context: BrowserContext;
+  let session: Session;
   let page: Page;
-  let seen: ReturnType<typeof watchPage>;
 
   beforeAll(async () => {
     // Tags cannot hold `<` (the loader allows letters, digits and _ . - / + :), so the payload goes in
@@ -26,17 +24,12 @@ describe('markup in a model', () => {
       .replace('title="V-101 high-high level closes XV-101"', `title="${SVG_PAYLOAD}"`)
       .replace('title="V-101 overfills and solvent reaches the vent stack"', `title="${PAYLOAD}"`);
     writeFileSync(file, text);
-    view = await startView(file);
-    context = await launch();
-    page = await context.newPage();
-    seen = watchPage(page);
-    await page.goto(view.url);
-    await page.waitForSelector('svg[data-testid=graph] g.box');
+    session = await openViewer(file, GRAPH_BOX);
+    page = session.page;
   });
 
   afterAll(async () => {
-    await context?.close();
-    view?.stop();
+    await session?.close();
   });
 
   it('is a model that loads, with the payload in its titles', () => {
@@ -65,7 +58,7 @@ describe('markup in a model', () => {
 
   it('ran no script: no dialog opened and no error was thrown', async () => {
     await page.waitForTimeout(300);
-    expect(seen.dialogs).toEqual([]);
-    expect(seen.errors).toEqual([]);
+    expect(session.seen.dialogs).toEqual([]);
+    expect(session.seen.errors).toEqual([]);
   });
 });
