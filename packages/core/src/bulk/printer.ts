@@ -38,15 +38,28 @@ function commentLines(item: Item, indent: string): string[] {
   return comments.map((c) => `${indent}#${c}`);
 }
 
+/** The attributes a statement prints, in schema order, with their keys: worked out once per kind. */
+const attributeLists = new WeakMap<StatementSpec, { name: string; key: string }[]>();
+
+function attributesOf(spec: StatementSpec): { name: string; key: string }[] {
+  let list = attributeLists.get(spec);
+  if (!list) {
+    list = [...fieldsOf(spec.schema)]
+      .filter(([name, field]) => !(name === spec.positional || name === 'kind' || name === '$schema' || COMMENT_FIELDS.has(name) || field.type === 'literal' || field.type === 'nested'))
+      .map(([name]) => ({ name, key: kebab(name) }));
+    attributeLists.set(spec, list);
+  }
+  return list;
+}
+
 function printLine(keyword: string, spec: StatementSpec, item: Item, indent: string): string[] {
   const parts = [keyword];
   if (spec.positional && item[spec.positional] !== undefined) parts.push(printValue(spec.positional, item[spec.positional]));
-  for (const [name, field] of fieldsOf(spec.schema)) {
-    if (name === spec.positional || name === 'kind' || COMMENT_FIELDS.has(name) || field.type === 'literal' || field.type === 'nested') continue;
+  for (const { name, key } of attributesOf(spec)) {
     const value = item[name];
-    if (value === undefined || name === '$schema') continue;
+    if (value === undefined) continue;
     const printed = Array.isArray(value) ? value.map((v) => printValue(name, v)).join(',') : printValue(name, value);
-    parts.push(`${kebab(name)}=${printed}`);
+    parts.push(`${key}=${printed}`);
   }
   const trailing = item.trailingComment === undefined ? '' : ` #${String(item.trailingComment)}`;
   return [...commentLines(item, indent), `${indent}${parts.join(' ')}${trailing}`];

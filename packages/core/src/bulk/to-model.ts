@@ -41,6 +41,30 @@ function joinSpans(first: Token, last: Token): Span {
   return { line: first.line, column: first.column, length: last.column + last.length - first.column };
 }
 
+interface StatementLayout {
+  fields: Map<string, FieldType>;
+  /** The attributes a statement takes, by their kebab-case key. */
+  allowedKeys: Map<string, { name: string; f: FieldType }>;
+}
+
+/** Worked out once per statement kind, not once per statement: a large site has 100k of them. */
+const layouts = new WeakMap<StatementSpec, StatementLayout>();
+
+function layoutOf(spec: StatementSpec): StatementLayout {
+  let layout = layouts.get(spec);
+  if (!layout) {
+    const fields = fieldsOf(spec.schema);
+    // `kind` is the statement's keyword, never an attribute: `vessel V-1 kind=pump` must not make a pump.
+    const allowed = [...fields.entries()].filter(
+      ([name, f]) =>
+        name !== spec.positional && name !== 'kind' && !COMMENT_FIELDS.has(name) && f.type !== 'literal' && f.type !== 'nested' && name !== '$schema',
+    );
+    layout = { fields, allowedKeys: new Map(allowed.map(([name, f]) => [kebab(name), { name, f }])) };
+    layouts.set(spec, layout);
+  }
+  return layout;
+}
+
 class StatementReader {
   constructor(
     private readonly diagnostics: Diagnostic[],
@@ -66,7 +90,7 @@ class StatementReader {
 
   /** Reads one statement into `target`, recording spans under `path`. */
   read(statement: Statement, spec: StatementSpec, path: string, target: Raw): void {
-    const fields = fieldsOf(spec.schema);
+    const { fields, allowedKeys } = layoutOf(spec);
     this.spans.set(path, tokenSpan(statement.name ?? statement.keyword));
     if (statement.incomplete) this.incompletePaths.add(path);
     if (statement.comments.length) target.comments = statement.comments;
@@ -81,12 +105,6 @@ class StatementReader {
         this.spans.set(`${path}.${spec.positional}`, tokenSpan(statement.name));
       }
     }
-    // `kind` is the statement's keyword, never an attribute: `vessel V-1 kind=pump` must not make a pump.
-    const allowed = [...fields.entries()].filter(
-      ([name, f]) =>
-        name !== spec.positional && name !== 'kind' && !COMMENT_FIELDS.has(name) && f.type !== 'literal' && f.type !== 'nested' && name !== '$schema',
-    );
-    const allowedKeys = new Map(allowed.map(([name, f]) => [kebab(name), { name, f }]));
     const seen = new Map<string, Token>();
     for (const attribute of statement.attributes) {
       const key = attribute.key.value;

@@ -58,8 +58,7 @@ function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, dia
   spans.set(path, index.span(node.offset, node.type === 'object' || node.type === 'array' ? 1 : node.length));
   switch (node.type) {
     case 'object': {
-      // A null-prototype object keeps `__proto__` and `constructor` as plain keys the schema rejects.
-      const out: Record<string, unknown> = Object.create(null);
+      const out: Record<string, unknown> = {};
       for (const property of node.children ?? []) {
         const [keyNode, valueNode] = property.children ?? [];
         if (!keyNode || !valueNode) continue;
@@ -76,7 +75,11 @@ function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, dia
           continue;
         }
         spans.set(`${childPath}#key`, keySpan);
-        Object.defineProperty(out, key, { value: toValue(valueNode, childPath, spans, index, diagnostics), enumerable: true, writable: true, configurable: true });
+        const value = toValue(valueNode, childPath, spans, index, diagnostics);
+        // A plain assignment to `__proto__` would set the prototype; define it as an own key instead,
+        // so the schema sees it and rejects it. `constructor` and the like are ordinary own keys.
+        if (key === '__proto__') Object.defineProperty(out, key, { value, enumerable: true, writable: true, configurable: true });
+        else out[key] = value;
       }
       return out;
     }

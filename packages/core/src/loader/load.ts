@@ -108,7 +108,7 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
   const text = typeof bytes === 'string' ? bytes : decode(bytes, diagnostics);
   const source: SourceText = { file, lines: text === undefined ? [] : splitLines(text) };
   const format = detectFormat(file, text ?? '');
-  const spans: SpanMap = new Map();
+  let spans: SpanMap = new Map();
   const done = (model?: Model): LoadResult => ({
     ...(model && !hasErrors(diagnostics) ? { model } : {}),
     format,
@@ -135,7 +135,7 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     const read = readJson(text, diagnostics);
     if (!read) return done();
     raw = read.raw;
-    for (const [k, v] of read.spans) spans.set(k, v);
+    spans = read.spans;
   } else {
     const parsed = parseBulk(text, diagnostics);
     const built = statementsToRaw(parsed, diagnostics);
@@ -143,7 +143,7 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     reportedPaths = built.reportedPaths;
     incompletePaths = built.incompletePaths;
     for (const tag of built.unknownNames) brokenTags.add(tag);
-    for (const [k, v] of built.spans) spans.set(k, v);
+    spans = built.spans;
   }
   const name: FieldNamer = format === 'bulk' ? kebab : (f) => f;
   const parsed = Model.safeParse(raw, { reportInput: true });

@@ -4,7 +4,7 @@ import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts'
 import { ELEMENT_GROUPS, groupOf, LINK_FIELDS, LINK_TARGETS, SUPPORT_LINK_KINDS, type ElementGroup } from '../model/kinds.ts';
 import { TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction } from '../model/schema.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
-import { didYouMean } from '../util/suggest.ts';
+import { didYouMean, Suggester } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
 import { spanAt } from './schema-issues.ts';
 import { findCycles } from './cycles.ts';
@@ -37,6 +37,10 @@ type Kindish = { kind: 'element'; element: Element } | { kind: 'function'; fn: P
 class Validator {
   readonly diagnostics: Diagnostic[] = [];
   private readonly byTag = new Map<string, Kindish>();
+  /** Built on the first unknown reference, once every tag is known. */
+  private tagSuggester: Suggester | undefined;
+  private categoryIds: Set<string> | undefined;
+  private categorySuggester: Suggester | undefined;
 
   constructor(private readonly input: ValidationInput) {}
 
@@ -104,7 +108,7 @@ class Validator {
   private unknown(tag: string, path: string, field: string): void {
     if (this.input.brokenTags.has(tag)) return;
     this.push('BH300', `unknown tag \`${tag}\` in \`${this.input.name(field)}\``, path, {
-      help: didYouMean(tag, this.byTag.keys()) ?? 'define it as an element or function, or check the spelling',
+      help: (this.tagSuggester ??= new Suggester(this.byTag.keys())).didYouMean(tag) ?? 'define it as an element or function, or check the spelling',
     });
   }
 
@@ -259,9 +263,10 @@ class Validator {
     const { model, name } = this.input;
     const scenario = model.scenarios[i]!;
     const at = (...rest: (string | number)[]) => this.path('scenarios', i, ...rest);
-    if (!model.categories.some((c) => c.id === scenario.category) && !this.input.brokenCategories.has(scenario.category)) {
+    this.categoryIds ??= new Set(model.categories.map((c) => c.id));
+    if (!this.categoryIds.has(scenario.category) && !this.input.brokenCategories.has(scenario.category)) {
       this.push('BH311', `unknown consequence category \`${scenario.category}\``, at('category'), {
-        help: didYouMean(scenario.category, model.categories.map((c) => c.id)) ?? 'define it with a `category` statement',
+        help: (this.categorySuggester ??= new Suggester(this.categoryIds)).didYouMean(scenario.category) ?? 'define it with a `category` statement',
       });
     }
     const cause = scenario.cause;

@@ -45,3 +45,26 @@ export function didYouMean(word: string, candidates: Iterable<string>): string |
   const s = suggest(word, candidates);
   return s === undefined ? undefined : `did you mean \`${s}\`?`;
 }
+
+/**
+ * "Did you mean" over a large, fixed set of candidates (every tag of a site), for many misspellings.
+ * Comparing each of 20,000 unknown references with 20,000 tags is 400 million edit distances, so
+ * a work budget caps the total: past it, suggestions stop, the diagnostics themselves do not.
+ */
+export class Suggester {
+  private readonly candidates: readonly string[];
+  private comparisons = 0;
+
+  constructor(
+    candidates: Iterable<string>,
+    private readonly budget = 2_000_000,
+  ) {
+    this.candidates = [...candidates];
+  }
+
+  didYouMean(word: string): string | undefined {
+    if (this.comparisons >= this.budget) return undefined;
+    this.comparisons += this.candidates.length;
+    return didYouMean(word, this.candidates);
+  }
+}
