@@ -1,7 +1,7 @@
 // The `bulkhead` commands of the foundation (check, fmt, convert, schema) run as a user runs them:
 // exit codes (0 clean, 1 fmt --check found changes, 2 bad input or usage), help, and clean pipes.
 import { spawn } from 'node:child_process';
-import { cpSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, cpSync, lstatSync, mkdtempSync, readFileSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -92,6 +92,17 @@ describe('fmt', () => {
     expect(fmt.code).toBe(0);
     expect(readFileSync(file, 'utf8')).toBe('site "Messy" # note\ncategory c tolerable=1e-4 harm=people\n\nvessel V-1 title="Drum"\n');
     expect((await runCli(['fmt', '--check', file])).code).toBe(0);
+  });
+
+  it('rewrites through a symbolic link and keeps the file mode', async () => {
+    const target = temp('target.bulk', 'site "L"\n\ncategory c tolerable=0.0001 harm=people\n');
+    chmodSync(target, 0o640);
+    const link = join(dir, 'link.bulk');
+    symlinkSync(target, link);
+    expect((await runCli(['fmt', link])).code).toBe(0);
+    expect(lstatSync(link).isSymbolicLink()).toBe(true);
+    expect(readFileSync(target, 'utf8')).toBe('site "L"\ncategory c tolerable=1e-4 harm=people\n');
+    expect(statSync(target).mode & 0o777).toBe(0o640);
   });
 
   it('treats CRLF line ends as not canonical', async () => {
