@@ -50,19 +50,37 @@ export function siteOverview(model: Model, analysis: Analysis): Scene {
     return node(tag, e ? groupOf(e.kind as ElementKind) : 'solver', 1, [plural(fns.size, 'function')], solverFindings(tag));
   });
   const notes: string[] = [];
-  const room = Math.max(0, OVERVIEW_NODE_LIMIT - solvers.length);
-  if (units.length > room) {
-    notes.push(`${units.length - room} of ${units.length} process units are not drawn; the ones with the most open findings are. Pick a scenario to see its elements.`);
-    units = [...units].sort((a, b) => (b.findingCount ?? 0) - (a.findingCount ?? 0) || a.id.localeCompare(b.id)).slice(0, room);
+  let shownSolvers = solvers;
+  if (units.length + solvers.length > OVERVIEW_NODE_LIMIT) {
+    // Too many to draw: the units with the most open findings first, each with the solvers it uses,
+    // while they fit. The rest are counted in a note, never silently dropped.
+    const solverOf = new Map<string, string[]>();
+    for (const p of pairs.values()) solverOf.set(p.unit, [...(solverOf.get(p.unit) ?? []), p.solver]);
+    const ranked = [...units].sort((a, b) => (b.findingCount ?? 0) - (a.findingCount ?? 0) || a.id.localeCompare(b.id));
+    const keptUnits: SceneNode[] = [];
+    const keptSolvers = new Set<string>();
+    for (const unit of ranked) {
+      const extra = (solverOf.get(unit.id) ?? []).filter((s) => !keptSolvers.has(s));
+      if (keptUnits.length + keptSolvers.size + 1 + extra.length > OVERVIEW_NODE_LIMIT) break;
+      keptUnits.push(unit);
+      for (const s of extra) keptSolvers.add(s);
+    }
+    notes.push(
+      `${units.length - keptUnits.length} of ${units.length} process units and ${solvers.length - keptSolvers.size} of ${solvers.length} solvers are not drawn; ` +
+        'the units with the most open findings are. Pick a scenario to see its elements.',
+    );
+    units = keptUnits;
+    shownSolvers = solvers.filter((s) => keptSolvers.has(s.id));
   }
   const kept = new Set(units.map((u) => u.id));
+  const keptSolverIds = new Set(shownSolvers.map((s) => s.id));
   const edges: SceneEdge[] = [...pairs.values()]
-    .filter((p) => kept.has(p.unit))
+    .filter((p) => kept.has(p.unit) && keptSolverIds.has(p.solver))
     .map((p) => ({ id: edgeId(p.unit, p.solver), source: p.unit, target: p.solver, link: 'serves' as const, sides: [], onPath: [] }))
     .sort((a, b) => a.id.localeCompare(b.id));
 
   const bySystem = new Map<string, string[]>();
-  for (const s of solvers) {
+  for (const s of shownSolvers) {
     const e = elements.get(s.id);
     const system = e && 'system' in e ? e.system : 'other';
     bySystem.set(system, [...(bySystem.get(system) ?? []), s.id]);
@@ -75,7 +93,7 @@ export function siteOverview(model: Model, analysis: Analysis): Scene {
     view: 'overview',
     title: `${model.site.name}: overview`,
     sides: [],
-    nodes: [...units, ...solvers].sort((a, b) => a.id.localeCompare(b.id)),
+    nodes: [...units, ...shownSolvers].sort((a, b) => a.id.localeCompare(b.id)),
     edges,
     findings: [],
     clusters,

@@ -152,7 +152,8 @@ class SceneBuilder {
     this.functions = new Map(model.functions.map((f) => [f.tag, f]));
   }
 
-  addNode(tag: string, side: number, firstRole?: EdgeRole): void {
+  /** Adds a node, or adds `side` to it; without a side it is drawn but no side relies on it. */
+  addNode(tag: string, side?: number, firstRole?: EdgeRole): void {
     let draft = this.nodes.get(tag);
     if (!draft) {
       const element = this.elements.get(tag);
@@ -163,7 +164,7 @@ class SceneBuilder {
       draft = { node, firstRoles: new Set() };
       this.nodes.set(tag, draft);
     }
-    if (!draft.node.sides.includes(side)) draft.node.sides.push(side);
+    if (side !== undefined && !draft.node.sides.includes(side)) draft.node.sides.push(side);
     if (firstRole) draft.firstRoles.add(firstRole);
   }
 
@@ -305,7 +306,7 @@ export function scenarioScene(model: Model, analysis: Analysis, scenarioId: stri
       for (const s of fp.sides) if (!mark.sides.includes(s)) mark.sides.push(s);
       mark.sides.sort((a, b) => a - b);
       marks.set(tag, mark);
-      builder.addNode(tag, fp.sides[0] ?? 0);
+      builder.addNode(tag);
     }
   }
 

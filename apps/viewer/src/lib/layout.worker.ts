@@ -1,9 +1,11 @@
 // The layout worker: runs elkjs off the main thread. elk.bundled.js installs its own `self.onmessage`
 // when evaluated in a worker, so we assign ours after the import (replacing it), never addEventListener.
 import ELK from 'elkjs/lib/elk.bundled.js';
-import { fromElk, toElk, type Scene } from '@bulkhead/layout';
+import { fromElk, toElk, warmUpScene, type Scene } from '@bulkhead/layout';
 
 const elk = new ELK();
+// Pay ELK's JIT warm-up while the page is still loading the model, not on the first real layout.
+const warm: Promise<unknown> = elk.layout(toElk(warmUpScene())).catch(() => undefined);
 
 type Request = { id: number; scene: Scene } | { id: number; ping: true };
 
@@ -14,6 +16,7 @@ self.onmessage = async (ev: MessageEvent<Request>) => {
     return;
   }
   try {
+    await warm;
     const started = performance.now();
     const laidOut = await elk.layout(toElk(request.scene));
     const drawing = fromElk(request.scene, laidOut);
