@@ -39,12 +39,17 @@ export class PanZoom {
 
   /**
    * The first view of a drawing: all of it when it fits at a readable scale; otherwise a readable
-   * scale centred on `focus` (the shared elements), and Fit shows the whole.
+   * scale centred on `focus` (the shared elements) or else at the top left; Fit shows the whole.
    */
-  open(content: Bounds, focus: Bounds | undefined): void {
+  open(content: Bounds, focus: Bounds | undefined, margin = 24): void {
     this.fit(content);
-    if (this.k >= READABLE_SCALE || !focus) return;
+    if (this.k >= READABLE_SCALE) return;
     this.k = READABLE_SCALE;
+    if (!focus) {
+      this.x = margin - content.x * this.k;
+      this.y = margin - content.y * this.k;
+      return;
+    }
     this.x = this.width / 2 - (focus.x + focus.width / 2) * this.k;
     this.y = this.height / 2 - (focus.y + focus.height / 2) * this.k;
   }
