@@ -46,6 +46,16 @@ describe('what bulkhead view serves', () => {
     expect(page.headers.get('content-security-policy')).toContain("script-src 'self'");
   });
 
+  it('keeps ELK out of the main script: it is loaded by the layout worker only', async () => {
+    const html = await (await fetch(view.url)).text();
+    const main = await (await fetch(new URL(/src="\.?(\/assets\/[^"]+\.js)"/.exec(html)![1]!, view.url))).text();
+    expect(main).not.toContain('org.eclipse.elk');
+    expect(main.length).toBeLessThan(600_000);
+    const worker = /layout\.worker-[A-Za-z0-9_-]+\.js/.exec(main)?.[0];
+    expect(worker).toBeDefined();
+    expect(await (await fetch(new URL(`/assets/${worker}`, view.url))).text()).toContain('org.eclipse.elk');
+  });
+
   it('answers 404 to any other path', async () => {
     for (const path of ['/package.json', '/fixtures/demo/marrow-fen.bulk', '/assets/', '/assets/nothing.js', '/model/x', '/etc/passwd', '/.git/config']) {
       expect((await fetch(new URL(path, view.url))).status, path).toBe(404);

@@ -1,0 +1,119 @@
+// The `bulkhead view` server on its own: what it serves, what it refuses (other paths, `..` and
+// percent-encoded traversal, other hosts, other methods), and the server-sent event on each save.
+import { request } from 'node:http';
+import { mkdirSync, mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { requestPath, startViewServer, type ViewServer } from '../../packages/cli/src/view/server.ts';
+
+function get(port: number, path: string, options: { method?: string; host?: string } = {}): Promise<{ status: number; headers: Record<string, unknown>; body: string }> {
+  return new Promise((resolve, reject) => {
+    const req = request({ host: '127.0.0.1', port, path, method: options.method ?? 'GET', headers: options.host ? { Host: options.host } : {} }, (res) => {
+      let body = '';
+      res.on('data', (b: Buffer) => (body += b.toString()));
+      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body }));
+    });
+    req.on('error', reject);
+    req.end();
+  });
+}
+
+/** Opens /events and resolves with the first `change` event's data. */
+function nextChange(port: number): { ready: Promise<void>; change: Promise<string>; close: () => void } {
+  let close = () => {};
+  let ready!: () => void;
+  const readyP = new Promise<void>((r) => (ready = r));
+  const change = new Promise<string>((resolve, reject) => {
+    const req = request({ host: '127.0.0.1', port, path: '/events' }, (res) => {
+      let buffer = '';
+      res.on('data', (b: Buffer) => {
+        buffer += b.toString();
+        if (buffer.includes('event: hello')) ready();
+        const m = /event: change\ndata: (.*)\n\n/.exec(buffer);
+        if (m) resolve(m[1]!);
+      });
+    });
+    req.on('error', reject);
+    req.end();
+    close = () => req.destroy();
+  });
+  return { ready: readyP, change, close };
+}
+
+describe('requestPath', () => {
+  it.each([
+    ['/', '/'],
+    ['/model?t=1', '/model'],
+    ['/assets/index-abc.js', '/assets/index-abc.js'],
+  ])('should keep %s as %s', (raw, path) => expect(requestPath(raw)).toBe(path));
+
+  it.each(['/../x', '/assets/../index.html', '/./model', '/%2e%2e/x', '/assets%2fx', '/a\\..\\b', '//etc/passwd', 'model', '*'])(
+    'should refuse %s',
+    (raw) => expect(requestPath(raw)).toBeUndefined(),
+  );
+});
+
+describe('startViewServer', () => {
+  const dir = mkdtempSync(join(tmpdir(), 'bulkhead-view-'));
+  const dist = join(dir, 'dist');
+  const model = join(dir, 'plant.bulk');
+  let server: ViewServer;
+
+  beforeAll(async () => {
+    mkdirSync(join(dist, 'assets'), { recursive: true });
+    writeFileSync(join(dist, 'index.html'), '<!doctype html><title>test page</title>');
+    writeFileSync(join(dist, 'assets', 'app-1.js'), 'console.log(1)');
+    writeFileSync(join(dist, 'assets', '.hidden'), 'secret');
+    writeFileSync(join(dir, 'outside.txt'), 'outside the dist');
+    writeFileSync(model, 'site "Test site"\n');
+    server = await startViewServer({ file: model, distDir: dist, port: 0 });
+  });
+
+  afterAll(async () => {
+    await server?.close();
+  });
+
+  it('should listen on 127.0.0.1 only', () => {
+    expect(server.url).toBe(`http://127.0.0.1:${server.port}/`);
+  });
+
+  it('should serve the page, its assets and the model with its file name', async () => {
+    expect((await get(server.port, '/')).body).toContain('test page');
+    const js = await get(server.port, '/assets/app-1.js');
+    expect(js.status).toBe(200);
+    expect(js.headers['content-type']).toBe('text/javascript; charset=utf-8');
+    const m = await get(server.port, '/model');
+    expect(m.body).toBe('site "Test site"\n');
+    expect(m.headers['x-bulkhead-file']).toBe('plant.bulk');
+    expect(m.headers['content-security-policy']).toMatch(/default-src 'none'/);
+  });
+
+  it('should answer 404 to paths it does not serve and to traversal, encoded or not', async () => {
+    for (const path of ['/plant.bulk', '/outside.txt', '/assets/.hidden', '/assets/../outside.txt', '/../outside.txt', '/%2e%2e/outside.txt', '/assets/%2e%2e%2foutside.txt', '/%2e%2e%5coutside.txt', '/index.html/..', '/model/']) {
+      const r = await get(server.port, path);
+      expect(r.status, path).toBe(404);
+      expect(r.body).not.toContain('outside the dist');
+    }
+  });
+
+  it('should refuse another Host header (DNS rebinding) and other methods', async () => {
+    expect((await get(server.port, '/model', { host: 'evil.example' })).status).toBe(403);
+    expect((await get(server.port, '/model', { method: 'POST' })).status).toBe(405);
+    expect((await get(server.port, '/model', { method: 'HEAD' })).status).toBe(200);
+    expect((await get(server.port, '/model', { host: `localhost:${server.port}` })).status).toBe(200);
+  });
+
+  it('should push a change event when the file is saved, and not for a save that changes nothing', async () => {
+    const events = nextChange(server.port);
+    await events.ready;
+    const before = server.revision();
+    writeFileSync(model, 'site "Test site"\n');
+    await new Promise((r) => setTimeout(r, 700));
+    expect(server.revision()).toBe(before);
+    writeFileSync(model, 'site "Renamed site"\n');
+    expect(JSON.parse(await events.change)).toEqual({ revision: before + 1 });
+    expect((await get(server.port, '/model')).body).toBe('site "Renamed site"\n');
+    events.close();
+  });
+});
