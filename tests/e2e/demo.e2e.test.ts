@@ -9,6 +9,18 @@ import { copyTo, DEMO, type DemoTruth, GRAPH_BOX, openViewer, ROOT, sameFigure, 
 
 const truth: DemoTruth = truthFor(DEMO);
 
+describe('sameFigure, the comparison the LOPA checks rest on', () => {
+  it.each([
+    ['2.5e-5', 0.000025, true],
+    ['2.5e-5', 0.000026, false],
+    ['500', 500, true],
+    ['500', 560, false],
+    ['12,000', 12_040, true],
+    ['1.0e-1', 0.2, false],
+    ['no credit', 0.1, false],
+  ])('reads %s as %s: %s', (shown, exact, same) => expect(sameFigure(shown, exact)).toBe(same));
+});
+
 describe('the demo in the viewer', () => {
   let session: Session;
   let page: Page;

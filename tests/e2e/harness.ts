@@ -130,14 +130,18 @@ export function truthFor(file: string): DemoTruth {
 }
 
 /**
- * A figure as shown (three significant figures, "2.5e-5" or "0.005") read back and compared with the
- * exact value: equal within the rounding of three significant figures.
+ * A figure as shown ("2.5e-5", "0.4", "12,000") read back and compared with the exact value from the
+ * JSON report: equal within half a unit of the last digit shown (trailing zeros of a whole number are
+ * not counted as significant).
  */
 export function sameFigure(shown: string, exact: number): boolean {
-  const value = Number(shown.trim());
-  if (!Number.isFinite(value)) return false;
-  if (exact === 0) return value === 0;
-  return Math.abs(value - exact) / Math.abs(exact) <= 0.005;
+  const text = shown.trim().replace(/,/g, '');
+  const value = Number(text);
+  if (!/^-?\d+(\.\d+)?(e-?\d+)?$/.test(text) || !Number.isFinite(value)) return false;
+  const [mantissa, exponent = '0'] = text.split('e');
+  const decimals = mantissa!.includes('.') ? mantissa!.split('.')[1]!.length : -(/0*$/.exec(mantissa!)![0].length);
+  const halfUnit = 0.5 * 10 ** (Number(exponent) - decimals);
+  return Math.abs(value - exact) <= halfUnit * (1 + 1e-9);
 }
 
 export interface Session {

@@ -1,16 +1,19 @@
-// Number and word formatting for the viewer's tables. Three significant figures, exponent form for
-// small frequencies, so a figure on screen can be read back and compared with the JSON report.
+// Number and word formatting for the viewer: the core's number formats (the same figures as `check`
+// and the reports), and the words for verdicts and severities.
+import { formatFrequency, formatRatio, formatScientific } from '@bulkhead/core';
 
+/** Frequencies and probabilities as every Bulkhead output writes them: 2.5e-5, 1.0e-1. */
 export function formatFigure(n: number): string {
-  if (!Number.isFinite(n)) return String(n);
-  if (n === 0) return '0';
-  const abs = Math.abs(n);
-  if (abs < 1e-3 || abs >= 1e6) return n.toExponential(2).replace(/\.?0+e/, 'e');
-  return String(Number(n.toPrecision(3)));
+  return formatScientific(n);
+}
+
+/** Ratios (gap, RRF) in plain digits: 500, 0.4. */
+export function formatTimes(n: number): string {
+  return formatRatio(n);
 }
 
 export function perYear(n: number): string {
-  return `${formatFigure(n)} /yr`;
+  return formatFrequency(n);
 }
 
 export const VERDICT_WORDS: Record<string, string> = {
