@@ -64,4 +64,16 @@ describe('a model with errors', () => {
     expect(await page.innerText('[data-testid=live]')).toBe('opened from disk');
     expect(session.seen.errors).toEqual([]);
   });
+
+  it('opens a model dropped on the page', async () => {
+    const text = BAD.replace('N-404', 'N-406');
+    await page.evaluate((content) => {
+      const data = new DataTransfer();
+      data.items.add(new File([content], 'dropped.bulk', { type: 'text/plain' }));
+      window.dispatchEvent(new DragEvent('dragover', { dataTransfer: data, bubbles: true, cancelable: true }));
+      window.dispatchEvent(new DragEvent('drop', { dataTransfer: data, bubbles: true, cancelable: true }));
+    }, text);
+    await page.waitForSelector('[data-testid=diagnostics] :text("dropped.bulk")');
+    expect(await page.innerText('[data-testid=diagnostics]')).toContain('N-406');
+  });
 });
