@@ -2,8 +2,9 @@
 // pushes every save to the page. Builds nothing at run time: without apps/viewer/dist it says how.
 import { statSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { loadModelText } from '@bulkhead/core';
-import { UsageError } from '../io.ts';
+import { analyze, loadModelText } from '@bulkhead/core';
+import { printDiagnostics, readModel, UsageError } from '../io.ts';
+import { renderCheck } from './check-render.ts';
 import { hasBuiltViewer } from '../view/assets.ts';
 import { startViewServer } from '../view/server.ts';
 
@@ -39,6 +40,10 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
     );
     return 2;
   }
+  // The terminal gets the same analysis as `bulkhead check`, so the URL comes with the verdicts.
+  const initial = readModel(file);
+  if (initial.model) process.stdout.write(renderCheck({ ...initial, model: initial.model }, analyze(initial.model, { spans: initial.spans })) + '\n');
+  else printDiagnostics(initial);
   const start = (port: number, fallback: boolean): void => {
     startViewServer({
       file,
