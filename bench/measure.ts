@@ -1,0 +1,122 @@
+// One benchmark size, run in its own process (node --expose-gc --import tsx) so its peak memory is its
+// own: times load and each analysis stage in analyze()'s order, then analyze() whole, and prints JSON.
+import { readFileSync } from 'node:fs';
+import {
+  analyze, applyJustifications, assessScenario, buildPlantGraph, independenceRulesInForce, loadModelText, resolvedPolicy,
+  runRules, Tracer, type Finding, type Model, type RuleEnvironment,
+} from '@bulkhead/core';
+
+export interface StageTimes {
+  read: number;
+  load: number;
+  /** The same site from its JSON twin. */
+  loadJson: number;
+  graph: number;
+  trace: number;
+  rules: number;
+  assess: number;
+  /** analyze() called as a whole on the loaded model (not the sum of the stages above). */
+  analyze: number;
+}
+
+export interface Measurement {
+  file: string;
+  elements: number;
+  functions: number;
+  scenarios: number;
+  findings: number;
+  /** Median of the runs, milliseconds. */
+  median: StageTimes;
+  runs: number;
+  /** process.resourceUsage().maxRSS, bytes: the high-water mark of the whole child process. */
+  maxRss: number;
+  /** Findings from the stage-by-stage replica, which must equal analyze()'s (a check on the replica). */
+  replicaFindings: number;
+}
+
+const gc = (globalThis as { gc?: () => void }).gc ?? (() => {});
+
+/** The stages of analyze() one by one, each timed; analysis/analyze.ts is the order to follow. */
+function stages(model: Model, times: Partial<StageTimes>): number {
+  let t = performance.now();
+  const lap = (stage: keyof StageTimes) => {
+    const now = performance.now();
+    times[stage] = now - t;
+    t = now;
+  };
+  const graph = buildPlantGraph(model);
+  lap('graph');
+  const tracer = new Tracer(graph);
+  model.functions.map((f) => tracer.traceFunction(f.tag));
+  lap('trace');
+  const independence = independenceRulesInForce(model);
+  const severities = new Map(independence.map((r) => [r.id, r.severity]));
+  const env: RuleEnvironment = {
+    model,
+    tracer,
+    elements: new Map(model.elements.map((e) => [e.tag, e])),
+    functions: new Map(model.functions.map((f) => [f.tag, f])),
+    policy: resolvedPolicy(model),
+    severity: (id) => severities.get(id) ?? 'voids-credit',
+    acceptedKeys: new Set((model.justifications ?? []).map((j) => j.finding)),
+  };
+  const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
+  lap('rules');
+  const independent = applyJustifications(raw, model.justifications).findings;
+  const assessed = model.scenarios.map((scenario) => assessScenario({ model, scenario, findings: independent }));
+  const all = [...independent, ...assessed.flatMap((a) => a.findings)];
+  const { stale } = applyJustifications(all, model.justifications);
+  lap('assess');
+  return all.length + stale.length;
+}
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)]!;
+}
+
+export function measure(file: string, jsonFile: string, runs: number): Measurement {
+  const samples: StageTimes[] = [];
+  let model: Model | undefined;
+  let findings = 0;
+  let replicaFindings = 0;
+  for (let run = 0; run < runs; run++) {
+    const times: Partial<StageTimes> = {};
+    // The JSON twin first, and dropped before the .bulk load, so two models never share the peak.
+    const jsonBytes = readFileSync(jsonFile);
+    gc();
+    let t = performance.now();
+    if (!loadModelText(jsonFile, jsonBytes).model) throw new Error(`${jsonFile} does not load`);
+    times.loadJson = performance.now() - t;
+    gc();
+    t = performance.now();
+    const bytes = readFileSync(file);
+    times.read = performance.now() - t;
+    t = performance.now();
+    const loaded = loadModelText(file, bytes);
+    times.load = performance.now() - t;
+    if (!loaded.model) throw new Error(`${file} does not load: ${loaded.diagnostics.map((d) => `${d.code} ${d.message}`).slice(0, 3).join('; ')}`);
+    model = loaded.model;
+    replicaFindings = stages(model, times);
+    gc();
+    t = performance.now();
+    findings = analyze(model, { spans: loaded.spans }).findings.length;
+    times.analyze = performance.now() - t;
+    samples.push(times as StageTimes);
+  }
+  const keys = Object.keys(samples[0]!) as (keyof StageTimes)[];
+  return {
+    file,
+    elements: model!.elements.length,
+    functions: model!.functions.length,
+    scenarios: model!.scenarios.length,
+    findings,
+    replicaFindings,
+    median: Object.fromEntries(keys.map((k) => [k, median(samples.map((s) => s[k]))])) as unknown as StageTimes,
+    runs,
+    maxRss: process.resourceUsage().maxRSS * 1024,
+  };
+}
+
+const [file, jsonFile, runs] = process.argv.slice(2);
+if (file && jsonFile) process.stdout.write(JSON.stringify(measure(file, jsonFile, Number(runs ?? 3))) + '\n');
