@@ -1,6 +1,6 @@
 // The analysis, one straight line: model -> graph -> traces -> independence findings -> justifications
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
-import { assessRulesInForce, assessScenario, resolvedPolicy } from '../assess/index.ts';
+import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy } from '../assess/index.ts';
 import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { applyJustifications, JUSTIFICATION_RULES } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
@@ -49,7 +49,11 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
   const independent = applyJustifications(raw, model.justifications, options.spans).findings;
   // The assessment's limit findings read their own acceptances; staleness is judged over all findings.
-  const assessed = model.scenarios.map((scenario) => assessScenario({ model, scenario, findings: independent }));
+  // Facts and findings are gathered once for all scenarios: per scenario, the cost would grow with
+  // scenarios times the site.
+  const bpcs = bpcsFactsOf(model);
+  const byScenario = groupByScenario(independent);
+  const assessed = model.scenarios.map((scenario) => assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions }));
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications, options.spans);
   return {
@@ -58,6 +62,12 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
     assessments: assessed.map((a) => a.assessment),
     rules: [...independence, ...assessRulesInForce(model), ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule)],
   };
+}
+
+function groupByScenario(findings: readonly Finding[]): Map<string | undefined, Finding[]> {
+  const groups = new Map<string | undefined, Finding[]>();
+  for (const f of findings) (groups.get(f.scenario) ?? groups.set(f.scenario, []).get(f.scenario)!).push(f);
+  return groups;
 }
 
 function sortByScenario(model: Model, findings: Finding[]): Finding[] {

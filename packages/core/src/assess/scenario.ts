@@ -1,7 +1,7 @@
 // assessScenario: one scenario's LOPA after independence. Applies the PFD and BPCS limits, then the independence
 // findings, then picks the best creditable set, and computes the figures, the gap and the SIF requirement.
 import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
-import type { Model, Scenario } from '../model/schema.ts';
+import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
 import { TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
 import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
@@ -19,6 +19,8 @@ export interface AssessInput {
   findings: readonly Finding[];
   /** Controller and system of each function; read from the model when absent. */
   bpcs?: BpcsFacts;
+  /** The model's functions by tag; built from the model when absent (give it when assessing many scenarios). */
+  functions?: ReadonlyMap<string, PlantFunction>;
   /** How many alternative credit sets to list (default 5). */
   alternatives?: number;
 }
@@ -222,7 +224,7 @@ export function assessScenario(input: AssessInput): AssessOutput {
   const modifiers = assessModifiers(model, scenario, category.harm, mine);
   const enablers = (scenario.enablers ?? []).map((e) => ({ title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}) }));
 
-  const functions = new Map(model.functions.map((f) => [f.tag, f]));
+  const functions = input.functions ?? new Map(model.functions.map((f) => [f.tag, f]));
   const works: LayerWork[] = [];
   for (const claim of scenario.layers ?? []) {
     const fn = functions.get(claim.function);
