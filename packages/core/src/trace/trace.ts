@@ -1,6 +1,7 @@
 // Traces each function to every element it relies on, with the shortest path that explains why each
-// one is there. Element closures are memoised once per element, so cost grows with the site, not with
-// functions times elements.
+// one is there. Element closures, paths and traces are memoised, so cost grows with the site, not with
+// functions times elements, and a function traced again for each scenario that claims it costs nothing.
+// Memoised results are shared: callers must treat them as read-only.
 import type { ChannelTrace, EdgeRole, FunctionTrace, MissingPart, TracedElement } from '../analysis/types.ts';
 import type { PlantGraph } from '../graph/plant-graph.ts';
 import type { ElementGroup } from '../model/kinds.ts';
@@ -9,6 +10,8 @@ const PROCESS_SIDE: ReadonlySet<ElementGroup> = new Set(['connection', 'impulse'
 
 export class Tracer {
   private readonly closures = new Map<string, ReadonlySet<string>>();
+  private readonly pathsFrom = new Map<string, TracedElement[]>();
+  private readonly traces = new Map<string, FunctionTrace>();
 
   constructor(readonly graph: PlantGraph) {}
 
@@ -45,6 +48,8 @@ export class Tracer {
 
   /** Breadth-first from `start` (a function or an element), keeping the first path to each element. */
   paths(start: string): TracedElement[] {
+    const known = this.pathsFrom.get(start);
+    if (known) return known;
     const parent = new Map<string, { from: string; role: EdgeRole }>();
     const queue = [start];
     const seen = new Set([start]);
@@ -70,10 +75,14 @@ export class Tracer {
       }
       out.push({ tag, kind: a.kind, group: a.group, path, links });
     }
-    return out.sort((x, y) => (x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : 0));
+    out.sort((x, y) => (x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : 0));
+    this.pathsFrom.set(start, out);
+    return out;
   }
 
   traceFunction(tag: string): FunctionTrace {
+    const known = this.traces.get(tag);
+    if (known) return known;
     const a = this.graph.getNodeAttributes(tag);
     if (a.type !== 'function') throw new Error(`${tag} is not a function`);
     const channels: ChannelTrace[] = [];
@@ -97,6 +106,8 @@ export class Tracer {
       if (!solver) missing.push('solver');
       if (finals.length === 0) missing.push('final-element');
     }
-    return { function: tag, kind: a.kind, elements: this.paths(tag), channels, missing };
+    const trace: FunctionTrace = { function: tag, kind: a.kind, elements: this.paths(tag), channels, missing };
+    this.traces.set(tag, trace);
+    return trace;
   }
 }
