@@ -33,6 +33,8 @@ export interface ValidationInput {
 }
 
 type Kindish = { kind: 'element'; element: Element } | { kind: 'function'; fn: PlantFunction };
+/** A path, or how to make it: the hot loops pass a function, so a path string is built only for a diagnostic. */
+type PathRef = string | (() => string);
 
 class Validator {
   readonly diagnostics: Diagnostic[] = [];
@@ -44,11 +46,12 @@ class Validator {
 
   constructor(private readonly input: ValidationInput) {}
 
-  private span(path: string): Span | undefined {
+  private span(ref: PathRef): Span | undefined {
+    const path = typeof ref === 'string' ? ref : ref();
     return spanAt(this.input.spans, path.split('.').map((p) => (/^\d+$/.test(p) ? Number(p) : p)));
   }
 
-  private push(code: Diagnostic['code'], message: string, path: string, extra: Partial<Diagnostic> = {}): void {
+  private push(code: Diagnostic['code'], message: string, path: PathRef, extra: Partial<Diagnostic> = {}): void {
     this.diagnostics.push(error(code, message, this.span(path), extra));
   }
 
@@ -68,7 +71,7 @@ class Validator {
     return this.diagnostics;
   }
 
-  private checkTag(tag: string, path: string, what: string): void {
+  private checkTag(tag: string, path: PathRef, what: string): void {
     if (tag.length > TAG_MAX_LENGTH) {
       this.push('BH312', `${what} is ${tag.length} characters long; the limit is ${TAG_MAX_LENGTH}`, path, {
         help: 'use a short plant tag such as LT-101 and put the description in title="..."',
@@ -82,8 +85,8 @@ class Validator {
 
   private checkTagsAndDuplicates(): void {
     const { model } = this.input;
-    const firstPath = new Map<string, string>();
-    const claim = (tag: string, path: string, entry: Kindish | undefined, what: string) => {
+    const firstPath = new Map<string, PathRef>();
+    const claim = (tag: string, path: PathRef, entry: Kindish | undefined, what: string) => {
       this.checkTag(tag, path, what);
       const earlier = firstPath.get(tag);
       if (earlier !== undefined) {
@@ -97,15 +100,15 @@ class Validator {
       firstPath.set(tag, path);
       if (entry) this.byTag.set(tag, entry);
     };
-    model.elements.forEach((element, i) => claim(element.tag, this.path('elements', i, 'tag'), { kind: 'element', element }, 'tag'));
-    model.functions.forEach((fn, i) => claim(fn.tag, this.path('functions', i, 'tag'), { kind: 'function', fn }, 'tag'));
+    model.elements.forEach((element, i) => claim(element.tag, () => this.path('elements', i, 'tag'), { kind: 'element', element }, 'tag'));
+    model.functions.forEach((fn, i) => claim(fn.tag, () => this.path('functions', i, 'tag'), { kind: 'function', fn }, 'tag'));
     firstPath.clear();
     model.scenarios.forEach((s, i) => claim(s.id, this.path('scenarios', i, 'id'), undefined, 'scenario id'));
     firstPath.clear();
     model.categories.forEach((c, i) => claim(c.id, this.path('categories', i, 'id'), undefined, 'category id'));
   }
 
-  private unknown(tag: string, path: string, field: string): void {
+  private unknown(tag: string, path: PathRef, field: string): void {
     if (this.input.brokenTags.has(tag)) return;
     this.push('BH300', `unknown tag \`${tag}\` in \`${this.input.name(field)}\``, path, {
       help: (this.tagSuggester ??= new Suggester(this.byTag.keys())).didYouMean(tag) ?? 'define it as an element or function, or check the spelling',
@@ -113,7 +116,7 @@ class Validator {
   }
 
   /** Resolves a reference to an element; reports unknown tags and functions named where an element is needed. */
-  private element(tag: string, path: string, field: string): Element | undefined {
+  private element(tag: string, path: PathRef, field: string): Element | undefined {
     const entry = this.byTag.get(tag);
     if (!entry) {
       this.unknown(tag, path, field);
@@ -131,7 +134,7 @@ class Validator {
       const group = groupOf(element.kind);
       for (const link of LINK_FIELDS) {
         (element[link] ?? []).forEach((tag, j) => {
-          const path = this.path('elements', i, link, j);
+          const path = () => this.path('elements', i, link, j);
           const target = this.element(tag, path, link);
           if (!target) return;
           const allowed = LINK_TARGETS[link][group];
@@ -163,7 +166,7 @@ class Validator {
 
   private role(fnIndex: number, field: string, tags: readonly string[], groups: ElementGroup[], kinds?: readonly string[]): void {
     tags.forEach((tag, j) => {
-      const path = this.path('functions', fnIndex, field, ...(tags.length > 1 || field.endsWith('s') ? [j] : []));
+      const path = () => this.path('functions', fnIndex, field, ...(tags.length > 1 || field.endsWith('s') ? [j] : []));
       const element = this.element(tag, path, field);
       if (!element) return;
       if (!groups.includes(groupOf(element.kind)) || (kinds && !kinds.includes(element.kind))) {
@@ -202,14 +205,14 @@ class Validator {
     }
   }
 
-  private probability(value: number | undefined, path: string, what: string): void {
+  private probability(value: number | undefined, path: PathRef, what: string): void {
     if (value === undefined) return;
     if (!(Number.isFinite(value) && value > 0 && value <= 1)) {
       this.push('BH304', `${what} ${value} is outside (0, 1]`, path, { help: 'a probability is above 0 and at most 1' });
     }
   }
 
-  private positive(value: number | undefined, path: string, what: string): void {
+  private positive(value: number | undefined, path: PathRef, what: string): void {
     if (value === undefined) return;
     if (!(Number.isFinite(value) && value > 0)) {
       this.push('BH305', `${what} ${value} must be positive and finite`, path, {
@@ -219,7 +222,7 @@ class Validator {
   }
 
   private checkFunction(fn: PlantFunction, i: number): void {
-    this.probability(fn.pfd, this.path('functions', i, 'pfd'), 'PFD');
+    this.probability(fn.pfd, () => this.path('functions', i, 'pfd'), 'PFD');
     switch (fn.kind) {
       case 'loop':
         this.role(i, 'sensors', fn.sensors, ['sensor']);
