@@ -24,7 +24,10 @@ export interface LexedLine {
   truncated?: boolean;
 }
 
-const WORD_CHAR = /[A-Za-z0-9_.\-/+:]/;
+/** The characters of a word (A-Z a-z 0-9 _ . - / + :), by UTF-16 code unit: a table, as every character of a file passes here. */
+const WORD_CHAR = new Uint8Array(128);
+for (const c of 'ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz0123456789_.-/+:') WORD_CHAR[c.charCodeAt(0)] = 1;
+const isWordChar = (code: number) => code < 128 && WORD_CHAR[code] === 1;
 const ESCAPES: Record<string, string> = { '"': '"', '\\': '\\', n: '\n', r: '\r', t: '\t' };
 /** `\u{1F600}`: any code point by its hex value, for characters a file cannot show plainly. */
 const CODE_POINT_ESCAPE = /^u\{([0-9A-Fa-f]{1,6})\}/;
@@ -57,30 +60,33 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
           closed = true;
           break;
         }
-        if (c === '\\') {
-          const next = text[j + 1];
-          const codePoint = CODE_POINT_ESCAPE.exec(text.slice(j + 1, j + 11));
-          if (codePoint && Number.parseInt(codePoint[1]!, 16) <= 0x10ffff) {
-            value += String.fromCodePoint(Number.parseInt(codePoint[1]!, 16));
-            j += 1 + codePoint[0].length;
-            continue;
-          }
-          const escaped = next === undefined ? undefined : ESCAPES[next];
-          if (escaped === undefined) {
-            diagnostics.push(
-              error('BH110', `unknown escape \`\\${next ?? ''}\` in string`, { line, column: j + 1, length: 2 }, {
-                help: 'inside quotes write \\" for a quote, \\\\ for a backslash, \\n for a new line, \\t for a tab, \\u{e9} for any character by its code',
-              }),
-            );
-            j += 2;
-            continue;
-          }
-          value += escaped;
+        if (c !== '\\') {
+          // Plain text up to the next quote or backslash, in one slice.
+          let end = j + 1;
+          while (end < text.length && text[end] !== '"' && text[end] !== '\\') end++;
+          value += text.slice(j, end);
+          j = end;
+          continue;
+        }
+        const next = text[j + 1];
+        const codePoint = CODE_POINT_ESCAPE.exec(text.slice(j + 1, j + 11));
+        if (codePoint && Number.parseInt(codePoint[1]!, 16) <= 0x10ffff) {
+          value += String.fromCodePoint(Number.parseInt(codePoint[1]!, 16));
+          j += 1 + codePoint[0].length;
+          continue;
+        }
+        const escaped = next === undefined ? undefined : ESCAPES[next];
+        if (escaped === undefined) {
+          diagnostics.push(
+            error('BH110', `unknown escape \`\\${next ?? ''}\` in string`, { line, column: j + 1, length: 2 }, {
+              help: 'inside quotes write \\" for a quote, \\\\ for a backslash, \\n for a new line, \\t for a tab, \\u{e9} for any character by its code',
+            }),
+          );
           j += 2;
           continue;
         }
-        value += c;
-        j++;
+        value += escaped;
+        j += 2;
       }
       if (!closed) {
         diagnostics.push(
@@ -94,9 +100,9 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
       }
       tokens.push({ type: 'string', value, line, column, length: j + 1 - i });
       i = j + 1;
-    } else if (WORD_CHAR.test(ch)) {
+    } else if (isWordChar(text.charCodeAt(i))) {
       let j = i;
-      while (j < text.length && WORD_CHAR.test(text[j]!)) j++;
+      while (j < text.length && isWordChar(text.charCodeAt(j))) j++;
       tokens.push({ type: 'word', value: text.slice(i, j), line, column, length: j - i });
       i = j;
     } else {
