@@ -1,5 +1,6 @@
 // Where the time goes: loads a model and analyses it under the V8 sampling profiler, then prints the
-// functions with the most self time and the most inclusive time. `npx tsx bench/profile.ts FILE [TOP]`.
+// functions with the most self time and the most inclusive time. `npx tsx bench/profile.ts FILE [TOP]`;
+// given a .cpuprofile (from `node --cpu-prof`, e.g. of the real CLI) it summarises that instead.
 import { readFileSync, writeFileSync } from 'node:fs';
 import { Session, type Profiler } from 'node:inspector';
 import { analyze, loadModelText } from '@bulkhead/core';
@@ -44,28 +45,33 @@ function summarise(profile: Profiler.Profile): Row[] {
 }
 
 const [file, topArg, out] = process.argv.slice(2);
-if (!file) throw new Error('usage: npx tsx bench/profile.ts FILE [TOP] [OUT.cpuprofile]');
+if (!file) throw new Error('usage: npx tsx bench/profile.ts FILE|PROFILE.cpuprofile [TOP] [OUT.cpuprofile]');
 const top = Number(topArg ?? 25);
-const session = new Session();
-session.connect();
-await post(session, 'Profiler.enable');
-await post(session, 'Profiler.setSamplingInterval', { interval: 200 });
-await post(session, 'Profiler.start');
-const t0 = performance.now();
-const loaded = loadModelText(file, readFileSync(file));
-const t1 = performance.now();
-if (!loaded.model) throw new Error(`${file} does not load`);
-analyze(loaded.model, { spans: loaded.spans });
-const t2 = performance.now();
-const { profile } = await post<{ profile: Profiler.Profile }>(session, 'Profiler.stop');
-if (out) writeFileSync(out, JSON.stringify(profile));
-const rows = summarise(profile);
-const show = (title: string, key: 'self' | 'total') => {
+const show = (rows: Row[], title: string, key: 'self' | 'total') => {
   process.stdout.write(`\n${title}\n`);
   for (const r of [...rows].sort((a, b) => b[key] - a[key]).slice(0, top)) {
     process.stdout.write(`${r[key].toFixed(0).padStart(8)} ms  ${r.name}\n`);
   }
 };
-process.stdout.write(`load ${(t1 - t0).toFixed(0)} ms, analyze ${(t2 - t1).toFixed(0)} ms (under the profiler)\n`);
-show('self time', 'self');
-show('inclusive time', 'total');
+let profile: Profiler.Profile;
+if (file.endsWith('.cpuprofile')) {
+  profile = JSON.parse(readFileSync(file, 'utf8')) as Profiler.Profile;
+} else {
+  const session = new Session();
+  session.connect();
+  await post(session, 'Profiler.enable');
+  await post(session, 'Profiler.setSamplingInterval', { interval: 200 });
+  await post(session, 'Profiler.start');
+  const t0 = performance.now();
+  const loaded = loadModelText(file, readFileSync(file));
+  const t1 = performance.now();
+  if (!loaded.model) throw new Error(`${file} does not load`);
+  analyze(loaded.model, { spans: loaded.spans });
+  const t2 = performance.now();
+  profile = (await post<{ profile: Profiler.Profile }>(session, 'Profiler.stop')).profile;
+  if (out) writeFileSync(out, JSON.stringify(profile));
+  process.stdout.write(`load ${(t1 - t0).toFixed(0)} ms, analyze ${(t2 - t1).toFixed(0)} ms (under the profiler)\n`);
+}
+const rows = summarise(profile);
+show(rows, 'self time', 'self');
+show(rows, 'inclusive time', 'total');
