@@ -7,7 +7,7 @@ import { sameMakeModel } from './catalogue/same-make-model.ts';
 import { sharedBridle, sharedImpulseLine, sharedProcessConnection } from './catalogue/shared-process.ts';
 import { sharedActuation, sharedFinalElement, sharedIo, sharedLogicSolver, sharedSensor } from './catalogue/shared-instrument.ts';
 import { sharedHousing } from './catalogue/shared-housing.ts';
-import { alarmOnFailedBpcs, sharedConsole, sharedElement, sharedOperator } from './catalogue/shared-people.ts';
+import { alarmOnFailedBpcs, sharedConsole, sharedOperator } from './catalogue/shared-people.ts';
 import { sharedSupport, utilityLossCause } from './catalogue/shared-support.ts';
 import { votedGroupCommonCause } from './catalogue/voted-group.ts';
 
@@ -26,7 +26,6 @@ export const RULES: readonly Rule[] = [
   sharedHousing,
   sharedOperator,
   sharedConsole,
-  sharedElement,
   sameMakeModel,
   votedGroupCommonCause,
   incompleteTrace,

@@ -37,13 +37,3 @@ export const sharedConsole = defineSharedRule({
   claims: (element) => element.kind === 'console',
   message: sharedMessage('console'),
 });
-
-export const sharedElement = defineSharedRule({
-  id: 'shared-element',
-  title: 'Other shared element',
-  rationale: 'Any element both sides rely on that no more specific rule covers is treated as a common cause until someone shows otherwise.',
-  source: 'CCPS, Layer of Protection Analysis (2001), ch. 6 (independence); conservative default of this tool',
-  defaultSeverity: 'voids-credit',
-  groups: ['connection', 'impulse', 'sensor', 'signal', 'housing', 'solver', 'final', 'actuation', 'support', 'mechanical', 'people'],
-  message: sharedMessage('element'),
-});

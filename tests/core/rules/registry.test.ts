@@ -1,0 +1,41 @@
+// The rule set as a whole: every rule has a case table, the base test site is clean, and every kind of
+// element two sides can share is claimed by some rule, so no shared element goes unreported.
+import { readdirSync } from 'node:fs';
+import { describe, expect, it } from 'vitest';
+import { ELEMENT_GROUPS, RULES, type Element, type SharedElementRule } from '@bulkhead/core';
+import { analyseCase } from './cases.ts';
+
+describe('the independence rule set', () => {
+  it('has a case table file for every rule', () => {
+    const files = new Set(readdirSync(new URL('.', import.meta.url)));
+    for (const rule of RULES) expect(files, `tests/core/rules/${rule.id}.test.ts`).toContain(`${rule.id}.test.ts`);
+  });
+
+  it('has unique, kebab-case ids, each with a title, a rationale and a source', () => {
+    const ids = RULES.map((r) => r.id);
+    expect(new Set(ids).size).toBe(ids.length);
+    for (const r of RULES) {
+      expect(r.id).toMatch(/^[a-z]+(-[a-z0-9]+)*$/);
+      expect(r.title.length).toBeGreaterThan(5);
+      expect(r.rationale.length).toBeGreaterThan(20);
+      expect(r.source.length).toBeGreaterThan(5);
+    }
+  });
+
+  it('finds nothing at all in the base site, whose cause and layer share no element', () => {
+    expect(analyseCase({ name: 'base' })).toEqual([]);
+  });
+
+  it('claims every kind of element but process equipment with some shared-element rule', () => {
+    const shared = RULES.filter((r): r is SharedElementRule => r.type === 'shared');
+    for (const [group, kinds] of Object.entries(ELEMENT_GROUPS)) {
+      if (group === 'equipment') continue;
+      for (const kind of kinds) {
+        const element = { kind, tag: 'X-1' } as Element;
+        // Rules that need a pair to decide are specific cases; the fallback for the group must not.
+        const claimed = shared.some((r) => r.groups.includes(group as never) && (r.claims === undefined || (r.claims.length < 2 && r.claims(element, {} as never))));
+        expect(claimed, `${kind} (${group})`).toBe(true);
+      }
+    }
+  });
+});

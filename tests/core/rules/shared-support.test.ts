@@ -1,0 +1,42 @@
+// Shared supplies judged by the direction of failure (DESIGN section 1; CCPS LOPA (2001) ch. 6): a
+// de-energise-to-trip SIF whose valve fails to the trip position fails safe (common practice, no source).
+import { ruleTable } from './cases.ts';
+
+const xvOnAirA = (failsTo: string) => `shutdown-valve XV-1${failsTo ? ` fails-to=${failsTo}` : ''} mounted-on=L-1 signal-via=IO-4 air-from=IA-A`;
+
+ruleTable('shared-support', {
+  valid: [
+    { name: 'separate UPS, circuits and air' },
+    { name: 'separate air, same make of header', lines: { 'IA-B': 'air-header IA-B title="Second header"' } },
+  ],
+  invalid: [
+    {
+      name: 'shared air, valve fails closed, trip closes: fails safe, a note',
+      lines: { 'XV-1': xvOnAirA('closed') },
+      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'note' }],
+    },
+    {
+      name: 'shared air, valve fails open while the trip must close: voids',
+      lines: { 'XV-1': xvOnAirA('open') },
+      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+    },
+    {
+      name: 'shared air, fail action not stated: the worst case',
+      lines: { 'XV-1': xvOnAirA('') },
+      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+    },
+    {
+      name: 'shared power circuit, energise-to-trip SIF: voids',
+      lines: {
+        'S-1': 'logic-solver S-1 system=sis powered-by=CK-A',
+        'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=energise sil=2 pfd=0.01',
+      },
+      findings: [{ element: 'CK-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+    },
+    {
+      name: 'shared power circuit, de-energise-to-trip SIF with fail-closed valve: a note',
+      lines: { 'S-1': 'logic-solver S-1 system=sis powered-by=CK-A' },
+      findings: [{ element: 'CK-A', parties: ['LC-1', 'SF-1'], severity: 'note' }],
+    },
+  ],
+});
