@@ -40,9 +40,9 @@ interface CauseWork {
   perFigure: PerFigure<number>;
 }
 
-function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, mine: Finding[]): CauseWork {
+function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functions: ReadonlyMap<string, PlantFunction>, mine: Finding[]): CauseWork {
   const cause = scenario.cause;
-  const fn = cause.function !== undefined ? model.functions.find((f) => f.tag === cause.function) : undefined;
+  const fn = cause.function !== undefined ? functions.get(cause.function) : undefined;
   const label =
     cause.function !== undefined
       ? `failure of ${cause.function}${fn?.title ? ` (${fn.title})` : ''}${cause.only !== undefined ? `, narrowed to ${cause.only}` : ''}`
@@ -220,11 +220,11 @@ export function assessScenario(input: AssessInput): AssessOutput {
   const edge = category.edge ?? 'below';
   const mine: Finding[] = [];
 
-  const cause = assessCause(model, scenario, facts, mine);
+  const functions = input.functions ?? new Map(model.functions.map((f) => [f.tag, f]));
+  const cause = assessCause(model, scenario, facts, functions, mine);
   const modifiers = assessModifiers(model, scenario, category.harm, mine);
   const enablers = (scenario.enablers ?? []).map((e) => ({ title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}) }));
 
-  const functions = input.functions ?? new Map(model.functions.map((f) => [f.tag, f]));
   const works: LayerWork[] = [];
   for (const claim of scenario.layers ?? []) {
     const fn = functions.get(claim.function);
