@@ -3,10 +3,10 @@
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { printBulk, printJson, type Element, type Model, type PlantFunction, type Scenario } from '@bulkhead/core';
+import { analyze, printBulk, printJson, type Element, type Model, type PlantFunction, type Scenario } from '@bulkhead/core';
 
 /** Bump when the generated model changes, so stale files are rebuilt. */
-export const GENERATOR_VERSION = 1;
+export const GENERATOR_VERSION = 2;
 export const GENERATED_DIR = join(dirname(fileURLToPath(import.meta.url)), '..', 'fixtures', 'generated');
 
 const LOOPS_PER_UNIT = 40;
@@ -271,7 +271,8 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
       id: `S-${number}`,
       title: `${loop.tag} fails and ${loop.variable} runs away`,
       category: pick(['people-serious', 'people-fatal', 'release-major'] as const),
-      cause: { function: loop.tag, typical: 'bpcs-loop-failure' },
+      // Half the causes take the typical loop-failure row, half a site figure with its basis.
+      cause: chance(0.5) ? { function: loop.tag, typical: 'bpcs-loop-failure' } : { function: loop.tag, frequency: 0.1, basis: 'Site failure records (invented)' },
       layers,
     });
   }
@@ -291,6 +292,12 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
     functions,
     scenarios,
   };
+  // A reviewed site has accepted some of its findings: accept every tenth one that asks for a justification.
+  const open = analyze(model).findings.filter((f) => f.severity === 'needs-justification');
+  const accepted = open.filter((_, i) => i % 10 === 0);
+  if (accepted.length) {
+    model.justifications = accepted.map((f) => ({ finding: f.key, by: 'Benchmark reviewer (invented)', date: '2026-01-15', reason: 'Synthetic acceptance for the benchmark' }));
+  }
   return { model, counts: { elements: elements.length, functions: functions.length, scenarios: scenarios.length } };
 }
 

@@ -2,7 +2,7 @@
 // own: times load and each analysis stage in analyze()'s order, then analyze() whole, and prints JSON.
 import { readFileSync } from 'node:fs';
 import {
-  analyze, applyJustifications, assessScenario, buildPlantGraph, independenceRulesInForce, loadModelText, resolvedPolicy,
+  analyze, applyJustifications, assessScenario, bpcsFactsOf, buildPlantGraph, independenceRulesInForce, loadModelText, resolvedPolicy,
   runRules, Tracer, type Finding, type Model, type RuleEnvironment,
 } from '@bulkhead/core';
 
@@ -63,7 +63,11 @@ function stages(model: Model, times: Partial<StageTimes>): number {
   const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
   lap('rules');
   const independent = applyJustifications(raw, model.justifications).findings;
-  const assessed = model.scenarios.map((scenario) => assessScenario({ model, scenario, findings: independent }));
+  const bpcs = bpcsFactsOf(model);
+  const byScenario = new Map<string | undefined, Finding[]>();
+  for (const f of independent) (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
+  const assessed = model.scenarios.map((scenario) =>
+    assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions }));
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications);
   lap('assess');
