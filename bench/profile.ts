@@ -44,6 +44,8 @@ function summarise(profile: Profiler.Profile): Row[] {
   return [...rows.values()];
 }
 
+// Piped into `head`, the rest of the table is not wanted: stop quietly.
+process.stdout.on('error', (e: NodeJS.ErrnoException) => process.exit(e.code === 'EPIPE' ? 0 : 1));
 const [file, topArg, out] = process.argv.slice(2);
 if (!file) throw new Error('usage: npx tsx bench/profile.ts FILE|PROFILE.cpuprofile [TOP] [OUT.cpuprofile]');
 const top = Number(topArg ?? 25);

@@ -29,7 +29,7 @@ interface CheckTiming {
 }
 
 /** The real CLI in a child process; the preloaded probe reports its peak memory on exit. */
-function timeCheck(file: string, times: number): CheckTiming {
+function timeCheck(file: string, times: number, nodeFlags: string[] = []): CheckTiming {
   const rssFile = join(GENERATED_DIR, 'check.rss');
   const outFile = join(GENERATED_DIR, 'check.out');
   const walls: number[] = [];
@@ -39,7 +39,7 @@ function timeCheck(file: string, times: number): CheckTiming {
     const start = performance.now();
     const child = spawnSync(
       'sh',
-      ['-c', `exec "${process.execPath}" --import "${path('rss-probe.mjs', HERE)}" "${path('packages/cli/bin/bulkhead.js')}" check "${file}" > "${outFile}"`],
+      ['-c', `exec "${process.execPath}" ${nodeFlags.join(' ')} --import "${path('rss-probe.mjs', HERE)}" "${path('packages/cli/bin/bulkhead.js')}" check "${file}" > "${outFile}"`],
       { env: { ...process.env, BULKHEAD_BENCH_RSS_FILE: rssFile }, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' },
     );
     walls.push(performance.now() - start);
@@ -67,7 +67,8 @@ interface Row {
 }
 
 const ms = (n: number) => `${Math.round(n)}`;
-const mb = (bytes: number) => `${Math.round(bytes / 1048576)}`;
+/** Megabytes of 10^6 bytes, the unit of the 1 GB target. */
+const mb = (bytes: number) => `${Math.round(bytes / 1e6)}`;
 
 function table(rows: Row[]): string {
   const head = ['elements', 'functions', 'scenarios', 'findings', 'load', 'load json', 'graph', 'trace', 'rules', 'assess', 'analyze()', 'load+analyze', 'check (CLI)', 'peak MB', 'check MB'];
@@ -95,7 +96,8 @@ function targets(rows: Row[]): Target[] {
   const out: Target[] = [
     { name: 'analysis after loading takes no longer than loading', measured: `analyze() ${ms(t.analyze)} ms vs load ${ms(t.load)} ms`, ok: t.analyze <= t.load },
     { name: 'whole `bulkhead check` under 3 s', measured: `${ms(big.check.wallMs)} ms (median of ${Math.min(runs, 3)}, node start-up included)`, ok: big.check.wallMs < 3000 },
-    { name: 'peak memory under 1 GB', measured: `check ${mb(big.check.maxRss)} MB, measuring process ${mb(big.m.maxRss)} MB`, ok: Math.max(big.check.maxRss, big.m.maxRss) < 1e9 },
+    // The real command's peak; the measuring process also loads the JSON twin and analyses twice, so it is shown, not judged.
+    { name: 'peak memory under 1 GB', measured: `check ${mb(big.check.maxRss)} MB (measuring process ${mb(big.m.maxRss)} MB)`, ok: big.check.maxRss < 1e9 },
   ];
   if (mid) {
     // Time per element may grow by at most 10% from 10k to 100k: 10x the elements, at most 11x the time.
@@ -123,11 +125,11 @@ async function layoutBenchmark(): Promise<void> {
 
 const rows: Row[] = [];
 for (const size of sizes) {
+  process.stderr.write(`site of ${size} elements: generating if needed, then measuring\n`);
   const files = ensureGenerated(size);
   const m = measureSize(files.bulk, files.json);
   if (m.replicaFindings !== m.findings) throw new Error(`the stage replica found ${m.replicaFindings} findings, analyze() ${m.findings}: bench/measure.ts no longer follows analyze()`);
   rows.push({ size, m, check: timeCheck(files.bulk, Math.min(runs, 3)) });
-  process.stderr.write(`measured ${size}: ${m.elements} elements\n`);
 }
 
 process.stdout.write(`Bulkhead benchmark: synthetic sites, median of ${runs} runs, times in ms, node ${process.version}\n`);
@@ -137,6 +139,14 @@ const results = targets(rows);
 if (results.length) {
   process.stdout.write('\nTargets for the 100k-element site (issue 3):\n');
   for (const r of results) process.stdout.write(`  ${r.ok ? 'PASS' : 'FAIL'}  ${r.name}: ${r.measured}\n`);
+}
+// Not a target: how much a larger young generation (fewer scavenges of the long-lived model) would
+// give the CLI, so whoever owns its start-up can weigh the flag.
+const largest = rows[rows.length - 1];
+if (largest) {
+  const flag = '--max-semi-space-size=64';
+  const tuned = timeCheck(ensureGenerated(largest.size).bulk, Math.min(runs, 3), [flag]);
+  process.stdout.write(`\nFor comparison, not a target: \`node ${flag}\` check of the ${largest.m.elements}-element site: ${ms(tuned.wallMs)} ms, ${mb(tuned.maxRss)} MB\n`);
 }
 await layoutBenchmark();
 if (values.strict && results.some((r) => !r.ok)) process.exitCode = 1;
