@@ -12,6 +12,12 @@ export function isPowerSupport(element: Element): boolean {
   return POWER_KINDS.has(element.kind);
 }
 
+/** M of a MooN final-element voting: how many final elements must move for the function to act. */
+function finalsNeeded(voting: string | undefined): number {
+  const match = voting === undefined ? null : /^(\d+)oo\d+$/.exec(voting);
+  return match ? Number(match[1]) : 1;
+}
+
 export function failsSafeOnLoss(layer: Side, support: Element, ctx: ScenarioContext): boolean {
   const fn = layer.fn;
   if (!fn || (fn.kind !== 'sif' && fn.kind !== 'trip') || fn.trip === undefined) return false;
@@ -19,12 +25,14 @@ export function failsSafeOnLoss(layer: Side, support: Element, ctx: ScenarioCont
   // Energise-to-trip needs power to act; only de-energise-to-trip moves to safety when power goes.
   if (power && fn.tripMode !== 'de-energise') return false;
   const target = POSITION_FOR_TRIP[fn.trip];
+  // Losing the solver's power de-energises every output. Any other loss moves only the final elements
+  // that rely on it; a sensor that loses its supply reads low or freezes, which trips nothing unless a
+  // fault action the model does not state says so.
+  const everyOutput = power && ctx.tracer.closure(fn.solver).has(support.tag);
   let moved = 0;
   for (const head of fn.finals) {
     const channel = ctx.tracer.closure(head);
-    // Loss of air or hydraulics moves only the final elements fed by it; loss of power to any part
-    // of a de-energise-to-trip function de-energises every output.
-    if (!power && !channel.has(support.tag)) continue;
+    if (!everyOutput && !channel.has(support.tag)) continue;
     for (const tag of channel) {
       const element = ctx.element(tag);
       const group = groupOf(element.kind);
@@ -32,5 +40,6 @@ export function failsSafeOnLoss(layer: Side, support: Element, ctx: ScenarioCont
     }
     moved++;
   }
-  return moved > 0;
+  // With MooN final elements, M of them must reach the trip position (2oo2 valves: both).
+  return moved > 0 && moved >= finalsNeeded(fn.finalVoting);
 }
