@@ -1,6 +1,8 @@
 // A controller that fails in the cause cannot act against it: IEC 61511-1:2016 9.3; the older CCPS (2001)
 // allowance is the policy switch shared-solver=allow.
-import { ruleTable } from './cases.ts';
+import { describe, expect, it } from 'vitest';
+import { analyze, loadModelText } from '@bulkhead/core';
+import { modelText, ruleTable } from './cases.ts';
 
 const sifInBpcs = { 'SF-1': 'sif SF-1 sensors=T-2 solver=C-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' };
 
@@ -17,4 +19,35 @@ ruleTable('shared-logic-solver', {
       findings: [{ element: 'C-1', parties: ['LC-1', 'SF-1'], severity: 'note' }],
     },
   ],
+});
+
+// IEC 61511-1:2016 9.3: two BPCS layers in one controller earn at most one credit. The trace rule's note
+// defers to the assessment's bpcs-same-controller, which must then apply.
+const twoBpcsTrips = {
+  'N-3': 'nozzle N-3 mounted-on=V-1',
+  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-5',
+  'C-2': 'controller C-2 system=bpcs',
+  'IO-5': 'io-card IO-5 signal-via=C-2',
+  'IO-6': 'io-card IO-6 signal-via=C-2',
+  'T-4': 'transmitter T-4 mounted-on=N-2 signal-via=IO-6',
+  'P-1': 'pump P-1',
+  'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-5',
+  'MS-2': 'motor-starter MS-2 fails-to=off mounted-on=P-1 signal-via=IO-6',
+  'TR-1': 'trip TR-1 sensors=T-3 solver=C-2 finals=MS-1 trip=stop pfd=0.1',
+  'TR-2': 'trip TR-2 sensors=T-4 solver=C-2 finals=MS-2 trip=stop pfd=0.1',
+};
+const twoTrips = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer TR-1', '  layer TR-2'];
+
+describe('two BPCS layers in one controller', () => {
+  it('are a note of this rule, and the assessment credits only one of them (IEC 61511-1:2016 9.3)', () => {
+    const loaded = loadModelText('case.bulk', modelText({ name: 'two trips', lines: twoBpcsTrips, scenario: twoTrips }));
+    const analysis = analyze(loaded.model!);
+    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([
+      ['bpcs-same-controller:SC-1:TR-1:TR-2', 'voids-credit'],
+      ['shared-logic-solver:SC-1:TR-1+TR-2:C-2', 'note'],
+    ]);
+    const [assessment] = analysis.assessments;
+    expect(assessment!.layers.filter((l) => l.credited).map((l) => l.function)).toHaveLength(1);
+    expect(assessment!.mitigatedAfter).toBeCloseTo(0.1 * 0.1, 12);
+  });
 });

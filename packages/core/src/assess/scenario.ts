@@ -117,9 +117,13 @@ interface Conflict {
   finding: Finding;
 }
 
-/** Whether the trace rules already report this pair of layers at this element (their shared-solver rule does). */
+/**
+ * Whether the trace rules already report this pair of layers at this element with an effect on credit. Their
+ * note on two BPCS layers in one controller defers to this rule, so a note does not count.
+ */
 function reportedPair(findings: readonly Finding[], x: string, y: string, element: string): boolean {
   return findings.some((f) => {
+    if (f.severity === 'note') return false;
     const tags = f.parties.filter((p) => p.role === 'layer').map((p) => p.tag);
     return f.element === element && tags.length === 2 && tags.includes(x) && tags.includes(y);
   });
