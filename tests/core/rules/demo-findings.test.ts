@@ -31,6 +31,10 @@ describe('the demo findings', () => {
       ['shared-bridle:S-101:LIC-101+SIF-101:BR-101', 'voids-credit', [['LIC-101', 'LT-101', 'BR-101'], ['SIF-101', 'LT-102', 'BR-101']], false],
       // LT-103 of the alarm is wired to AI-1-03, the loop's own input card.
       ['shared-io:S-101:LIC-101+LAH-101:AI-1-03', 'voids-credit', [['LIC-101', 'LT-101', 'AI-1-03'], ['LAH-101', 'LT-103', 'AI-1-03']], false],
+      // Beside BPCS-C1 itself, the alarm's console CON-1 and output card DO-1-02 share the BPCS panel feed
+      // CKT-11 and cabinet CAB-1 with the loop's output card AO-1-07, by routes that avoid BPCS-C1.
+      ['shared-support:S-101:LIC-101+LAH-101:CKT-11', 'voids-credit', [['LIC-101', 'LV-101', 'AO-1-07', 'CKT-11'], ['LAH-101', 'CON-1', 'CKT-11']], false],
+      ['shared-housing:S-101:LIC-101+LAH-101:CAB-1', 'needs-justification', [['LIC-101', 'LV-101', 'AO-1-07', 'CAB-1'], ['LAH-101', 'MS-100', 'DO-1-02', 'CAB-1']], false],
       ['shared-housing:S-101:LIC-101+SIF-101:JB-101', 'needs-justification', [['LIC-101', 'LT-101', 'JB-101'], ['SIF-101', 'LT-102', 'JB-101']], false],
       ['same-make-model:S-101:SIF-101+LAH-101:LT-103:LT-102', 'needs-justification', [['SIF-101', 'LT-102'], ['LAH-101', 'LT-103']], false],
       ...S101_NOTES,

@@ -11,10 +11,13 @@ function assess(text: string) {
   return analyze(loaded.model);
 }
 
-/** Ways of making the SIF share something with the failing loop, each on its own base line. */
+/**
+ * Ways of making the SIF share something with the failing loop, each on its own base line. Feeding the SIS
+ * solver from the loop's circuit is left out: with a de-energise-to-trip SIF it makes the circuit's loss a
+ * trip, which can rightly restore credit another sharing of that circuit had voided.
+ */
 const SHARINGS: Record<string, string> = {
   'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-1 signal-via=IO-2',
-  'S-1': 'logic-solver S-1 system=sis powered-by=CK-A',
   'XV-1': 'shutdown-valve XV-1 fails-to=open mounted-on=L-1 signal-via=IO-4 air-from=IA-A',
   'IO-4': 'io-card IO-4 signal-via=S-1,C-1 powered-by=CK-B',
   'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=energise sil=2 pfd=0.01',

@@ -51,3 +51,62 @@ describe('two BPCS layers in one controller', () => {
     expect(assessment!.mitigatedAfter).toBeCloseTo(0.1 * 0.1, 12);
   });
 });
+
+// The controller with its power and cabinet is one unit: a policy that allows sharing it is not undone by
+// the controller's own supply (CCPS, Layer of Protection Analysis (2001), ch. 6, the older allowance).
+describe('the controller and what it alone relies on', () => {
+  // The loop's own cards take their power through the controller here, so CK-A is reached only through C-1.
+  const inOneCabinet = {
+    'CAB-1': 'cabinet CAB-1',
+    'C-1': 'controller C-1 system=bpcs powered-by=CK-A housed-in=CAB-1',
+    'IO-1': 'io-card IO-1 signal-via=C-1',
+    'IO-3': 'io-card IO-3 signal-via=C-1',
+  };
+  const tripInC1 = {
+    ...inOneCabinet,
+    'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5',
+    'IO-5': 'io-card IO-5 signal-via=C-1',
+    'P-1': 'pump P-1',
+    'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-6',
+    'IO-6': 'io-card IO-6 signal-via=C-1',
+    'TR-1': 'trip TR-1 sensors=T-2 solver=C-1 finals=MS-1 trip=stop pfd=0.1',
+  };
+  const tripScenario = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer TR-1'];
+  const run = (lines: Record<string, string>, scenario: string[]) => analyze(loadModelText('case.bulk', modelText({ name: 'unit', lines, scenario })).model!);
+
+  it('under shared-solver=allow a trip in the failing loop controller keeps its credit, with its power and cabinet listed under the note', () => {
+    const analysis = run({ ...tripInC1, policy: 'policy shared-solver=allow' }, tripScenario);
+    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([['shared-logic-solver:SC-1:LC-1+TR-1:C-1', 'note']]);
+    expect(analysis.findings[0]!.message).toContain('(and through it `CAB-1`, `CK-A`, `UPS-A`)');
+    expect(analysis.assessments[0]!.layers[0]).toMatchObject({ function: 'TR-1', credited: true });
+  });
+
+  it('by default the same trip is voided by the controller alone', () => {
+    const analysis = run(tripInC1, tripScenario);
+    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([['shared-logic-solver:SC-1:LC-1+TR-1:C-1', 'voids-credit']]);
+    expect(analysis.assessments[0]!.layers[0]).toMatchObject({ function: 'TR-1', credited: false });
+  });
+
+  it('shared-solver=allow does not cover a cause that is the failure of the controller itself', () => {
+    const analysis = run({ ...tripInC1, policy: 'policy shared-solver=allow' }, ['scenario SC-1 category=c', '  cause element=C-1 frequency=0.1', '  layer TR-1']);
+    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([['shared-logic-solver:SC-1:C-1+TR-1:C-1', 'voids-credit']]);
+  });
+
+  it('under same-controller-layers=both two BPCS trips in one powered controller are both credited', () => {
+    const lines = { ...twoBpcsTrips, 'C-2': 'controller C-2 system=bpcs powered-by=CK-B housed-in=CAB-2', 'CAB-2': 'cabinet CAB-2', policy: 'policy same-controller-layers=both' };
+    const analysis = run(lines, twoTrips);
+    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([['shared-logic-solver:SC-1:TR-1+TR-2:C-2', 'note']]);
+    expect(analysis.findings[0]!.message).toContain('both may be credited under policy same-controller-layers=both');
+    expect(analysis.assessments[0]!.layers.map((l) => l.credited)).toEqual([true, true]);
+  });
+
+  it('a supply one side also reaches by a route around the controller is still its own finding', () => {
+    // TR-1's output card is fed from CK-A directly, not only through C-1.
+    const lines = { ...tripInC1, 'IO-6': 'io-card IO-6 signal-via=C-1 powered-by=CK-A', policy: 'policy shared-solver=allow' };
+    const analysis = run(lines, tripScenario);
+    expect(analysis.findings.map((f) => [f.key, f.severity, f.paths])).toEqual([
+      ['shared-support:SC-1:LC-1+TR-1:CK-A', 'voids-credit', [['LC-1', 'C-1', 'CK-A'], ['TR-1', 'MS-1', 'IO-6', 'CK-A']]],
+      ['shared-logic-solver:SC-1:LC-1+TR-1:C-1', 'note', [['LC-1', 'C-1'], ['TR-1', 'C-1']]],
+    ]);
+  });
+});

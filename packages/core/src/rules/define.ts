@@ -60,6 +60,12 @@ export interface SharedElementRule extends RuleMeta {
   /** Element groups this rule may claim; the runner asks rules in registry order. */
   groups: readonly ElementGroup[];
   claims?(element: Element, pair: PairContext): boolean;
+  /**
+   * The element and what it alone relies on are one unit (a controller with its power and cabinet): a
+   * finding on it speaks for what lies beneath it at any severity, so a policy that allows sharing the
+   * controller is not undone by its own power supply.
+   */
+  coversDependencies?(element: Element): boolean;
   /** Severity for this occurrence (e.g. a support that fails safe is a note); default: the rule's in force. */
   judge?(element: Element, pair: PairContext, inForce: SeverityLevel): SeverityLevel;
   message(element: Element, pair: PairContext, severity: SeverityLevel): string;

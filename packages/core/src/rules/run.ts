@@ -59,6 +59,37 @@ export function scenarioContext(env: RuleEnvironment, scenario: Scenario): Scena
   };
 }
 
+/**
+ * The elements a side reaches from its start without passing through a shared element ranked at least
+ * `level` (such an element is reached, but not gone beyond), each with the element it was reached from.
+ * Tracing stops at process equipment, as in the paths. A start that is itself such an element (an
+ * element cause) reaches nothing beyond itself.
+ */
+function reachedAvoiding(tracer: Tracer, side: Side, rank: ReadonlyMap<string, number>, level: number): ReadonlyMap<string, string | undefined> {
+  const first = side.elements.values().next();
+  if (first.done) return new Map();
+  const start = first.value.path[0]!;
+  const reached = new Map<string, string | undefined>([[start, undefined]]);
+  const blocks = (tag: string) => (rank.get(tag) ?? 0) >= level || tracer.group(tag) === 'equipment';
+  if ((rank.get(start) ?? 0) >= level) return reached;
+  const queue = [start];
+  for (let i = 0; i < queue.length; i++) {
+    const from = queue[i]!;
+    tracer.graph.forEachOutNeighbor(from, (next) => {
+      if (reached.has(next)) return;
+      reached.set(next, from);
+      if (!blocks(next)) queue.push(next);
+    });
+  }
+  return reached;
+}
+
+function pathTo(reached: ReadonlyMap<string, string | undefined>, tag: string): string[] {
+  const path = [tag];
+  for (let at = reached.get(tag); at !== undefined; at = reached.get(at)) path.unshift(at);
+  return path;
+}
+
 function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): (FindingDraft & { rule: Rule })[] {
   const common = [...pair.b.elements.keys()].filter((tag) => pair.a.elements.has(tag) && pair.tracer.group(tag) !== 'equipment');
   const claimed: { tag: string; rule: SharedElementRule; severity: SeverityLevel }[] = [];
@@ -71,11 +102,22 @@ function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): 
     claimed.push({ tag, rule, severity: rule.judge ? rule.judge(element, pair, inForce) : inForce });
   }
   // What a shared element relies on is shared too. List it on its own only where one side reaches it
-  // directly, not through another shared element that is at least as serious.
-  const rank = new Map(claimed.map((c) => [c.tag, SEVERITY_RANK[c.severity]]));
-  const throughShared = (side: Side, c: (typeof claimed)[number]) =>
-    side.elements.get(c.tag)!.path.slice(0, -1).some((t) => (rank.get(t) ?? 0) >= SEVERITY_RANK[c.severity]);
-  const kept = claimed.filter((c) => !(throughShared(pair.a, c) && throughShared(pair.b, c)));
+  // by some route that passes no other shared element at least as serious: judged over every route,
+  // not the one shortest path, so accepting the upper finding cannot hide a second, direct dependency.
+  const rank = new Map(claimed.map((c) => [c.tag, c.rule.coversDependencies?.(pair.element(c.tag)) ? Infinity : SEVERITY_RANK[c.severity]]));
+  const reach = new Map<string, ReadonlyMap<string, string | undefined>>();
+  const reachOf = (side: Side, c: (typeof claimed)[number]) => {
+    const level = rank.get(c.tag)!;
+    const id = `${side === pair.a ? 'a' : 'b'}${level}`;
+    if (!reach.has(id)) reach.set(id, reachedAvoiding(pair.tracer, side, rank, level));
+    return reach.get(id)!;
+  };
+  const kept = claimed.filter((c) => reachOf(pair.a, c).has(c.tag) || reachOf(pair.b, c).has(c.tag));
+  // The path shown is the shortest one, unless only a longer route explains why the element is listed.
+  const pathFor = (side: Side, c: (typeof claimed)[number]) => {
+    const reached = reachOf(side, c);
+    return reached.has(c.tag) ? pathTo(reached, c.tag) : side.elements.get(c.tag)!.path;
+  };
   return kept.map((c) => {
     const element = pair.element(c.tag);
     const beneath = claimed.filter((o) => o.tag !== c.tag && !kept.includes(o) && pair.tracer.closure(c.tag).has(o.tag)).map((o) => o.tag).sort();
@@ -84,7 +126,7 @@ function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): 
       rule: c.rule,
       parties: [pair.a.party, pair.b.party],
       element: c.tag,
-      paths: [pair.a.elements.get(c.tag)!.path, pair.b.elements.get(c.tag)!.path],
+      paths: [pathFor(pair.a, c), pathFor(pair.b, c)],
       message: c.rule.message(element, pair, c.severity) + also,
       severity: c.severity,
     };

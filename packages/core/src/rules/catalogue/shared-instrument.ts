@@ -42,15 +42,22 @@ export const sharedLogicSolver = defineSharedRule({
   source: 'IEC 61511-1:2016 9.3 (BPCS layers, one controller); CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance)',
   defaultSeverity: 'voids-credit',
   groups: ['solver'],
-  judge: (_element, pair, inForce) => {
+  // The controller with its power and cabinet is one unit: what is said of it covers them.
+  coversDependencies: () => true,
+  judge: (element, pair, inForce) => {
     // Two BPCS layers in one controller: the assessment's bpcs-same-controller rule limits their credit.
     if (bothBpcsLayers(pair)) return 'note';
-    if (pair.a.party.role === 'cause' && pair.policy.sharedSolver === 'allow') return 'note';
+    // The older allowance is for a loop failure, never for the failure of the controller itself.
+    if (pair.a.party.role === 'cause' && pair.a.party.tag !== element.tag && pair.policy.sharedSolver === 'allow') return 'note';
     return inForce;
   },
   message: (element, pair, severity) =>
     sharedMessage('controller or logic solver')(element, pair, severity) +
-    (bothBpcsLayers(pair) ? '; as two BPCS layers in one controller their credit is limited by rule bpcs-same-controller' : ''),
+    (bothBpcsLayers(pair)
+      ? pair.policy.sameControllerLayers === 'both'
+        ? '; as two BPCS layers in one controller both may be credited under policy same-controller-layers=both'
+        : '; as two BPCS layers in one controller their credit is limited by rule bpcs-same-controller'
+      : ''),
 });
 
 export const sharedFinalElement = defineSharedRule({

@@ -10,6 +10,7 @@ export const alarmOnFailedBpcs = defineSharedRule({
   source: 'CCPS, Layer of Protection Analysis (2001), ch. 6 (human response as an IPL)',
   defaultSeverity: 'voids-credit',
   groups: ['solver', 'people'],
+  coversDependencies: (element) => element.kind === 'controller' || element.kind === 'logic-solver',
   claims: (element, pair) =>
     pair.a.party.role === 'cause' && pair.a.fn !== undefined && pair.b.fn?.kind === 'alarm' && (element.kind !== 'operator'),
   message: (element, pair) =>
