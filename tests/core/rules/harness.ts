@@ -1,10 +1,14 @@
 // The rule case harness: each rule's table of small .bulk models that must, or must not, make it
 // report, in the way a linter tests its rules. Case models are invented test data.
 import { describe, expect, it } from 'vitest';
-import { analyze, loadModelText, RULES, type Finding, type SeverityLevel } from '@bulkhead/core';
+import { analyze, loadModelText, RULES, type Analysis, type SeverityLevel } from '@bulkhead/core';
 
-/** A clean site: one BPCS loop as the cause and one fully separate SIF. It gives no finding at all. */
-export const BASE: Record<string, string> = {
+/**
+ * A clean site: one BPCS loop LC-1 as the cause and one fully separate SIF SF-1, each with its own
+ * nozzle, transmitter, card, solver, power, air and valve. Alone it gives no finding at all (checked in
+ * registry.test.ts). Keys name the line a case may replace; a case adds lines under new keys.
+ */
+export const BASE: Readonly<Record<string, string>> = {
   site: 'site "Rule test site (invented)"',
   category: 'category c tolerable=1e-4 harm=people',
   'UPS-A': 'ups UPS-A',
@@ -31,22 +35,34 @@ export const BASE: Record<string, string> = {
   'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01',
 };
 
-export const BASE_SCENARIO = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer SF-1'];
+export const BASE_SCENARIO: readonly string[] = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer SF-1'];
+
+/** A scenario SC-1 on category c with the given cause line and layers (`layer X` lines). */
+export function scenario(cause: string, ...layers: string[]): string[] {
+  return ['scenario SC-1 category=c', `  cause ${cause}`, ...layers.map((l) => `  layer ${l}`)];
+}
 
 export interface Case {
   name: string;
   /** Lines replacing the base line of the same key, or added under a new key; `null` removes one. */
-  lines?: Record<string, string | null>;
+  lines?: Readonly<Record<string, string | null>>;
   /** The scenario block (with indented lines); defaults to BASE_SCENARIO. */
-  scenario?: string[];
+  scenario?: readonly string[];
   /** Extra statements after the scenario (rule settings, accept lines). */
-  extra?: string[];
+  extra?: readonly string[];
+  /**
+   * Where the rule or value this case checks comes from: a standard with edition and clause, "common
+   * practice, no source", or "from memory". Shown in the test name.
+   */
+  source?: string;
 }
 
+/** One finding a case must produce: the rule is the table's; parties are the tags of the sides. */
 export interface Expected {
+  key: string;
+  severity: SeverityLevel;
   element?: string;
   parties: string[];
-  severity: SeverityLevel;
   accepted?: boolean;
 }
 
@@ -54,8 +70,13 @@ export interface InvalidCase extends Case {
   findings: Expected[];
 }
 
+export interface RuleTable {
+  valid: Case[];
+  invalid: InvalidCase[];
+}
+
 export function modelText(c: Case): string {
-  const lines = { ...BASE };
+  const lines: Record<string, string> = { ...BASE };
   for (const [key, line] of Object.entries(c.lines ?? {})) {
     if (line === null) delete lines[key];
     else lines[key] = line;
@@ -63,41 +84,77 @@ export function modelText(c: Case): string {
   return [...Object.values(lines), ...(c.scenario ?? BASE_SCENARIO), ...(c.extra ?? [])].join('\n') + '\n';
 }
 
-export function analyseCase(c: Case): Finding[] {
+/** Loads and analyses a case; any diagnostic at all (error or warning) fails it: cases must be clean. */
+export function analyseCase(c: Case): Analysis {
   const loaded = loadModelText('case.bulk', modelText(c));
-  if (!loaded.model) throw new Error(`case "${c.name}" does not load: ${loaded.diagnostics.map((d) => `${d.code} ${d.message} at ${d.span?.line}:${d.span?.column}`).join('; ')}`);
-  return analyze(loaded.model, { spans: loaded.spans }).findings;
+  if (!loaded.model || loaded.diagnostics.length > 0) {
+    const said = loaded.diagnostics.map((d) => `${d.code} ${d.severity} ${d.message} at ${d.span?.line}:${d.span?.column}`);
+    throw new Error(`case "${c.name}" does not load cleanly: ${said.join('; ') || 'no model'}`);
+  }
+  return analyze(loaded.model, { spans: loaded.spans });
 }
 
-function summary(f: Finding): Expected {
+function summary(f: Analysis['findings'][number]): Expected {
   return {
+    key: f.key,
+    severity: f.severity,
     ...(f.element !== undefined ? { element: f.element } : {}),
     parties: f.parties.map((p) => p.tag ?? 'external'),
-    severity: f.severity,
     ...(f.accepted ? { accepted: true } : {}),
   };
 }
 
-/** Runs a rule's table: valid cases report nothing for the rule; invalid ones report exactly what is listed. */
-export function ruleTable(ruleId: string, table: { valid: Case[]; invalid: InvalidCase[] }): void {
+/**
+ * Checks a table before it runs, so a mistake in the table cannot pass as a result: the rule exists,
+ * there are at least two cases of each kind, no two cases share a name or a model, every invalid case
+ * lists at least one finding, and every listed key belongs to the rule and is listed once.
+ */
+export function checkTable(ruleId: string, table: RuleTable): void {
+  const problems: string[] = [];
+  if (!RULES.some((r) => r.id === ruleId)) problems.push(`no rule \`${ruleId}\` in RULES`);
+  if (table.valid.length < 2) problems.push(`${table.valid.length} valid cases; at least 2 are needed`);
+  if (table.invalid.length < 2) problems.push(`${table.invalid.length} invalid cases; at least 2 are needed`);
+  const names = new Map<string, number>();
+  const models = new Map<string, string>();
+  for (const c of [...table.valid, ...table.invalid]) {
+    names.set(c.name, (names.get(c.name) ?? 0) + 1);
+    const text = modelText(c).replace(/[ \t]+/g, ' ');
+    const first = models.get(text);
+    if (first !== undefined) problems.push(`cases "${first}" and "${c.name}" are the same model`);
+    else models.set(text, c.name);
+  }
+  for (const [name, count] of names) if (count > 1) problems.push(`${count} cases are named "${name}"`);
+  for (const c of table.invalid) {
+    if (c.findings.length === 0) problems.push(`invalid case "${c.name}" lists no finding; make it a valid case`);
+    const keys = c.findings.map((f) => f.key);
+    for (const key of keys) if (!key.startsWith(`${ruleId}:`)) problems.push(`case "${c.name}": key \`${key}\` is not a key of rule ${ruleId}`);
+    if (new Set(keys).size !== keys.length) problems.push(`case "${c.name}" lists a finding twice`);
+  }
+  if (problems.length > 0) throw new Error(`table of ${ruleId}: ${problems.join('; ')}`);
+}
+
+const byKey = (a: Expected, b: Expected) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0);
+
+/** The findings of one rule for a case, as the tables write them, sorted by key. */
+export function ruleFindings(ruleId: string, c: Case): Expected[] {
+  return analyseCase(c).findings.filter((f) => f.rule === ruleId).map(summary).sort(byKey);
+}
+const titled = (kind: string, c: Case) => `${kind}: ${c.name}${c.source ? ` [${c.source}]` : ''}`;
+
+/** Runs a rule's table: valid cases report nothing for the rule; invalid ones exactly what is listed. */
+export function ruleTable(ruleId: string, table: RuleTable): void {
   describe(`rule ${ruleId}`, () => {
-    it('is a registered rule and its table has no duplicate cases', () => {
-      expect(RULES.map((r) => r.id)).toContain(ruleId);
-      const texts = [...table.valid, ...table.invalid].map((c) => modelText(c));
-      expect(new Set(texts).size).toBe(texts.length);
-      expect(table.valid.length).toBeGreaterThanOrEqual(2);
-      expect(table.invalid.length).toBeGreaterThanOrEqual(2);
+    it('has a sound table (known rule, two cases of each kind, no duplicates, keys of this rule)', () => {
+      expect(() => checkTable(ruleId, table)).not.toThrow();
     });
     for (const c of table.valid) {
-      it(`valid: ${c.name}`, () => {
-        expect(analyseCase(c).filter((f) => f.rule === ruleId).map(summary)).toEqual([]);
+      it(titled('valid', c), () => {
+        expect(ruleFindings(ruleId, c)).toEqual([]);
       });
     }
     for (const c of table.invalid) {
-      it(`invalid: ${c.name}`, () => {
-        const got = analyseCase(c).filter((f) => f.rule === ruleId).map(summary);
-        const order = (a: Expected, b: Expected) => JSON.stringify(a).localeCompare(JSON.stringify(b));
-        expect(got.sort(order)).toEqual([...c.findings].sort(order));
+      it(titled('invalid', c), () => {
+        expect(ruleFindings(ruleId, c)).toEqual([...c.findings].sort(byKey));
       });
     }
   });

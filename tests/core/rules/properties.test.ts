@@ -3,7 +3,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { analyze, loadModelText } from '@bulkhead/core';
-import { modelText, type Case } from './cases.ts';
+import { modelText, type Case } from './harness.ts';
 
 function assess(text: string) {
   const loaded = loadModelText('p.bulk', text);

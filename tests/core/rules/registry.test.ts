@@ -1,14 +1,19 @@
 // The rule set as a whole: every rule has a case table, the base test site is clean, and every kind of
 // element two sides can share is claimed by some rule, so no shared element goes unreported.
-import { readdirSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { ELEMENT_GROUPS, RULES, type Element, type SharedElementRule } from '@bulkhead/core';
-import { analyseCase } from './cases.ts';
+import { analyseCase } from './harness.ts';
 
 describe('the independence rule set', () => {
-  it('has a case table file for every rule', () => {
-    const files = new Set(readdirSync(new URL('.', import.meta.url)));
-    for (const rule of RULES) expect(files, `tests/core/rules/${rule.id}.test.ts`).toContain(`${rule.id}.test.ts`);
+  it('has a case table file for every rule, which runs that rule\'s table', () => {
+    const folder = new URL('.', import.meta.url);
+    const files = new Set(readdirSync(folder));
+    for (const rule of RULES) {
+      const file = `${rule.id}.test.ts`;
+      expect(files, `tests/core/rules/${file}`).toContain(file);
+      expect(readFileSync(new URL(file, folder), 'utf8'), file).toContain(`ruleTable('${rule.id}', {`);
+    }
   });
 
   it('has unique, kebab-case ids, each with a title, a rationale and a source', () => {
@@ -23,7 +28,7 @@ describe('the independence rule set', () => {
   });
 
   it('finds nothing at all in the base site, whose cause and layer share no element', () => {
-    expect(analyseCase({ name: 'base' })).toEqual([]);
+    expect(analyseCase({ name: 'base' }).findings).toEqual([]);
   });
 
   it('claims every kind of element but process equipment with some shared-element rule', () => {

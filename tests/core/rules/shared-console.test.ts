@@ -1,6 +1,8 @@
-// A console shared by two responses: common practice, no source (needs a reasoned acceptance).
-import { ruleTable } from './cases.ts';
+// shared-console: a console shared by two responses can mislead or blind both; whether that voids credit
+// depends on the alarm design, so it needs a justification (common practice, no source).
+import { ruleTable, scenario } from './harness.ts';
 
+const SOURCE = 'common practice, no source';
 const base = {
   'OP-1': 'operator OP-1',
   'OP-2': 'operator OP-2',
@@ -11,25 +13,35 @@ const base = {
   'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 console=CON-1 operator=OP-1 finals=XV-1 minutes=20',
   'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 console=CON-2 operator=OP-2 finals=XV-1 minutes=20',
 };
-const scenario = ['scenario SC-1 category=c', '  cause external="Feed surge" frequency=0.1', '  layer AL-1', '  layer AL-2'];
+const bothOnCon1 = { ...base, 'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 console=CON-1 operator=OP-2 finals=XV-1 minutes=20' };
+const twoAlarms = scenario('external="Feed surge" frequency=0.1', 'AL-1', 'AL-2');
 
 ruleTable('shared-console', {
   valid: [
-    { name: 'each alarm on its own console', lines: base, scenario },
-    { name: 'one alarm with no console', lines: { ...base, 'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 operator=OP-2 finals=XV-1 minutes=20' }, scenario },
+    { name: 'each alarm on its own console', lines: base, scenario: twoAlarms },
+    { name: 'one alarm with no console', lines: { ...base, 'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 operator=OP-2 finals=XV-1 minutes=20' }, scenario: twoAlarms },
   ],
   invalid: [
     {
       name: 'both alarms on one console',
-      lines: { ...base, 'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 console=CON-1 operator=OP-2 finals=XV-1 minutes=20' },
-      scenario,
-      findings: [{ element: 'CON-1', parties: ['AL-1', 'AL-2'], severity: 'needs-justification' }],
+      source: SOURCE,
+      lines: bothOnCon1,
+      scenario: twoAlarms,
+      findings: [{ key: 'shared-console:SC-1:AL-1+AL-2:CON-1', severity: 'needs-justification', element: 'CON-1', parties: ['AL-1', 'AL-2'] }],
     },
     {
-      name: 'the console also relied on by the SIF (an operator reset through it)',
-      lines: { ...base, 'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=IO-4 air-from=IA-B', 'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 console=CON-1 operator=OP-1 finals=XV-1 minutes=20', 'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 console=CON-1 operator=OP-2 minutes=20 finals=XV-1' },
-      scenario: ['scenario SC-1 category=c', '  cause external="Feed surge" frequency=0.1', '  layer AL-2', '  layer AL-1'],
-      findings: [{ element: 'CON-1', parties: ['AL-2', 'AL-1'], severity: 'needs-justification' }],
+      name: 'the same, layers listed the other way: the key follows the scenario order',
+      source: SOURCE,
+      lines: bothOnCon1,
+      scenario: scenario('external="Feed surge" frequency=0.1', 'AL-2', 'AL-1'),
+      findings: [{ key: 'shared-console:SC-1:AL-2+AL-1:CON-1', severity: 'needs-justification', element: 'CON-1', parties: ['AL-2', 'AL-1'] }],
+    },
+    {
+      name: 'two screens mounted on one console desk',
+      source: SOURCE,
+      lines: { ...base, 'DESK-1': 'console DESK-1', 'CON-1': 'console CON-1 signal-via=S-1 mounted-on=DESK-1', 'CON-2': 'console CON-2 signal-via=S-1 mounted-on=DESK-1' },
+      scenario: twoAlarms,
+      findings: [{ key: 'shared-console:SC-1:AL-1+AL-2:DESK-1', severity: 'needs-justification', element: 'DESK-1', parties: ['AL-1', 'AL-2'] }],
     },
   ],
 });

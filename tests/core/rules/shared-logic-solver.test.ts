@@ -1,25 +1,12 @@
-// A controller that fails in the cause cannot act against it: IEC 61511-1:2016 9.3; the older CCPS (2001)
-// allowance is the policy switch shared-solver=allow.
+// shared-logic-solver: a controller that fails in the cause cannot act against it, and two BPCS layers in
+// one controller earn at most one credit (IEC 61511-1:2016 9.3); the older CCPS (2001) allowance is the
+// policy switch shared-solver=allow.
 import { describe, expect, it } from 'vitest';
-import { analyze, loadModelText } from '@bulkhead/core';
-import { modelText, ruleTable } from './cases.ts';
+import { analyseCase, ruleTable, scenario } from './harness.ts';
 
+const IEC = 'IEC 61511-1:2016 9.3';
+const CCPS_ALLOWANCE = 'CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance)';
 const sifInBpcs = { 'SF-1': 'sif SF-1 sensors=T-2 solver=C-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' };
-
-ruleTable('shared-logic-solver', {
-  valid: [
-    { name: 'SIF in the SIS logic solver' },
-    { name: 'SIF in a second SIS logic solver', lines: { 'S-2': 'logic-solver S-2 system=sis powered-by=CK-B', 'SF-1': 'sif SF-1 sensors=T-2 solver=S-2 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' } },
-  ],
-  invalid: [
-    { name: 'SIF in the BPCS controller that fails', lines: sifInBpcs, findings: [{ element: 'C-1', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }] },
-    {
-      name: 'policy shared-solver=allow makes it a note',
-      lines: { ...sifInBpcs, policy: 'policy shared-solver=allow' },
-      findings: [{ element: 'C-1', parties: ['LC-1', 'SF-1'], severity: 'note' }],
-    },
-  ],
-});
 
 // IEC 61511-1:2016 9.3: two BPCS layers in one controller earn at most one credit. The trace rule's note
 // defers to the assessment's bpcs-same-controller, which must then apply.
@@ -29,19 +16,58 @@ const twoBpcsTrips = {
   'C-2': 'controller C-2 system=bpcs',
   'IO-5': 'io-card IO-5 signal-via=C-2',
   'IO-6': 'io-card IO-6 signal-via=C-2',
-  'T-4': 'transmitter T-4 mounted-on=N-2 signal-via=IO-6',
+  'N-4': 'nozzle N-4 mounted-on=V-1',
+  'T-4': 'transmitter T-4 mounted-on=N-4 signal-via=IO-6',
   'P-1': 'pump P-1',
   'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-5',
   'MS-2': 'motor-starter MS-2 fails-to=off mounted-on=P-1 signal-via=IO-6',
   'TR-1': 'trip TR-1 sensors=T-3 solver=C-2 finals=MS-1 trip=stop pfd=0.1',
   'TR-2': 'trip TR-2 sensors=T-4 solver=C-2 finals=MS-2 trip=stop pfd=0.1',
 };
-const twoTrips = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer TR-1', '  layer TR-2'];
+const twoTrips = scenario('function=LC-1 frequency=0.1', 'TR-1', 'TR-2');
+
+ruleTable('shared-logic-solver', {
+  valid: [
+    { name: 'SIF in the SIS logic solver' },
+    {
+      name: 'SIF in a second SIS logic solver',
+      lines: { 'S-2': 'logic-solver S-2 system=sis powered-by=CK-B', 'SF-1': 'sif SF-1 sensors=T-2 solver=S-2 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' },
+    },
+    { name: 'two BPCS trips in two controllers', lines: { ...twoBpcsTrips, 'C-3': 'controller C-3 system=bpcs', 'IO-6': 'io-card IO-6 signal-via=C-3', 'TR-2': 'trip TR-2 sensors=T-4 solver=C-3 finals=MS-2 trip=stop pfd=0.1' }, scenario: twoTrips },
+  ],
+  invalid: [
+    {
+      name: 'SIF in the BPCS controller that fails (its power listed under it)',
+      source: IEC,
+      lines: sifInBpcs,
+      findings: [{ key: 'shared-logic-solver:SC-1:LC-1+SF-1:C-1', severity: 'voids-credit', element: 'C-1', parties: ['LC-1', 'SF-1'] }],
+    },
+    {
+      name: 'policy shared-solver=allow makes it a note',
+      source: CCPS_ALLOWANCE,
+      lines: { ...sifInBpcs, policy: 'policy shared-solver=allow' },
+      findings: [{ key: 'shared-logic-solver:SC-1:LC-1+SF-1:C-1', severity: 'note', element: 'C-1', parties: ['LC-1', 'SF-1'] }],
+    },
+    {
+      name: 'shared-solver=allow does not cover a cause that is the controller failing',
+      source: IEC,
+      lines: { ...sifInBpcs, policy: 'policy shared-solver=allow' },
+      scenario: scenario('element=C-1 frequency=0.1', 'SF-1'),
+      findings: [{ key: 'shared-logic-solver:SC-1:C-1+SF-1:C-1', severity: 'voids-credit', element: 'C-1', parties: ['C-1', 'SF-1'] }],
+    },
+    {
+      name: 'two BPCS layers in one controller: a note that defers to bpcs-same-controller',
+      source: IEC,
+      lines: twoBpcsTrips,
+      scenario: twoTrips,
+      findings: [{ key: 'shared-logic-solver:SC-1:TR-1+TR-2:C-2', severity: 'note', element: 'C-2', parties: ['TR-1', 'TR-2'] }],
+    },
+  ],
+});
 
 describe('two BPCS layers in one controller', () => {
   it('are a note of this rule, and the assessment credits only one of them (IEC 61511-1:2016 9.3)', () => {
-    const loaded = loadModelText('case.bulk', modelText({ name: 'two trips', lines: twoBpcsTrips, scenario: twoTrips }));
-    const analysis = analyze(loaded.model!);
+    const analysis = analyseCase({ name: 'two trips', lines: twoBpcsTrips, scenario: twoTrips });
     expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([
       ['bpcs-same-controller:SC-1:TR-1:TR-2', 'voids-credit'],
       ['shared-logic-solver:SC-1:TR-1+TR-2:C-2', 'note'],
@@ -71,8 +97,8 @@ describe('the controller and what it alone relies on', () => {
     'IO-6': 'io-card IO-6 signal-via=C-1',
     'TR-1': 'trip TR-1 sensors=T-2 solver=C-1 finals=MS-1 trip=stop pfd=0.1',
   };
-  const tripScenario = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer TR-1'];
-  const run = (lines: Record<string, string>, scenario: string[]) => analyze(loadModelText('case.bulk', modelText({ name: 'unit', lines, scenario })).model!);
+  const tripScenario = scenario('function=LC-1 frequency=0.1', 'TR-1');
+  const run = (lines: Record<string, string>, block: readonly string[]) => analyseCase({ name: 'unit', lines, scenario: block });
 
   it('under shared-solver=allow a trip in the failing loop controller keeps its credit, with its power and cabinet listed under the note', () => {
     const analysis = run({ ...tripInC1, policy: 'policy shared-solver=allow' }, tripScenario);
@@ -88,7 +114,7 @@ describe('the controller and what it alone relies on', () => {
   });
 
   it('shared-solver=allow does not cover a cause that is the failure of the controller itself', () => {
-    const analysis = run({ ...tripInC1, policy: 'policy shared-solver=allow' }, ['scenario SC-1 category=c', '  cause element=C-1 frequency=0.1', '  layer TR-1']);
+    const analysis = run({ ...tripInC1, policy: 'policy shared-solver=allow' }, scenario('element=C-1 frequency=0.1', 'TR-1'));
     expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([['shared-logic-solver:SC-1:C-1+TR-1:C-1', 'voids-credit']]);
   });
 

@@ -1,65 +1,74 @@
-// Shared supplies judged by the direction of failure (DESIGN section 1; CCPS LOPA (2001) ch. 6): a
-// de-energise-to-trip SIF whose valve fails to the trip position fails safe (common practice, no source).
-import { ruleTable } from './cases.ts';
+// shared-support: a shared power, air or hydraulic supply, judged by the direction of failure. Its loss is
+// harmless to a layer that it drives to the trip position (a note), otherwise it voids credit (CCPS, Layer of
+// Protection Analysis (2001), ch. 6). An unstated fail action counts as the worst case (this tool's rule).
+import { ruleTable } from './harness.ts';
 
+const CCPS = 'CCPS, Layer of Protection Analysis (2001), ch. 6';
+const FAIL_SAFE = 'de-energise to trip, valve failing to the trip position: common practice, no source';
 const xvOnAirA = (failsTo: string) => `shutdown-valve XV-1${failsTo ? ` fails-to=${failsTo}` : ''} mounted-on=L-1 signal-via=IO-4 air-from=IA-A`;
+const sisOnCircuitA = { 'S-1': 'logic-solver S-1 system=sis powered-by=CK-A' };
+const sif = (mode: string, finals = 'XV-1', voting = '') =>
+  `sif SF-1 sensors=T-2 solver=S-1 finals=${finals}${voting ? ` final-voting=${voting}` : ''} trip=close trip-mode=${mode} sil=2 pfd=0.01`;
+const onAir = (element: string, severity: 'note' | 'voids-credit') => ({
+  key: `shared-support:SC-1:LC-1+SF-1:${element}`,
+  severity,
+  element,
+  parties: ['LC-1', 'SF-1'],
+});
 
 ruleTable('shared-support', {
   valid: [
     { name: 'separate UPS, circuits and air' },
-    { name: 'separate air, same make of header', lines: { 'IA-B': 'air-header IA-B title="Second header"' } },
+    { name: 'separate hydraulic supplies', lines: { 'HY-1': 'hydraulic-supply HY-1', 'HY-2': 'hydraulic-supply HY-2', 'CV-1': 'control-valve CV-1 fails-to=closed mounted-on=L-1 signal-via=IO-3 hydraulic-from=HY-1', 'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=IO-4 hydraulic-from=HY-2' } },
   ],
   invalid: [
     {
-      name: 'shared air, valve fails closed, trip closes: fails safe, a note',
+      name: 'shared air, the valve fails closed and the trip closes: fails safe, a note',
+      source: `${CCPS}; ${FAIL_SAFE}`,
       lines: { 'XV-1': xvOnAirA('closed') },
-      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'note' }],
+      findings: [onAir('IA-A', 'note')],
     },
     {
-      name: 'shared air, valve fails open while the trip must close: voids',
+      name: 'shared air, the valve fails open while the trip must close: voids',
+      source: CCPS,
       lines: { 'XV-1': xvOnAirA('open') },
-      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+      findings: [onAir('IA-A', 'voids-credit')],
     },
     {
-      name: 'shared air, fail action not stated: the worst case',
+      name: 'shared air, fail action not stated: the worst case, voids',
+      source: 'conservative default of this tool (what the model does not say is not independence)',
       lines: { 'XV-1': xvOnAirA('') },
-      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+      findings: [onAir('IA-A', 'voids-credit')],
     },
     {
-      name: 'shared power circuit, energise-to-trip SIF: voids',
-      lines: {
-        'S-1': 'logic-solver S-1 system=sis powered-by=CK-A',
-        'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=energise sil=2 pfd=0.01',
-      },
-      findings: [{ element: 'CK-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+      name: 'shared circuit, energise-to-trip SIF: it cannot act without power, voids',
+      source: CCPS,
+      lines: { ...sisOnCircuitA, 'SF-1': sif('energise') },
+      findings: [onAir('CK-A', 'voids-credit')],
     },
     {
-      name: 'shared power circuit, de-energise-to-trip SIF with fail-closed valve: a note',
-      lines: { 'S-1': 'logic-solver S-1 system=sis powered-by=CK-A' },
-      findings: [{ element: 'CK-A', parties: ['LC-1', 'SF-1'], severity: 'note' }],
+      name: 'shared circuit, de-energise-to-trip SIF with fail-closed valve: it trips, a note',
+      source: `${CCPS}; ${FAIL_SAFE}`,
+      lines: sisOnCircuitA,
+      findings: [onAir('CK-A', 'note')],
     },
     {
       name: 'shared circuit feeding only the SIF transmitter: it reads low, nothing trips; voids',
+      source: 'conservative default of this tool (a sensor fault action the model does not state is not assumed)',
       lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 powered-by=CK-A' },
-      findings: [{ element: 'CK-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+      findings: [onAir('CK-A', 'voids-credit')],
     },
     {
-      name: 'shared air moves only the valve it feeds: with 2oo2 valves the other one must close too; voids',
-      lines: {
-        'XV-1': xvOnAirA('closed'),
-        'XV-2': 'shutdown-valve XV-2 fails-to=closed mounted-on=L-1 signal-via=IO-4 air-from=IA-B',
-        'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1,XV-2 final-voting=2oo2 trip=close trip-mode=de-energise sil=2 pfd=0.01',
-      },
-      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'voids-credit' }],
+      name: 'shared air moves only the valve it feeds: with 1oo2 valves that one is enough, a note',
+      source: FAIL_SAFE,
+      lines: { 'XV-1': xvOnAirA('closed'), 'XV-2': 'shutdown-valve XV-2 mounted-on=L-1 signal-via=IO-4 air-from=IA-B', 'SF-1': sif('de-energise', 'XV-1,XV-2', '1oo2') },
+      findings: [onAir('IA-A', 'note')],
     },
     {
-      name: 'shared air moves only the valve it feeds: with 1oo2 valves that one is enough; a note',
-      lines: {
-        'XV-1': xvOnAirA('closed'),
-        'XV-2': 'shutdown-valve XV-2 mounted-on=L-1 signal-via=IO-4 air-from=IA-B',
-        'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1,XV-2 final-voting=1oo2 trip=close trip-mode=de-energise sil=2 pfd=0.01',
-      },
-      findings: [{ element: 'IA-A', parties: ['LC-1', 'SF-1'], severity: 'note' }],
+      name: 'shared air moves only the valve it feeds: with 2oo2 valves the other must close too, voids',
+      source: 'MooN voting, M of the N channels must act: common practice, no source',
+      lines: { 'XV-1': xvOnAirA('closed'), 'XV-2': 'shutdown-valve XV-2 fails-to=closed mounted-on=L-1 signal-via=IO-4 air-from=IA-B', 'SF-1': sif('de-energise', 'XV-1,XV-2', '2oo2') },
+      findings: [onAir('IA-A', 'voids-credit')],
     },
   ],
 });

@@ -3,7 +3,7 @@
 // Analysis (2001), ch. 6: no single element may defeat both sides). Case models are invented.
 import { describe, expect, it } from 'vitest';
 import { analyze, loadModelText } from '@bulkhead/core';
-import { modelText } from './cases.ts';
+import { modelText } from './harness.ts';
 
 // An alarm raised in the failing loop's controller C-1 (fed from CK-A); its transmitter's card IO-5 hangs
 // on a second controller but is fed from CK-A as well, by a longer route than the one through C-1.

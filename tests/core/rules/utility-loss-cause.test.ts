@@ -1,25 +1,45 @@
-// A layer that needs the utility whose loss is the cause: CCPS LOPA (2001) ch. 6; CCPS IEs and IPLs (2015).
-import { ruleTable } from './cases.ts';
+// utility-loss-cause: a layer that needs the utility whose loss starts the scenario is defeated by it,
+// unless that loss drives the layer to its trip position (CCPS, Layer of Protection Analysis (2001), ch. 6).
+import { ruleTable, scenario } from './harness.ts';
 
-const airLoss = ['scenario SC-1 category=c', '  cause element=IA-A frequency=0.1', '  layer SF-1'];
+const CCPS = 'CCPS, Layer of Protection Analysis (2001), ch. 6';
+const FAIL_SAFE = 'de-energise or fail to trip on loss: common practice, no source';
+const airLoss = scenario('element=IA-A frequency=0.1', 'SF-1');
+const sisFeedLoss = scenario('element=CK-B frequency=0.1', 'SF-1');
+const xvOnAirA = (failsTo: string) => `shutdown-valve XV-1 fails-to=${failsTo} mounted-on=L-1 signal-via=IO-4 air-from=IA-A`;
 
 ruleTable('utility-loss-cause', {
   valid: [
-    { name: 'loss of air A, SIF on air B', scenario: airLoss },
-    { name: 'loss of UPS A, SIF on UPS B', scenario: ['scenario SC-1 category=c', '  cause element=UPS-A frequency=0.1', '  layer SF-1'] },
+    { name: 'loss of air A, the SIF valve on air B', scenario: airLoss },
+    { name: 'loss of UPS A, the SIF fed from UPS B', scenario: scenario('element=UPS-A frequency=0.1', 'SF-1') },
   ],
   invalid: [
     {
-      name: 'loss of air, SIF valve on that air fails closed as the trip needs: a note',
+      name: 'loss of air, the SIF valve on that air fails closed as the trip needs: a note',
+      source: `${CCPS}; ${FAIL_SAFE}`,
       scenario: airLoss,
-      lines: { 'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=IO-4 air-from=IA-A' },
-      findings: [{ element: 'IA-A', parties: ['IA-A', 'SF-1'], severity: 'note' }],
+      lines: { 'XV-1': xvOnAirA('closed') },
+      findings: [{ key: 'utility-loss-cause:SC-1:IA-A+SF-1:IA-A', severity: 'note', element: 'IA-A', parties: ['IA-A', 'SF-1'] }],
     },
     {
-      name: 'loss of air, SIF valve on that air fails open: voids',
+      name: 'loss of air, the SIF valve on that air fails open while the trip must close: voids',
+      source: CCPS,
       scenario: airLoss,
-      lines: { 'XV-1': 'shutdown-valve XV-1 fails-to=open mounted-on=L-1 signal-via=IO-4 air-from=IA-A' },
-      findings: [{ element: 'IA-A', parties: ['IA-A', 'SF-1'], severity: 'voids-credit' }],
+      lines: { 'XV-1': xvOnAirA('open') },
+      findings: [{ key: 'utility-loss-cause:SC-1:IA-A+SF-1:IA-A', severity: 'voids-credit', element: 'IA-A', parties: ['IA-A', 'SF-1'] }],
+    },
+    {
+      name: 'loss of the SIS feed, de-energise-to-trip SIF: it trips, a note (its UPS is listed under it)',
+      source: `${CCPS}; ${FAIL_SAFE}`,
+      scenario: sisFeedLoss,
+      findings: [{ key: 'utility-loss-cause:SC-1:CK-B+SF-1:CK-B', severity: 'note', element: 'CK-B', parties: ['CK-B', 'SF-1'] }],
+    },
+    {
+      name: 'loss of the SIS feed, energise-to-trip SIF: it cannot act, voids',
+      source: CCPS,
+      scenario: sisFeedLoss,
+      lines: { 'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=energise sil=2 pfd=0.01' },
+      findings: [{ key: 'utility-loss-cause:SC-1:CK-B+SF-1:CK-B', severity: 'voids-credit', element: 'CK-B', parties: ['CK-B', 'SF-1'] }],
     },
   ],
 });
