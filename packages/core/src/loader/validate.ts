@@ -133,7 +133,10 @@ class Validator {
     this.input.model.elements.forEach((element, i) => {
       const group = groupOf(element.kind);
       for (const link of LINK_FIELDS) {
-        (element[link] ?? []).forEach((tag, j) => {
+        // Most elements declare two or three of the seven links: skip the rest without allocating.
+        const targets = element[link];
+        if (targets === undefined) continue;
+        targets.forEach((tag, j) => {
           const path = () => this.path('elements', i, link, j);
           const target = this.element(tag, path, link);
           if (!target) return;
@@ -155,7 +158,16 @@ class Validator {
   private checkCycles(): void {
     const { elements } = this.input.model;
     const indexOf = new Map(elements.map((e, i) => [e.tag, i]));
-    const edges = elements.map((e) => LINK_FIELDS.flatMap((link) => (e[link] ?? []).map((t) => indexOf.get(t)).filter((t): t is number => t !== undefined)));
+    const edges = elements.map((e) => {
+      const out: number[] = [];
+      for (const link of LINK_FIELDS) {
+        for (const t of e[link] ?? []) {
+          const target = indexOf.get(t);
+          if (target !== undefined) out.push(target);
+        }
+      }
+      return out;
+    });
     for (const cycle of findCycles(edges)) {
       const tags = cycle.map((i) => elements[i]!.tag);
       this.push('BH303', `dependency cycle: ${[...tags, tags[0]].map((t) => `\`${t}\``).join(' -> ')}`, this.path('elements', cycle[0]!, 'tag'), {
