@@ -2,8 +2,8 @@
 // own: times load and each analysis stage in analyze()'s order, then analyze() whole, and prints JSON.
 import { readFileSync } from 'node:fs';
 import {
-  analyze, applyJustifications, assessScenario, bpcsFactsOf, buildPlantGraph, independenceRulesInForce, loadModelText, resolvedPolicy,
-  runRules, Tracer, type Finding, type Model, type RuleEnvironment,
+  analyze, applyJustifications, assessScenario, bpcsFactsOf, buildPlantGraph, loadModelText, ruleEnvironment,
+  runRules, Tracer, type Finding, type Model,
 } from '@bulkhead/core';
 
 export interface StageTimes {
@@ -49,17 +49,7 @@ function stages(model: Model, times: Partial<StageTimes>): number {
   const tracer = new Tracer(graph);
   model.functions.map((f) => tracer.traceFunction(f.tag));
   lap('trace');
-  const independence = independenceRulesInForce(model);
-  const severities = new Map(independence.map((r) => [r.id, r.severity]));
-  const env: RuleEnvironment = {
-    model,
-    tracer,
-    elements: new Map(model.elements.map((e) => [e.tag, e])),
-    functions: new Map(model.functions.map((f) => [f.tag, f])),
-    policy: resolvedPolicy(model),
-    severity: (id) => severities.get(id) ?? 'voids-credit',
-    acceptedKeys: new Set((model.justifications ?? []).map((j) => j.finding)),
-  };
+  const env = ruleEnvironment(model, tracer);
   const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
   lap('rules');
   const independent = applyJustifications(raw, model.justifications).findings;

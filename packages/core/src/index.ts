@@ -13,7 +13,7 @@ export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';
 export { summarize, type ModelSummary } from './model/summary.ts';
 export * from './analysis/types.ts';
-export { analyze, independenceRulesInForce, type AnalyzeOptions } from './analysis/analyze.ts';
+export { analyze, independenceRulesInForce, ruleEnvironment, type AnalyzeOptions } from './analysis/analyze.ts';
 export { buildPlantGraph, roleTargets, type PlantGraph, type NodeAttributes, type EdgeAttributes } from './graph/plant-graph.ts';
 export { Tracer } from './trace/trace.ts';
 export { RULES, RULE_IDS, ruleById } from './rules/registry.ts';

@@ -31,13 +31,10 @@ export function independenceRulesInForce(model: Model): RuleInForce[] {
   });
 }
 
-export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
-  const graph = buildPlantGraph(model);
-  const tracer = new Tracer(graph);
-  const traces = model.functions.map((f) => tracer.traceFunction(f.tag));
-  const independence = independenceRulesInForce(model);
+/** What the rules read besides the scenario: lookups, policy and severities in force, built once per model. */
+export function ruleEnvironment(model: Model, tracer: Tracer, independence = independenceRulesInForce(model)): RuleEnvironment {
   const severities = new Map(independence.map((r) => [r.id, r.severity]));
-  const env: RuleEnvironment = {
+  return {
     model,
     tracer,
     elements: new Map(model.elements.map((e) => [e.tag, e])),
@@ -46,6 +43,14 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
     severity: (id) => severities.get(id) ?? 'voids-credit',
     acceptedKeys: new Set((model.justifications ?? []).map((j) => j.finding)),
   };
+}
+
+export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
+  const graph = buildPlantGraph(model);
+  const tracer = new Tracer(graph);
+  const traces = model.functions.map((f) => tracer.traceFunction(f.tag));
+  const independence = independenceRulesInForce(model);
+  const env = ruleEnvironment(model, tracer, independence);
   const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
   const independent = applyJustifications(raw, model.justifications, options.spans).findings;
   // The assessment's limit findings read their own acceptances; staleness is judged over all findings.
