@@ -70,5 +70,5 @@ exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwis
 };
 
 export function commandHelp(command: string): string {
-  return COMMANDS[command] ?? HELP;
+  return Object.hasOwn(COMMANDS, command) ? COMMANDS[command]! : HELP;
 }

@@ -1,15 +1,10 @@
 // The `bulkhead` command line: parses arguments, runs one command, and maps the outcome to the
 // documented exit codes (0 clean, 1 findings at or above --fail-on, 2 bad input or usage).
 import { parseArgs } from 'node:util';
-import { checkCommand } from './commands/check.ts';
-import { convertCommand } from './commands/convert.ts';
-import { fmtCommand } from './commands/fmt.ts';
-import { reportCommand } from './commands/report.ts';
-import { schemaCommand } from './commands/schema.ts';
-import { traceCommand } from './commands/trace.ts';
-import { viewCommand } from './commands/view.ts';
 import { UsageError } from './io.ts';
+import { cliVersion } from './version.ts';
 import { HELP, commandHelp } from './help.ts';
+import { checkPositionals, COMMANDS, misplacedOption } from './commands/table.ts';
 
 // A reader piping into `head` closes the pipe early; that is not an error worth a stack trace.
 process.stdout.on('error', (e: NodeJS.ErrnoException) => {
@@ -24,60 +19,26 @@ function run(argv: string[]): number {
     return command === undefined ? 2 : 0;
   }
   if (command === '--version' || command === '-V') {
-    process.stdout.write('bulkhead 0.1.0\n');
+    process.stdout.write(`bulkhead ${cliVersion()}\n`);
     return 0;
   }
-  const { values, positionals } = parseArgs({
-    args: rest,
-    allowPositionals: true,
-    strict: true,
-    options: {
-      help: { type: 'boolean', short: 'h' },
-      check: { type: 'boolean' },
-      to: { type: 'string' },
-      out: { type: 'string', short: 'o' },
-      format: { type: 'string' },
-      date: { type: 'string' },
-      'fail-on': { type: 'string' },
-      'json-schema': { type: 'boolean' },
-      port: { type: 'string' },
-    },
-  });
-  if (values.help) {
+  const spec = COMMANDS.get(command);
+  if (!spec) throw new UsageError(`unknown command \`${command}\``);
+  if (rest.includes('--help') || rest.includes('-h')) {
     process.stdout.write(commandHelp(command));
     return 0;
   }
-  const file = (): string => {
-    const f = positionals[0];
-    if (f === undefined) throw new UsageError(`\`bulkhead ${command}\` needs a model file`);
-    return f;
-  };
-  switch (command) {
-    case 'check':
-      return checkCommand(file(), values['fail-on']);
-    case 'trace':
-      return traceCommand(file(), positionals[1]);
-    case 'schema':
-      return schemaCommand();
-    case 'fmt':
-      if (positionals.length === 0) throw new UsageError('`bulkhead fmt` needs at least one model file');
-      return fmtCommand(positionals, values.check ?? false);
-    case 'convert':
-      return convertCommand(file(), values.to, values.out);
-    case 'report':
-      if (positionals.length > 1) throw new UsageError('`bulkhead report` takes one model file');
-      return reportCommand(positionals[0], {
-        format: values.format,
-        out: values.out,
-        date: values.date,
-        failOn: values['fail-on'],
-        jsonSchema: values['json-schema'] ?? false,
-      });
-    case 'view':
-      return viewCommand(file(), values.port);
-    default:
-      throw new UsageError(`unknown command \`${command}\``);
+  let parsed: ReturnType<typeof parseArgs>;
+  try {
+    parsed = parseArgs({ args: rest, allowPositionals: true, strict: true, options: spec.options });
+  } catch (e) {
+    const code = (e as { code?: string }).code;
+    const raw = /'([^']+)'/.exec((e as Error).message)?.[1];
+    if (code === 'ERR_PARSE_ARGS_UNKNOWN_OPTION' && raw !== undefined) throw misplacedOption(command, spec, raw);
+    throw e;
   }
+  checkPositionals(command, spec, parsed.positionals);
+  return spec.run(parsed.values as Record<string, string | boolean | undefined>, parsed.positionals);
 }
 
 try {

@@ -8,11 +8,11 @@ import {
   renderReport,
   reportJsonSchema,
   REPORT_FORMATS,
-  SEVERITIES,
-  type Finding,
   type SeverityLevel,
 } from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError, writeFileAtomic } from '../io.ts';
+import { failingFindings, parseFailOn } from './fail-on.ts';
+import { cliVersion } from '../version.ts';
 
 export interface ReportOptions {
   format?: string;
@@ -25,11 +25,6 @@ export interface ReportOptions {
 /** Without --fail-on, a voided credit fails the run: the conservative default for a CI gate. */
 export const DEFAULT_FAIL_ON: SeverityLevel = 'voids-credit';
 
-function toolVersion(): string {
-  const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
-  return pkg.version;
-}
-
 /** A real calendar date in YYYY-MM-DD: 2025-02-30 is refused, not rolled over to March. */
 function checkDate(date: string): string {
   const m = /^(\d{4})-(\d{2})-(\d{2})$/.exec(date);
@@ -40,17 +35,6 @@ function checkDate(date: string): string {
   return date;
 }
 
-function checkFailOn(level: string | undefined): SeverityLevel {
-  if (level === undefined) return DEFAULT_FAIL_ON;
-  if (!(SEVERITIES as readonly string[]).includes(level)) throw new UsageError(`--fail-on takes ${SEVERITIES.join(', ')}; found \`${level}\``);
-  return level as SeverityLevel;
-}
-
-/** Findings that fail the run: unaccepted, and at least as severe as the threshold. */
-export function failingFindings(findings: readonly Finding[], failOn: SeverityLevel): Finding[] {
-  const rank = (s: SeverityLevel) => SEVERITIES.indexOf(s);
-  return findings.filter((f) => f.accepted === undefined && rank(f.severity) <= rank(failOn));
-}
 
 export function reportCommand(file: string | undefined, options: ReportOptions): number {
   if (options.jsonSchema) {
@@ -62,7 +46,7 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   if (format === undefined) throw new UsageError(`\`bulkhead report\` needs --format ${REPORT_FORMATS.join('|')}`);
   if (!isReportFormat(format)) throw new UsageError(`--format takes ${REPORT_FORMATS.join(', ')}; found \`${format}\``);
   const date = options.date === undefined ? undefined : checkDate(options.date);
-  const failOn = checkFailOn(options.failOn);
+  const failOn = options.failOn === undefined ? DEFAULT_FAIL_ON : parseFailOn(options.failOn);
   const result = readModel(file);
   if (!result.model || !result.bytes) {
     printDiagnostics(result);
@@ -75,7 +59,7 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
       analysis,
       file,
       sha256: createHash('sha256').update(result.bytes).digest('hex'),
-      toolVersion: toolVersion(),
+      toolVersion: cliVersion(),
       ...(date ? { date } : {}),
       spans: result.spans,
     },
