@@ -11,9 +11,11 @@ const CASES: { name: string; file: string; formats: readonly ReportFormat[] }[] 
   { name: 'marrow-fen-rev-b', file: DEMO_REV_B, formats: ['md', 'sarif'] },
 ];
 
+/** The pinned text; only an explicit UPDATE_GOLDEN=1 writes one, so a missing golden file fails. */
 function golden(name: string, format: ReportFormat, actual: string): string {
   const path = `${GOLDEN_DIR}${name}.${format}`;
-  if (process.env.UPDATE_GOLDEN === '1' || !existsSync(path)) writeFileSync(path, actual);
+  if (process.env.UPDATE_GOLDEN === '1') writeFileSync(path, actual);
+  if (!existsSync(path)) throw new Error(`golden file ${path} is missing: run with UPDATE_GOLDEN=1, then review it by hand`);
   return readFileSync(path, 'utf8');
 }
 
