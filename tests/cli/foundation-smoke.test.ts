@@ -11,6 +11,6 @@ describe('runCli helper', () => {
   });
   it('recognises a stack trace', () => {
     expect(hasStackTrace('Error: boom\n    at foo (file.js:1:1)')).toBe(true);
-    expect(hasStackTrace('error[BH300]: unknown tag')).toBe(false);
+    expect(hasStackTrace('Model error: unknown tag `LT-9`\n  code     BH300 (unknown reference)')).toBe(false);
   });
 });

@@ -1,5 +1,5 @@
-// The loader reports every problem in one pass, each at its own position, and renders them compiler
-// style; golden files pin the rendered text (caret under the right column, notes, help lines).
+// The loader reports every problem in one pass, each at its own position, and renders them in the
+// notice look; golden files pin the rendered text (mark under the right column, see-also and to-fix lines).
 import { describe, expect, it } from 'vitest';
 import { loadModelText, renderDiagnostics } from '@bulkhead/core';
 
@@ -71,12 +71,13 @@ describe('rendered diagnostics (golden files)', () => {
     await expect(render('trailing.json', json) + '\n' + render('long.bulk', long)).toMatchFileSnapshot('./__golden__/json-and-long-line.txt');
   });
 
-  it('puts the caret under the reported column, counted in characters of the line', () => {
+  it('puts the mark under the reported column, counted in characters of the line', () => {
     const out = render('three.bulk', THREE_DEFECTS).split('\n');
-    const at = out.findIndex((l) => l.startsWith('12 | '));
-    const source = out[at]!.slice('12 | '.length);
-    const caret = out[at + 1]!.slice('   | '.length);
-    expect(source.slice(caret.indexOf('^'), caret.lastIndexOf('^') + 1)).toBe('LT-3');
+    const at = out.findIndex((l) => l.includes('┆ sif SIF-1'));
+    const rail = out[at]!.indexOf('┆ ') + 2;
+    const source = out[at]!.slice(rail);
+    const mark = out[at + 1]!.slice(rail);
+    expect(source.slice(mark.indexOf('‾'), mark.lastIndexOf('‾') + 1)).toBe('LT-3');
   });
 
   it('shows control characters as ? so an excerpt cannot move the terminal cursor', () => {

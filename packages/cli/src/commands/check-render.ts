@@ -1,59 +1,18 @@
-// Text output of `bulkhead check`: findings grouped by scenario in compiler-diagnostic style, each
-// pointing at the claimed layer in the model file, then the LOPA lines and a one-line verdict.
+// Text output of `bulkhead check`: findings grouped by scenario in the notice look, each pointing at the
+// claimed layer in the model file, then the LOPA lines and a one-line verdict.
 import {
   ASSESSMENT_CAUTION,
   formatFrequency,
   formatRatio,
   ModelLocator,
-  position,
+  renderFindingText,
   renderAssessmentText,
   type Analysis,
-  type Finding,
   type LoadResult,
   type Model,
   type ScenarioAssessment,
   type SourceText,
-  type Span,
 } from '@bulkhead/core';
-
-const SHOWN: Record<Finding['severity'], string> = { 'voids-credit': 'voids', 'needs-justification': 'open', note: 'note' };
-
-function excerpt(source: SourceText, span: Span, gutter: number): string[] {
-  const text = source.lines[span.line - 1];
-  if (text === undefined) return [];
-  const pad = ' '.repeat(gutter);
-  return [
-    `${pad} |`,
-    `${String(span.line).padStart(gutter)} | ${text.replace(/\t/g, ' ')}`,
-    `${pad} | ${' '.repeat(span.column - 1)}${'^'.repeat(Math.max(1, span.length))}`,
-  ];
-}
-
-function primarySpan(finding: Finding, locate: ModelLocator): Span | undefined {
-  const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
-  if (layer?.tag) return locate.layer(finding.scenario, layer.tag);
-  if (finding.scenario) return locate.cause(finding.scenario);
-  return undefined;
-}
-
-export function renderFinding(finding: Finding, source: SourceText, locate: ModelLocator): string {
-  const span = primarySpan(finding, locate);
-  const elementSpan = finding.element ? locate.element(finding.element) : undefined;
-  const gutter = Math.max(2, String(span?.line ?? 0).length);
-  const pad = ' '.repeat(gutter);
-  const state = finding.accepted ? 'accepted' : SHOWN[finding.severity];
-  const lines = [`${state}[${finding.rule}]: ${finding.message}`, `${pad}--> ${position(source.file, span)}`];
-  if (span) lines.push(...excerpt(source, span, gutter));
-  finding.parties.forEach((party, i) => {
-    const path = finding.paths[i];
-    if (path && path.length > 1) lines.push(`${pad} = ${party.role === 'cause' ? 'cause' : 'layer'}: ${path.join(' -> ')}`);
-  });
-  if (finding.element && elementSpan) lines.push(`${pad} = element \`${finding.element}\` is defined at ${position(source.file, elementSpan)}`);
-  if (finding.accepted) lines.push(`${pad} = accepted by ${finding.accepted.by} on ${finding.accepted.date}: ${finding.accepted.reason}`);
-  lines.push(`${pad} = why: ${finding.rationale} (${finding.source})`);
-  lines.push(`${pad} = key: ${finding.key}`);
-  return lines.join('\n');
-}
 
 export function verdictLine(a: ScenarioAssessment): string {
   const after = formatFrequency(a.mitigatedAfter);
@@ -77,13 +36,13 @@ export function renderCheck(result: LoadResult & { model: Model }, analysis: Ana
   for (const assessment of analysis.assessments) {
     const findings = analysis.findings.filter((f) => f.scenario === assessment.scenario);
     out.push(`== ${assessment.scenario}${assessment.title ? `: ${assessment.title}` : ''} ==`, '');
-    for (const f of findings) out.push(renderFinding(f, source, locate), '');
+    for (const f of findings) out.push(renderFindingText(f, source, locate), '');
     out.push(...renderAssessmentText(assessment), '');
   }
   const loose = analysis.findings.filter((f) => f.scenario === undefined);
   if (loose.length) {
     out.push('== model ==', '');
-    for (const f of loose) out.push(renderFinding(f, source, locate), '');
+    for (const f of loose) out.push(renderFindingText(f, source, locate), '');
   }
   const counts = { 'voids-credit': 0, 'needs-justification': 0, note: 0, accepted: 0 };
   for (const f of analysis.findings) counts[f.accepted ? 'accepted' : f.severity]++;

@@ -1,7 +1,7 @@
 // `bulkhead check FILE [--fail-on LEVEL]`: loads and validates a model, analyses every scenario, and
 // prints the findings, the LOPA lines and a verdict per scenario. Exit 1 only when --fail-on is given
 // and an unaccepted finding reaches it, so the command can gate CI without failing a plain look.
-import { analyze } from '@bulkhead/core';
+import { analyze, renderDiagnostics } from '@bulkhead/core';
 import { printDiagnostics, readModel } from '../io.ts';
 import { renderCheck } from './check-render.ts';
 import { failingFindings, parseFailOn } from './fail-on.ts';
@@ -13,7 +13,7 @@ export function checkCommand(file: string, failOn: string | undefined): number {
     printDiagnostics(result);
     return 2;
   }
-  for (const d of result.diagnostics) process.stderr.write(`${d.severity}[${d.code}]: ${d.message}\n`);
+  if (result.diagnostics.length) process.stderr.write(`${renderDiagnostics(result.diagnostics, result.source)}\n\n`);
   const analysis = analyze(result.model, { spans: result.spans });
   process.stdout.write(renderCheck({ ...result, model: result.model }, analysis));
   if (threshold === undefined) return 0;

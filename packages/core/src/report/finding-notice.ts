@@ -1,0 +1,45 @@
+// An independence finding in the notice look (see diagnostics/notice.ts): the verdict and what is shared
+// first, then the claim it concerns in the model file, the path from each side to the shared element, the
+// element's definition, why the rule holds (with its source), and the key an `accept` statement names.
+import type { Finding } from '../analysis/types.ts';
+import type { Span } from '../diagnostics/diagnostic.ts';
+import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
+import type { ModelLocator } from './locate.ts';
+
+const KINDS: Record<Finding['severity'], string> = {
+  'voids-credit': 'Credit voided',
+  'needs-justification': 'Needs a justification',
+  note: 'Note',
+};
+
+function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span; role?: string } {
+  const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
+  if (layer?.tag) return { span: locate.layer(finding.scenario, layer.tag), role: `the claim of layer ${layer.tag}` };
+  if (finding.scenario) return { span: locate.cause(finding.scenario), role: `the cause of ${finding.scenario}` };
+  return {};
+}
+
+export function findingNotice(finding: Finding, locate: ModelLocator): Notice {
+  const { span, role } = primarySpan(finding, locate);
+  const facts: NoticeFact[] = [];
+  finding.parties.forEach((party, i) => {
+    const path = finding.paths[i];
+    if (path && path.length > 1) facts.push({ label: party.role === 'cause' ? 'cause' : 'layer', text: path.join(' -> ') });
+  });
+  const elementSpan = finding.element ? locate.element(finding.element) : undefined;
+  if (finding.element && elementSpan) facts.push({ label: 'element', text: `${finding.element}, defined at ${place(elementSpan)}` });
+  if (finding.accepted) facts.push({ label: 'accepted', text: `by ${finding.accepted.by} on ${finding.accepted.date}: ${finding.accepted.reason}` });
+  facts.push({ label: 'why', text: `${finding.rationale} (${finding.source})` });
+  return {
+    kind: finding.accepted ? `Accepted (${KINDS[finding.severity].toLowerCase()})` : KINDS[finding.severity],
+    headline: finding.message,
+    ...(span ? { span } : {}),
+    ...(role && span ? { spanRole: role } : {}),
+    facts,
+    reference: { label: 'key', text: `${finding.key} (rule ${finding.rule})` },
+  };
+}
+
+export function renderFindingText(finding: Finding, source: SourceText, locate: ModelLocator): string {
+  return renderNotice(findingNotice(finding, locate), source);
+}
