@@ -6,7 +6,7 @@ import { cpus, loadavg } from 'node:os';
 import { join } from 'node:path';
 import { parseArgs } from 'node:util';
 import { ensureGenerated, GENERATED_DIR } from './generate.ts';
-import type { Measurement, StageTimes } from './measure.ts';
+import type { Measurement } from './measure.ts';
 
 const HERE = new URL('.', import.meta.url);
 const ROOT = new URL('..', HERE);

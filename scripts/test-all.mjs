@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// The whole test suite, as the README's test command runs it: type check, unit and standards tests,
+// The whole test suite, as the README's test command runs it: type check, lint, unit and standards tests,
 // then the browser tests when a viewer exists. Prints one plain closing line "N passed, N failed"
 // because CI reads that line, not vitest's own summary.
 import { spawnSync } from 'node:child_process';
@@ -15,6 +15,7 @@ function step(name, command, args) {
 }
 
 let ok = step('type check', 'npx', ['tsc', '--noEmit', '-p', '.']);
+ok = step('lint', 'npx', ['eslint', '.']) && ok;
 const reports = [];
 const hasViewer = existsSync('apps/viewer/vite.config.ts');
 if (hasViewer) {

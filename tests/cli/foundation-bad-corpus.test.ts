@@ -20,7 +20,7 @@ describe('bulkhead check on the bad-input corpus', () => {
     const r = results.get(file)!;
     expect(r.code).toBe(2);
     expect(r.stdout).toBe('');
-    expect(r.stderr).toMatch(new RegExp(`^  code +${code} `, 'm'));
+    expect(r.stderr).toMatch(new RegExp(`^ {2}code +${code} `, 'm'));
     expect(r.stderr).toContain(`fixtures/bad/${file}:${line}:${column}`);
     expect(r.stderr).toContain('nothing was analysed');
     expect(hasStackTrace(r.stderr)).toBe(false);
@@ -37,7 +37,7 @@ describe('bulkhead check on input it cannot read', () => {
   it('a missing path exits 2 with BH104', async () => {
     const r = await runCli(['check', join(dir, 'no-such-model.bulk')]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/^  code +BH104 /m);
+    expect(r.stderr).toMatch(/^ {2}code +BH104 /m);
     expect(r.stderr).toContain('no such file');
     expect(hasStackTrace(r.stderr)).toBe(false);
   });
@@ -45,7 +45,7 @@ describe('bulkhead check on input it cannot read', () => {
   it('a directory exits 2 with BH104', async () => {
     const r = await runCli(['check', dir]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/^  code +BH104 /m);
+    expect(r.stderr).toMatch(/^ {2}code +BH104 /m);
     expect(r.stderr).toContain('is a directory');
   });
 
@@ -56,7 +56,7 @@ describe('bulkhead check on input it cannot read', () => {
     truncateSync(file, 50 * 1024 * 1024 + 1);
     const r = await runCli(['check', file]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/^  code +BH103 /m);
+    expect(r.stderr).toMatch(/^ {2}code +BH103 /m);
     expect(r.stderr).toContain('the limit is 50 MB');
     expect(hasStackTrace(r.stderr)).toBe(false);
   });

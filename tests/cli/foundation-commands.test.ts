@@ -115,7 +115,7 @@ describe('fmt', () => {
     const bad = temp('bad.bulk', 'site "B\n');
     const r = await runCli(['fmt', bad, good]);
     expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(/^  code +BH110 /m);
+    expect(r.stderr).toMatch(/^ {2}code +BH110 /m);
     expect(r.stderr).toContain(`${bad}:1:6`);
     expect(readFileSync(bad, 'utf8')).toBe('site "B\n');
     expect(readFileSync(good, 'utf8')).toBe('site "G"\ncategory c tolerable=1e-4 harm=people\n');

@@ -34,7 +34,7 @@ describe('a finding in the notice look', () => {
     expect(out[4]).toBe('  cause    LC-1 -> T-1 -> BR-1');
     expect(out[5]).toBe('  layer    SF-1 -> T-2 -> BR-1');
     expect(out[6]).toBe(`  element  BR-1, defined at line ${bridleLine}, column 8`);
-    expect(out[7]).toMatch(/^  why      .+\(.+\)$/);
+    expect(out[7]).toMatch(/^ {2}why {6}.+\(.+\)$/);
     expect(out[8]).toBe('  key      shared-bridle:SC-1:LC-1+SF-1:BR-1 (rule shared-bridle)');
     expect(out).toHaveLength(9);
   });

@@ -88,7 +88,7 @@ scenario S-2 category=loc
   it('is plain text: no colour codes, no trailing spaces, layer columns aligned', () => {
     const lines = renderAssessmentText(assess(DEMO_LIKE, VOIDING).assessment);
     for (const l of lines) {
-      expect(l).not.toMatch(/\u001b/);
+      expect(l).not.toContain('\u001b');
       expect(l).toBe(l.trimEnd());
     }
     const table = lines.filter((l) => / (sif|alarm|kind) /.test(l));

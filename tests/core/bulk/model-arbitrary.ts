@@ -44,7 +44,7 @@ export const text = fc.oneof(
   fc.constantFrom('', '"', '\\', 'a "quoted" \\ back\\slash', '#not a comment', 'x=y, z', '\\n is not a line break', 'ünïcödé 🚧 日本'),
   loneSurrogate,
 );
-// eslint-disable-next-line no-control-regex
+// eslint-disable-next-line no-control-regex -- matching control characters is the point of this pattern
 const CONTROL = /[\u0000-\u0008\u000a-\u001f\u007f]/g;
 /** One comment line: arbitrary text with no line break or control character (tabs allowed). */
 export const comment = fc.oneof(

@@ -11,7 +11,6 @@ import {
   type LoadResult,
   type Model,
   type ScenarioAssessment,
-  type SourceText,
 } from '@bulkhead/core';
 
 export function verdictLine(a: ScenarioAssessment): string {

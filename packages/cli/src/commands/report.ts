@@ -1,7 +1,6 @@
 // `bulkhead report FILE --format md|html|csv|json|sarif [-o OUT] [--date YYYY-MM-DD] [--fail-on LEVEL]`:
 // writes the evidence list; exits 1 when an unaccepted finding is at or above --fail-on (CI gate).
 import { createHash } from 'node:crypto';
-import { readFileSync } from 'node:fs';
 import {
   analyze,
   isReportFormat,

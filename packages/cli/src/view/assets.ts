@@ -24,7 +24,7 @@ const TYPES: Record<string, string> = {
 };
 
 /** URL paths are plain: letters, digits and `-_.` in `/`-separated parts, no part starting with a dot. */
-const SAFE_PATH = /^(\/[A-Za-z0-9_\-][A-Za-z0-9_.\-]*)+$/;
+const SAFE_PATH = /^(\/[A-Za-z0-9_-][A-Za-z0-9_.-]*)+$/;
 
 function typeOf(name: string): string {
   const dot = name.lastIndexOf('.');

@@ -18,7 +18,7 @@ const SHORT_ESCAPES: Record<string, string> = { '\\': '\\\\', '"': '\\"', '\n': 
  * the line or hide in a terminal, and lone UTF-16 surrogates, which UTF-8 cannot store, become \u{...}.
  */
 function quote(text: string): string {
-  // eslint-disable-next-line no-control-regex
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point of this pattern
   const escaped = text.replace(/[\\"\u0000-\u001f\u007f]|[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/g, (c) =>
     SHORT_ESCAPES[c] ?? `\\u{${c.charCodeAt(0).toString(16)}}`,
   );

@@ -1,6 +1,6 @@
 // Reads the zod schema's shapes so the .bulk reader, printer and loader share one list of fields
 // per statement: the schema stays the only place where a field is declared.
-import type { z } from 'zod';
+import { z } from 'zod';
 import { Category, Cause, Element, Enabler, Function, Justification, LayerClaim, Modifier, Policy, RuleSetting, Scenario, Site } from './schema.ts';
 
 export type FieldType =
@@ -11,31 +11,21 @@ export type FieldType =
   | { type: 'literal' }
   | { type: 'nested' };
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
-type AnySchema = any;
-
-function unwrap(schema: AnySchema): AnySchema {
+/** The schema under `.optional()` and `.default()`, through zod's public classes only. */
+function unwrap(schema: z.core.$ZodType): z.core.$ZodType {
   let s = schema;
-  while (s?._zod?.def?.type === 'optional' || s?._zod?.def?.type === 'default') s = s._zod.def.innerType;
+  while (s instanceof z.ZodOptional || s instanceof z.ZodDefault) s = s.unwrap();
   return s;
 }
 
-function typeOf(schema: AnySchema): FieldType {
+function typeOf(schema: z.core.$ZodType): FieldType {
   const s = unwrap(schema);
-  switch (s._zod.def.type) {
-    case 'string':
-      return { type: 'string' };
-    case 'number':
-      return { type: 'number' };
-    case 'enum':
-      return { type: 'enum', options: Object.values(s._zod.def.entries) as string[] };
-    case 'literal':
-      return { type: 'literal' };
-    case 'array':
-      return unwrap(s._zod.def.element)._zod.def.type === 'string' ? { type: 'list' } : { type: 'nested' };
-    default:
-      return { type: 'nested' };
-  }
+  if (s instanceof z.ZodString) return { type: 'string' };
+  if (s instanceof z.ZodNumber) return { type: 'number' };
+  if (s instanceof z.ZodEnum) return { type: 'enum', options: s.options as string[] };
+  if (s instanceof z.ZodLiteral) return { type: 'literal' };
+  if (s instanceof z.ZodArray) return unwrap(s.element) instanceof z.ZodString ? { type: 'list' } : { type: 'nested' };
+  return { type: 'nested' };
 }
 
 /** Fields of an object schema, in declaration order (which is also the canonical print order). */
@@ -66,8 +56,8 @@ export interface StatementSpec {
   positional?: string;
 }
 
-function optionsOf(union: AnySchema): z.ZodObject[] {
-  return union._zod.def.options as z.ZodObject[];
+function optionsOf(union: z.ZodDiscriminatedUnion): z.ZodObject[] {
+  return union.options as unknown as z.ZodObject[];
 }
 
 const elementSpecs = new Map<string, StatementSpec>();
@@ -77,7 +67,7 @@ for (const option of optionsOf(Element)) {
 }
 const functionSpecs = new Map<string, StatementSpec>();
 for (const option of optionsOf(Function)) {
-  const kind = unwrap(option.shape.kind)._zod.def.values[0] as string;
+  const kind = (unwrap(option.shape.kind) as z.ZodLiteral<string>).value;
   functionSpecs.set(kind, { schema: option, positional: 'tag' });
 }
 

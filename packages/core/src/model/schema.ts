@@ -29,7 +29,7 @@ export const Voting = z.string().meta({ id: 'Voting', description: 'MooN voting 
  */
 export const CommentLine = z
   .string()
-  // eslint-disable-next-line no-control-regex
+  // eslint-disable-next-line no-control-regex -- matching control characters is the point of this pattern
   .regex(/^[^\u0000-\u0008\u000a-\u001f\u007f]*$/)
   .meta({ id: 'CommentLine', description: 'One comment line, without the #: no line breaks or control characters' });
 
