@@ -1,7 +1,7 @@
 // Invented test data for the report tests: a tiny model in .bulk (loaded for real, so spans are real)
 // and a hand-built Analysis for it. Not a real site, and not the output of the analysis pipeline.
 import { loadModelText, type LoadResult, type Model } from '@bulkhead/core';
-import type { Analysis, Finding } from '../../packages/core/src/analysis/types.ts';
+import type { Analysis, Finding } from '../../packages/core/src/vocabulary/types.ts';
 import { applyJustifications } from '../../packages/core/src/justify/index.ts';
 
 export const INVENTED_FILE = 'tests/invented/tiny.bulk';

@@ -1,7 +1,7 @@
 // Facts of the LOPA trade the assessment must reproduce (DESIGN.md section 6), the demand-mode switch of
 // IEC 61511-1, and the edge cases of the arithmetic: tiny frequencies, no layers, 25 conflicting layers, ties.
 import { describe, expect, it } from 'vitest';
-import type { Finding } from '../../packages/core/src/analysis/types.ts';
+import type { Finding } from '../../packages/core/src/vocabulary/types.ts';
 import { assess, cause, independenceFinding, layer } from '../core/assess/kit.ts';
 
 // A BPCS loop failure as the cause, one independent safeguard (an alarm in another controller) and a SIF.

@@ -13,7 +13,7 @@ export { loadModelText, detectFormat, MAX_FILE_BYTES, type LoadResult, type Mode
 export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';
 export { summarize, type ModelSummary } from './model/summary.ts';
-export * from './analysis/types.ts';
+export * from './vocabulary/types.ts';
 export { analyze, independenceRulesInForce, ruleEnvironment, type AnalyzeOptions } from './analysis/analyze.ts';
 export { buildPlantGraph, roleTargets, type PlantGraph, type NodeAttributes, type EdgeAttributes } from './graph/plant-graph.ts';
 export { Tracer } from './trace/trace.ts';

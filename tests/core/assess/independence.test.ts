@@ -1,7 +1,7 @@
 // How the independence findings of the trace rules act on credit, as a table of cases: each hand-built finding
 // set with the verdicts, the credit in both figures, and the figures themselves.
 import { describe, expect, it } from 'vitest';
-import type { Finding } from '../../../packages/core/src/analysis/types.ts';
+import type { Finding } from '../../../packages/core/src/vocabulary/types.ts';
 import { assess, cause, independenceFinding, layer } from './kit.ts';
 
 // A SIF and an alarm against a loop failure at 0.1/yr; tolerable 1e-3/yr on a containment criterion.

@@ -1,7 +1,7 @@
 // Small models for the assessment tests: a .bulk preamble with one BPCS with two controllers and one SIS,
 // a loader that fails loudly, and a maker for the independence findings the trace rules would produce.
 import { loadModelText, type Model } from '@bulkhead/core';
-import type { Finding, Party } from '../../../packages/core/src/analysis/types.ts';
+import type { Finding, Party } from '../../../packages/core/src/vocabulary/types.ts';
 import { assessScenario, type AssessOutput } from '../../../packages/core/src/assess/index.ts';
 
 /** Categories (invented criteria), solvers, and a few instruments that scenarios can claim as layers. */

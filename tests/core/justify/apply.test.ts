@@ -2,7 +2,7 @@
 // finding is itself a finding at the `accept` statement. The findings below are invented test data.
 import { describe, expect, it } from 'vitest';
 import { applyJustifications, STALE_JUSTIFICATION, DUPLICATE_JUSTIFICATION } from '../../../packages/core/src/justify/index.ts';
-import type { Finding } from '../../../packages/core/src/analysis/types.ts';
+import type { Finding } from '../../../packages/core/src/vocabulary/types.ts';
 import { loadInvented } from '../../report/invented.ts';
 
 const finding = (key: string, severity: Finding['severity'] = 'voids-credit'): Finding => ({

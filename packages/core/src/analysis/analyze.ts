@@ -8,7 +8,7 @@ import type { Model, SeverityLevel } from '../model/schema.ts';
 import { RULES } from '../rules/registry.ts';
 import { runRules, type RuleEnvironment } from '../rules/run.ts';
 import { Tracer } from '../trace/trace.ts';
-import type { Analysis, Finding, RuleInForce } from './types.ts';
+import type { Analysis, Finding, RuleInForce } from '../vocabulary/types.ts';
 
 export interface AnalyzeOptions {
   /** Spans from the loader, so findings about justifications can point at them. */

@@ -1,6 +1,6 @@
 // The best creditable set: among layers that may not all be credited together (pairwise conflicts, and at most
 // N layers from a group such as the BPCS), the set with the most risk reduction, found by exact branch and bound.
-import type { CreditAlternative } from '../analysis/types.ts';
+import type { CreditAlternative } from '../vocabulary/types.ts';
 import { RELATIVE_TOLERANCE, product } from './numbers.ts';
 
 export interface CreditCandidate {

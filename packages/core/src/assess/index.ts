@@ -34,7 +34,7 @@ export {
   BPCS_CAUSE_LOWEST_FREQUENCY,
   resolvedPolicy,
   type ResolvedPolicy,
-} from './policy.ts';
+} from '../vocabulary/policy.ts';
 export { bpcsFactsOf, isBpcsLayer, causeIsBpcsFailure, causeIsBpcsLoopFailure, type BpcsFacts, type FunctionFacts } from './facts.ts';
 export { bestCreditableSet, type CreditCandidate, type CreditProblem, type CreditChoice } from './credit.ts';
 export { sifRequirement, type RequirementInput, type ScenarioSifRequirement } from './requirement.ts';

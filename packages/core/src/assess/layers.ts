@@ -1,6 +1,6 @@
 // The PFD rules for each claimed layer: where its PFD comes from (claim, SIL band or defaults table) and the
 // limits on it (SIL band, BPCS cap, operator response time, check valve, no number), each limit a finding.
-import type { Finding, LayerReason, Sourced } from '../analysis/types.ts';
+import type { Finding, LayerReason, Sourced } from '../vocabulary/types.ts';
 import type { LayerClaim, Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { lowDemandBand } from './bands.ts';
 import { SIF_BAND_SOURCE, TYPICAL_LAYER_PFDS, sifDefaultPfd, type LayerDefaultKey } from './defaults.ts';
@@ -8,7 +8,7 @@ import { causeIsBpcsFailure, isBpcsLayer, type BpcsFacts } from './facts.ts';
 import { formatProbability } from './format.ts';
 import { inForce, limitFinding, type AssessRuleId, type Figure } from './limits.ts';
 import { above, below } from './numbers.ts';
-import { resolvedPolicy, BPCS_LAYER_BEST_PFD } from './policy.ts';
+import { resolvedPolicy, BPCS_LAYER_BEST_PFD } from '../vocabulary/policy.ts';
 
 export const FIGURES: readonly Figure[] = ['after', 'if-accepted'];
 

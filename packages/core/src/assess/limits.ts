@@ -1,6 +1,6 @@
 // The assessment's own limit checks (PFD rules, BPCS limits, modifier and cause checks) as one table of
 // rule records, so the rule set in force can list them beside the independence rules, and the findings they make.
-import type { Finding, RuleInForce } from '../analysis/types.ts';
+import type { Finding, RuleInForce } from '../vocabulary/types.ts';
 import type { Model, SeverityLevel } from '../model/schema.ts';
 
 export interface AssessRule {

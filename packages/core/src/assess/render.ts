@@ -1,6 +1,6 @@
 // The plain-text lines `bulkhead check` prints for one scenario assessment: criterion, cause, modifiers, each
 // layer with claimed and allowed PFD and verdict, the three mitigated figures, gap, SIF requirement, demand mode.
-import type { LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
+import type { LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../vocabulary/types.ts';
 import { BEYOND_SIL_4, lowDemandBand } from './bands.ts';
 import { edgeRelation, edgeText, formatFrequency, formatPerHour, formatProbability, formatRatio } from './format.ts';
 import { sameFigure } from './numbers.ts';

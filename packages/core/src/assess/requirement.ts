@@ -1,6 +1,6 @@
 // The requirement on the scenario's SIF (or on a new SIF when none is claimed and the scenario falls short):
 // required PFD, RRF and SIL, and the demand mode, with the PFH band instead when demand exceeds once a year.
-import type { SifRequirement } from '../analysis/types.ts';
+import type { SifRequirement } from '../vocabulary/types.ts';
 import type { FunctionKind } from '../model/kinds.ts';
 import { HOURS_PER_YEAR, LOW_DEMAND_LIMIT_PER_YEAR, BEYOND_SIL_4, highDemandBand, requiredSil, requiredSilForPfh } from './bands.ts';
 import { edgeRelation, formatFrequency, formatPerHour } from './format.ts';

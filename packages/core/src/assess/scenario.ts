@@ -1,6 +1,6 @@
 // assessScenario: one scenario's LOPA after independence. Applies the PFD and BPCS limits, then the independence
 // findings, then picks the best creditable set, and computes the figures, the gap and the SIF requirement.
-import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
+import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../vocabulary/types.ts';
 import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
 import { TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
@@ -9,7 +9,7 @@ import { formatFrequency, formatProbability } from './format.ts';
 import { FIGURES, assessLayerLimits, type LayerWork, type PerFigure } from './layers.ts';
 import { inForce, limitFinding, type Figure } from './limits.ts';
 import { above, below, meetsCriterion, product } from './numbers.ts';
-import { BPCS_CAUSE_LOWEST_FREQUENCY, BPCS_LAYERS_PER_SCENARIO, resolvedPolicy } from './policy.ts';
+import { BPCS_CAUSE_LOWEST_FREQUENCY, BPCS_LAYERS_PER_SCENARIO, resolvedPolicy } from '../vocabulary/policy.ts';
 import { sifRequirement } from './requirement.ts';
 
 export interface AssessInput {

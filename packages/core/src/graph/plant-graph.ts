@@ -3,7 +3,7 @@
 import { MultiDirectedGraph } from 'graphology';
 import { groupOf, LINK_FIELDS, type ElementGroup, type ElementKind, type FunctionKind } from '../model/kinds.ts';
 import type { Element, Model, PlantFunction } from '../model/schema.ts';
-import type { EdgeRole } from '../analysis/types.ts';
+import type { EdgeRole } from '../vocabulary/types.ts';
 
 export type NodeAttributes =
   | { type: 'element'; kind: ElementKind; group: ElementGroup }

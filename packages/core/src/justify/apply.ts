@@ -1,6 +1,6 @@
 // Justifications applied to findings: a matching justification marks a finding accepted (never removes
 // it), and a justification that matches no finding becomes a finding itself, so nothing goes unseen.
-import type { Acceptance, Finding, RuleInForce } from '../analysis/types.ts';
+import type { Acceptance, Finding, RuleInForce } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import type { Justification } from '../model/schema.ts';

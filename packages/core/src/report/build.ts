@@ -1,11 +1,11 @@
 // Builds the report document from a model and its analysis: joins traces, findings and assessments per
 // scenario and layer, sorts everything one way, and adds the header (file, hash, rules, policy, cautions).
-import type { Analysis, Finding, FunctionTrace, LayerAssessment, RuleInForce, ScenarioAssessment } from '../analysis/types.ts';
+import type { Analysis, Finding, FunctionTrace, LayerAssessment, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { JUSTIFICATION_RULES } from '../justify/apply.ts';
 import type { Model } from '../model/schema.ts';
 import { meetsCriterion } from '../assess/numbers.ts';
-import { POLICY_DEFAULTS } from '../assess/policy.ts';
+import { POLICY_DEFAULTS } from '../vocabulary/policy.ts';
 import { ASSESS_RULES } from '../assess/limits.ts';
 import { RULES } from '../rules/registry.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';

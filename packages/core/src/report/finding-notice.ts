@@ -1,7 +1,7 @@
 // An independence finding in the notice look (see diagnostics/notice.ts): the verdict and what is shared
 // first, then the claim it concerns in the model file, the path from each side to the shared element, the
 // element's definition, why the rule holds (with its source), and the key an `accept` statement names.
-import type { Finding } from '../analysis/types.ts';
+import type { Finding } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
 import type { ModelLocator } from './locate.ts';

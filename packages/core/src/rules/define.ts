@@ -1,10 +1,10 @@
 // What an independence rule is: data (id, title, rationale, source, default severity, messages) plus
 // a check. Shared-element rules claim the elements two sides have in common; scenario rules look at
 // a scenario as a whole. Rules never write free text into findings except through their messages.
-import type { Finding, Party, TracedElement } from '../analysis/types.ts';
+import type { Finding, Party, TracedElement } from '../vocabulary/types.ts';
 import type { ElementGroup } from '../model/kinds.ts';
 import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
-import type { ResolvedPolicy } from '../assess/policy.ts';
+import type { ResolvedPolicy } from '../vocabulary/policy.ts';
 import type { Tracer } from '../trace/trace.ts';
 
 /** One side of a comparison: the cause's element set, or a claimed layer's trace. */

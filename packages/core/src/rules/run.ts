@@ -1,7 +1,7 @@
 // Runs the independence rules over one scenario: builds each side's element set, compares every
 // pair (cause and layer, layer and layer), gives each shared element to the first rule that claims
 // it, and turns drafts into findings with stable keys and a stable order.
-import type { Finding, Party, TracedElement } from '../analysis/types.ts';
+import type { Finding, Party, TracedElement } from '../vocabulary/types.ts';
 import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
 import type { Tracer } from '../trace/trace.ts';
 import { findingKey, SEVERITY_RANK, type FindingDraft, type PairContext, type ResolvedPolicy, type Rule, type ScenarioContext, type SharedElementRule, type Side } from './define.ts';

@@ -2,7 +2,7 @@
 // one is there. Element closures, paths and traces are memoised, so cost grows with the site, not with
 // functions times elements, and a function traced again for each scenario that claims it costs nothing.
 // Memoised results are shared: callers must treat them as read-only.
-import type { ChannelTrace, EdgeRole, FunctionTrace, MissingPart, TracedElement } from '../analysis/types.ts';
+import type { ChannelTrace, EdgeRole, FunctionTrace, MissingPart, TracedElement } from '../vocabulary/types.ts';
 import type { PlantGraph } from '../graph/plant-graph.ts';
 import type { ElementGroup } from '../model/kinds.ts';
 
