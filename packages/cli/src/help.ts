@@ -70,5 +70,6 @@ exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwis
 };
 
 export function commandHelp(command: string): string {
-  return COMMANDS[command] ?? HELP;
+  // The user's word: `constructor` is no command, whatever every object inherits.
+  return Object.hasOwn(COMMANDS, command) ? COMMANDS[command]! : HELP;
 }

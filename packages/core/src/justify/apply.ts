@@ -105,7 +105,7 @@ export function applyJustifications(
     return { ...f, accepted };
   });
   const stale: Finding[] = [];
-  const locations: Record<string, Span> = {};
+  const locations: Record<string, Span> = Object.create(null) as Record<string, Span>; // keyed by finding keys
   const [duplicateRule, staleRule] = JUSTIFICATION_RULES;
   for (const key of [...byKey.keys()].sort(compareText)) {
     const j = byKey.get(key)!;
