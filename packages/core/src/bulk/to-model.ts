@@ -15,6 +15,7 @@ import {
   type FieldType,
   type StatementSpec,
 } from '../model/fields.ts';
+import { heldExactly, tooPrecise } from '../util/decimal.ts';
 import { didYouMean } from '../util/suggest.ts';
 import type { Token } from './lexer.ts';
 import { tokenSpan, type ParsedFile, type Statement } from './parser.ts';
@@ -75,7 +76,12 @@ class StatementReader {
 
   private convert(token: Token, field: FieldType, key: string, path: string): unknown {
     if (field.type !== 'number') return token.value;
-    if (token.type === 'word' && NUMBER.test(token.value)) return Number(token.value);
+    if (token.type === 'word' && NUMBER.test(token.value)) {
+      if (heldExactly(token.value)) return Number(token.value);
+      this.reportedPaths.add(path);
+      this.diagnostics.push(tooPrecise(token.value, tokenSpan(token)));
+      return undefined;
+    }
     this.reportedPaths.add(path);
     if (token.type === 'word' && /^[+-]?[\d.]/.test(token.value)) {
       this.diagnostics.push(error('BH112', `malformed number \`${token.value}\``, tokenSpan(token), {

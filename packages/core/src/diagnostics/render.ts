@@ -22,14 +22,18 @@ const MAX_EXCERPT = 120;
 function excerpt(source: SourceText, span: Span, gutter: number, label = ''): string[] {
   const raw = source.lines[span.line - 1];
   if (raw === undefined) return [];
-  let text = visible(raw.replace(/\t/g, ' '));
   let column = span.column;
-  // Long lines (a 2,000-character tag) are cut around the span so the caret stays in view.
-  if (text.length > MAX_EXCERPT) {
+  let text: string;
+  // Long lines (a 2,000-character tag) are cut around the span so the caret stays in view; cut before
+  // anything else, so each excerpt costs the same however long the line is.
+  if (raw.length > MAX_EXCERPT) {
     const start = Math.max(0, column - 1 - 20);
-    text = (start > 0 ? '…' : '') + text.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < text.length ? '…' : '');
+    text = (start > 0 ? '…' : '') + raw.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < raw.length ? '…' : '');
     column = column - start + (start > 0 ? 1 : 0);
+  } else {
+    text = raw;
   }
+  text = visible(text.replace(/\t/g, ' '));
   const width = Math.max(1, Math.min(span.length, text.length - column + 1, MAX_EXCERPT));
   const pad = ' '.repeat(gutter);
   const num = String(span.line).padStart(gutter);
@@ -55,6 +59,7 @@ export function renderDiagnostic(d: Diagnostic, source: SourceText): string {
     lines.push(...excerpt(source, r.span, gutter));
   }
   if (d.help) lines.push(`${' '.repeat(gutter)} = help: ${d.help}`);
+  if (d.more) lines.push(`${' '.repeat(gutter)} = and ${d.more} more like this (${d.code}) not shown`);
   return lines.join('\n');
 }
 
