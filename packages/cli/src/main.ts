@@ -41,6 +41,7 @@ function run(argv: string[]): number {
       'fail-on': { type: 'string' },
       'json-schema': { type: 'boolean' },
       port: { type: 'string' },
+      force: { type: 'boolean' },
     },
   });
   if (values.help) {
@@ -63,7 +64,7 @@ function run(argv: string[]): number {
       if (positionals.length === 0) throw new UsageError('`bulkhead fmt` needs at least one model file');
       return fmtCommand(positionals, values.check ?? false);
     case 'convert':
-      return convertCommand(file(), values.to, values.out);
+      return convertCommand(file(), values.to, values.out, values.force ?? false);
     case 'report':
       if (positionals.length > 1) throw new UsageError('`bulkhead report` takes one model file');
       return reportCommand(positionals[0], {
@@ -72,6 +73,7 @@ function run(argv: string[]): number {
         date: values.date,
         failOn: values['fail-on'],
         jsonSchema: values['json-schema'] ?? false,
+        force: values.force ?? false,
       });
     case 'view':
       return viewCommand(file(), values.port);
