@@ -173,3 +173,13 @@ export async function openViewer(file: string, waitFor?: string): Promise<Sessio
 }
 
 export const GRAPH_BOX = 'svg[data-testid=graph] g.box';
+
+/** A copy of the demo in a temporary directory, viewed live: the page is up and its live connection open. */
+export async function openLiveDemo(prefix: string): Promise<Session & { file: string; original: string }> {
+  const file = join(tempDir(prefix), 'marrow-fen.bulk');
+  const original = readFileSync(DEMO, 'utf8');
+  copyFileSync(DEMO, file);
+  const session = await openViewer(file, GRAPH_BOX);
+  await session.page.waitForSelector('[data-testid=live]:has-text("live")');
+  return { ...session, file, original };
+}

@@ -10,9 +10,9 @@ commands:
   trace FILE TAG        what a function (or element) relies on, as a tree of paths
   schema                print the JSON Schema of the model
   fmt FILE... [--check] rewrite .bulk files in canonical form (--check: only report)
-  convert FILE --to json|bulk [-o OUT]
+  convert FILE --to json|bulk [-o OUT [--force]]
                         convert a model between .bulk and JSON
-  report FILE --format md|html|csv|json|sarif [-o OUT] [--date YYYY-MM-DD] [--fail-on LEVEL]
+  report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD] [--fail-on LEVEL]
                         write the evidence list (report --json-schema: the JSON report's schema)
   view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
 
@@ -28,7 +28,7 @@ Prints everything function (or element) TAG relies on, as a tree: each element h
 that brings it in, with the link that does (sensor, mounted-on, signal-via, powered-by, ...). Tracing stops
 at process equipment. For a function it also lists each voting channel and any part the model is missing.
 `,
-  report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [-o OUT] [--date YYYY-MM-DD]
+  report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD]
                        [--fail-on voids-credit|needs-justification|note]
        bulkhead report --json-schema
 
@@ -38,7 +38,9 @@ then every function's trace and every finding. Accepted findings stay in the rep
 
   --format     md (Markdown), html (one self-contained page, printable), csv (one row per scenario,
                layer and element), json (versioned; schema from --json-schema), sarif (SARIF 2.1.0)
-  -o, --out    write to OUT instead of standard output
+  -o, --out    write to OUT instead of standard output; never over FILE itself, and over an existing
+               file only when it is a Bulkhead report (else exit 2, nothing written)
+  --force      replace an existing OUT that is not a Bulkhead report
   --date       print this date in the header; without it the output is the same on every run
   --fail-on    exit 1 when an unaccepted finding is at or above this severity (default voids-credit)
 
@@ -66,9 +68,10 @@ exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwis
 `,
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',
-  convert: 'usage: bulkhead convert FILE --to json|bulk [-o OUT]\n\nConverts a model between .bulk and JSON without loss (comments included).\n',
+  convert: 'usage: bulkhead convert FILE --to json|bulk [-o OUT [--force]]\n\nConverts a model between .bulk and JSON without loss (comments included).\n-o never writes over FILE itself; an existing OUT is replaced only with --force (or when it already holds the same text).\n',
 };
 
 export function commandHelp(command: string): string {
+  // The user's word: `constructor` is no command, whatever every object inherits.
   return Object.hasOwn(COMMANDS, command) ? COMMANDS[command]! : HELP;
 }

@@ -64,7 +64,7 @@ function failed(file: string, message: string): LoadResult {
 export function printDiagnostics(result: LoadResult): void {
   if (result.diagnostics.length === 0) return;
   process.stderr.write(renderDiagnostics(result.diagnostics, result.source) + '\n');
-  const errors = result.diagnostics.filter((d) => d.severity === 'error').length;
+  const errors = result.diagnostics.reduce((n, d) => n + (d.severity === 'error' ? 1 + (d.more ?? 0) : 0), 0);
   process.stderr.write(`\n${result.source.file}: ${errors} error${errors === 1 ? '' : 's'}; nothing was analysed\n`);
 }
 

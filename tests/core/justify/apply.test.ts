@@ -78,4 +78,34 @@ describe('applyJustifications', () => {
       expect(out.stale.map((f) => [f.rule, f.severity])).toEqual([[DUPLICATE_JUSTIFICATION, 'note']]);
     }
   });
+
+  describe('a key written with the two layers the other way round (keys once followed list order)', () => {
+    const pair = (rule: string, key: string, element: string): Finding => ({
+      ...finding(key, 'needs-justification'),
+      rule,
+      parties: [{ role: 'layer', tag: 'AL-1' }, { role: 'layer', tag: 'SIF-1' }],
+      element,
+    });
+
+    it('still accepts a shared-element finding, and is not stale', () => {
+      const input = [pair('shared-housing', 'shared-housing:S-1:AL-1+SIF-1:CAB-1', 'CAB-1')];
+      const out = applyJustifications(input, [accept('shared-housing:S-1:SIF-1+AL-1:CAB-1')]);
+      expect(out.findings[0]!.accepted).toBeDefined();
+      expect(out.findings[0]!.key).toBe('shared-housing:S-1:AL-1+SIF-1:CAB-1');
+      expect(out.stale).toEqual([]);
+    });
+
+    it('still accepts a same-make-model finding, whose two devices swap places too', () => {
+      const input = [pair('same-make-model', 'same-make-model:S-1:AL-1+SIF-1:LT-2:LT-1', 'LT-2')];
+      expect(applyJustifications(input, [accept('same-make-model:S-1:SIF-1+AL-1:LT-1:LT-2')]).findings[0]!.accepted).toBeDefined();
+      const wrong = applyJustifications(input, [accept('same-make-model:S-1:SIF-1+AL-1:LT-2:LT-1')]);
+      expect(wrong.findings[0]!.accepted).toBeUndefined();
+      expect(wrong.stale.map((f) => f.rule)).toEqual([STALE_JUSTIFICATION]);
+    });
+
+    it('does not swap a cause and a layer: the cause is always named first', () => {
+      const input = [{ ...finding('shared-io:S-1:LIC-1+SIF-1:IO-1'), rule: 'shared-io', parties: [{ role: 'cause' as const, tag: 'LIC-1' }, { role: 'layer' as const, tag: 'SIF-1' }], element: 'IO-1' }];
+      expect(applyJustifications(input, [accept('shared-io:S-1:SIF-1+LIC-1:IO-1')]).findings[0]!.accepted).toBeUndefined();
+    });
+  });
 });

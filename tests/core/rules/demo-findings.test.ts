@@ -31,9 +31,10 @@ const S103_SUPPLY_NOTES = [
   row('shared-support:S-103:TIC-301+SIF-301:IA-1', 'note', 'IA-1', [['TIC-301', 'TV-301', 'IA-1'], ['SIF-301', 'XV-301', 'IA-1']]),
   row('shared-support:S-103:TIC-301+SIF-301:UPS-1', 'note', 'UPS-1', [['TIC-301', 'BPCS-C1', 'CKT-11', 'UPS-1'], ['SIF-301', 'SIS-1', 'CKT-21', 'UPS-1']]),
 ];
-// LT-102 (SIF-101) and LT-103 (LAH-101) are both Orrin GR-7: accepted in revision B only.
+// LT-102 (SIF-101) and LT-103 (LAH-101) are both Orrin GR-7: accepted in revision B only. The pair is
+// named by tag (LAH-101 first); revision B accepts it under the key it had in list order, which still counts.
 const diversity = (accepted: boolean) =>
-  row('same-make-model:S-101:SIF-101+LAH-101:LT-103:LT-102', 'needs-justification', 'LT-103', [['SIF-101', 'LT-102'], ['LAH-101', 'LT-103']], accepted);
+  row('same-make-model:S-101:LAH-101+SIF-101:LT-102:LT-103', 'needs-justification', 'LT-102', [['LAH-101', 'LT-103'], ['SIF-101', 'LT-102']], accepted);
 
 describe('the demo findings', () => {
   it('revision A lists every designed-in conflict with the path from each side', () => {
@@ -51,9 +52,9 @@ describe('the demo findings', () => {
       // LT-101 and LT-102 are both housed in junction box JB-101.
       row('shared-housing:S-101:LIC-101+SIF-101:JB-101', 'needs-justification', 'JB-101', [['LIC-101', 'LT-101', 'JB-101'], ['SIF-101', 'LT-102', 'JB-101']]),
       diversity(false),
-      ...S101_SUPPLY_NOTES,
       // SIF-101 trips on loss of UPS-1, so the alarm sharing UPS-1 with it cannot be defeated together with it.
-      row('shared-support:S-101:SIF-101+LAH-101:UPS-1', 'note', 'UPS-1', [['SIF-101', 'SIS-1', 'CKT-21', 'UPS-1'], ['LAH-101', 'BPCS-C1', 'CKT-11', 'UPS-1']]),
+      row('shared-support:S-101:LAH-101+SIF-101:UPS-1', 'note', 'UPS-1', [['LAH-101', 'BPCS-C1', 'CKT-11', 'UPS-1'], ['SIF-101', 'SIS-1', 'CKT-21', 'UPS-1']]),
+      ...S101_SUPPLY_NOTES,
       ...S102_SUPPLY_NOTES,
       // TT-302A and TT-302B (1oo2) share thermowell TW-302 and input card AI-S-02. The finding has one party
       // (the SIF) and so one path, through the first channel; its message names both channels.

@@ -30,11 +30,11 @@ ruleTable('shared-console', {
       findings: [{ key: 'shared-console:SC-1:AL-1+AL-2:CON-1', severity: 'needs-justification', element: 'CON-1', parties: ['AL-1', 'AL-2'] }],
     },
     {
-      name: 'the same, layers listed the other way: the key follows the scenario order',
-      source: SOURCE,
+      name: 'the same, layers listed the other way: the same key, as the layers of a pair are named by tag, not by list order (issue 10)',
+      source: 'common practice, no source',
       lines: bothOnCon1,
       scenario: scenario('external="Feed surge" frequency=0.1', 'AL-2', 'AL-1'),
-      findings: [{ key: 'shared-console:SC-1:AL-2+AL-1:CON-1', severity: 'needs-justification', element: 'CON-1', parties: ['AL-2', 'AL-1'] }],
+      findings: [{ key: 'shared-console:SC-1:AL-1+AL-2:CON-1', severity: 'needs-justification', element: 'CON-1', parties: ['AL-1', 'AL-2'] }],
     },
     {
       name: 'two screens mounted on one console desk',

@@ -49,7 +49,7 @@ ruleTable('shared-process-connection', {
         'AL-1': 'alarm AL-1 sensors=T-3 raised-in=C-2 operator=OP-1 finals=MS-1 minutes=20',
       },
       scenario: scenario('function=LC-1 frequency=0.1', 'SF-1', 'AL-1'),
-      findings: [{ key: 'shared-process-connection:SC-1:SF-1+AL-1:N-2', severity: 'voids-credit', element: 'N-2', parties: ['SF-1', 'AL-1'] }],
+      findings: [{ key: 'shared-process-connection:SC-1:AL-1+SF-1:N-2', severity: 'voids-credit', element: 'N-2', parties: ['AL-1', 'SF-1'] }],
     },
   ],
 });

@@ -34,10 +34,13 @@ export class Viewer {
   centreRequest = $state(0);
   private revision = 0;
 
+  /** Why the served file cannot be read just now (deleted, renamed, a directory); undefined when it can. */
+  missing = $state<string | undefined>();
+
   errors: Diagnostic[] = $derived(this.result?.diagnostics.filter((d) => d.severity === 'error') ?? []);
   warnings: Diagnostic[] = $derived(this.result?.diagnostics.filter((d) => d.severity === 'warning') ?? []);
-  /** The file on screen has errors but an earlier good version is still shown. */
-  stale = $derived(this.errors.length > 0 && this.good !== undefined);
+  /** The file as it is now does not load (errors, or gone) but an earlier good version is still shown. */
+  stale = $derived((this.errors.length > 0 || this.missing !== undefined) && this.good !== undefined);
 
   scene: Scene | undefined = $derived.by(() => {
     const good = this.good;
@@ -57,9 +60,24 @@ export class Viewer {
     this.good && this.selected !== undefined ? detailsOf(this.good.model, this.good.analysis, this.selected) : undefined,
   );
 
+  /** The served file is gone or unreadable: keep the last good view, marked stale, until it returns. */
+  markMissing(fileName: string, reason: string): void {
+    this.fileName = fileName;
+    this.origin = 'served';
+    this.missing = reason;
+  }
+
   /** Loads a model from text or bytes; on errors the diagnostics show and the last good view stays. */
   load(fileName: string, bytes: Uint8Array | string, origin: Origin): void {
-    const result = loadModelText(fileName, bytes);
+    let result: LoadResult;
+    try {
+      result = loadModelText(fileName, bytes);
+    } catch (e) {
+      // The loader answers every input with diagnostics; should it ever throw, say so and keep the view.
+      this.analysisError = `the model could not be read: ${e instanceof Error ? e.message : String(e)}`;
+      return;
+    }
+    this.missing = undefined;
     this.result = result;
     this.fileName = fileName;
     this.origin = origin;

@@ -12,6 +12,7 @@ import {
 import { printDiagnostics, readModel, UsageError, writeFileAtomic } from '../io.ts';
 import { failingFindings, parseFailOn } from './fail-on.ts';
 import { cliVersion } from '../version.ts';
+import { checkOutput, isReportText } from '../output.ts';
 
 export interface ReportOptions {
   format?: string;
@@ -19,6 +20,8 @@ export interface ReportOptions {
   date?: string;
   failOn?: string;
   jsonSchema?: boolean;
+  /** Replace an existing -o file that Bulkhead did not write. */
+  force?: boolean;
 }
 
 /** Without --fail-on, a voided credit fails the run: the conservative default for a CI gate. */
@@ -46,6 +49,7 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   if (!isReportFormat(format)) throw new UsageError(`--format takes ${REPORT_FORMATS.join(', ')}; found \`${format}\``);
   const date = options.date === undefined ? undefined : checkDate(options.date);
   const failOn = options.failOn === undefined ? DEFAULT_FAIL_ON : parseFailOn(options.failOn);
+  if (options.out) checkOutput(options.out, { inputs: [file], force: options.force ?? false, replaceable: isReportText, what: 'report', unlike: 'is not a Bulkhead report' });
   const result = readModel(file);
   if (!result.model || !result.bytes) {
     printDiagnostics(result);

@@ -38,9 +38,9 @@ export const COMMANDS = new Map<string, CommandSpec>([
   [
     'convert',
     {
-      options: { to: { type: 'string' }, out: { type: 'string', short: 'o' } },
+      options: { to: { type: 'string' }, out: { type: 'string', short: 'o' }, force: { type: 'boolean' } },
       positionals: { min: 1, max: 1, what: 'a model file' },
-      run: (v, [file]) => convertCommand(file!, str(v.to), str(v.out)),
+      run: (v, [file]) => convertCommand(file!, str(v.to), str(v.out), v.force === true),
     },
   ],
   [
@@ -51,12 +51,13 @@ export const COMMANDS = new Map<string, CommandSpec>([
         out: { type: 'string', short: 'o' },
         date: { type: 'string' },
         'json-schema': { type: 'boolean' },
+        force: { type: 'boolean' },
         ...failOn,
       },
       // `report --json-schema` needs no file; reportCommand says so when one is missing otherwise.
       positionals: { min: 0, max: 1, what: 'one model file' },
       run: (v, [file]) =>
-        reportCommand(file, { format: str(v.format), out: str(v.out), date: str(v.date), failOn: str(v['fail-on']), jsonSchema: v['json-schema'] === true }),
+        reportCommand(file, { format: str(v.format), out: str(v.out), date: str(v.date), failOn: str(v['fail-on']), jsonSchema: v['json-schema'] === true, force: v.force === true }),
     },
   ],
   ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],

@@ -6,7 +6,7 @@ import { analyze, loadModelText } from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError } from '../io.ts';
 import { renderCheck } from './check-render.ts';
 import { hasBuiltViewer } from '../view/assets.ts';
-import { startViewServer } from '../view/server.ts';
+import { startViewServer, type FileState } from '../view/server.ts';
 
 export const DEFAULT_PORT = 4780;
 export const VIEWER_DIST = fileURLToPath(new URL('../../../../apps/viewer/dist/', import.meta.url));
@@ -17,8 +17,14 @@ export function parsePort(text: string | undefined): number | undefined {
   return Number(text);
 }
 
-function describe(file: string, text: string): string {
-  const result = loadModelText(file, text);
+function describe(file: string, state: FileState): string {
+  if ('missing' in state) return `${state.missing}; the page says so and keeps the last good view`;
+  let result;
+  try {
+    result = loadModelText(file, Buffer.from(state.text, 'latin1'));
+  } catch (e) {
+    return `could not be checked here (${(e as Error).message}); see the page`;
+  }
   const errors = result.diagnostics.filter((d) => d.severity === 'error');
   if (errors.length === 0) return 'loads cleanly';
   const first = errors[0]!.span;
@@ -49,7 +55,7 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
       file,
       distDir,
       port,
-      onChange: (text) => process.stdout.write(`${new Date().toLocaleTimeString()} saved: ${file} ${text === undefined ? '' : describe(file, text)}\n`),
+      onChange: (state) => process.stdout.write(`${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${file} ${describe(file, state)}\n`),
     }).then(
       (server) => {
         process.stdout.write(`bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`);

@@ -28,7 +28,8 @@ const SAFE_PATH = /^(\/[A-Za-z0-9_-][A-Za-z0-9_.-]*)+$/;
 
 function typeOf(name: string): string {
   const dot = name.lastIndexOf('.');
-  return TYPES[dot === -1 ? '' : name.slice(dot).toLowerCase()] ?? 'application/octet-stream';
+  const extension = dot === -1 ? '' : name.slice(dot).toLowerCase();
+  return (Object.hasOwn(TYPES, extension) ? TYPES[extension] : undefined) ?? 'application/octet-stream';
 }
 
 function walk(dir: string, out: string[]): void {

@@ -1,21 +1,26 @@
 // The `bulkhead view` server (node:http, no framework): serves the built viewer, the one model file
 // at /model, and server-sent events at /events on every save. Binds 127.0.0.1; anything else is 404.
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
-import { readFileSync, unwatchFile, watch, watchFile, type FSWatcher } from 'node:fs';
+import { readFileSync, statSync, unwatchFile, watch, watchFile, type FSWatcher } from 'node:fs';
 import { basename, dirname } from 'node:path';
 import type { AddressInfo } from 'node:net';
+import { MAX_FILE_BYTES } from '@bulkhead/core';
 import { readAssets, type Asset } from './assets.ts';
 
 export const HOST = '127.0.0.1';
 export const MODEL_FILE_HEADER = 'X-Bulkhead-File';
+/** Set on the 404 for /model when the file cannot be served: why, in words for the page. */
+export const MISSING_HEADER = 'X-Bulkhead-Missing';
+/** A local page needs one live connection per tab; more than this is a leak or a misbehaving client. */
+export const MAX_EVENT_CLIENTS = 16;
 
 export interface ViewServerOptions {
   file: string;
   distDir: string;
   /** 0 asks the system for a free port. */
   port: number;
-  /** Called after each save is seen, with the new text (for a console line). */
-  onChange?: (text: string | undefined) => void;
+  /** Called after each save is seen, with the new text, or why there is none (for a console line). */
+  onChange?: (file: FileState) => void;
 }
 
 export interface ViewServer {
@@ -37,6 +42,7 @@ const SECURITY_HEADERS: Record<string, string> = {
 };
 
 const WATCH_DEBOUNCE_MS = 60;
+const MISSING_GRACE_MS = 300;
 const POLL_MS = 250;
 const KEEPALIVE_MS = 20_000;
 
@@ -47,6 +53,30 @@ function send(res: ServerResponse, status: number, type: string, body: Buffer | 
 
 function notFound(res: ServerResponse): void {
   send(res, 404, 'text/plain; charset=utf-8', 'not found\n', { 'Cache-Control': 'no-store' });
+}
+
+/** What the watched path holds now: text, or the reason there is none to show. */
+export type FileState = { text: string } | { missing: string };
+
+/**
+ * The path's state without reading more than the limit: a file replaced by a directory, a device or a
+ * gigabyte of noise is reported, never read whole or allowed to throw.
+ */
+export function readState(file: string): FileState {
+  try {
+    const stat = statSync(file);
+    if (stat.isDirectory()) return { missing: 'the path is now a directory, not a file' };
+    if (!stat.isFile()) return { missing: 'the path is not a regular file' };
+    if (stat.size > MAX_FILE_BYTES) return { missing: `the file is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
+    return { text: readFileSync(file, 'latin1') };
+  } catch (e) {
+    const code = (e as NodeJS.ErrnoException).code;
+    return { missing: code === 'ENOENT' ? 'the file is missing (deleted or renamed)' : `the file cannot be read (${code ?? 'read error'})` };
+  }
+}
+
+function sameState(a: FileState, b: FileState): boolean {
+  return 'text' in a && 'text' in b ? a.text === b.text : 'missing' in a && 'missing' in b && a.missing === b.missing;
 }
 
 /**
@@ -66,16 +96,8 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
   const clients = new Set<ServerResponse>();
   const fileName = basename(options.file);
   let revision = 0;
-  let lastText: string | undefined = readText(options.file);
+  let last: FileState = readState(options.file);
   let port = 0;
-
-  function readText(file: string): string | undefined {
-    try {
-      return readFileSync(file, 'utf8');
-    } catch {
-      return undefined;
-    }
-  }
 
   function allowedHost(req: IncomingMessage): boolean {
     const host = req.headers.host;
@@ -92,15 +114,16 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
       return send(res, 405, 'text/plain; charset=utf-8', 'only GET\n', { Allow: 'GET, HEAD' });
     }
     if (path === '/model') {
-      let body: Buffer;
-      try {
-        body = readFileSync(options.file);
-      } catch {
-        return send(res, 503, 'text/plain; charset=utf-8', `cannot read ${fileName} just now\n`, { 'Cache-Control': 'no-store' });
-      }
-      return send(res, 200, 'text/plain; charset=utf-8', body, { 'Cache-Control': 'no-store', [MODEL_FILE_HEADER]: encodeURIComponent(fileName) }, head);
+      const named = { 'Cache-Control': 'no-store', [MODEL_FILE_HEADER]: encodeURIComponent(fileName) };
+      const state = readState(options.file);
+      // The bytes go as they are (latin1 keeps every byte), so the page's loader judges them, not us.
+      if ('text' in state) return send(res, 200, 'application/octet-stream', Buffer.from(state.text, 'latin1'), named, head);
+      return send(res, 404, 'text/plain; charset=utf-8', `${state.missing}\n`, { ...named, [MISSING_HEADER]: encodeURIComponent(state.missing) }, head);
     }
     if (path === '/events') {
+      if (clients.size >= MAX_EVENT_CLIENTS) {
+        return send(res, 503, 'text/plain; charset=utf-8', `too many live pages (${MAX_EVENT_CLIENTS}); close other viewer tabs\n`, { 'Cache-Control': 'no-store', 'Retry-After': '5' });
+      }
       res.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': 'text/event-stream; charset=utf-8', 'Cache-Control': 'no-store', Connection: 'keep-alive' });
       res.write(`retry: 1000\nevent: hello\ndata: ${JSON.stringify({ revision })}\n\n`);
       clients.add(res);
@@ -118,17 +141,27 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     for (const c of clients) c.write(message);
   }
 
+  // An editor's save may briefly leave no file: a state is pushed only once it has held for a moment,
+  // and a missing file is pushed too (after a longer wait), so the page can say so and recover.
   let timer: NodeJS.Timeout | undefined;
   function changed(): void {
     clearTimeout(timer);
-    timer = setTimeout(() => {
-      const text = readText(options.file);
-      // An editor's save may briefly leave no file or an empty one; wait for the next event.
-      if (text === undefined || text === lastText) return;
-      lastText = text;
-      push();
-      options.onChange?.(text);
-    }, WATCH_DEBOUNCE_MS);
+    timer = setTimeout(() => settle(false), WATCH_DEBOUNCE_MS);
+  }
+  function settle(confirmed: boolean): void {
+    const state = readState(options.file);
+    if (sameState(state, last)) return;
+    if ('missing' in state && !confirmed) {
+      timer = setTimeout(() => settle(true), MISSING_GRACE_MS);
+      return;
+    }
+    last = state;
+    push();
+    try {
+      options.onChange?.(state);
+    } catch {
+      // A console line is not worth the server: the page still gets the change.
+    }
   }
 
   // Watch the directory (editors often save by renaming a new file over the old) and poll as well,
@@ -146,7 +179,17 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     for (const c of clients) c.write(': keep-alive\n\n');
   }, KEEPALIVE_MS);
 
-  const server = createServer(handle);
+  // Nothing a request or a file does may stop the server: an unexpected error answers 500 and is shown once.
+  const server = createServer((req, res) => {
+    try {
+      handle(req, res);
+    } catch (e) {
+      if (!res.headersSent) send(res, 500, 'text/plain; charset=utf-8', 'internal error\n');
+      else res.end();
+      process.stderr.write(`bulkhead view: internal error answering ${req.url ?? ''}: ${(e as Error).message}\n`);
+    }
+  });
+  server.on('clientError', (_e, socket) => socket.destroy());
   return new Promise((resolve, reject) => {
     const stop = () => {
       watcher?.close();

@@ -24,7 +24,7 @@ function solverOf(fn: PlantFunction): string | undefined {
 
 export function bpcsFactsOf(model: Model): BpcsFacts {
   const elements = new Map(model.elements.map((e) => [e.tag, e]));
-  const facts: BpcsFacts = {};
+  const facts: BpcsFacts = Object.create(null) as BpcsFacts; // keyed by the user's tags
   for (const fn of model.functions) {
     const solver = solverOf(fn);
     const element = solver !== undefined ? elements.get(solver) : undefined;

@@ -37,9 +37,13 @@ export function below(value: number, limit: number): boolean {
   return value < limit && !sameFigure(value, limit);
 }
 
-/** Product of factors, multiplied in the order given so that results are reproducible. */
+/**
+ * Product of factors, multiplied smallest first whatever order they come in: floating-point products
+ * depend on the order (0.1 * 0.004 * 0.01 and 0.1 * 0.01 * 0.004 differ in the last digit), and the
+ * order of a scenario's layers has no meaning, so listing them another way must not change a figure.
+ */
 export function product(factors: readonly number[]): number {
   let p = 1;
-  for (const f of factors) p *= f;
+  for (const f of [...factors].sort((a, b) => a - b)) p *= f;
   return p;
 }

@@ -95,6 +95,9 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): LineParse
   return { keyword, ...(name ? { name } : {}), attributes };
 }
 
+/** Far longer than any statement needs (a long description is a few hundred characters). Comment lines are exempt: they are kept whole, at no cost per character. */
+export const MAX_LINE_LENGTH = 10_000;
+
 export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
   const lines = splitLines(text);
   const statements: Statement[] = [];
@@ -104,6 +107,15 @@ export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
   let indentStyle: ' ' | '\t' | undefined;
   lines.forEach((rawLine, index) => {
     const lineNo = index + 1;
+    if (rawLine.length > MAX_LINE_LENGTH && !/^[ \t]*#/.test(rawLine)) {
+      // Not read at all: what a line this long holds is not a statement, and reading it would only
+      // give thousands of diagnostics about one mistake.
+      diagnostics.push(error('BH105', `line is ${rawLine.length} characters long; the limit is ${MAX_LINE_LENGTH}`, { line: lineNo, column: MAX_LINE_LENGTH + 1, length: 1 }, {
+        help: 'split the statement over indented continuation lines, or put very long text in a separate document and refer to it',
+      }));
+      if (current && /^[ \t]/.test(rawLine)) current.incomplete = true;
+      return;
+    }
     const lexed = lexLine(rawLine, lineNo, diagnostics);
     if (lexed.tokens.length === 0) {
       if (lexed.comment !== undefined) pending.push(lexed.comment);

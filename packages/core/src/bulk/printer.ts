@@ -87,7 +87,7 @@ export function printBulk(model: Model): string {
   for (const s of model.scenarios) {
     const lines = printLine('scenario', LIST_SPECS.scenario, s, '');
     const item = s as unknown as Item;
-    for (const [keyword, spec] of Object.entries(SCENARIO_LINE_SPECS)) {
+    for (const [keyword, spec] of SCENARIO_LINE_SPECS) {
       const value = item[spec.collection];
       const children = (spec.single ? [value] : ((value as Item[] | undefined) ?? [])) as (Item | undefined)[];
       for (const child of children) if (child) lines.push(...printLine(keyword, spec, child, '  '));

@@ -8,13 +8,14 @@ import {
   fieldsOf,
   FUNCTION_SPECS,
   kebab,
-  LIST_SPECS,
+  LIST_SPEC_BY_KEYWORD,
   SCENARIO_LINE_SPECS,
-  SINGLE_SPECS,
+  SINGLE_SPEC_BY_KEYWORD,
   TOP_KEYWORDS,
   type FieldType,
   type StatementSpec,
 } from '../model/fields.ts';
+import { heldExactly, tooPrecise } from '../util/decimal.ts';
 import { didYouMean } from '../util/suggest.ts';
 import type { Token } from './lexer.ts';
 import { tokenSpan, type ParsedFile, type Statement } from './parser.ts';
@@ -75,7 +76,12 @@ class StatementReader {
 
   private convert(token: Token, field: FieldType, key: string, path: string): unknown {
     if (field.type !== 'number') return token.value;
-    if (token.type === 'word' && NUMBER.test(token.value)) return Number(token.value);
+    if (token.type === 'word' && NUMBER.test(token.value)) {
+      if (heldExactly(token.value)) return Number(token.value);
+      this.reportedPaths.add(path);
+      this.diagnostics.push(tooPrecise(token.value, tokenSpan(token)));
+      return undefined;
+    }
     this.reportedPaths.add(path);
     if (token.type === 'word' && /^[+-]?[\d.]/.test(token.value)) {
       this.diagnostics.push(error('BH112', `malformed number \`${token.value}\``, tokenSpan(token), {
@@ -169,7 +175,9 @@ export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): 
   for (const statement of parsed.statements) {
     const keyword = statement.keyword.value;
     const item: Raw = {};
-    if (keyword === 'site' || keyword === 'policy') {
+    const single = SINGLE_SPEC_BY_KEYWORD.get(keyword);
+    const listed = LIST_SPEC_BY_KEYWORD.get(keyword);
+    if (single) {
       const earlier = firstSeen.get(keyword);
       if (earlier) {
         diagnostics.push(error('BH120', `\`${keyword}\` given twice`, tokenSpan(statement.keyword), {
@@ -179,10 +187,10 @@ export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): 
         continue;
       }
       firstSeen.set(keyword, statement.keyword);
-      reader.read(statement, SINGLE_SPECS[keyword], keyword, item);
+      reader.read(statement, single, keyword, item);
       raw[keyword] = item;
-    } else if (keyword in LIST_SPECS) {
-      const spec = LIST_SPECS[keyword as keyof typeof LIST_SPECS];
+    } else if (listed) {
+      const spec = listed;
       const index = push(spec.collection, item);
       reader.read(statement, spec, `${spec.collection}.${index}`, item);
       if (keyword === 'scenario') readScenarioLines(statement, `${spec.collection}.${index}`, item, reader, diagnostics, spans);
@@ -219,10 +227,10 @@ function readScenarioLines(statement: Statement, path: string, scenario: Raw, re
   let causeToken: Token | undefined;
   for (const child of statement.children) {
     const keyword = child.keyword.value;
-    const spec = SCENARIO_LINE_SPECS[keyword];
+    const spec = SCENARIO_LINE_SPECS.get(keyword);
     if (!spec) {
       diagnostics.push(error('BH115', `unknown scenario line \`${keyword}\``, tokenSpan(child.keyword), {
-        help: didYouMean(keyword, Object.keys(SCENARIO_LINE_SPECS)) ?? `a scenario's lines are ${Object.keys(SCENARIO_LINE_SPECS).join(', ')}`,
+        help: didYouMean(keyword, SCENARIO_LINE_SPECS.keys()) ?? `a scenario's lines are ${[...SCENARIO_LINE_SPECS.keys()].join(', ')}`,
       }));
       continue;
     }

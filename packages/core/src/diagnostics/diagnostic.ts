@@ -24,6 +24,8 @@ export interface Diagnostic {
   span?: Span;
   related?: Related[];
   help?: string;
+  /** How many more diagnostics with this code were left out after this one ("and N more like this"). */
+  more?: number;
 }
 
 /** The catalogue. Keys are the stable codes; the value is a one-line description for the docs. */
@@ -33,6 +35,9 @@ export const CODES = {
   BH102: 'the file is not UTF-8 text',
   BH103: 'the file is larger than the limit',
   BH104: 'the file cannot be read',
+  BH105: 'line longer than the limit',
+  BH106: 'JSON nested deeper than the limit',
+  BH107: 'dependency chain deeper than the limit',
   BH110: 'unterminated string',
   BH111: 'unexpected character',
   BH112: 'malformed number',
@@ -44,6 +49,7 @@ export const CODES = {
   BH118: 'unknown attribute',
   BH119: 'JSON syntax error',
   BH120: 'statement given twice',
+  BH121: 'number with more digits than can be held exactly',
   BH200: 'required field missing',
   BH201: 'value of the wrong type',
   BH202: 'value not among the allowed words',
@@ -80,13 +86,41 @@ export function hasErrors(diagnostics: readonly Diagnostic[]): boolean {
   return diagnostics.some((d) => d.severity === 'error');
 }
 
-/** Stable order: by line, then column, then code, so output diffs cleanly. */
+const byCodeUnits = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
+/** Stable order: by line, then column, then code, so output diffs cleanly (code-unit order, not locale). */
 export function sortDiagnostics(diagnostics: Diagnostic[]): Diagnostic[] {
   return [...diagnostics].sort(
     (a, b) =>
       (a.span?.line ?? 0) - (b.span?.line ?? 0) ||
       (a.span?.column ?? 0) - (b.span?.column ?? 0) ||
-      a.code.localeCompare(b.code) ||
-      a.message.localeCompare(b.message),
+      byCodeUnits(a.code, b.code) ||
+      byCodeUnits(a.message, b.message),
   );
+}
+
+/** How many diagnostics of one code are shown before the rest are counted ("and N more like this"). */
+export const MAX_DIAGNOSTICS_PER_CODE = 20;
+
+/**
+ * Keeps the first few diagnostics of each code (in the given order) and counts the rest on the last one
+ * kept, so a line of 100,000 stray characters gives a screenful, not 100,000 excerpts.
+ */
+export function capDiagnostics(diagnostics: readonly Diagnostic[], perCode = MAX_DIAGNOSTICS_PER_CODE): Diagnostic[] {
+  const kept: Diagnostic[] = [];
+  const lastKept = new Map<DiagnosticCode, Diagnostic>();
+  const count = new Map<DiagnosticCode, number>();
+  for (const d of diagnostics) {
+    const n = (count.get(d.code) ?? 0) + 1;
+    count.set(d.code, n);
+    if (n <= perCode) {
+      const copy = { ...d };
+      kept.push(copy);
+      lastKept.set(d.code, copy);
+    } else {
+      const last = lastKept.get(d.code)!;
+      last.more = n - perCode;
+    }
+  }
+  return kept;
 }

@@ -45,14 +45,16 @@ const RAIL = '┆';
 export function markedExcerpt(source: SourceText, span: Span): [string, string] | undefined {
   const raw = source.lines[span.line - 1];
   if (raw === undefined) return undefined;
-  let text = visible(raw.replace(/\t/g, ' '));
+  let text = raw;
   let column = span.column;
-  // A 2,000-character line is cut around the span so the mark stays in view.
-  if (text.length > MAX_EXCERPT) {
+  // A 2,000-character line is cut around the span so the mark stays in view; cut before anything else,
+  // so each excerpt costs the same however long the line is.
+  if (raw.length > MAX_EXCERPT) {
     const start = Math.max(0, column - 1 - 20);
-    text = (start > 0 ? '…' : '') + text.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < text.length ? '…' : '');
+    text = (start > 0 ? '…' : '') + raw.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < raw.length ? '…' : '');
     column = column - start + (start > 0 ? 1 : 0);
   }
+  text = visible(text.replace(/\t/g, ' '));
   const width = Math.max(1, Math.min(span.length, text.length - column + 1, MAX_EXCERPT));
   return [text, ' '.repeat(Math.max(0, column - 1)) + MARK.repeat(width)];
 }

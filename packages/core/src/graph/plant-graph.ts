@@ -50,17 +50,25 @@ export function buildPlantGraph(model: Model): PlantGraph {
   for (const fn of model.functions) graph.addNode(fn.tag, { type: 'function', kind: fn.kind });
   for (const element of model.elements) addLinks(graph, element);
   for (const fn of model.functions) {
-    for (const { role, tag, channel } of roleTargets(fn)) {
+    for (const { role, tag, channel } of inTagOrder(roleTargets(fn))) {
       if (graph.hasNode(tag)) graph.addEdge(fn.tag, tag, channel === undefined ? { role } : { role, channel });
     }
   }
   return graph;
 }
 
+/**
+ * A node's edges are added by target tag, never in the order the user listed them: traversals visit them
+ * in this order, so the path shown when two are equally short does not change when a list is reordered.
+ */
+function inTagOrder<T extends { tag: string; role: string }>(edges: T[]): T[] {
+  return edges.sort((x, y) => (x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : x.role < y.role ? -1 : x.role > y.role ? 1 : 0));
+}
+
 function addLinks(graph: PlantGraph, element: Element): void {
-  for (const link of LINK_FIELDS) {
-    for (const target of element[link] ?? []) {
-      if (graph.hasNode(target)) graph.addEdge(element.tag, target, { role: link });
-    }
+  const edges: { tag: string; role: (typeof LINK_FIELDS)[number] }[] = [];
+  for (const link of LINK_FIELDS) for (const tag of element[link] ?? []) edges.push({ tag, role: link });
+  for (const { tag, role } of inTagOrder(edges)) {
+    if (graph.hasNode(tag)) graph.addEdge(element.tag, tag, { role });
   }
 }

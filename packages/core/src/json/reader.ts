@@ -3,6 +3,10 @@
 import { parseTree, printParseErrorCode, type Node, type ParseError } from 'jsonc-parser';
 import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
+import { heldExactly, tooPrecise } from '../util/decimal.ts';
+
+/** Deeper than any model needs (about 5 levels), shallow enough that no reader runs out of stack. */
+export const MAX_JSON_DEPTH = 64;
 
 /** Maps offsets to 1-based line and column. */
 export class LineIndex {
@@ -54,7 +58,24 @@ function describe(e: ParseError, text: string): { message: string; offset: numbe
   return { message: MESSAGES[name] ?? name, offset: e.offset, length: e.length };
 }
 
-function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, diagnostics: Diagnostic[]): unknown {
+/** The offset of the first `[` or `{` that opens a level deeper than the limit, or -1; strings are skipped. */
+function tooDeepAt(text: string, limit: number): number {
+  let depth = 0;
+  for (let i = 0; i < text.length; i++) {
+    const c = text.charCodeAt(i);
+    if (c === 0x22) {
+      // Skip the string, escapes included; an unterminated one runs to the end, for the parser to report.
+      for (i++; i < text.length && text.charCodeAt(i) !== 0x22; i++) if (text.charCodeAt(i) === 0x5c) i++;
+    } else if (c === 0x5b || c === 0x7b) {
+      if (++depth > limit) return i;
+    } else if (c === 0x5d || c === 0x7d) {
+      depth--;
+    }
+  }
+  return -1;
+}
+
+function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, diagnostics: Diagnostic[], text: string): unknown {
   spans.set(path, index.span(node.offset, node.type === 'object' || node.type === 'array' ? 1 : node.length));
   switch (node.type) {
     case 'object': {
@@ -75,7 +96,7 @@ function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, dia
           continue;
         }
         spans.set(`${childPath}#key`, keySpan);
-        const value = toValue(valueNode, childPath, spans, index, diagnostics);
+        const value = toValue(valueNode, childPath, spans, index, diagnostics, text);
         // A plain assignment to `__proto__` would set the prototype; define it as an own key instead,
         // so the schema sees it and rejects it. `constructor` and the like are ordinary own keys.
         if (key === '__proto__') Object.defineProperty(out, key, { value, enumerable: true, writable: true, configurable: true });
@@ -84,16 +105,29 @@ function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, dia
       return out;
     }
     case 'array':
-      return (node.children ?? []).map((child, i) => toValue(child, path === '' ? String(i) : `${path}.${i}`, spans, index, diagnostics));
+      return (node.children ?? []).map((child, i) => toValue(child, path === '' ? String(i) : `${path}.${i}`, spans, index, diagnostics, text));
+    case 'number': {
+      const literal = text.slice(node.offset, node.offset + node.length);
+      if (!heldExactly(literal)) diagnostics.push(tooPrecise(literal, index.span(node.offset, node.length)));
+      return node.value;
+    }
     default:
       return node.value;
   }
 }
 
 export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknown; spans: SpanMap } | undefined {
+  const index = new LineIndex(text);
+  // The parser and the reader below recurse per level: refuse deep nesting before either sees it.
+  const deep = tooDeepAt(text, MAX_JSON_DEPTH);
+  if (deep !== -1) {
+    diagnostics.push(error('BH106', `the JSON is nested more than ${MAX_JSON_DEPTH} levels deep here`, index.span(deep, 1), {
+      help: 'a model nests about five levels (model, scenarios, a scenario, its layers, a layer); is this a model file?',
+    }));
+    return undefined;
+  }
   const errors: ParseError[] = [];
   const tree = parseTree(text, errors, { allowTrailingComma: false, disallowComments: true, allowEmptyContent: false });
-  const index = new LineIndex(text);
   if (errors.length) {
     // The parser may report one mistake twice at one offset (a trailing comma in an object is both
     // "property name expected" and "value expected"); keep the first.
@@ -108,5 +142,5 @@ export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknow
   }
   if (!tree) return undefined;
   const spans: SpanMap = new Map();
-  return { raw: toValue(tree, '', spans, index, diagnostics), spans };
+  return { raw: toValue(tree, '', spans, index, diagnostics, text), spans };
 }

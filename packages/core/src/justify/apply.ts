@@ -5,6 +5,7 @@ import type { Span } from '../diagnostics/diagnostic.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import type { Justification } from '../model/schema.ts';
 import { spanAt } from '../loader/schema-issues.ts';
+import { mirroredKeyOf } from '../rules/define.ts';
 
 export const STALE_JUSTIFICATION = 'stale-justification';
 export const DUPLICATE_JUSTIFICATION = 'duplicate-justification';
@@ -97,15 +98,23 @@ export function applyJustifications(
       byKey.set(j.finding, { chosen, index: chosen === j ? index : seen.index, count: seen.count + 1 });
     }
   });
-  const known = new Set(findings.map((f) => f.key));
+  // A justification written against a key with the two layers the other way round (keys once followed
+  // list order) still accepts its finding; the finding keeps its own key.
+  const mirrored = new Map<string, string>();
+  for (const f of findings) {
+    const mirror = mirroredKeyOf(f);
+    if (mirror !== undefined && mirror !== f.key) mirrored.set(f.key, mirror);
+  }
+  const known = new Set([...findings.map((f) => f.key), ...mirrored.values()]);
   const out = findings.map((f): Finding => {
-    const j = byKey.get(f.key);
+    const mirror = mirrored.get(f.key);
+    const j = byKey.get(f.key) ?? (mirror !== undefined ? byKey.get(mirror) : undefined);
     if (!j) return f;
     const accepted: Acceptance = { by: j.chosen.by, date: j.chosen.date, reason: j.chosen.reason };
     return { ...f, accepted };
   });
   const stale: Finding[] = [];
-  const locations: Record<string, Span> = {};
+  const locations: Record<string, Span> = Object.create(null) as Record<string, Span>; // keyed by finding keys
   const [duplicateRule, staleRule] = JUSTIFICATION_RULES;
   for (const key of [...byKey.keys()].sort(compareText)) {
     const j = byKey.get(key)!;

@@ -63,3 +63,36 @@ function orderCycle(component: number[], edges: readonly (readonly number[])[]):
   }
   return path;
 }
+
+/**
+ * Far deeper than any plant's dependencies (a sensor's chain to its UPS is under a dozen links), shallow
+ * enough that every element's path to what it relies on stays short, so tracing stays linear in the site.
+ */
+export const MAX_DEPENDENCY_DEPTH = 100;
+
+/** The longest chain of links in an acyclic graph and the node it starts from, iteratively (memoised post-order). */
+export function longestChain(edges: readonly (readonly number[])[]): { deepest: number; depth: number } {
+  const depth = new Int32Array(edges.length).fill(-1);
+  let best = { deepest: 0, depth: 0 };
+  for (let root = 0; root < edges.length; root++) {
+    if (depth[root] !== -1) continue;
+    const work: [number, number][] = [[root, 0]];
+    while (work.length) {
+      const frame = work[work.length - 1]!;
+      const [v, next] = frame;
+      const targets = edges[v]!;
+      if (next < targets.length) {
+        frame[1]++;
+        const w = targets[next]!;
+        if (depth[w] === -1) work.push([w, 0]);
+        continue;
+      }
+      work.pop();
+      let d = 0;
+      for (const w of targets) d = Math.max(d, depth[w]! + 1);
+      depth[v] = d;
+      if (d > best.depth || (d === best.depth && v < best.deepest)) best = { deepest: v, depth: d };
+    }
+  }
+  return best;
+}

@@ -1,6 +1,6 @@
 // The loader: bytes in, a validated Model (or diagnostics) out. It detects .bulk or JSON, checks the
 // bytes are sane text, parses with spans, validates against the schema and then beyond it.
-import { error, hasErrors, sortDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.ts';
+import { capDiagnostics, error, hasErrors, sortDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.ts';
 import { splitLines, type SourceText } from '../diagnostics/render.ts';
 import { parseBulk } from '../bulk/parser.ts';
 import { statementsToRaw, type SpanMap } from '../bulk/to-model.ts';
@@ -112,7 +112,7 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
   const done = (model?: Model): LoadResult => ({
     ...(model && !hasErrors(diagnostics) ? { model } : {}),
     format,
-    diagnostics: sortDiagnostics(diagnostics),
+    diagnostics: capDiagnostics(sortDiagnostics(diagnostics)),
     spans,
     source,
   });

@@ -37,7 +37,7 @@ function describeItem(path: readonly PropertyKey[]): string {
   for (let i = 0; i + 1 < path.length; i++) {
     const key = path[i];
     const index = path[i + 1];
-    if (typeof key === 'string' && typeof index === 'number') parts.unshift(`${ITEM_NAMES[key] ?? key} ${index + 1}`);
+    if (typeof key === 'string' && typeof index === 'number') parts.unshift(`${(Object.hasOwn(ITEM_NAMES, key) ? ITEM_NAMES[key] : undefined) ?? key} ${index + 1}`);
   }
   if (parts.length) return parts.slice(0, 2).join(' of ');
   const head = path[0];

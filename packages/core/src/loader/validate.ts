@@ -7,7 +7,7 @@ import type { SpanMap } from '../bulk/to-model.ts';
 import { didYouMean, Suggester } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
 import { spanAt } from './schema-issues.ts';
-import { findCycles } from './cycles.ts';
+import { findCycles, longestChain, MAX_DEPENDENCY_DEPTH } from './cycles.ts';
 import { RULE_IDS } from '../rules/registry.ts';
 import { ASSESS_RULES } from '../assess/limits.ts';
 import { JUSTIFICATION_RULES } from '../justify/apply.ts';
@@ -168,12 +168,24 @@ class Validator {
       }
       return out;
     });
-    for (const cycle of findCycles(edges)) {
+    const cycles = findCycles(edges);
+    if (cycles.length === 0) this.checkDepth(edges);
+    for (const cycle of cycles) {
       const tags = cycle.map((i) => elements[i]!.tag);
       this.push('BH303', `dependency cycle: ${[...tags, tags[0]].map((t) => `\`${t}\``).join(' -> ')}`, this.path('elements', cycle[0]!, 'tag'), {
         help: 'links point from an element to what it relies on; one of these links runs the wrong way',
       });
     }
+  }
+
+  /** One diagnostic, at the element that starts the longest chain, when it is deeper than the limit. */
+  private checkDepth(edges: readonly (readonly number[])[]): void {
+    const { deepest, depth } = longestChain(edges);
+    if (depth <= MAX_DEPENDENCY_DEPTH) return;
+    const tag = this.input.model.elements[deepest]!.tag;
+    this.push('BH107', `\`${tag}\` relies on a chain of ${depth} links, one through the next; the limit is ${MAX_DEPENDENCY_DEPTH}`, this.path('elements', deepest, 'tag'), {
+      help: 'a real chain (transmitter, cable, junction box, I/O card, controller, circuit, UPS) is a few links long; link each element to what it relies on directly',
+    });
   }
 
   private role(fnIndex: number, field: string, tags: readonly string[], groups: ElementGroup[], kinds?: readonly string[]): void {

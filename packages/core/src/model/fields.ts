@@ -81,12 +81,17 @@ export const LIST_SPECS: Record<'category' | 'rule' | 'scenario' | 'accept', Sta
   scenario: { schema: Scenario, positional: 'id', collection: 'scenarios' },
   accept: { schema: Justification, positional: 'finding', collection: 'justifications' },
 };
-export const SCENARIO_LINE_SPECS: Record<string, StatementSpec & { collection: string; single?: boolean }> = {
-  cause: { schema: Cause, collection: 'cause', single: true },
-  enabler: { schema: Enabler, positional: 'title', collection: 'enablers' },
-  modifier: { schema: Modifier, positional: 'kind', collection: 'modifiers' },
-  layer: { schema: LayerClaim, positional: 'function', collection: 'layers' },
-};
+export type ScenarioLineSpec = StatementSpec & { collection: string; single?: boolean };
+/** A scenario's indented lines, by keyword. A Map, as the keyword is the user's word (`constructor` is not a line). */
+export const SCENARIO_LINE_SPECS: ReadonlyMap<string, ScenarioLineSpec> = new Map<string, ScenarioLineSpec>([
+  ['cause', { schema: Cause, collection: 'cause', single: true }],
+  ['enabler', { schema: Enabler, positional: 'title', collection: 'enablers' }],
+  ['modifier', { schema: Modifier, positional: 'kind', collection: 'modifiers' }],
+  ['layer', { schema: LayerClaim, positional: 'function', collection: 'layers' }],
+]);
+/** The single and list statements by keyword, for lookups by the user's word (never `keyword in SPECS`). */
+export const SINGLE_SPEC_BY_KEYWORD: ReadonlyMap<string, StatementSpec> = new Map(Object.entries(SINGLE_SPECS));
+export const LIST_SPEC_BY_KEYWORD: ReadonlyMap<string, StatementSpec & { collection: string }> = new Map(Object.entries(LIST_SPECS));
 export const ELEMENT_SPECS: ReadonlyMap<string, StatementSpec> = elementSpecs;
 export const FUNCTION_SPECS: ReadonlyMap<string, StatementSpec> = functionSpecs;
 

@@ -102,4 +102,37 @@ export function findingKey(rule: string, scenario: string | undefined, parties: 
   return [rule, scenario ?? '-', parties.map(partyKey).join('+'), ...(element ? [element] : []), ...(detail ? [detail] : [])].join(':');
 }
 
+/**
+ * The sides compared pairwise, in the order that names a pair in keys and messages: the cause first,
+ * then the layers by tag. Never the order the layers are listed in, so reordering them changes no key
+ * and no accepted justification goes stale.
+ */
+export function sidesInKeyOrder(ctx: ScenarioContext): Side[] {
+  const layers = [...ctx.layers].sort((x, y) => compareTags(x.party.tag ?? '', y.party.tag ?? ''));
+  return [ctx.cause, ...layers];
+}
+
+function compareTags(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
+}
+
+/** Rules whose key names one element from each side (element from the second party, detail from the first). */
+const KEYED_BY_BOTH_SIDES = new Set(['same-make-model']);
+
+/**
+ * The key the finding had with its two layers the other way round, as keys were once given in list
+ * order: a justification written against it still accepts the finding. Undefined unless both parties are layers.
+ */
+export function mirroredKeyOf(finding: Pick<Finding, 'key' | 'rule' | 'scenario' | 'parties' | 'element'>): string | undefined {
+  const [first, second] = finding.parties;
+  if (finding.parties.length !== 2 || first?.role !== 'layer' || second?.role !== 'layer') return undefined;
+  const head = findingKey(finding.rule, finding.scenario, finding.parties, finding.element);
+  if (finding.key !== head && !finding.key.startsWith(`${head}:`)) return undefined;
+  const detail = finding.key.length > head.length ? finding.key.slice(head.length + 1) : undefined;
+  const swapped = [second, first];
+  return KEYED_BY_BOTH_SIDES.has(finding.rule) && detail !== undefined && finding.element !== undefined
+    ? findingKey(finding.rule, finding.scenario, swapped, detail, finding.element)
+    : findingKey(finding.rule, finding.scenario, swapped, finding.element, detail);
+}
+
 export type { Finding };

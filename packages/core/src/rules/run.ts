@@ -4,7 +4,7 @@
 import type { Finding, Party, TracedElement } from '../vocabulary/types.ts';
 import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
 import type { Tracer } from '../trace/trace.ts';
-import { findingKey, SEVERITY_RANK, type FindingDraft, type PairContext, type ResolvedPolicy, type Rule, type ScenarioContext, type SharedElementRule, type Side } from './define.ts';
+import { findingKey, SEVERITY_RANK, sidesInKeyOrder, type FindingDraft, type PairContext, type ResolvedPolicy, type Rule, type ScenarioContext, type SharedElementRule, type Side } from './define.ts';
 import { RULES } from './registry.ts';
 
 export interface RuleEnvironment {
@@ -137,7 +137,7 @@ export function runRules(env: RuleEnvironment, scenario: Scenario, rules: readon
   const ctx = scenarioContext(env, scenario);
   const shared = rules.filter((r): r is SharedElementRule => r.type === 'shared');
   const drafts: (FindingDraft & { rule: Rule })[] = [];
-  const sides = [ctx.cause, ...ctx.layers];
+  const sides = sidesInKeyOrder(ctx);
   for (let i = 0; i < sides.length; i++) {
     for (let j = i + 1; j < sides.length; j++) {
       if (j === 0) continue;

@@ -2,7 +2,7 @@
 // (a firmware fault, a wrong calibration procedure), so the pairing asks for a justification.
 import { groupOf } from '../../model/kinds.ts';
 import type { Element } from '../../model/schema.ts';
-import { defineScenarioRule, describeSide, type FindingDraft, type ScenarioContext, type Side } from '../define.ts';
+import { defineScenarioRule, describeSide, sidesInKeyOrder, type FindingDraft, type ScenarioContext, type Side } from '../define.ts';
 
 function identity(element: Element): string | undefined {
   if (!('make' in element) || !('model' in element) || !element.make || !element.model) return undefined;
@@ -43,7 +43,7 @@ export const sameMakeModel = defineScenarioRule({
   source: 'ANSI/ISA-S84.01-1996 Annex B.1.2 (identical vs diverse separation); IEC 61511-1:2016 9.4 (diversity) [from memory for the clause]',
   defaultSeverity: 'needs-justification',
   check(ctx) {
-    const sides = [ctx.cause, ...ctx.layers];
+    const sides = sidesInKeyOrder(ctx);
     const drafts: FindingDraft[] = [];
     for (let i = 0; i < sides.length; i++) for (let j = i + 1; j < sides.length; j++) drafts.push(...compare(sides[i]!, sides[j]!, ctx));
     return drafts;

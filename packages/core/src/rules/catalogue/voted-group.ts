@@ -33,7 +33,7 @@ export const votedGroupCommonCause = defineScenarioRule({
         for (const tag of reported.sort()) {
           const element = ctx.element(tag);
           if (ctx.tracer.group(tag) === 'support' && failsSafeOnLoss(layer, element, ctx)) continue;
-          const channels = [...new Set(shared.get(tag))];
+          const channels = [...new Set(shared.get(tag))].sort(); // by tag, not list order
           drafts.push({
             parties: [layer.party],
             element: tag,
