@@ -62,7 +62,7 @@ describe.each([DEMO, DEMO_REV_B])('%s under shuffled statements, scenario lines 
 describe('revision B with the two layers of S-101 swapped (the case issue 10 reports)', () => {
   it('keeps its accepted diversity justification and every verdict', () => {
     const text = readDemo(DEMO_REV_B);
-    const swapped = text.replace(/^(  layer SIF-101 .*)\n(  layer LAH-101 .*)$/m, '$2\n$1');
+    const swapped = text.replace(/^( {2}layer SIF-101 .*)\n( {2}layer LAH-101 .*)$/m, '$2\n$1');
     expect(swapped).not.toBe(text);
     const before = demoInput(DEMO_REV_B);
     const after = demoInput(DEMO_REV_B, swapped, { sha: before.sha256 });
