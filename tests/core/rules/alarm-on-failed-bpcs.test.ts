@@ -15,7 +15,7 @@ ruleTable('alarm-on-failed-bpcs', {
         ...people,
         'C-2': 'controller C-2 system=bpcs powered-by=CK-B',
         'IO-5': 'io-card IO-5 signal-via=C-2 powered-by=CK-B',
-        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5',
+        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal',
         'AL-1': 'alarm AL-1 sensors=T-2 raised-in=C-2 operator=OP-1 finals=XV-1 minutes=20',
       },
       scenario: onAlarm,

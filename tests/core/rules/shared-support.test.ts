@@ -55,7 +55,7 @@ ruleTable('shared-support', {
     {
       name: 'shared circuit feeding only the SIF transmitter: it reads low, nothing trips; voids',
       source: 'conservative default of this tool (a sensor fault action the model does not state is not assumed)',
-      lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 powered-by=CK-A' },
+      lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 powered-by=CK-A supply=from-signal' },
       findings: [onAir('CK-A', 'voids-credit')],
     },
     {
@@ -102,7 +102,7 @@ ruleTable('shared-support', {
     {
       name: 'shared circuit feeding the loop transmitter and an energise-to-trip SIF: the reading may go either way, voids',
       source: 'a transmitter that loses power reads wrong in a direction the model does not state: conservative default of this tool',
-      lines: { 'SF-1': sif('energise'), 'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 powered-by=CK-B' },
+      lines: { 'SF-1': sif('energise'), 'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 powered-by=CK-B supply=from-signal' },
       scenario: scenario('function=LC-1 frequency=0.1 drives-to=open', 'SF-1'),
       findings: [onAir('CK-B', 'voids-credit')],
     },

@@ -10,6 +10,7 @@ import { sharedHousing } from './catalogue/shared-housing.ts';
 import { alarmOnFailedBpcs, sharedConsole, sharedOperator } from './catalogue/shared-people.ts';
 import { sharedSupport, utilityLossCause } from './catalogue/shared-support.ts';
 import { votedGroupCommonCause } from './catalogue/voted-group.ts';
+import { undeclaredSupply } from './catalogue/undeclared-supply.ts';
 
 export const RULES: readonly Rule[] = [
   utilityLossCause,
@@ -29,6 +30,7 @@ export const RULES: readonly Rule[] = [
   sameMakeModel,
   votedGroupCommonCause,
   incompleteTrace,
+  undeclaredSupply,
   causeNarrowed,
 ];
 
