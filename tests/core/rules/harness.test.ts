@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseCase, checkTable, ruleFindings, type Case, type InvalidCase } from './harness.ts';
 
-const sharedOnN1 = { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-1 signal-via=IO-2' };
+const sharedOnN1 = { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-1 signal-via=IO-2 supply=from-signal' };
 const onN1: InvalidCase = {
   name: 'on N-1',
   lines: sharedOnN1,
@@ -12,7 +12,7 @@ const onN1: InvalidCase = {
 const onTapping: InvalidCase = {
   ...onN1,
   name: 'on TP-1',
-  lines: { 'TP-1': 'tapping TP-1 mounted-on=V-1', 'T-1': 'transmitter T-1 mounted-on=TP-1 signal-via=IO-1', 'T-2': 'transmitter T-2 mounted-on=TP-1 signal-via=IO-2' },
+  lines: { 'TP-1': 'tapping TP-1 mounted-on=V-1', 'T-1': 'transmitter T-1 mounted-on=TP-1 signal-via=IO-1 supply=from-signal', 'T-2': 'transmitter T-2 mounted-on=TP-1 signal-via=IO-2 supply=from-signal' },
 };
 const valid: Case[] = [{ name: 'base' }, { name: 'a second UPS title', lines: { 'UPS-B': 'ups UPS-B title="B"' } }];
 const sound = { valid, invalid: [onN1, onTapping] };
@@ -40,7 +40,7 @@ describe('the rule case harness', () => {
   });
 
   it('fails loudly on a case that does not load cleanly, naming the diagnostic', () => {
-    expect(() => analyseCase({ name: 'typo', lines: { 'T-2': 'transmitter T-2 mounted-on=N-9 signal-via=IO-2' } })).toThrow(/case "typo" does not load cleanly: BH300/);
+    expect(() => analyseCase({ name: 'typo', lines: { 'T-2': 'transmitter T-2 mounted-on=N-9 signal-via=IO-2 supply=from-signal' } })).toThrow(/case "typo" does not load cleanly: BH300/);
   });
 
   it('sees a wrong severity, a missing finding and an extra one', () => {

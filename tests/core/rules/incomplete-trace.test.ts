@@ -14,13 +14,13 @@ ruleTable('incomplete-trace', {
     { name: 'a fully traced SIF' },
     { name: 'a relief valve on a nozzle', lines: relief('relief-valve PSV-1 mounted-on=N-3'), scenario: onDevice },
     { name: 'an alarm whose operator acts on a valve', lines: alarm(' finals=XV-1'), scenario: onAlarm },
-    { name: 'a SIF transmitter on an impulse line', lines: { 'IL-2': 'impulse-line IL-2 mounted-on=N-2', 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=IL-2 signal-via=IO-2' } },
+    { name: 'a SIF transmitter on an impulse line', lines: { 'IL-2': 'impulse-line IL-2 mounted-on=N-2', 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=IL-2 signal-via=IO-2 supply=from-signal' } },
   ],
   invalid: [
     {
       name: 'a SIF transmitter with no process connection',
       source: SOURCE,
-      lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" signal-via=IO-2' },
+      lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" signal-via=IO-2 supply=from-signal' },
       findings: [{ key: 'incomplete-trace:SC-1:SF-1:process-connection', severity: 'voids-credit', parties: ['SF-1'] }],
     },
     {

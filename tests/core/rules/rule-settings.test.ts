@@ -6,8 +6,8 @@ import { analyseCase } from './harness.ts';
 
 const oneJunctionBox = {
   'JB-1': 'junction-box JB-1',
-  'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 housed-in=JB-1',
-  'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 housed-in=JB-1',
+  'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 housed-in=JB-1 supply=from-signal',
+  'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 housed-in=JB-1 supply=from-signal',
 };
 const KEY = 'shared-housing:SC-1:LC-1+SF-1:JB-1';
 

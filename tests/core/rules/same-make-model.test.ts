@@ -7,8 +7,8 @@ const SOURCE = 'ANSI/ISA-S84.01-1996 Annex B.1.2';
 ruleTable('same-make-model', {
   valid: [
     { name: 'different makes' },
-    { name: 'same make, different model', lines: { 'T-2': 'transmitter T-2 make="Acme" model="A9" mounted-on=N-2 signal-via=IO-2' } },
-    { name: 'make and model not stated on one side', lines: { 'T-2': 'transmitter T-2 mounted-on=N-2 signal-via=IO-2' } },
+    { name: 'same make, different model', lines: { 'T-2': 'transmitter T-2 make="Acme" model="A9" mounted-on=N-2 signal-via=IO-2 supply=from-signal' } },
+    { name: 'make and model not stated on one side', lines: { 'T-2': 'transmitter T-2 mounted-on=N-2 signal-via=IO-2 supply=from-signal' } },
     {
       name: 'same make and model, but a transmitter and a valve',
       lines: { 'XV-1': 'shutdown-valve XV-1 make="Acme" model="A1" fails-to=closed mounted-on=L-1 signal-via=IO-4 air-from=IA-B' },
@@ -18,7 +18,7 @@ ruleTable('same-make-model', {
     {
       name: 'same make and model of transmitter',
       source: SOURCE,
-      lines: { 'T-2': 'transmitter T-2 make="Acme" model="A1" mounted-on=N-2 signal-via=IO-2' },
+      lines: { 'T-2': 'transmitter T-2 make="Acme" model="A1" mounted-on=N-2 signal-via=IO-2 supply=from-signal' },
       findings: [{ key: 'same-make-model:SC-1:LC-1+SF-1:T-2:T-1', severity: 'needs-justification', element: 'T-2', parties: ['LC-1', 'SF-1'] }],
     },
     {

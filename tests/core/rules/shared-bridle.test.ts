@@ -16,8 +16,8 @@ ruleTable('shared-bridle', {
       lines: {
         'BR-1': 'bridle BR-1 mounted-on=N-1',
         'BR-2': 'bridle BR-2 mounted-on=N-2',
-        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=BR-1 signal-via=IO-1',
-        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=BR-2 signal-via=IO-2',
+        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=BR-1 signal-via=IO-1 supply=from-signal',
+        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=BR-2 signal-via=IO-2 supply=from-signal',
       },
     },
   ],

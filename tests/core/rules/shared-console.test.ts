@@ -9,7 +9,7 @@ const base = {
   'CON-1': 'console CON-1 signal-via=S-1',
   'CON-2': 'console CON-2 signal-via=S-1',
   'N-3': 'nozzle N-3 mounted-on=V-1',
-  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-2',
+  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-2 supply=from-signal',
   'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 console=CON-1 operator=OP-1 finals=XV-1 minutes=20',
   'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 console=CON-2 operator=OP-2 finals=XV-1 minutes=20',
 };

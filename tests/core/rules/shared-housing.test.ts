@@ -6,8 +6,8 @@ import { ruleTable } from './harness.ts';
 const SOURCE = 'IEC 61511-1:2016 9.4 (from memory); ANSI/ISA-S84.01-1996 Annex B.1.2';
 const oneJunctionBox = {
   'JB-1': 'junction-box JB-1',
-  'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 housed-in=JB-1',
-  'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 housed-in=JB-1',
+  'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 housed-in=JB-1 supply=from-signal',
+  'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 housed-in=JB-1 supply=from-signal',
 };
 const inJb1 = { key: 'shared-housing:SC-1:LC-1+SF-1:JB-1', element: 'JB-1', parties: ['LC-1', 'SF-1'] };
 
@@ -34,8 +34,8 @@ ruleTable('shared-housing', {
         'RT-1': 'cable-route RT-1',
         'CB-1': 'cable CB-1 signal-via=IO-1 housed-in=RT-1',
         'CB-2': 'cable CB-2 signal-via=IO-2 housed-in=RT-1',
-        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1',
-        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-2',
+        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1 supply=from-signal',
+        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-2 supply=from-signal',
       },
       findings: [{ key: 'shared-housing:SC-1:LC-1+SF-1:RT-1', severity: 'needs-justification', element: 'RT-1', parties: ['LC-1', 'SF-1'] }],
     },

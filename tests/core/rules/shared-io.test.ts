@@ -12,8 +12,8 @@ ruleTable('shared-io', {
       lines: {
         'CB-1': 'cable CB-1 signal-via=IO-1',
         'CB-2': 'cable CB-2 signal-via=IO-2',
-        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1',
-        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-2',
+        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1 supply=from-signal',
+        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-2 supply=from-signal',
       },
     },
   ],
@@ -21,7 +21,7 @@ ruleTable('shared-io', {
     {
       name: 'the SIF transmitter wired to the BPCS input card',
       source: SOURCE,
-      lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-1' },
+      lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-1 supply=from-signal' },
       findings: [{ key: 'shared-io:SC-1:LC-1+SF-1:IO-1', severity: 'voids-credit', element: 'IO-1', parties: ['LC-1', 'SF-1'] }],
     },
     {
@@ -29,8 +29,8 @@ ruleTable('shared-io', {
       source: SOURCE,
       lines: {
         'CB-1': 'cable CB-1 signal-via=IO-1,IO-2',
-        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1',
-        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-1',
+        'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1 supply=from-signal',
+        'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-1 supply=from-signal',
       },
       findings: [{ key: 'shared-io:SC-1:LC-1+SF-1:CB-1', severity: 'voids-credit', element: 'CB-1', parties: ['LC-1', 'SF-1'] }],
     },

@@ -12,15 +12,15 @@ const sifInBpcs = { 'SF-1': 'sif SF-1 sensors=T-2 solver=C-1 finals=XV-1 trip=cl
 // defers to the assessment's bpcs-same-controller, which must then apply.
 const twoBpcsTrips = {
   'N-3': 'nozzle N-3 mounted-on=V-1',
-  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-5',
-  'C-2': 'controller C-2 system=bpcs',
-  'IO-5': 'io-card IO-5 signal-via=C-2',
-  'IO-6': 'io-card IO-6 signal-via=C-2',
+  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-5 supply=from-signal',
+  'C-2': 'controller C-2 system=bpcs powered-by=CK-B',
+  'IO-5': 'io-card IO-5 signal-via=C-2 supply=from-signal',
+  'IO-6': 'io-card IO-6 signal-via=C-2 supply=from-signal',
   'N-4': 'nozzle N-4 mounted-on=V-1',
-  'T-4': 'transmitter T-4 mounted-on=N-4 signal-via=IO-6',
+  'T-4': 'transmitter T-4 mounted-on=N-4 signal-via=IO-6 supply=from-signal',
   'P-1': 'pump P-1',
-  'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-5',
-  'MS-2': 'motor-starter MS-2 fails-to=off mounted-on=P-1 signal-via=IO-6',
+  'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-5 supply=self-contained',
+  'MS-2': 'motor-starter MS-2 fails-to=off mounted-on=P-1 signal-via=IO-6 supply=self-contained',
   'TR-1': 'trip TR-1 sensors=T-3 solver=C-2 finals=MS-1 trip=stop pfd=0.1',
   'TR-2': 'trip TR-2 sensors=T-4 solver=C-2 finals=MS-2 trip=stop pfd=0.1',
 };
@@ -33,7 +33,7 @@ ruleTable('shared-logic-solver', {
       name: 'SIF in a second SIS logic solver',
       lines: { 'S-2': 'logic-solver S-2 system=sis powered-by=CK-B', 'SF-1': 'sif SF-1 sensors=T-2 solver=S-2 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' },
     },
-    { name: 'two BPCS trips in two controllers', lines: { ...twoBpcsTrips, 'C-3': 'controller C-3 system=bpcs', 'IO-6': 'io-card IO-6 signal-via=C-3', 'TR-2': 'trip TR-2 sensors=T-4 solver=C-3 finals=MS-2 trip=stop pfd=0.1' }, scenario: twoTrips },
+    { name: 'two BPCS trips in two controllers', lines: { ...twoBpcsTrips, 'C-3': 'controller C-3 system=bpcs powered-by=CK-B', 'IO-6': 'io-card IO-6 signal-via=C-3 supply=from-signal', 'TR-2': 'trip TR-2 sensors=T-4 solver=C-3 finals=MS-2 trip=stop pfd=0.1' }, scenario: twoTrips },
   ],
   invalid: [
     {
@@ -85,16 +85,16 @@ describe('the controller and what it alone relies on', () => {
   const inOneCabinet = {
     'CAB-1': 'cabinet CAB-1',
     'C-1': 'controller C-1 system=bpcs powered-by=CK-A housed-in=CAB-1',
-    'IO-1': 'io-card IO-1 signal-via=C-1',
-    'IO-3': 'io-card IO-3 signal-via=C-1',
+    'IO-1': 'io-card IO-1 signal-via=C-1 supply=from-signal',
+    'IO-3': 'io-card IO-3 signal-via=C-1 supply=from-signal',
   };
   const tripInC1 = {
     ...inOneCabinet,
-    'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5',
-    'IO-5': 'io-card IO-5 signal-via=C-1',
+    'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal',
+    'IO-5': 'io-card IO-5 signal-via=C-1 supply=from-signal',
     'P-1': 'pump P-1',
-    'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-6',
-    'IO-6': 'io-card IO-6 signal-via=C-1',
+    'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-6 supply=self-contained',
+    'IO-6': 'io-card IO-6 signal-via=C-1 supply=from-signal',
     'TR-1': 'trip TR-1 sensors=T-2 solver=C-1 finals=MS-1 trip=stop pfd=0.1',
   };
   const tripScenario = scenario('function=LC-1 frequency=0.1', 'TR-1');

@@ -7,7 +7,7 @@ const alarms = {
   'OP-1': 'operator OP-1',
   'OP-2': 'operator OP-2',
   'N-3': 'nozzle N-3 mounted-on=V-1',
-  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-2',
+  'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-2 supply=from-signal',
   'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 operator=OP-1 finals=XV-1 minutes=20',
   'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 operator=OP-2 finals=XV-1 minutes=20',
 };

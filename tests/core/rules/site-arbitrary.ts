@@ -99,7 +99,7 @@ function build(site: SiteSpec, sharings: readonly Sharing[]) {
     add('nozzle', 'N0', { 'mounted-on': ['V'] });
     add('io-card', 'I0', { 'signal-via': ['C0'], 'powered-by': ['K0'] });
     add('io-card', 'O0', { 'signal-via': ['C0'], 'powered-by': ['K0'] });
-    add('transmitter', 'T0', { make: ['"Make-0"'], model: ['"M"'], 'mounted-on': ['N0'], 'signal-via': ['I0'] });
+    add('transmitter', 'T0', { make: ['"Make-0"'], model: ['"M"'], supply: ['from-signal'], 'mounted-on': ['N0'], 'signal-via': ['I0'] });
     add('control-valve', 'CV0', { 'fails-to': ['closed'], 'mounted-on': ['L'], 'signal-via': ['O0'], 'air-from': ['A0'] });
     functions.push(['loop', 'LOOP0', 'sensors=T0', 'solver=C0', 'finals=CV0']);
     sides.push({ fn: 'LOOP0', parts: { sensor: 'T0', card: 'I0', solver: 'C0', final: 'CV0', connectionUser: 'T0' } });
@@ -130,21 +130,21 @@ function build(site: SiteSpec, sharings: readonly Sharing[]) {
         add(layer.connection, mount, { 'mounted-on': [nozzle] });
       }
       add('io-card', `I${i}-${c}`, { 'signal-via': [solver], 'powered-by': [`K${i}`] });
-      add('transmitter', `T${i}-${c}`, { make: [`"Make-${i}-${c}"`], model: ['"M"'], 'mounted-on': [mount], 'signal-via': [`I${i}-${c}`] });
+      add('transmitter', `T${i}-${c}`, { make: [`"Make-${i}-${c}"`], model: ['"M"'], supply: ['from-signal'], 'mounted-on': [mount], 'signal-via': [`I${i}-${c}`] });
       sensors.push(`T${i}-${c}`);
     }
     const voting = channels === 2 ? ['sensor-voting=1oo2'] : [];
     if (layer.kind === 'alarm') {
-      add('console', `CON${i}`, { 'signal-via': [solver] });
+      add('console', `CON${i}`, { 'signal-via': [solver], 'powered-by': [`K${i}`] });
       add('operator', `OP${i}`);
-      add('motor-starter', `M${i}`, { 'fails-to': ['off'], 'mounted-on': ['P'], 'signal-via': [`O${i}`] });
+      add('motor-starter', `M${i}`, { 'fails-to': ['off'], 'mounted-on': ['P'], 'signal-via': [`O${i}`], 'powered-by': [`K${i}`] });
       functions.push(['alarm', fn, `sensors=${sensors[0]}`, `raised-in=${solver}`, `console=CON${i}`, `operator=OP${i}`, `finals=M${i}`, 'minutes=20']);
       sides.push({ fn, parts: { sensor: sensors[0]!, card: `I${i}-0`, solver, final: `M${i}`, connectionUser: sensors[0]! } });
       return;
     }
     const failsTo: Record<string, string[]> = layer.failsTo ? { 'fails-to': [layer.failsTo] } : {};
     add('air-header', `A${i}`);
-    add('solenoid', `Y${i}`, { ...failsTo, 'signal-via': [`O${i}`] });
+    add('solenoid', `Y${i}`, { ...failsTo, supply: ['from-signal'], 'signal-via': [`O${i}`] });
     add('shutdown-valve', `X${i}`, { ...failsTo, 'mounted-on': ['L'], 'signal-via': [`Y${i}`], 'air-from': [`A${i}`] });
     functions.push([layer.kind, fn, `sensors=${sensors.join(',')}`, ...voting, `solver=${solver}`, `finals=X${i}`, 'trip=close', `trip-mode=${layer.tripMode}`]);
     sides.push({ fn, parts: { sensor: sensors[0]!, card: `I${i}-0`, solver, final: `X${i}`, connectionUser: sensors[0]! } });
@@ -174,7 +174,7 @@ export function siteText(site: SiteSpec, sharings: readonly Sharing[] = [], name
   const { elements, functions } = build(site, sharings);
   const rename = (word: string) => word.replace(/^([a-z-]+=)(.*)$/, (_m, key: string, list: string) => key + list.split(',').map(name).join(','));
   const attr = (key: string, values: string[]) =>
-    key === 'system' || key === 'fails-to' || key === 'make' || key === 'model' ? `${key}=${values.join(',')}` : `${key}=${values.map(name).join(',')}`;
+    key === 'system' || key === 'fails-to' || key === 'supply' || key === 'make' || key === 'model' ? `${key}=${values.join(',')}` : `${key}=${values.map(name).join(',')}`;
   const lines = [
     'site "Property site (invented)"',
     `category ${name('CAT')} tolerable=1e-6 harm=containment`,

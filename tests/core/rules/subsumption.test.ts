@@ -9,11 +9,11 @@ import { modelText } from './harness.ts';
 // on a second controller but is fed from CK-A as well, by a longer route than the one through C-1.
 const lines = {
   'OP-1': 'operator OP-1',
-  'C-2': 'controller C-2 system=bpcs',
-  'IO-1': 'io-card IO-1 signal-via=C-1',
-  'IO-3': 'io-card IO-3 signal-via=C-1',
+  'C-2': 'controller C-2 system=bpcs powered-by=CK-B',
+  'IO-1': 'io-card IO-1 signal-via=C-1 supply=from-signal',
+  'IO-3': 'io-card IO-3 signal-via=C-1 supply=from-signal',
   'IO-5': 'io-card IO-5 signal-via=C-2 powered-by=CK-A',
-  'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5',
+  'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal',
   'AL-1': 'alarm AL-1 sensors=T-2 raised-in=C-1 operator=OP-1 finals=XV-1 minutes=20',
 };
 const scenario = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer AL-1 pfd=0.1'];
@@ -42,7 +42,7 @@ describe('elements beneath a shared element', () => {
   });
 
   it('are listed under it when every route of both sides passes through it', () => {
-    const analysis = run([], { 'IO-5': 'io-card IO-5 signal-via=C-2' });
+    const analysis = run([], { 'IO-5': 'io-card IO-5 signal-via=C-2 supply=from-signal' });
     expect(analysis.findings.map((f) => f.key)).toEqual(['alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1']);
     expect(analysis.findings[0]!.message).toContain('(and through it `CK-A`, `UPS-A`)');
   });

@@ -19,7 +19,7 @@ const valves = (xv2: string) => ({
 
 ruleTable('voted-group-common-cause', {
   valid: [
-    { name: '1oo2 transmitters on separate nozzles and cards', lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-3 signal-via=IO-5') },
+    { name: '1oo2 transmitters on separate nozzles and cards', lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-3 signal-via=IO-5 supply=from-signal') },
     { name: 'a single channel', lines: { 'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' } },
     {
       name: '1oo2 valves on one air header that closes both on its loss: fails safe, not reported',
@@ -30,13 +30,13 @@ ruleTable('voted-group-common-cause', {
     {
       name: '1oo2 transmitters on one nozzle',
       source: SOURCE,
-      lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5'),
+      lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal'),
       findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:N-2', severity: 'needs-justification', element: 'N-2', parties: ['SF-1'] }],
     },
     {
       name: '1oo2 transmitters on one input card (its power belongs to the solver side)',
       source: SOURCE,
-      lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-3 signal-via=IO-2'),
+      lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-3 signal-via=IO-2 supply=from-signal'),
       findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IO-2', severity: 'needs-justification', element: 'IO-2', parties: ['SF-1'] }],
     },
     {

@@ -33,6 +33,8 @@ export interface AssessOutput {
 
 /** The rule id the trace rules use for a layer whose trace is incomplete: its verdict is "unverified". */
 export const INCOMPLETE_TRACE_RULE = 'incomplete-trace';
+/** Rules whose findings leave a layer "unverified" (what the model does not say), not "voided". */
+const UNVERIFIED_RULES: ReadonlySet<string> = new Set([INCOMPLETE_TRACE_RULE, 'undeclared-supply']);
 
 interface CauseWork {
   label: string;
@@ -197,7 +199,7 @@ function applyIndependence(findings: readonly Finding[], works: Map<string, Laye
       works.get(b)!.reasons.push(reasonOf(f, 'conflict', a));
     } else if (layers.length >= 1) {
       const tag = layers[0]!;
-      const effect = f.rule === INCOMPLETE_TRACE_RULE ? 'unverified' : 'voids';
+      const effect = UNVERIFIED_RULES.has(f.rule) ? 'unverified' : 'voids';
       works.get(tag)!.reasons.push(reasonOf(f, effect, withCause ? 'cause' : undefined));
       againstLayer.set(tag, [...(againstLayer.get(tag) ?? []), f]);
     }

@@ -2,11 +2,11 @@
 // and per function role. Edges point from what relies to what is relied on.
 import { MultiDirectedGraph } from 'graphology';
 import { groupOf, LINK_FIELDS, type ElementGroup, type ElementKind, type FunctionKind } from '../model/kinds.ts';
-import type { Element, Model, PlantFunction } from '../model/schema.ts';
+import type { Element, Model, PlantFunction, SupplyExemption } from '../model/schema.ts';
 import type { EdgeRole } from '../vocabulary/types.ts';
 
 export type NodeAttributes =
-  | { type: 'element'; kind: ElementKind; group: ElementGroup }
+  | { type: 'element'; kind: ElementKind; group: ElementGroup; supply?: SupplyExemption }
   | { type: 'function'; kind: FunctionKind };
 
 export interface EdgeAttributes {
@@ -46,7 +46,10 @@ export function roleTargets(fn: PlantFunction): { role: EdgeRole; tag: string; c
 
 export function buildPlantGraph(model: Model): PlantGraph {
   const graph: PlantGraph = new MultiDirectedGraph<NodeAttributes, EdgeAttributes>();
-  for (const element of model.elements) graph.addNode(element.tag, { type: 'element', kind: element.kind, group: groupOf(element.kind) });
+  for (const element of model.elements) {
+    const supply = 'supply' in element ? element.supply : undefined;
+    graph.addNode(element.tag, { type: 'element', kind: element.kind, group: groupOf(element.kind), ...(supply ? { supply } : {}) });
+  }
   for (const fn of model.functions) graph.addNode(fn.tag, { type: 'function', kind: fn.kind });
   for (const element of model.elements) addLinks(graph, element);
   for (const fn of model.functions) {

@@ -114,3 +114,16 @@ export const SUPPORT_LINK_KINDS: Partial<Record<LinkField, readonly ElementKind[
   airFrom: ['air-header'],
   hydraulicFrom: ['hydraulic-supply'],
 };
+
+/**
+ * Element kinds that need energy to do their part: each declares a supply link (powered by, air from,
+ * hydraulics from) or says with `supply=` why it needs none. Passive parts (cables, housings, process
+ * connections, relief devices, people) and the supports themselves do not.
+ */
+export const ACTIVE_KINDS: ReadonlySet<ElementKind> = new Set<ElementKind>([
+  'transmitter', 'switch', 'detector', 'io-card', 'controller', 'logic-solver', 'console',
+  'solenoid', 'positioner', 'actuator', 'motor-starter', 'control-valve', 'shutdown-valve',
+]);
+
+/** The links that carry a supply to an element. */
+export const SUPPLY_LINKS: ReadonlySet<LinkField> = new Set<LinkField>(['poweredBy', 'airFrom', 'hydraulicFrom']);

@@ -103,6 +103,14 @@ const identityFields = { make: Text.optional(), model: Text.optional(), technolo
 export const VARIABLES = ['level', 'pressure', 'flow', 'temperature', 'analysis', 'position', 'speed', 'other'] as const;
 export const SYSTEMS = ['bpcs', 'sis', 'machine', 'relay'] as const;
 export const FAIL_POSITIONS = ['closed', 'open', 'in-place', 'off', 'on'] as const;
+/** How an active element that declares no supply link gets its energy (see rules/supply-route.ts). */
+export const SUPPLY_EXEMPTIONS = ['from-signal', 'mechanical', 'self-contained'] as const;
+const supplyField = {
+  supply: z.enum(SUPPLY_EXEMPTIONS).optional().meta({
+    description:
+      'Said instead of a supply link: from-signal (powered over its signal link, a 2-wire transmitter or a solenoid fed by its output card), mechanical, self-contained',
+  }),
+};
 
 function elementOf<const K extends readonly [string, ...string[]], X extends z.ZodRawShape>(kinds: K, extra: X) {
   return z.strictObject({
@@ -120,20 +128,21 @@ export const Element = z
     elementOf(ELEMENT_GROUPS.equipment, {}),
     elementOf(ELEMENT_GROUPS.connection, {}),
     elementOf(ELEMENT_GROUPS.impulse, {}),
-    elementOf(ELEMENT_GROUPS.sensor, { variable: z.enum(VARIABLES).optional(), ...identityFields }),
-    elementOf(ELEMENT_GROUPS.signal, identityFields),
+    elementOf(ELEMENT_GROUPS.sensor, { variable: z.enum(VARIABLES).optional(), ...identityFields, ...supplyField }),
+    elementOf(ELEMENT_GROUPS.signal, { ...identityFields, ...supplyField }),
     elementOf(ELEMENT_GROUPS.housing, {}),
-    elementOf(ELEMENT_GROUPS.solver, { system: z.enum(SYSTEMS), ...identityFields }),
+    elementOf(ELEMENT_GROUPS.solver, { system: z.enum(SYSTEMS), ...identityFields, ...supplyField }),
     elementOf(ELEMENT_GROUPS.final, {
       failsTo: z.enum(FAIL_POSITIONS).optional().meta({
         description: 'Position taken on loss of power, signal or air; absent means unknown (worst case)',
       }),
       ...identityFields,
+      ...supplyField,
     }),
-    elementOf(ELEMENT_GROUPS.actuation, { failsTo: z.enum(FAIL_POSITIONS).optional(), ...identityFields }),
+    elementOf(ELEMENT_GROUPS.actuation, { failsTo: z.enum(FAIL_POSITIONS).optional(), ...identityFields, ...supplyField }),
     elementOf(ELEMENT_GROUPS.support, identityFields),
     elementOf(ELEMENT_GROUPS.mechanical, identityFields),
-    elementOf(ELEMENT_GROUPS.people, {}),
+    elementOf(ELEMENT_GROUPS.people, supplyField),
   ])
   .meta({ id: 'Element' });
 
@@ -218,12 +227,18 @@ export const TYPICAL_CAUSES = [
   'vessel-failure',
 ] as const;
 
+export const CAUSE_DIRECTIONS = ['open', 'closed', 'on', 'off', 'high', 'low'] as const;
+
 export const Cause = z
   .strictObject({
     function: Tag.optional(),
     only: Tag.optional().meta({ description: 'Narrow a loop-failure cause to one of its elements' }),
     element: Tag.optional(),
     external: Text.optional(),
+    drivesTo: z.enum(CAUSE_DIRECTIONS).optional().meta({
+      description:
+        'The dangerous state the failure produces: where a loop drives its final elements (open, closed, on, off) or its output (high, low), or how a failing element fails; absent: any direction, taken as dangerous',
+    }),
     frequency: PerYear.optional(),
     typical: z.enum(TYPICAL_CAUSES).optional(),
     basis: Text.optional(),
@@ -299,6 +314,8 @@ export type Scenario = z.infer<typeof Scenario>;
 export type Cause = z.infer<typeof Cause>;
 export type LayerClaim = z.infer<typeof LayerClaim>;
 export type Justification = z.infer<typeof Justification>;
+export type SupplyExemption = (typeof SUPPLY_EXEMPTIONS)[number];
+export type CauseDirection = (typeof CAUSE_DIRECTIONS)[number];
 export type SeverityLevel = (typeof SEVERITIES)[number];
 export type FunctionKindOf<K extends (typeof FUNCTION_KINDS)[number]> = Extract<PlantFunction, { kind: K }>;
 

@@ -1,7 +1,10 @@
-// Judges the direction of failure: whether losing a support drives a layer to its safe state.
-// A de-energise-to-trip SIF whose outputs lose power trips; a valve that fails closed on loss of air
-// closes. Where the model does not say how an element fails, assume the worst (it does not fail safe).
-import type { Element } from '../model/schema.ts';
+// Judges the direction of failure on both sides of a shared support.
+// Layer side: whether losing a support drives the layer to its safe state. A de-energise-to-trip SIF
+// whose outputs lose power trips; a valve that fails closed on loss of air closes.
+// Cause side: whether losing it can drive the failing loop or element the dangerous way the cause states
+// (`drives-to=`). Where the model does not say how an element fails, or which way the cause is dangerous,
+// assume the worst on that side.
+import type { CauseDirection, Element } from '../model/schema.ts';
 import { groupOf } from '../model/kinds.ts';
 import type { ScenarioContext, Side } from './define.ts';
 
@@ -18,28 +21,103 @@ function finalsNeeded(voting: string | undefined): number {
   return match ? Number(match[1]) : 1;
 }
 
-export function failsSafeOnLoss(layer: Side, support: Element, ctx: ScenarioContext): boolean {
+/** The fail position of every final element and actuator in a channel, or undefined if any is unstated. */
+function channelPositions(channel: Iterable<string>, ctx: ScenarioContext): Set<string> | undefined {
+  const positions = new Set<string>();
+  for (const tag of channel) {
+    const element = ctx.element(tag);
+    const group = groupOf(element.kind);
+    if (group !== 'final' && group !== 'actuation') continue;
+    if (!('failsTo' in element) || element.failsTo === undefined) return undefined;
+    positions.add(element.failsTo);
+  }
+  return positions;
+}
+
+/**
+ * Whether the loss of energy at `lost` (a support, or an element whose own supply is not declared)
+ * drives the layer to its trip position. `power` says the energy lost may be electrical: an unknown
+ * supply counts as power, the stricter case for an energise-to-trip function.
+ */
+export function failsSafeWhenLost(layer: Side, lost: string, power: boolean, ctx: ScenarioContext): boolean {
   const fn = layer.fn;
   if (!fn || (fn.kind !== 'sif' && fn.kind !== 'trip') || fn.trip === undefined) return false;
-  const power = isPowerSupport(support);
   // Energise-to-trip needs power to act; only de-energise-to-trip moves to safety when power goes.
   if (power && fn.tripMode !== 'de-energise') return false;
   const target = POSITION_FOR_TRIP[fn.trip];
   // Losing the solver's power de-energises every output. Any other loss moves only the final elements
   // that rely on it; a sensor that loses its supply reads low or freezes, which trips nothing unless a
   // fault action the model does not state says so.
-  const everyOutput = power && ctx.tracer.closure(fn.solver).has(support.tag);
+  const everyOutput = power && ctx.tracer.closure(fn.solver).has(lost);
   let moved = 0;
   for (const head of fn.finals) {
     const channel = ctx.tracer.closure(head);
-    if (!everyOutput && !channel.has(support.tag)) continue;
-    for (const tag of channel) {
-      const element = ctx.element(tag);
-      const group = groupOf(element.kind);
-      if ((group === 'final' || group === 'actuation') && (!('failsTo' in element) || element.failsTo !== target)) return false;
-    }
+    if (!everyOutput && !channel.has(lost)) continue;
+    const positions = channelPositions(channel, ctx);
+    if (!positions || [...positions].some((p) => p !== target)) return false;
     moved++;
   }
   // With MooN final elements, M of them must reach the trip position (2oo2 valves: both).
   return moved > 0 && moved >= finalsNeeded(fn.finalVoting);
+}
+
+export function failsSafeOnLoss(layer: Side, support: Element, ctx: ScenarioContext): boolean {
+  return failsSafeWhenLost(layer, support.tag, isPowerSupport(support), ctx);
+}
+
+/** How the cause side was judged for one lost support: whether it can start the scenario, and why. */
+export interface CauseJudgement {
+  dangerous: boolean;
+  why: string;
+}
+
+const list = (tags: Iterable<string>) => [...tags].map((t) => `\`${t}\``).join(', ');
+
+/**
+ * Whether the loss of `lost` can drive the cause the dangerous way. Safe only when the cause states its
+ * dangerous direction, the loss reaches the cause only through final elements (or, for power, the
+ * controller that de-energises them all), and every final element and actuator so moved states a fail
+ * position other than the dangerous one. A position in place, a sensor that loses its supply, an
+ * unstated position or an unstated direction: dangerous.
+ */
+export function judgeCauseSide(cause: Side, lost: string, power: boolean, ctx: ScenarioContext): CauseJudgement {
+  const direction: CauseDirection | undefined = ctx.scenario.cause.drivesTo;
+  const who = cause.party.tag !== undefined ? `\`${cause.party.tag}\`` : 'the cause';
+  if (direction === undefined) return { dangerous: true, why: 'no dangerous direction stated (drives-to), taken as dangerous' };
+  if (direction === 'high' || direction === 'low') {
+    return { dangerous: true, why: `a ${direction} output cannot be judged from fail positions, so any loss counts` };
+  }
+  const start = cause.elements.values().next().value?.path[0];
+  const fn = start !== undefined && start === cause.fn?.tag ? cause.fn : undefined;
+  let channels: { head: string; members: ReadonlySet<string> }[];
+  if (fn && (fn.kind === 'loop' || fn.kind === 'sif' || fn.kind === 'trip')) {
+    const everyOutput = power && ctx.tracer.closure(fn.solver).has(lost);
+    if (!everyOutput && fn.sensors.some((s) => ctx.tracer.closure(s).has(lost))) {
+      return { dangerous: true, why: `${who}'s sensor relies on it and may read wrong, driving the loop either way` };
+    }
+    channels = fn.finals.map((head) => ({ head, members: ctx.tracer.closure(head) })).filter((c) => everyOutput || c.members.has(lost));
+  } else if (start !== undefined && !fn) {
+    const members = ctx.tracer.closure(start);
+    channels = members.has(lost) ? [{ head: start, members }] : [];
+    const group = groupOf(ctx.element(start).kind);
+    if (group !== 'final' && group !== 'actuation') {
+      return { dangerous: true, why: `${who} states no fail position on loss of supply, so it may fail ${direction}` };
+    }
+  } else {
+    return { dangerous: true, why: `${who} cannot be judged by direction` };
+  }
+  if (channels.length === 0) return { dangerous: true, why: `it reaches ${who} other than through its final elements` };
+  const positions = new Set<string>();
+  for (const c of channels) {
+    const p = channelPositions(c.members, ctx);
+    if (!p) return { dangerous: true, why: `a final element or actuator of ${list([c.head])} states no fail position` };
+    for (const x of p) positions.add(x);
+  }
+  if (positions.has(direction) || positions.has('in-place')) {
+    return { dangerous: true, why: `its loss leaves ${list(channels.map((c) => c.head))} ${[...positions].sort().join('/')}, and ${who} is dangerous ${direction}` };
+  }
+  return {
+    dangerous: false,
+    why: `its loss drives ${list(channels.map((c) => c.head))} ${[...positions].sort().join('/')}, away from the dangerous ${direction} of ${who}: it cannot start the scenario`,
+  };
 }

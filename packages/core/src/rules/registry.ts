@@ -7,9 +7,11 @@ import { sameMakeModel } from './catalogue/same-make-model.ts';
 import { sharedBridle, sharedImpulseLine, sharedProcessConnection } from './catalogue/shared-process.ts';
 import { sharedActuation, sharedFinalElement, sharedIo, sharedLogicSolver, sharedSensor } from './catalogue/shared-instrument.ts';
 import { sharedHousing } from './catalogue/shared-housing.ts';
+import { sharedSisSolver } from './catalogue/shared-sis-solver.ts';
 import { alarmOnFailedBpcs, sharedConsole, sharedOperator } from './catalogue/shared-people.ts';
 import { sharedSupport, utilityLossCause } from './catalogue/shared-support.ts';
 import { votedGroupCommonCause } from './catalogue/voted-group.ts';
+import { undeclaredSupply } from './catalogue/undeclared-supply.ts';
 
 export const RULES: readonly Rule[] = [
   utilityLossCause,
@@ -19,6 +21,7 @@ export const RULES: readonly Rule[] = [
   sharedImpulseLine,
   sharedSensor,
   sharedIo,
+  sharedSisSolver,
   sharedLogicSolver,
   sharedFinalElement,
   sharedActuation,
@@ -29,6 +32,7 @@ export const RULES: readonly Rule[] = [
   sameMakeModel,
   votedGroupCommonCause,
   incompleteTrace,
+  undeclaredSupply,
   causeNarrowed,
 ];
 

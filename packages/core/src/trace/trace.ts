@@ -4,7 +4,7 @@
 // Memoised results are shared: callers must treat them as read-only.
 import type { ChannelTrace, EdgeRole, FunctionTrace, MissingPart, TracedElement } from '../vocabulary/types.ts';
 import type { PlantGraph } from '../graph/plant-graph.ts';
-import type { ElementGroup } from '../model/kinds.ts';
+import { ACTIVE_KINDS, SUPPLY_LINKS, type ElementGroup, type LinkField } from '../model/kinds.ts';
 
 const PROCESS_SIDE: ReadonlySet<ElementGroup> = new Set(['connection', 'impulse', 'equipment']);
 
@@ -18,6 +18,24 @@ export class Tracer {
   group(tag: string): ElementGroup | undefined {
     const a = this.graph.getNodeAttributes(tag);
     return a.type === 'element' ? a.group : undefined;
+  }
+
+  /**
+   * Whether `tag` is an active element with no declared supply route: no supply link of its own and no
+   * `supply=` saying why it needs none (`from-signal` counts only with a signal link to draw on).
+   */
+  lacksSupplyRoute(tag: string): boolean {
+    const a = this.graph.getNodeAttributes(tag);
+    if (a.type !== 'element' || !ACTIVE_KINDS.has(a.kind)) return false;
+    let supplied = false;
+    let signal = false;
+    this.graph.forEachOutEdge(tag, (_edge, attributes) => {
+      if (SUPPLY_LINKS.has(attributes.role as LinkField)) supplied = true;
+      if (attributes.role === 'signalVia') signal = true;
+    });
+    if (supplied) return false;
+    if (a.supply === 'mechanical' || a.supply === 'self-contained') return false;
+    return !(a.supply === 'from-signal' && signal);
   }
 
   /** Every element `tag` relies on, itself included. Process equipment is included but not expanded. */
