@@ -13,6 +13,7 @@ import {
   type SeverityLevel,
 } from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError, writeFileAtomic } from '../io.ts';
+import { CLI_PACKAGE_ROOT } from '../package-root.ts';
 
 export interface ReportOptions {
   format?: string;
@@ -26,7 +27,7 @@ export interface ReportOptions {
 export const DEFAULT_FAIL_ON: SeverityLevel = 'voids-credit';
 
 function toolVersion(): string {
-  const pkg = JSON.parse(readFileSync(new URL('../../package.json', import.meta.url), 'utf8')) as { version: string };
+  const pkg = JSON.parse(readFileSync(new URL('package.json', CLI_PACKAGE_ROOT), 'utf8')) as { version: string };
   return pkg.version;
 }
 
