@@ -55,6 +55,7 @@ describe(`a generated ${SIZE}-element site in the viewer`, () => {
     await page.goto(view.url);
     await page.waitForSelector(GRAPH_BOX, { timeout: 60_000 });
     firstGraphMs = await page.evaluate(() => performance.now());
+    await page.waitForSelector('[data-testid=scenarios][data-listed=all]');
     scenarios.push(...(await page.locator('[data-testid=scenarios] button[data-scenario]').evaluateAll((els) => els.map((e) => e.getAttribute('data-scenario')!))));
   }, 120_000);
 
