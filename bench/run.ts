@@ -18,7 +18,9 @@ const { values } = parseArgs({
     strict: { type: 'boolean', default: false },
     sizes: { type: 'string', default: '1000,10000,100000' },
     runs: { type: 'string', default: '3' },
+    viewer: { type: 'boolean', default: true },
   },
+  allowNegative: true,
 });
 const sizes = values.sizes.split(',').map(Number);
 const runs = Math.max(1, Number(values.runs));
@@ -172,6 +174,32 @@ function targets(rows: Row[], start: StartUp | undefined): Target[] {
   return out;
 }
 
+interface ViewerFigure {
+  elements: number;
+  longestTaskMs: number;
+  firstGraphMs: number;
+}
+
+/**
+ * The viewer on the generated 10k site in headless Chromium: the browser test measures its main-thread
+ * long tasks (PerformanceObserver) and writes them down; this reads the figure it wrote in this run.
+ */
+function viewerFigure(): ViewerFigure | string {
+  if (!existsSync('/usr/bin/chromium')) return 'skipped: no /usr/bin/chromium';
+  const report = path('test-artifacts/e2e/large-site.json');
+  rmSync(report, { force: true });
+  const build = spawnSync('npm', ['run', 'build', '-w', '@bulkhead/viewer'], { cwd: path('.'), stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
+  if (build.status !== 0) return `skipped: the viewer did not build: ${build.stderr.slice(0, 300)}`;
+  const run = spawnSync('npx', ['vitest', 'run', '-c', 'vitest.e2e.config.ts', 'tests/e2e/large-site.e2e.test.ts'], {
+    cwd: path('.'),
+    stdio: ['ignore', 'ignore', 'pipe'],
+    encoding: 'utf8',
+    env: { ...process.env, NO_COLOR: '1' },
+  });
+  if (!existsSync(report)) return `no figure: the browser test exited ${run.status}`;
+  return JSON.parse(readFileSync(report, 'utf8')) as ViewerFigure;
+}
+
 async function layoutBenchmark(): Promise<void> {
   if (!existsSync(path('layout.ts', HERE))) {
     process.stdout.write('\nlayout benchmark: not present\n');
@@ -200,12 +228,22 @@ for (const size of sizes) {
 }
 process.stderr.write('start-up: node -e 0, bulkhead --version and bulkhead check of the 1k site, in turn\n');
 const start = startUp(ensureGenerated(1000).bulk, Math.max(5, runs));
+if (values.viewer) process.stderr.write('viewer: the 10k site in headless Chromium (--no-viewer skips it)\n');
+const viewer = values.viewer ? viewerFigure() : undefined;
 
 process.stdout.write(`Bulkhead benchmark: synthetic sites, best of ${runs} runs (check: of ${Math.min(runs, 3)}), times in ms, node ${process.version}, ${cpus().length} cores\n`);
 process.stdout.write(`load average (1 min) at start ${loadAtStart.toFixed(2)}, at end ${loadavg()[0]!.toFixed(2)}: other work on the machine inflates the times; read the ratios\n`);
 process.stdout.write('load = parse + validate (.bulk); stages follow analyze(); analyze() is timed whole; x JSON.parse = (load + analyze()) / JSON.parse of the JSON twin;\ncheck = the built `bulkhead check` in a child process (wall, and CPU of all threads)\n\n');
 process.stdout.write(table(rows) + '\n');
 const results = targets(rows, start);
+if (typeof viewer === 'object') {
+  results.push(
+    { name: `viewer, ${viewer.elements}-element site: no main-thread task over 200 ms`, measured: `longest task ${viewer.longestTaskMs} ms (PerformanceObserver, page load to overview)`, ok: viewer.longestTaskMs <= 200 },
+    { name: 'viewer: first graph under 3 s', measured: `${(viewer.firstGraphMs / 1000).toFixed(1)} s from navigation`, ok: viewer.firstGraphMs < 3000 },
+  );
+} else if (viewer) {
+  process.stdout.write(`\nviewer: ${viewer}\n`);
+}
 if (results.length) {
   process.stdout.write('\nTargets (issue 12; sizes 10k and 100k are needed for all of them):\n');
   for (const r of results) process.stdout.write(`  ${r.ok ? 'PASS' : 'FAIL'}  ${r.name}: ${r.measured}\n`);
