@@ -177,6 +177,7 @@ function targets(rows: Row[], start: StartUp | undefined): Target[] {
 interface ViewerFigure {
   elements: number;
   longestTaskMs: number;
+  longTasks: { step: string; ms: number }[];
   firstGraphMs: number;
 }
 
@@ -238,7 +239,7 @@ process.stdout.write(table(rows) + '\n');
 const results = targets(rows, start);
 if (typeof viewer === 'object') {
   results.push(
-    { name: `viewer, ${viewer.elements}-element site: no main-thread task over 200 ms`, measured: `longest task ${viewer.longestTaskMs} ms (PerformanceObserver, page load to overview)`, ok: viewer.longestTaskMs <= 200 },
+    { name: `viewer, ${viewer.elements}-element site: no main-thread task over 200 ms`, measured: `longest task ${viewer.longestTaskMs} ms (PerformanceObserver, page load to overview; ${viewer.longTasks.filter((t) => t.ms >= 100).map((t) => `${t.ms} ms in ${t.step}`).join(', ') || 'none of 100 ms'})`, ok: viewer.longestTaskMs <= 200 },
     { name: 'viewer: first graph under 3 s', measured: `${(viewer.firstGraphMs / 1000).toFixed(1)} s from navigation`, ok: viewer.firstGraphMs < 3000 },
   );
 } else if (viewer) {
