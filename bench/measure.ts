@@ -11,6 +11,8 @@ export interface StageTimes {
   load: number;
   /** The same site from its JSON twin. */
   loadJson: number;
+  /** A bare JSON.parse of the JSON twin's text: the floor that check is measured against. */
+  jsonParse: number;
   graph: number;
   trace: number;
   rules: number;
@@ -77,8 +79,13 @@ export function measure(file: string, jsonFile: string, runs: number): Measureme
     const times: Partial<StageTimes> = {};
     // The JSON twin first, and dropped before the .bulk load, so two models never share the peak.
     const jsonBytes = readFileSync(jsonFile);
+    const jsonText = jsonBytes.toString('utf8');
     gc();
     let t = performance.now();
+    JSON.parse(jsonText);
+    times.jsonParse = performance.now() - t;
+    gc();
+    t = performance.now();
     if (!loadModelText(jsonFile, jsonBytes).model) throw new Error(`${jsonFile} does not load`);
     times.loadJson = performance.now() - t;
     gc();

@@ -1,4 +1,5 @@
-// Runs the real `bulkhead` command (node packages/cli/bin/bulkhead.js) in a child process, for CLI tests.
+// Runs the real, built `bulkhead` command (node packages/cli/bin/bulkhead.js, which loads the bundle that
+// tests/global-setup.ts rebuilds before the tests) in a child process, for CLI tests.
 // Shared by every CLI test so they all exercise the same entry point, environment and exit codes.
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';

@@ -1,30 +1,42 @@
-// The viewer's state: the last load attempt, the last good model and its analysis, what is focused
-// and selected, and the drawing. Components read it and call its methods; they hold no logic.
-import { analyze, loadModelText, type Analysis, type Diagnostic, type LoadResult, type Model } from '@bulkhead/core';
-import { scenarioScene, siteOverview, type Drawing, type Scene } from '@bulkhead/layout';
-import { detailsOf, type Details } from './details.ts';
-import { SupersededError, type LayoutClient } from './layout-client.ts';
+// The viewer's state: the last load attempt, the last good site's summary, what is focused and
+// selected, the focused view and the drawing. Reading and analysing happen in the analysis worker
+// (AnalysisClient), layout in the layout worker; this class only holds what the page shows.
+import type { Diagnostic, Finding } from '@bulkhead/core';
+import type { Drawing } from '@bulkhead/layout';
+import type { Details } from './details.ts';
+import type { LayoutClient } from './layout-client.ts';
+import { SupersededError } from './worker-requests.ts';
+import type { AnalysisClient } from './analysis-client.ts';
+import type { LoadOutcome } from './analysis-protocol.ts';
+import type { FocusView, SiteSummary } from './site-view.ts';
 
 export type Origin = 'served' | 'opened';
 
-export interface GoodModel {
-  model: Model;
-  analysis: Analysis;
+export interface GoodSite {
+  summary: SiteSummary;
   fileName: string;
   revision: number;
 }
 
+/** An overview with more areas than this is shown as a table, not laid out as a graph. */
+export const OVERVIEW_GRAPH_LIMIT = 60;
+
 export class Viewer {
   /** The latest load attempt, good or bad. */
-  result = $state.raw<LoadResult | undefined>();
+  result = $state.raw<LoadOutcome | undefined>();
   fileName = $state<string | undefined>();
   origin = $state<Origin | undefined>();
-  /** The last model that loaded without errors; kept when a later save has errors. */
-  good = $state.raw<GoodModel | undefined>();
+  /** The last site that loaded without errors; kept when a later save has errors. */
+  good = $state.raw<GoodSite | undefined>();
   analysisError = $state<string | undefined>();
+  /** What the analysis worker is doing, while it reads or analyses a file. */
+  progress = $state<string | undefined>();
   /** Scenario id in focus; undefined shows the site overview. */
   focus = $state<string | undefined>();
+  /** The focused scenario's (or the overview's) scene, assessment and findings, from the worker. */
+  view = $state.raw<FocusView | undefined>();
   selected = $state<string | undefined>();
+  details = $state.raw<Details | undefined>();
   finding = $state<string | undefined>();
   drawing = $state.raw<Drawing | undefined>();
   layoutMs = $state<number | undefined>();
@@ -42,23 +54,12 @@ export class Viewer {
   /** The file as it is now does not load (errors, or gone) but an earlier good version is still shown. */
   stale = $derived((this.errors.length > 0 || this.missing !== undefined) && this.good !== undefined);
 
-  scene: Scene | undefined = $derived.by(() => {
-    const good = this.good;
-    if (!good) return undefined;
-    const id = this.focus;
-    if (id !== undefined && good.model.scenarios.some((s) => s.id === id)) return scenarioScene(good.model, good.analysis, id);
-    return siteOverview(good.model, good.analysis);
-  });
-
-  assessment = $derived(this.focus === undefined ? undefined : this.good?.analysis.assessments.find((a) => a.scenario === this.focus));
-
-  findings = $derived(
-    this.good ? this.good.analysis.findings.filter((f) => this.focus === undefined || f.scenario === this.focus) : [],
-  );
-
-  details: Details | undefined = $derived(
-    this.good && this.selected !== undefined ? detailsOf(this.good.model, this.good.analysis, this.selected) : undefined,
-  );
+  /** The view of the current focus, once the worker has answered for it. */
+  current: FocusView | undefined = $derived(this.view && this.view.focus === this.focus ? this.view : undefined);
+  assessment = $derived(this.current?.assessment);
+  findings: Finding[] = $derived(this.current?.findings ?? []);
+  /** A large site's overview: too many areas to draw, so the page shows them as a table. */
+  overviewTable = $derived(this.current !== undefined && this.current.focus === undefined && this.current.scene.nodes.length > OVERVIEW_GRAPH_LIMIT);
 
   /** The served file is gone or unreadable: keep the last good view, marked stale, until it returns. */
   markMissing(fileName: string, reason: string): void {
@@ -67,47 +68,71 @@ export class Viewer {
     this.missing = reason;
   }
 
-  /** Loads a model from text or bytes; on errors the diagnostics show and the last good view stays. */
-  load(fileName: string, bytes: Uint8Array | string, origin: Origin): void {
-    let result: LoadResult;
+  /** Reads and analyses a file in the worker; on errors the diagnostics show and the last good view stays. */
+  async load(client: AnalysisClient, fileName: string, bytes: Uint8Array, origin: Origin): Promise<void> {
+    this.progress = `reading ${fileName}`;
+    let outcome: LoadOutcome;
     try {
-      result = loadModelText(fileName, bytes);
+      outcome = await client.load(fileName, bytes, (stage) => (this.progress = stage));
     } catch (e) {
-      // The loader answers every input with diagnostics; should it ever throw, say so and keep the view.
-      this.analysisError = `the model could not be read: ${e instanceof Error ? e.message : String(e)}`;
+      this.analysisError = e instanceof Error ? e.message : String(e);
+      this.progress = undefined;
       return;
     }
+    this.progress = undefined;
     this.missing = undefined;
-    this.result = result;
+    this.result = outcome;
     this.fileName = fileName;
     this.origin = origin;
-    if (!result.model) {
+    if (outcome.analysisError) {
+      this.analysisError = outcome.analysisError;
+      return;
+    }
+    if (!outcome.summary) {
       // A save with errors keeps the last good view of the same file; another file's view would mislead.
       if (this.good && this.good.fileName !== fileName) this.clearModel();
       return;
     }
-    let analysis: Analysis;
-    try {
-      analysis = analyze(result.model, { spans: result.spans });
-      this.analysisError = undefined;
-    } catch (e) {
-      this.analysisError = e instanceof Error ? e.message : String(e);
-      return;
-    }
+    this.analysisError = undefined;
+    const summary = outcome.summary;
     const sameFile = this.good?.fileName === fileName;
-    this.good = { model: result.model, analysis, fileName, revision: ++this.revision };
+    this.good = { summary, fileName, revision: ++this.revision };
     if (!sameFile) {
-      this.focus = result.model.scenarios[0]?.id;
+      this.focus = summary.scenarios[0]?.id;
       this.selected = undefined;
       this.finding = undefined;
-    } else {
-      if (this.focus !== undefined && !result.model.scenarios.some((s) => s.id === this.focus)) this.focus = undefined;
-      if (this.finding !== undefined && !analysis.findings.some((f) => f.key === this.finding)) this.finding = undefined;
+    } else if (this.focus !== undefined && !summary.scenarios.some((s) => s.id === this.focus)) {
+      this.focus = undefined;
+    }
+  }
+
+  /** Asks the worker for the focused view of the current revision; an older answer is dropped. */
+  async fetchView(client: AnalysisClient, focus: string | undefined): Promise<void> {
+    try {
+      const view = await client.focus(focus);
+      this.view = view;
+      if (this.finding !== undefined && !view.findings.some((f) => f.key === this.finding)) this.finding = undefined;
+    } catch (e) {
+      if (!(e instanceof SupersededError)) this.analysisError = e instanceof Error ? e.message : String(e);
+    }
+  }
+
+  async fetchDetails(client: AnalysisClient, tag: string | undefined): Promise<void> {
+    if (tag === undefined) {
+      this.details = undefined;
+      return;
+    }
+    try {
+      const details = await client.details(tag);
+      if (this.selected === tag) this.details = details;
+    } catch (e) {
+      if (!(e instanceof SupersededError)) this.details = undefined;
     }
   }
 
   private clearModel(): void {
     this.good = undefined;
+    this.view = undefined;
     this.drawing = undefined;
     this.focus = undefined;
     this.selected = undefined;
@@ -126,7 +151,7 @@ export class Viewer {
   }
 
   showFinding(key: string): void {
-    const finding = this.good?.analysis.findings.find((f) => f.key === key);
+    const finding = this.findings.find((f) => f.key === key);
     if (!finding) return;
     if (finding.scenario && finding.scenario !== this.focus) this.focusScenario(finding.scenario);
     this.finding = key;
@@ -139,7 +164,7 @@ export class Viewer {
   }
 
   /** Lays out a scene in the worker; an answer for an older scene is dropped. */
-  async layout(client: LayoutClient, scene: Scene): Promise<void> {
+  async layout(client: LayoutClient, scene: FocusView['scene']): Promise<void> {
     this.laying = true;
     try {
       const answer = await client.layout(scene);

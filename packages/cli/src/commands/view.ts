@@ -1,15 +1,15 @@
 // `bulkhead view FILE [--port N]`: serves the built viewer for one model file on 127.0.0.1 and
 // pushes every save to the page. Builds nothing at run time: without apps/viewer/dist it says how.
 import { statSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import { analyze, loadModelText } from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError } from '../io.ts';
 import { renderCheck } from './check-render.ts';
 import { hasBuiltViewer } from '../view/assets.ts';
 import { startViewServer, type FileState } from '../view/server.ts';
+import { repositoryPath } from '../package-root.ts';
 
 export const DEFAULT_PORT = 4780;
-export const VIEWER_DIST = fileURLToPath(new URL('../../../../apps/viewer/dist/', import.meta.url));
+export const VIEWER_DIST = repositoryPath('apps/viewer/dist/');
 
 export function parsePort(text: string | undefined): number | undefined {
   if (text === undefined) return undefined;

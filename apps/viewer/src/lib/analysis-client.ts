@@ -1,0 +1,28 @@
+// The page's side of the analysis worker (analysis.worker.ts). Loads are answered in order; for the
+// focus and the details only the newest request matters, so an answer to an older one is dropped.
+import type { Details } from './details.ts';
+import type { AnalysisReply, LoadOutcome } from './analysis-protocol.ts';
+import type { FocusView } from './site-view.ts';
+import { WorkerRequests } from './worker-requests.ts';
+
+export class AnalysisClient {
+  private readonly requests = new WorkerRequests<AnalysisReply>(new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module' }), 'analysis');
+
+  /** Reads and analyses a file in the worker; `progress` hears each stage as it starts. */
+  load(fileName: string, bytes: Uint8Array, progress?: (stage: string) => void): Promise<LoadOutcome> {
+    return this.requests.send({ load: { fileName, bytes } }, (r) => ('loaded' in r ? { value: r.loaded } : undefined), progress ? { progress } : {});
+  }
+
+  /** The scene, assessment and findings of one scenario, or of the site overview (undefined). */
+  focus(scenario: string | undefined): Promise<FocusView> {
+    return this.requests.send({ focus: scenario ?? null }, (r) => ('view' in r ? { value: r.view } : undefined), { channel: 'focus' });
+  }
+
+  details(tag: string): Promise<Details | undefined> {
+    return this.requests.send({ details: tag }, (r) => ('details' in r ? { value: r.details } : undefined), { channel: 'details' });
+  }
+
+  terminate(): void {
+    this.requests.terminate();
+  }
+}

@@ -1,0 +1,28 @@
+// The messages between the page and the analysis worker (analysis.worker.ts). Everything here is plain
+// data, so it crosses postMessage as it is.
+import type { Diagnostic, LoadResult } from '@bulkhead/core';
+import type { Details } from './details.ts';
+import type { FocusView, SiteSummary } from './site-view.ts';
+
+export type AnalysisRequest =
+  | { id: number; load: { fileName: string; bytes: Uint8Array } }
+  /** null: the site overview. */
+  | { id: number; focus: string | null }
+  | { id: number; details: string };
+
+/** A load attempt: its diagnostics, and when the model loaded and analysed, the site's summary. */
+export interface LoadOutcome {
+  format: LoadResult['format'];
+  diagnostics: Diagnostic[];
+  /** The file's lines only when there are errors to show; otherwise none. */
+  source: LoadResult['source'];
+  summary?: SiteSummary;
+  analysisError?: string;
+}
+
+export type AnalysisReply =
+  | { id: number; progress: string }
+  | { id: number; loaded: LoadOutcome }
+  | { id: number; view: FocusView }
+  | { id: number; details: Details | undefined }
+  | { id: number; error: string };

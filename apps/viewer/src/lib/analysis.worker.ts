@@ -1,0 +1,47 @@
+// The analysis worker: reads the model, analyses it and keeps both, off the main thread, so a large
+// site never freezes the page. The page asks it for a summary, for the view of one focus (scene,
+// assessment, findings) and for the details of one tag; it reports its progress stage by stage.
+import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
+import { detailsOf } from './details.ts';
+import { focusView, summariseSite } from './site-view.ts';
+import type { AnalysisReply, AnalysisRequest, LoadOutcome } from './analysis-protocol.ts';
+
+/** The last model that loaded and analysed; a later load with errors leaves it in place. */
+let current: { model: Model; analysis: Analysis } | undefined;
+
+const reply = (message: AnalysisReply) => self.postMessage(message);
+
+function load(id: number, fileName: string, bytes: Uint8Array): LoadOutcome {
+  reply({ id, progress: `reading ${fileName} (${Math.ceil(bytes.length / 1024)} kB)` });
+  const result = loadModelText(fileName, bytes);
+  const failed = result.diagnostics.some((d) => d.severity === 'error');
+  // The file's lines are needed only to show the errors' excerpts.
+  const source = failed ? result.source : { file: result.source.file, lines: [] };
+  const base = { format: result.format, diagnostics: result.diagnostics, source };
+  if (!result.model) return base;
+  reply({ id, progress: `analysing ${result.model.elements.length} elements, ${result.model.functions.length} functions, ${result.model.scenarios.length} scenarios` });
+  try {
+    const analysis = analyze(result.model, { spans: result.spans });
+    current = { model: result.model, analysis };
+    return { ...base, summary: summariseSite(result.model, analysis) };
+  } catch (e) {
+    return { ...base, analysisError: e instanceof Error ? e.message : String(e) };
+  }
+}
+
+self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
+  const request = ev.data;
+  try {
+    if ('load' in request) {
+      reply({ id: request.id, loaded: load(request.id, request.load.fileName, request.load.bytes) });
+    } else if ('focus' in request) {
+      if (!current) throw new Error('no model is loaded');
+      reply({ id: request.id, view: focusView(current.model, current.analysis, request.focus ?? undefined) });
+    } else if ('details' in request) {
+      if (!current) throw new Error('no model is loaded');
+      reply({ id: request.id, details: detailsOf(current.model, current.analysis, request.details) });
+    }
+  } catch (e) {
+    reply({ id: request.id, error: e instanceof Error ? e.message : String(e) });
+  }
+};
