@@ -173,9 +173,17 @@ export interface Outcome {
   crash?: string;
   /** Positions that do not lie in the file: diagnostic spans and SARIF regions. */
   outside: string[];
+  /** Wall-clock time of the run. */
   ms: number;
+  /** CPU time of this process during the run: what the input cost, whatever else the machine was doing. */
+  cpuMs: number;
   loaded: boolean;
 }
+
+const cpuNow = () => {
+  const u = process.cpuUsage();
+  return (u.user + u.system) / 1000;
+};
 
 function inside(lines: readonly string[], span: Span): boolean {
   const line = lines[span.line - 1];
@@ -186,6 +194,7 @@ function inside(lines: readonly string[], span: Span): boolean {
 export function runOne(input: FuzzInput): Outcome {
   const outside: string[] = [];
   const started = performance.now();
+  const cpuStarted = cpuNow();
   let loaded = false;
   try {
     const result = loadModelText(input.name, input.bytes);
@@ -213,9 +222,9 @@ export function runOne(input: FuzzInput): Outcome {
       for (const s of model.scenarios.slice(0, 3)) scenarioScene(model, analysis, s.id);
     }
   } catch (e) {
-    return { crash: e instanceof Error ? `${e.name}: ${e.message}` : String(e), outside, ms: performance.now() - started, loaded };
+    return { crash: e instanceof Error ? `${e.name}: ${e.message}` : String(e), outside, ms: performance.now() - started, cpuMs: cpuNow() - cpuStarted, loaded };
   }
-  return { outside, ms: performance.now() - started, loaded };
+  return { outside, ms: performance.now() - started, cpuMs: cpuNow() - cpuStarted, loaded };
 }
 
 function sarifOutside(text: string, lines: readonly string[]): string[] {
