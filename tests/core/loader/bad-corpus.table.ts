@@ -49,6 +49,7 @@ export const CORPUS: readonly CorpusRow[] = [
   { file: 'missing-kind.json', code: 'BH200', line: 13, column: 5, says: 'missing `kind` in element 1' },
   { file: 'missing-required.bulk', code: 'BH200', line: 16, column: 5, says: 'missing `solver`' },
   { file: 'missing-value.bulk', code: 'BH116', line: 5, column: 17, says: 'missing value after `title=`' },
+  { file: 'nesting-after-broken-string.json', code: 'BH106', line: 4, column: 315, says: 'nested more than 64 levels' },
   { file: 'nesting-too-deep.json', code: 'BH106', line: 3, column: 80, says: 'nested more than 64 levels' },
   { file: 'not-utf8.bulk', code: 'BH102', line: 18, column: 33, says: 'not UTF-8 text (byte 0xE9' },
   { file: 'number-too-precise.bulk', code: 'BH121', line: 20, column: 19, says: 'it would be read as 0.05' },

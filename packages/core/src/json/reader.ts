@@ -58,14 +58,25 @@ function describe(e: ParseError, text: string): { message: string; offset: numbe
   return { message: MESSAGES[name] ?? name, offset: e.offset, length: e.length };
 }
 
-/** The offset of the first `[` or `{` that opens a level deeper than the limit, or -1; strings are skipped. */
+/**
+ * The offset of the first `[` or `{` that opens a level deeper than the limit, or -1. Strings and comments
+ * are skipped as the parser reads them: a string ends at its closing quote or at a line break.
+ */
 function tooDeepAt(text: string, limit: number): number {
   let depth = 0;
   for (let i = 0; i < text.length; i++) {
     const c = text.charCodeAt(i);
     if (c === 0x22) {
-      // Skip the string, escapes included; an unterminated one runs to the end, for the parser to report.
-      for (i++; i < text.length && text.charCodeAt(i) !== 0x22; i++) if (text.charCodeAt(i) === 0x5c) i++;
+      for (i++; i < text.length; i++) {
+        const d = text.charCodeAt(i);
+        if (d === 0x22 || d === 0x0a || d === 0x0d) break;
+        if (d === 0x5c) i++;
+      }
+    } else if (c === 0x2f && text.charCodeAt(i + 1) === 0x2f) {
+      while (i < text.length && text.charCodeAt(i) !== 0x0a && text.charCodeAt(i) !== 0x0d) i++;
+    } else if (c === 0x2f && text.charCodeAt(i + 1) === 0x2a) {
+      const end = text.indexOf('*/', i + 2);
+      i = end === -1 ? text.length : end + 1;
     } else if (c === 0x5b || c === 0x7b) {
       if (++depth > limit) return i;
     } else if (c === 0x5d || c === 0x7d) {
@@ -127,7 +138,17 @@ export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknow
     return undefined;
   }
   const errors: ParseError[] = [];
-  const tree = parseTree(text, errors, { allowTrailingComma: false, disallowComments: true, allowEmptyContent: false });
+  let tree: Node | undefined;
+  try {
+    tree = parseTree(text, errors, { allowTrailingComma: false, disallowComments: true, allowEmptyContent: false });
+  } catch (e) {
+    // Should the scan above and the parser ever disagree on what nests, the stack still must not show.
+    if (!(e instanceof RangeError)) throw e;
+    diagnostics.push(error('BH106', 'the JSON is nested too deeply to read', index.span(0, 1), {
+      help: 'a model nests about five levels (model, scenarios, a scenario, its layers, a layer); is this a model file?',
+    }));
+    return undefined;
+  }
   if (errors.length) {
     // The parser may report one mistake twice at one offset (a trailing comma in an object is both
     // "property name expected" and "value expected"); keep the first.
