@@ -22,7 +22,8 @@ function byTag(elements: TracedElement[]): Map<string, TracedElement> {
   return new Map(elements.map((e) => [e.tag, e]));
 }
 
-function causeSide(env: RuleEnvironment, scenario: Scenario): Side {
+/** The cause's side: its element set as the rules compare it, with the path to each element. */
+export function causeSide(env: RuleEnvironment, scenario: Scenario): Side {
   const { cause } = scenario;
   if (cause.function !== undefined) {
     const fn = env.functions.get(cause.function);
