@@ -35,6 +35,14 @@ export const BASE: Readonly<Record<string, string>> = {
   'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01',
 };
 
+// A SIS trip solenoid on the BPCS control valve (the issue's item 12): the valve takes its signal from the BPCS
+// positioner ZP-1 (card IO-3, controller C-1) and from the SIS solenoid XY-1 (card IO-4, solver S-1).
+export const solenoidOnBpcsValve: Readonly<Record<string, string>> = {
+  'ZP-1': 'positioner ZP-1 fails-to=closed signal-via=IO-3 air-from=IA-A',
+  'XY-1': 'solenoid XY-1 fails-to=closed supply=from-signal signal-via=IO-4',
+  'CV-1': 'control-valve CV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1,XY-1 air-from=IA-A',
+  'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=CV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01',
+};
 export const BASE_SCENARIO: readonly string[] = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer SF-1'];
 
 /** A scenario SC-1 on category c with the given cause line and layers (`layer X` lines). */

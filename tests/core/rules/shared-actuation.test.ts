@@ -32,9 +32,10 @@ ruleTable('shared-actuation', {
       name: 'both valves through one positioner',
       source: SOURCE,
       lines: {
-        'ZP-1': 'positioner ZP-1 fails-to=closed signal-via=IO-3',
+        // The positioner takes both the BPCS and the SIS signal: each function relies on it in its role.
+        'ZP-1': 'positioner ZP-1 fails-to=closed signal-via=IO-3,IO-4',
         'CV-1': 'control-valve CV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1 air-from=IA-A',
-        'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1,IO-4 air-from=IA-B',
+        'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1 air-from=IA-B',
       },
       findings: [{ key: 'shared-actuation:SC-1:LC-1+SF-1:ZP-1', severity: 'voids-credit', element: 'ZP-1', parties: ['LC-1', 'SF-1'] }],
     },

@@ -1,12 +1,14 @@
 // shared-io: one failed card, cable or network segment cuts the signal of every function wired through
 // it (ANSI/ISA-S84.01-1996 Annex B.1.3: separation covers the communication between the parts).
-import { ruleTable } from './harness.ts';
+import { ruleTable, solenoidOnBpcsValve } from './harness.ts';
 
 const SOURCE = 'ANSI/ISA-S84.01-1996 Annex B.1.3';
 
 ruleTable('shared-io', {
   valid: [
     { name: 'separate cards' },
+    // The SIF moves the BPCS valve through its own solenoid and card IO-4, not the positioner's card IO-3.
+    { name: 'a SIS solenoid on the BPCS valve: the positioner\'s output card is not the SIF\'s', lines: solenoidOnBpcsValve },
     {
       name: 'separate cables',
       lines: {

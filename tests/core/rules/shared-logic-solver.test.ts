@@ -2,7 +2,7 @@
 // one controller earn at most one credit (IEC 61511-1:2016 9.3); the older CCPS (2001) allowance is the
 // policy switch shared-solver=allow.
 import { describe, expect, it } from 'vitest';
-import { analyseCase, ruleTable, scenario } from './harness.ts';
+import { analyseCase, ruleTable, scenario, solenoidOnBpcsValve } from './harness.ts';
 
 const IEC = 'IEC 61511-1:2016 9.3';
 const CCPS_ALLOWANCE = 'CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance)';
@@ -33,6 +33,8 @@ ruleTable('shared-logic-solver', {
       name: 'SIF in a second SIS logic solver',
       lines: { 'S-2': 'logic-solver S-2 system=sis powered-by=CK-B', 'SF-1': 'sif SF-1 sensors=T-2 solver=S-2 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' },
     },
+    // A function relies on an element for the role it uses: the SIF's own solenoid, not the BPCS positioner.
+    { name: 'a SIF acting through its own solenoid on the BPCS valve does not rely on the BPCS controller', lines: solenoidOnBpcsValve },
     { name: 'two BPCS trips in two controllers', lines: { ...twoBpcsTrips, 'C-3': 'controller C-3 system=bpcs powered-by=CK-B', 'IO-6': 'io-card IO-6 signal-via=C-3 supply=from-signal', 'TR-2': 'trip TR-2 sensors=T-4 solver=C-3 finals=MS-2 trip=stop pfd=0.1' }, scenario: twoTrips },
   ],
   invalid: [

@@ -141,3 +141,45 @@ describe('missing parts', () => {
     expect(tracer.traceFunction('D-9').missing).toEqual(['process-connection']);
   });
 });
+
+describe('Tracer.lacksSupplyRoute', () => {
+  const lines = (extra: string) => load(`${SITE}transmitter LT-7 supply=from-signal mounted-on=N-1 signal-via=AI-1\ntransmitter LT-8 supply=from-signal mounted-on=N-1\npositioner ZP-7 supply=mechanical signal-via=AI-1\n${extra}`);
+  const t = new Tracer(buildPlantGraph(lines('')));
+
+  it('is false for an element with a supply link, and for passive elements and supports', () => {
+    expect(['C-1', 'AI-1', 'LV-1', 'XV-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual([]);
+    expect(['N-1', 'BR-1', 'CAB-1', 'UPS-1', 'CK-1', 'IA-1', 'OP-1', 'PSV-1', 'V-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual([]);
+  });
+
+  it('is true for an active element that says nothing (a card, a solenoid, a console, a transmitter)', () => {
+    expect(['AI-2', 'DO-2', 'XY-1', 'CON-1', 'LT-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual(['AI-2', 'DO-2', 'XY-1', 'CON-1', 'LT-1']);
+  });
+
+  it('accepts supply=mechanical, and supply=from-signal only with a signal link to draw on', () => {
+    expect(t.lacksSupplyRoute('ZP-7')).toBe(false);
+    expect(t.lacksSupplyRoute('LT-7')).toBe(false);
+    expect(t.lacksSupplyRoute('LT-8')).toBe(true);
+  });
+});
+
+describe('reliance by role', () => {
+  // LV-1 takes its signal from the BPCS card AI-1 and from a SIS solenoid XY-7 on card DO-2 (solver S-1).
+  const model = load(SITE.replace('control-valve LV-1 fails-to=closed mounted-on=L-1 signal-via=AI-1 air-from=IA-1', 'control-valve LV-1 fails-to=closed mounted-on=L-1 signal-via=AI-1,XY-7 air-from=IA-1') + 'solenoid XY-7 fails-to=closed signal-via=DO-2\nsif SF-7 sensors=LT-2 solver=S-1 finals=LV-1 trip=close trip-mode=de-energise\n');
+  const t = new Tracer(buildPlantGraph(model));
+
+  it('a SIF acting on a BPCS valve through its own solenoid does not rely on the BPCS card or controller', () => {
+    const channel = t.traceFunction('SF-7').channels.find((c) => c.role === 'final')!;
+    expect(channel.elements).toEqual(['CK-1', 'DO-2', 'IA-1', 'L-1', 'LV-1', 'S-1', 'UPS-1', 'XY-7']);
+    expect(t.traceFunction('SF-7').elements.map((e) => e.tag)).not.toContain('C-1');
+  });
+
+  it('the loop relies on its valve through its own card, not the SIS solenoid', () => {
+    const tags = t.traceFunction('LC-1').elements.map((e) => e.tag);
+    expect(tags).toContain('AI-1');
+    expect(tags).not.toContain('XY-7');
+  });
+
+  it('an element traced on its own (an element cause) keeps every link', () => {
+    expect(sorted(t.closure('LV-1'))).toEqual(expect.arrayContaining(['AI-1', 'C-1', 'XY-7', 'S-1']));
+  });
+});

@@ -33,6 +33,12 @@ function scenariosOf(model: Model, fn: string): Reliance['scenarios'] {
   return out;
 }
 
+const SUPPLY_WORDS = {
+  'from-signal': 'none of its own: powered over its signal link',
+  mechanical: 'none: mechanical',
+  'self-contained': 'none: self-contained',
+} as const;
+
 export function detailsOf(model: Model, analysis: Analysis, tag: string): Details {
   const reliedOnBy: Reliance[] = analysis.traces.flatMap((t) => {
     const hit = t.elements.find((e) => e.tag === tag);
@@ -48,6 +54,7 @@ export function detailsOf(model: Model, analysis: Analysis, tag: string): Detail
       const failsTo = 'failsTo' in element ? element.failsTo : undefined;
       facts.push({ label: 'fail action', value: failsTo ? `fails ${failsTo} on loss of power, signal or air` : 'not stated: taken as the worst case' });
     }
+    if ('supply' in element && element.supply) facts.push({ label: 'supply', value: SUPPLY_WORDS[element.supply] });
     if ('system' in element) facts.push({ label: 'system', value: element.system });
     if ('variable' in element && element.variable) facts.push({ label: 'measures', value: element.variable });
     for (const field of ['make', 'model', 'technology'] as const) {

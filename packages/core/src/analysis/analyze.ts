@@ -4,11 +4,11 @@ import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy } from 
 import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { applyJustifications, JUSTIFICATION_RULES } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
-import type { Model, SeverityLevel } from '../model/schema.ts';
+import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
 import { RULES } from '../rules/registry.ts';
-import { runRules, type RuleEnvironment } from '../rules/run.ts';
+import { causeSide, runRules, type RuleEnvironment } from '../rules/run.ts';
 import { Tracer } from '../trace/trace.ts';
-import type { Analysis, Finding, RuleInForce } from '../vocabulary/types.ts';
+import type { Analysis, Finding, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
 
 export interface AnalyzeOptions {
   /** Spans from the loader, so findings about justifications can point at them. */
@@ -64,9 +64,15 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   return {
     traces,
     findings: [...sortByScenario(model, all), ...stale],
-    assessments: assessed.map((a) => a.assessment),
+    assessments: assessed.map((a, i) => withCauseElements(a.assessment, env, model.scenarios[i]!)),
     rules: [...independence, ...assessRulesInForce(model), ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule)],
   };
+}
+
+/** The cause's element set travels with the assessment, so reports show what the rules compared. */
+function withCauseElements(assessment: ScenarioAssessment, env: RuleEnvironment, scenario: Scenario): ScenarioAssessment {
+  const elements = [...causeSide(env, scenario).elements.keys()].sort();
+  return { ...assessment, cause: { ...assessment.cause, elements } };
 }
 
 function groupByScenario(findings: readonly Finding[]): Map<string | undefined, Finding[]> {

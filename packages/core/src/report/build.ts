@@ -80,9 +80,9 @@ function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
 }
 
 function causeElements(model: Model, assessment: ScenarioAssessment, traces: Map<string, FunctionTrace>): string[] | null {
-  // Prefer the analysis's own cause set when it gives one (a narrowed cause needs the graph to compute).
-  const given = (assessment.cause as { elements?: unknown }).elements;
-  if (Array.isArray(given) && given.every((t) => typeof t === 'string')) return [...given].sort(compareTags);
+  // The analysis gives the cause set the rules compared (an element cause, a narrowed cause included).
+  const given = assessment.cause.elements;
+  if (given !== undefined) return [...given].sort(compareTags);
   const cause = model.scenarios.find((s) => s.id === assessment.scenario)?.cause;
   if (cause?.function !== undefined && cause.only === undefined) {
     const trace = traces.get(cause.function);

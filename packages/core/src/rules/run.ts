@@ -22,7 +22,8 @@ function byTag(elements: TracedElement[]): Map<string, TracedElement> {
   return new Map(elements.map((e) => [e.tag, e]));
 }
 
-function causeSide(env: RuleEnvironment, scenario: Scenario): Side {
+/** The cause's side: its element set as the rules compare it, with the path to each element. */
+export function causeSide(env: RuleEnvironment, scenario: Scenario): Side {
   const { cause } = scenario;
   if (cause.function !== undefined) {
     const fn = env.functions.get(cause.function);
@@ -76,7 +77,8 @@ function reachedAvoiding(tracer: Tracer, side: Side, rank: ReadonlyMap<string, n
   for (let i = 0; i < queue.length; i++) {
     const from = queue[i]!;
     tracer.graph.forEachOutNeighbor(from, (next) => {
-      if (reached.has(next)) return;
+      // Only what the side relies on (a function follows only the signal links of its own role).
+      if (reached.has(next) || !side.elements.has(next)) return;
       reached.set(next, from);
       if (!blocks(next)) queue.push(next);
     });

@@ -64,25 +64,42 @@ export class Tracer {
     return this.closures.get(tag)!;
   }
 
-  /** Breadth-first from `start` (a function or an element), keeping the first path to each element. */
+  /** The controller or logic solver a function acts through, if the model gives one. */
+  private solverOf(fnTag: string): string | undefined {
+    let solver: string | undefined;
+    this.graph.forEachOutEdge(fnTag, (_edge, attributes, _source, target) => {
+      if (attributes.role === 'solver' || attributes.role === 'raisedIn') solver = target;
+    });
+    return solver;
+  }
+
+  /**
+   * A function relies on an element for the role it uses. Where an element takes its signal from several
+   * places (a valve moved by the BPCS positioner and by a SIS solenoid), a function does not follow a
+   * signal link that serves only other solvers, provided another link leads to its own solver. Links in
+   * series with no solver behind them (a network) are followed; nothing is dropped on a guess.
+   */
+  private followsSignal(solver: string | undefined, node: string, target: string): boolean {
+    if (solver === undefined) return true;
+    const branches: string[] = [];
+    this.graph.forEachOutEdge(node, (_edge, attributes, _source, to) => {
+      if (attributes.role === 'signalVia') branches.push(to);
+    });
+    if (branches.length < 2 || this.closure(target).has(solver)) return true;
+    const servesOthersOnly = [...this.closure(target)].some((t) => this.group(t) === 'solver');
+    return !(servesOthersOnly && branches.some((b) => this.closure(b).has(solver)));
+  }
+
+  /**
+   * Breadth-first from `start` (a function or an element), keeping the first path to each element. From
+   * a function, signal links that serve another function's solver are not followed (see followsSignal).
+   */
   paths(start: string): TracedElement[] {
     const known = this.pathsFrom.get(start);
     if (known) return known;
-    const parent = new Map<string, { from: string; role: EdgeRole }>();
-    const queue = [start];
-    const seen = new Set([start]);
-    for (let i = 0; i < queue.length; i++) {
-      const node = queue[i]!;
-      if (node !== start && this.group(node) === 'equipment') continue;
-      this.graph.forEachOutEdge(node, (_edge, attributes, _source, target) => {
-        if (seen.has(target)) return;
-        seen.add(target);
-        parent.set(target, { from: node, role: attributes.role });
-        queue.push(target);
-      });
-    }
+    const { parent, order } = this.reach(start);
     const out: TracedElement[] = [];
-    for (const tag of queue) {
+    for (const tag of order) {
       const a = this.graph.getNodeAttributes(tag);
       if (a.type !== 'element') continue;
       const path = [tag];
@@ -98,6 +115,32 @@ export class Tracer {
     return out;
   }
 
+  /** Breadth-first reach from `start`, stopping at process equipment; from a function, by role. */
+  private reach(start: string, fnTag?: string): { parent: Map<string, { from: string; role: EdgeRole }>; order: string[] } {
+    const a = this.graph.getNodeAttributes(start);
+    const solver = a.type === 'function' ? this.solverOf(start) : fnTag !== undefined ? this.solverOf(fnTag) : undefined;
+    const parent = new Map<string, { from: string; role: EdgeRole }>();
+    const order = [start];
+    const seen = new Set([start]);
+    for (let i = 0; i < order.length; i++) {
+      const node = order[i]!;
+      if (node !== start && this.group(node) === 'equipment') continue;
+      this.graph.forEachOutEdge(node, (_edge, attributes, _source, target) => {
+        if (seen.has(target)) return;
+        if (attributes.role === 'signalVia' && !this.followsSignal(solver, node, target)) return;
+        seen.add(target);
+        parent.set(target, { from: node, role: attributes.role });
+        order.push(target);
+      });
+    }
+    return { parent, order };
+  }
+
+  /** What one channel of a function relies on: its head and everything reached from it by that role. */
+  private channelElements(fnTag: string, head: string): string[] {
+    return this.reach(head, fnTag).order.sort();
+  }
+
   traceFunction(tag: string): FunctionTrace {
     const known = this.traces.get(tag);
     if (known) return known;
@@ -107,7 +150,7 @@ export class Tracer {
     let solver = false;
     this.graph.forEachOutEdge(tag, (_edge, attributes, _source, target) => {
       if (attributes.role === 'sensor' || attributes.role === 'final') {
-        channels.push({ role: attributes.role, head: target, elements: [...this.closure(target)].sort() });
+        channels.push({ role: attributes.role, head: target, elements: this.channelElements(tag, target) });
       }
       if (attributes.role === 'solver' || attributes.role === 'raisedIn') solver = true;
     });

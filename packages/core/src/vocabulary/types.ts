@@ -157,7 +157,14 @@ export interface ScenarioAssessment {
   tolerable: number;
   edge: 'below' | 'at-most';
   /** frequencyAfter / frequencyIfAccepted: present when a limit rule replaces the claimed frequency. */
-  cause: { label: string; frequency: Sourced; frequencyAfter?: number; frequencyIfAccepted?: number };
+  cause: {
+    label: string;
+    frequency: Sourced;
+    frequencyAfter?: number;
+    frequencyIfAccepted?: number;
+    /** The cause's element set as the rules compared it (a narrowed cause: the whole loop until accepted), sorted. */
+    elements?: string[];
+  };
   enablers: { title: string; probability: number; basis?: string }[];
   /** allowed: in the headline figure; allowedIfAccepted: in the "if accepted" figure; finding: the key that bars it. */
   modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
