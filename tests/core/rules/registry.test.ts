@@ -16,6 +16,17 @@ describe('the independence rule set', () => {
     }
   });
 
+  it('keeps each rule in one source file named by its id, so a rule is found from its id', () => {
+    const catalogue = new URL('../../../packages/core/src/rules/catalogue/', import.meta.url);
+    const ruleFiles = readdirSync(catalogue).filter((f) => f !== 'messages.ts');
+    expect(ruleFiles.sort()).toEqual(RULES.map((r) => `${r.id}.ts`).sort());
+    for (const rule of RULES) {
+      const text = readFileSync(new URL(`${rule.id}.ts`, catalogue), 'utf8');
+      expect(text.match(/\bdefine\w*Rule\(/g), `${rule.id}.ts defines one rule`).toHaveLength(1);
+      expect(text).toContain(`'${rule.id}'`);
+    }
+  });
+
   it('has unique, kebab-case ids, each with a title, a rationale and a source', () => {
     const ids = RULES.map((r) => r.id);
     expect(new Set(ids).size).toBe(ids.length);

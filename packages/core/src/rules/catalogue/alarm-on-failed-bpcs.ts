@@ -1,8 +1,7 @@
-// People: the same operator answering two alarms, an operator whose error is the cause, a shared
-// console, and an alarm that relies on the BPCS controller or display that fails in the cause.
+// alarm-on-failed-bpcs: an alarm raised or shown by the BPCS controller or display that fails in the
+// cause is not independent of it (policy shared-solver=allow follows the older allowance).
 import type { Element } from '../../model/schema.ts';
 import { defineSharedRule, describeSide, type PairContext } from '../define.ts';
-import { sharedMessage } from './messages.ts';
 
 function allowedBySolverPolicy(element: Element, pair: PairContext): boolean {
   return pair.policy.sharedSolver === 'allow' && (element.kind === 'controller' || element.kind === 'logic-solver') && pair.a.party.tag !== element.tag;
@@ -27,26 +26,4 @@ export const alarmOnFailedBpcs = defineSharedRule({
     (allowedBySolverPolicy(element, pair)
       ? 'allowed under policy shared-solver=allow (older practice: its own sensor and I/O), a note'
       : 'not independent'),
-});
-
-export const sharedOperator = defineSharedRule({
-  id: 'shared-operator',
-  title: 'Same operator',
-  rationale: 'Two human responses by one person, or a response by the person whose error is the cause, are not independent.',
-  source: 'CCPS, Layer of Protection Analysis (2001), ch. 6',
-  defaultSeverity: 'voids-credit',
-  groups: ['people'],
-  claims: (element) => element.kind === 'operator',
-  message: sharedMessage('operator'),
-});
-
-export const sharedConsole = defineSharedRule({
-  id: 'shared-console',
-  title: 'Shared console',
-  rationale: 'A console shared by two functions can mislead or blind both; whether that voids credit depends on the alarm design.',
-  source: 'Common practice, no source; CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015)',
-  defaultSeverity: 'needs-justification',
-  groups: ['people'],
-  claims: (element) => element.kind === 'console',
-  message: sharedMessage('console'),
 });

@@ -1,27 +1,7 @@
-// Shared-element rules for the instrument chain: sensors, I/O, controllers and logic solvers, final
-// elements and what actuates them. Any one of these failing defeats every function that uses it.
+// shared-logic-solver: a controller or logic solver that fails in the cause cannot act against it, and
+// two BPCS layers in one controller earn at most one credit.
 import { defineSharedRule, type PairContext } from '../define.ts';
 import { sharedMessage } from './messages.ts';
-
-export const sharedSensor = defineSharedRule({
-  id: 'shared-sensor',
-  title: 'Shared sensor or transmitter',
-  rationale: 'A device used for control whose failure causes a demand may not also be used by the protection against it.',
-  source: 'IEC 61511-1:2016 11.2.10 (same number in 2003); CCPS, Layer of Protection Analysis (2001), ch. 6',
-  defaultSeverity: 'voids-credit',
-  groups: ['sensor'],
-  message: sharedMessage('sensor'),
-});
-
-export const sharedIo = defineSharedRule({
-  id: 'shared-io',
-  title: 'Shared I/O card, cable or network',
-  rationale: 'One failed card, cable or network segment cuts the signal of every function wired through it.',
-  source: 'ANSI/ISA-S84.01-1996 Annex B.1.3 (separation covers communication); IEC 61511-1:2016 9.4',
-  defaultSeverity: 'voids-credit',
-  groups: ['signal'],
-  message: sharedMessage('signal path'),
-});
 
 function bothBpcsLayers(pair: PairContext): boolean {
   const isBpcs = (tag: string | undefined) => {
@@ -58,24 +38,4 @@ export const sharedLogicSolver = defineSharedRule({
         ? '; as two BPCS layers in one controller both may be credited under policy same-controller-layers=both'
         : '; as two BPCS layers in one controller their credit is limited by rule bpcs-same-controller'
       : ''),
-});
-
-export const sharedFinalElement = defineSharedRule({
-  id: 'shared-final-element',
-  title: 'Shared final element',
-  rationale: 'A valve or motor starter that fails in the cause, or is stuck, cannot also be what a layer relies on to act.',
-  source: 'IEC 61511-1:2016 11.2.10; ANSI/ISA-S84.01-1996 Annex B.1.3 (separation of final elements)',
-  defaultSeverity: 'voids-credit',
-  groups: ['final', 'mechanical'],
-  message: sharedMessage('final element'),
-});
-
-export const sharedActuation = defineSharedRule({
-  id: 'shared-actuation',
-  title: 'Shared actuator, solenoid or positioner',
-  rationale: 'A stuck actuator or a failed solenoid or positioner stops the valve whichever function commands it.',
-  source: 'CCPS, Layer of Protection Analysis (2001), ch. 6; IEC 61511-1:2016 9.4',
-  defaultSeverity: 'voids-credit',
-  groups: ['actuation'],
-  message: sharedMessage('actuator, solenoid or positioner'),
 });
