@@ -20,6 +20,8 @@ export {
   TYPICAL_LAYER_PFDS,
   OPERATOR_ERROR_PER_OPPORTUNITY,
   SIF_BAND_SOURCE,
+  PER_100_M_ROWS,
+  PER_ROW_METRES,
   sifDefaultPfd,
   type TypicalCause,
   type TypicalCauseRow,

@@ -3,7 +3,7 @@
 import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
 import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
-import { TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
+import { PER_100_M_ROWS, PER_ROW_METRES, TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
 import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
 import { formatFrequency, formatProbability } from './format.ts';
 import { FIGURES, assessLayerLimits, type LayerWork, type PerFigure } from './layers.ts';
@@ -54,7 +54,13 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
     frequency = { value: cause.frequency, origin: 'model', ...(cause.basis !== undefined ? { basis: cause.basis } : {}) };
   } else if (cause.typical !== undefined) {
     const row = TYPICAL_CAUSE_FREQUENCIES[cause.typical];
-    frequency = { value: row.frequency, origin: 'default', basis: `${row.title}: ${row.source}` };
+    if (PER_100_M_ROWS.has(cause.typical) && cause.pipeMetres !== undefined) {
+      // The row is per 100 m of pipe (CCPS 2001 Table 5.1); the loader refuses a piping row without a length.
+      const value = (row.frequency * cause.pipeMetres) / PER_ROW_METRES;
+      frequency = { value, origin: 'default', basis: `${row.title} x ${cause.pipeMetres} m / ${PER_ROW_METRES} m: ${row.source}` };
+    } else {
+      frequency = { value: row.frequency, origin: 'default', basis: `${row.title}: ${row.source}` };
+    }
   } else {
     throw new Error(`scenario ${scenario.id}: the cause has no frequency (the loader should have refused the model)`);
   }
