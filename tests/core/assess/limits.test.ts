@@ -17,6 +17,9 @@ interface Case {
 const SCENARIO = (category: string, ...lines: string[]) =>
   `scenario S-1 category=${category}\n  cause function=LIC-1 frequency=0.1\n${lines.map((l) => `  ${l}`).join('\n')}\n`;
 
+const HIGH = (...lines: string[]) =>
+  `scenario S-1 category=loc\n  cause external="Regulator fails open" frequency=5\n${lines.map((l) => `  ${l}`).join('\n')}\n`;
+
 const TABLES: Record<string, Case[]> = {
   'sif-pfd-outside-sil': [
     {
@@ -245,6 +248,51 @@ scenario S-1 category=loc
       name: 'the policy limit applies',
       model: `policy presence-limit=0.6\n${SCENARIO('people', 'modifier presence probability=0.5')}`,
       rules: [],
+    },
+  ],
+  // IEC 61511-1:2016 Table 5 (PFH, high demand): a cause of 5 /yr with nothing acting before the SIF is high demand.
+  'sif-pfh-outside-sil': [
+    {
+      name: 'a PFH inside the band raises nothing',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfh=5e-7\n${HIGH('layer SIF-1')}`,
+      rules: [],
+    },
+    {
+      name: 'a PFH better than the band is credited at the band edge until accepted',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfh=1e-7\n${HIGH('layer SIF-1')}`,
+      rules: ['sif-pfh-outside-sil'],
+      verdicts: { 'SIF-1': 'independent' },
+    },
+    {
+      name: 'a PFH worse than the band is used as claimed, with a finding',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=3 pfh=5e-7\n${HIGH('layer SIF-1')}`,
+      rules: ['sif-pfh-outside-sil'],
+    },
+    {
+      name: 'in low demand the PFH is not checked',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfh=1e-7 pfd=0.05\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: [],
+    },
+  ],
+  'sif-high-demand-no-pfh': [
+    {
+      name: 'a SIF with only a PFD earns no credit in high demand',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 pfd=0.005\n${HIGH('layer SIF-1')}`,
+      rules: ['sif-high-demand-no-pfh'],
+      verdicts: { 'SIF-1': 'voided' },
+      credited: [],
+    },
+    {
+      name: 'a claimed SIL gives the Table 5 edge',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005\n${HIGH('layer SIF-1')}`,
+      rules: [],
+      credited: ['SIF-1'],
+    },
+    {
+      name: 'in low demand the PFD serves',
+      model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 pfd=0.005\n${SCENARIO('loc', 'layer SIF-1')}`,
+      rules: [],
+      credited: ['SIF-1'],
     },
   ],
   'bpcs-cause-frequency-low': [

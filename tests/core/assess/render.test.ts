@@ -30,17 +30,19 @@ describe('renderAssessmentText', () => {
       '  criterion    people (harm to people): tolerable 1.0e-4 /yr; the mitigated frequency must be strictly below it',
       '  cause        failure of LIC-1: 1.0e-1 /yr, default: BPCS instrument loop failure: CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)',
       '  modifier     ignition 5.0e-1, basis: ignition study (invented)',
-      '  layers       layer  kind   claimed  allowed  credit  verdict',
-      '               SIF-1  sif    5.0e-3   5.0e-3   no      voided',
+      '  layers       layer  kind   acts     claimed  allowed  credit  verdict',
+      '               SIF-1  sif    the SIF  5.0e-3   5.0e-3   no      voided',
       '                 - shared-connection at BR-1 with the cause: no credit',
-      '               LAH-1  alarm  1.0e-1   1.0e-1   no      voided',
+      '               LAH-1  alarm  before*  1.0e-1   1.0e-1   no      voided',
       '                 - shared-solver at C1 with the cause: no credit',
+      '               acts: before or after the SIF; * by default for this type of layer, not stated on the layer line',
       '  mitigated    as claimed                 2.5e-5 /yr  meets the criterion',
       '               after independence         5.0e-2 /yr  falls short',
       '               if open findings accepted  5.0e-2 /yr  falls short',
       '  gap          500 x tolerable, after independence',
       '  required     SIF-1: PFD < 2.0e-3, RRF > 500: SIL 2 (band 1.0e-3 to 1.0e-2); verify PFD < 2.0e-3',
-      '  demand       demand on SIF-1 1.0e-1 /yr: low demand, the PFDavg bands of IEC 61511-1:2016 Table 4 apply (demand = cause x enablers x the credited non-SIF layers, all taken to act before the SIF)',
+      // The alarm would act before the SIF, but it is voided: only credited layers lower the demand, so 0.1 /yr.
+      '  demand       demand on SIF-1 1.0e-1 /yr (demand = cause x enablers x PFDs of the credited layers acting before the SIF; acting before SIF-1: none; after it: none): at most once a year, low demand; the PFDavg bands of IEC 61511-1:2016 Table 4 apply',
     ]);
   });
 

@@ -2,12 +2,13 @@
 // limits on it (SIL band, BPCS cap, operator response time, check valve, no number), each limit a finding.
 import type { Finding, LayerReason, Sourced } from '../analysis/types.ts';
 import type { LayerClaim, Model, PlantFunction, Scenario } from '../model/schema.ts';
-import { lowDemandBand } from './bands.ts';
+import { highDemandBand, lowDemandBand } from './bands.ts';
 import { SIF_BAND_SOURCE, TYPICAL_LAYER_PFDS, sifDefaultPfd, type LayerDefaultKey } from './defaults.ts';
 import { causeIsBpcsFailure, isBpcsLayer, type BpcsFacts } from './facts.ts';
-import { formatProbability } from './format.ts';
+import { formatPerHour, formatProbability } from './format.ts';
 import { inForce, limitFinding, type AssessRuleId, type Figure } from './limits.ts';
 import { above, below } from './numbers.ts';
+import { orderOf, type LayerOrder } from './order.ts';
 import { resolvedPolicy, BPCS_LAYER_BEST_PFD } from './policy.ts';
 
 export const FIGURES: readonly Figure[] = ['after', 'if-accepted'];
@@ -28,8 +29,23 @@ export interface LayerWork {
   /** A finding in force removes the layer's credit in this figure. */
   noCredit: PerFigure<boolean>;
   bpcs: boolean;
+  /** Whether it acts before or after the scenario's SIF. */
+  order: LayerOrder;
+  /** The scenario's SIF in high demand: its PFH (per hour) as claimed, and as each figure allows it. */
+  claimedPfh?: Sourced;
+  pfh?: PerFigure<number>;
   findings: Finding[];
   reasons: LayerReason[];
+}
+
+export const PFH_BAND_SOURCE = 'IEC 61511-1:2016 Table 5, conservative edge of the claimed SIL band';
+
+/** The PFH a SIF in high demand is judged by: its own pfh=, else the conservative edge of its SIL's Table 5 band. */
+export function claimedPfhOf(fn: PlantFunction): Sourced | undefined {
+  if (fn.kind !== 'sif') return undefined;
+  if (fn.pfh !== undefined) return { value: fn.pfh, origin: 'model', ...(fn.pfhBasis !== undefined ? { basis: fn.pfhBasis } : {}) };
+  const band = fn.sil !== undefined ? highDemandBand(fn.sil) : undefined;
+  return band ? { value: band.high, origin: 'sil-band', basis: `SIL ${fn.sil}: ${PFH_BAND_SOURCE}` } : undefined;
 }
 
 function defaultKeyOf(fn: PlantFunction, facts: BpcsFacts): LayerDefaultKey | undefined {
@@ -66,6 +82,8 @@ interface LayerContext {
   model: Model;
   scenario: Scenario;
   facts: BpcsFacts;
+  /** The scenario's SIF when the demand on it is high: it is judged by PFH (Table 5), not PFD (Table 4). */
+  highDemandSif?: string;
 }
 
 class LayerBuilder {
@@ -80,6 +98,7 @@ class LayerBuilder {
       pfd: { after: claimed.value, 'if-accepted': claimed.value },
       noCredit: { after: false, 'if-accepted': false },
       bpcs: isBpcsLayer(fn, ctx.facts),
+      order: orderOf(claim, fn, ctx.facts),
       findings: [],
       reasons: [],
     };
@@ -120,9 +139,34 @@ class LayerBuilder {
     for (const figure of FIGURES) if (inForce(f, figure)) this.work.noCredit[figure] = true;
   }
 
+  /** Caps the PFH of a SIF in high demand, as cap() does for a PFD. */
+  capPfh(rule: AssessRuleId, limit: number, message: string): void {
+    const f = this.finding(rule, message);
+    this.reason(f, 'caps', limit);
+    const pfh = this.work.pfh!;
+    for (const figure of FIGURES) if (inForce(f, figure)) pfh[figure] = Math.max(pfh[figure], limit);
+  }
+
   /** A finding that changes no number (a SIL claim that the PFD contradicts on the safe side). */
   flag(rule: AssessRuleId, message: string): void {
     this.reason(this.finding(rule, message), 'note');
+  }
+}
+
+/** A SIF in high demand: its PFH, checked against the Table 5 band of its claimed SIL (not Table 4). */
+function highDemandLimits(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 'sif' }>): void {
+  const claimed = claimedPfhOf(fn);
+  if (!claimed) {
+    b.void('sif-high-demand-no-pfh', `\`${fn.tag}\` is demanded more than once a year but gives neither pfh= nor a SIL; its PFD does not apply at this demand, so it earns no credit`);
+    return;
+  }
+  b.work.claimedPfh = claimed;
+  b.work.pfh = { after: claimed.value, 'if-accepted': claimed.value };
+  const band = fn.sil !== undefined && claimed.origin === 'model' ? highDemandBand(fn.sil) : undefined;
+  if (band && below(claimed.value, band.low)) {
+    b.capPfh('sif-pfh-outside-sil', band.low, `\`${fn.tag}\` claims PFH ${formatPerHour(claimed.value)}, better than its SIL ${fn.sil} band (${formatPerHour(band.low)} to ${formatPerHour(band.high)}); credited at ${formatPerHour(band.low)}`);
+  } else if (band && above(claimed.value, band.high)) {
+    b.flag('sif-pfh-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFH ${formatPerHour(claimed.value)}, worse than the band (${formatPerHour(band.low)} to ${formatPerHour(band.high)}); the PFH is used`);
   }
 }
 
@@ -133,7 +177,9 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
   const policy = resolvedPolicy(ctx.model);
   const value = w.claimed.value;
 
-  if (fn.kind === 'sif' && fn.sil !== undefined && w.claimed.origin === 'model') {
+  const highDemand = fn.kind === 'sif' && ctx.highDemandSif === fn.tag;
+  if (highDemand) highDemandLimits(b, fn);
+  else if (fn.kind === 'sif' && fn.sil !== undefined && w.claimed.origin === 'model') {
     const band = lowDemandBand(fn.sil);
     // The band's conservative edge is the conventional value for it (SIL 2 at 0.01), so it counts as inside.
     if (band && below(value, band.low)) {

@@ -21,6 +21,22 @@ export const ASSESS_RULES = [
     defaultSeverity: 'needs-justification',
   },
   {
+    id: 'sif-pfh-outside-sil',
+    title: 'SIF PFH outside its claimed SIL band (high demand)',
+    rationale:
+      'Demanded more than once a year, a SIF is judged by its dangerous failure rate per hour. A PFH better than the claimed SIL band is credited only down to the band; a PFH worse than the band is used as claimed and the SIL claim is wrong.',
+    source: 'IEC 61511-1:2016 Table 5',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'sif-high-demand-no-pfh',
+    title: 'SIF in high demand with no PFH and no SIL',
+    rationale:
+      'Demanded more than once a year, a SIF is judged by PFH, not PFD. With neither pfh= nor a claimed SIL (whose Table 5 band edge would serve) there is nothing to judge it by, and it earns no credit.',
+    source: 'IEC 61511-1:2016 definitions of the demand modes and Table 5',
+    defaultSeverity: 'voids-credit',
+  },
+  {
     id: 'bpcs-layer-cap',
     title: 'BPCS layer claims a PFD better than 0.1',
     rationale:

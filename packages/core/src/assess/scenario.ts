@@ -6,9 +6,11 @@ import { bestCreditableSet, type CreditProblem } from './credit.ts';
 import { PER_100_M_ROWS, PER_ROW_METRES, TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
 import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
 import { formatFrequency, formatProbability } from './format.ts';
-import { FIGURES, assessLayerLimits, type LayerWork, type PerFigure } from './layers.ts';
+import { mitigatedFigure } from './demand.ts';
+import { FIGURES, assessLayerLimits, claimedPfhOf, type LayerWork, type PerFigure } from './layers.ts';
 import { inForce, limitFinding, type Figure } from './limits.ts';
 import { above, below, meetsCriterion, product } from './numbers.ts';
+import type { OrderedLayer } from './order.ts';
 import { BPCS_CAUSE_LOWEST_FREQUENCY, BPCS_LAYERS_PER_SCENARIO, resolvedPolicy } from './policy.ts';
 import { sifRequirement } from './requirement.ts';
 
@@ -222,7 +224,18 @@ function verdictOf(w: LayerWork, eligible: boolean, selected: boolean): LayerAss
   return 'independent';
 }
 
+/**
+ * Assesses once in low-demand terms; when the demand on the scenario's SIF turns out to exceed once a year, assesses
+ * again with that SIF judged by PFH (IEC 61511-1:2016 Table 5) instead of PFD (Table 4).
+ */
 export function assessScenario(input: AssessInput): AssessOutput {
+  const first = assessOnce(input, undefined);
+  const sif = first.assessment.sif;
+  if (sif?.mode === 'high-demand' && sif.function !== undefined) return assessOnce(input, sif.function);
+  return first;
+}
+
+function assessOnce(input: AssessInput, highDemandSif: string | undefined): AssessOutput {
   const { model, scenario } = input;
   const facts = input.bpcs ?? bpcsFactsOf(model);
   const category = model.categories.find((c) => c.id === scenario.category);
@@ -238,7 +251,7 @@ export function assessScenario(input: AssessInput): AssessOutput {
   const works: LayerWork[] = [];
   for (const claim of scenario.layers ?? []) {
     const fn = functions.get(claim.function);
-    if (fn) works.push(assessLayerLimits({ model, scenario, facts }, claim, fn));
+    if (fn) works.push(assessLayerLimits({ model, scenario, facts, ...(highDemandSif !== undefined ? { highDemandSif } : {}) }, claim, fn));
   }
   for (const w of works) mine.push(...w.findings);
   const byTag = new Map(works.map((w) => [w.fn.tag, w]));
@@ -266,16 +279,23 @@ export function assessScenario(input: AssessInput): AssessOutput {
   const enablerProduct = product(enablers.map((e) => e.probability));
   const modifierProduct = (figure: Figure | 'claimed') =>
     product(modifiers.filter((m) => figure === 'claimed' || (figure === 'after' ? m.allowed : m.allowedIfAccepted ?? m.allowed)).map((m) => m.probability));
-  const creditedPfds = (figure: Figure, selected: Set<string>) => works.filter((w) => selected.has(w.fn.tag)).map((w) => w.pfd[figure]);
-  const mitigatedClaimed = product([cause.frequency.value, enablerProduct, modifierProduct('claimed'), ...works.map((w) => w.claimed.value)]);
-  const unprotectedAfter = product([cause.perFigure.after, enablerProduct, modifierProduct('after')]);
-  const mitigatedAfter = product([unprotectedAfter, ...creditedPfds('after', selectedAfter)]);
-  const mitigatedIfAccepted = product([
-    cause.perFigure['if-accepted'],
-    enablerProduct,
-    modifierProduct('if-accepted'),
-    ...creditedPfds('if-accepted', selectedIfAccepted),
-  ]);
+  // The SIF the scenario is judged by: the first credited one, else the first claimed.
+  const sifWork = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag)) ?? works.find((w) => w.fn.kind === 'sif');
+  const ordered = (w: LayerWork, pfd: number): OrderedLayer => ({ tag: w.fn.tag, pfd, acts: w.order.acts });
+  const figureOf = (figure: Figure | 'claimed', credited: readonly LayerWork[], cause: number) => {
+    const hasSif = sifWork !== undefined && credited.includes(sifWork);
+    const pfh = sifWork === undefined ? undefined : figure === 'claimed' ? claimedPfhOf(sifWork.fn)?.value : (sifWork.pfh?.[figure] ?? claimedPfhOf(sifWork.fn)?.value);
+    return mitigatedFigure({
+      cause,
+      enablers: enablerProduct,
+      modifiers: modifierProduct(figure),
+      credited: credited.map((w) => ordered(w, figure === 'claimed' ? w.claimed.value : w.pfd[figure])),
+      ...(hasSif ? { sif: { tag: sifWork!.fn.tag, ...(pfh !== undefined ? { pfh } : {}) } } : {}),
+    }).mitigated;
+  };
+  const mitigatedClaimed = figureOf('claimed', works, cause.frequency.value);
+  const mitigatedAfter = figureOf('after', works.filter((w) => selectedAfter.has(w.fn.tag)), cause.perFigure.after);
+  const mitigatedIfAccepted = figureOf('if-accepted', works.filter((w) => selectedIfAccepted.has(w.fn.tag)), cause.perFigure['if-accepted']);
   const meetsAfter = meetsCriterion(mitigatedAfter, category.tolerable, edge);
 
   const layers: LayerAssessment[] = works.map((w) => {
@@ -294,22 +314,31 @@ export function assessScenario(input: AssessInput): AssessOutput {
       ...(f?.solver !== undefined ? { solver: f.solver } : {}),
       ...(f?.system !== undefined ? { system: f.system } : {}),
       reasons: w.reasons,
+      // The SIF the scenario is judged by is the reference point of the order, so it has none of its own.
+      ...(w !== sifWork ? { acts: w.order.acts, ...(w.order.stated ? { actsStated: true } : {}) } : {}),
+      ...(w.claimedPfh !== undefined ? { claimedPfh: w.claimedPfh } : {}),
+      ...(w.pfh !== undefined && !w.noCredit.after ? { allowedPfh: w.pfh.after } : {}),
     };
   });
 
-  const sifTag = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag))?.fn.tag ?? works.find((w) => w.fn.kind === 'sif')?.fn.tag;
+  const sifTag = sifWork?.fn.tag;
   const sif = sifRequirement({
     tolerable: category.tolerable,
     edge,
     causeFrequency: cause.perFigure.after,
     enablers: enablerProduct,
     modifiers: modifierProduct('after'),
-    credited: works.filter((w) => selectedAfter.has(w.fn.tag)).map((w) => ({ tag: w.fn.tag, kind: w.fn.kind, pfd: w.pfd.after })),
+    credited: works
+      .filter((w) => selectedAfter.has(w.fn.tag))
+      .map((w) => ({ tag: w.fn.tag, kind: w.fn.kind, pfd: w.pfd.after, acts: w.order.acts, ...(w.order.stated ? { stated: true } : {}) })),
     ...(sifTag !== undefined ? { sif: sifTag } : {}),
     meets: meetsAfter,
   });
 
-  const alternatives: CreditAlternative[] = after.alternatives.map((a) => ({ ...a, mitigated: unprotectedAfter * a.pfdProduct }));
+  const alternatives: CreditAlternative[] = after.alternatives.map((a) => ({
+    ...a,
+    mitigated: figureOf('after', works.filter((w) => a.layers.includes(w.fn.tag)), cause.perFigure.after),
+  }));
   mine.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
   const assessment: ScenarioAssessment = {
     scenario: scenario.id,

@@ -131,6 +131,10 @@ function layerReport(
     solver: layer.solver,
     system: layer.system,
     reasons: layer.reasons?.map((r) => present({ ...r })),
+    acts: layer.acts,
+    actsStated: layer.actsStated,
+    claimedPfh: layer.claimedPfh ? present({ ...layer.claimedPfh }) : undefined,
+    allowedPfh: layer.allowedPfh,
   });
 }
 
