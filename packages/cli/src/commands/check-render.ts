@@ -62,7 +62,7 @@ export function verdictLine(a: ScenarioAssessment): string {
   const sifLayer = a.layers.find((l) => l.function === a.sif?.function);
   const lost = sifLayer && !sifLayer.creditedIfAccepted ? ` (\`${sifLayer.function}\` as drawn is ${sifLayer.verdict})` : '';
   const who = a.sif?.function && !lost ? `\`${a.sif.function}\`` : 'an independent SIF';
-  const sil = a.sif ? (a.sif.sil === 0 ? '; no SIL needed' : a.sif.sil > 4 ? '; beyond what one SIF can give' : `; ${who} needs SIL ${a.sif.sil}${lost}`) : '';
+  const sil = a.sif ? (a.sif.sil === 0 ? `; ${who} needs an RRF of at most 10, below SIL 1${lost}` : a.sif.sil > 4 ? '; beyond what one SIF can give' : `; ${who} needs SIL ${a.sif.sil}${lost}`) : '';
   const open = a.layers.filter((l) => l.verdict === 'open').map((l) => `\`${l.function}\``);
   const hint = a.meetsIfAccepted && open.length
     ? ` (it would meet it if the open findings on ${open.join(', ')} were resolved or accepted)`
