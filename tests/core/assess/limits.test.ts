@@ -63,12 +63,12 @@ const TABLES: Record<string, Case[]> = {
   ],
   'bpcs-layer-cap': [
     {
-      name: 'a BPCS alarm claiming 0.01 is capped at 0.1',
-      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.01\n${SCENARIO('loc', 'layer LAH-2')}`,
+      name: 'a BPCS trip claiming 0.01 is capped at 0.1',
+      model: `trip LSHH-2 sensors=LT-2 solver=C2 finals=MS-1 pfd=0.01\n${SCENARIO('loc', 'layer LSHH-2')}`,
       rules: ['bpcs-layer-cap'],
-      verdicts: { 'LAH-2': 'independent' },
-      allowed: { 'LAH-2': 0.1 },
-      credited: ['LAH-2'],
+      verdicts: { 'LSHH-2': 'independent' },
+      allowed: { 'LSHH-2': 0.1 },
+      credited: ['LSHH-2'],
     },
     {
       name: 'a BPCS trip at 0.1 is not capped',
@@ -293,6 +293,47 @@ scenario S-1 category=loc
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 pfd=0.005\n${SCENARIO('loc', 'layer SIF-1')}`,
       rules: [],
       credited: ['SIF-1'],
+    },
+  ],
+  // CCPS, Layer of Protection Analysis (2001), Table 6.5 and CCPS (2015): a human response is PFD 0.1 at best without
+  // a documented human-reliability analysis, wherever the alarm is raised (issue 9, item 5).
+  'human-response-floor': [
+    {
+      name: 'an alarm raised in the SIS at 0.01 is credited at 0.1',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=SIS-1 operator=OP-1 minutes=20 pfd=0.01\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: ['human-response-floor'],
+      verdicts: { 'LAH-2': 'independent' },
+      allowed: { 'LAH-2': 0.1 },
+    },
+    {
+      name: 'an alarm raised in the BPCS at 0.01 gets this finding, not the BPCS cap as well',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.01\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: ['human-response-floor'],
+      allowed: { 'LAH-2': 0.1 },
+    },
+    {
+      name: 'a human-reliability basis lifts the floor outside the BPCS',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=SIS-1 operator=OP-1 minutes=20 pfd=0.01 hra-basis="HRA study MF-HRA-4 (invented)"\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: [],
+      allowed: { 'LAH-2': 0.01 },
+    },
+    {
+      name: 'with a human-reliability basis an alarm in the BPCS is still held to the BPCS cap',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.01 hra-basis="HRA study (invented)"\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: ['bpcs-layer-cap'],
+      allowed: { 'LAH-2': 0.1 },
+    },
+    {
+      name: 'a claim in the scenario is held to the floor too',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=SIS-1 operator=OP-1 minutes=20\n${SCENARIO('loc', 'layer LAH-2 pfd=0.05')}`,
+      rules: ['human-response-floor'],
+      allowed: { 'LAH-2': 0.1 },
+    },
+    {
+      name: 'PFD 0.1 raises nothing',
+      model: `alarm LAH-2 sensors=LT-2 raised-in=SIS-1 operator=OP-1 minutes=20 pfd=0.1\n${SCENARIO('loc', 'layer LAH-2')}`,
+      rules: [],
+      allowed: { 'LAH-2': 0.1 },
     },
   ],
   'bpcs-cause-frequency-low': [

@@ -32,6 +32,7 @@ export { ASSESS_RULES, assessRulesInForce, rulesInForce, severityInForce, findin
 export {
   POLICY_DEFAULTS,
   BPCS_LAYER_BEST_PFD,
+  HUMAN_RESPONSE_BEST_PFD,
   BPCS_LAYERS_PER_SCENARIO,
   BPCS_CAUSE_LOWEST_FREQUENCY,
   resolvedPolicy,

@@ -9,7 +9,7 @@ import { formatPerHour, formatProbability } from './format.ts';
 import { inForce, limitFinding, type AssessRuleId, type Figure } from './limits.ts';
 import { above, below } from './numbers.ts';
 import { orderOf, type LayerOrder } from './order.ts';
-import { resolvedPolicy, BPCS_LAYER_BEST_PFD } from './policy.ts';
+import { resolvedPolicy, BPCS_LAYER_BEST_PFD, HUMAN_RESPONSE_BEST_PFD } from './policy.ts';
 
 export const FIGURES: readonly Figure[] = ['after', 'if-accepted'];
 
@@ -188,7 +188,12 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
       b.flag('sif-pfd-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFD ${formatProbability(value)}, worse than the band (${formatProbability(band.low)} to ${formatProbability(band.high)}); the PFD is used`);
     }
   }
-  if (w.bpcs && w.hasPfd && below(value, BPCS_LAYER_BEST_PFD)) {
+  // The human floor applies wherever the alarm is raised; when it caps, the BPCS cap would say the same again.
+  const humanCapped = fn.kind === 'alarm' && fn.hraBasis === undefined && w.hasPfd && below(value, HUMAN_RESPONSE_BEST_PFD);
+  if (humanCapped) {
+    b.cap('human-response-floor', HUMAN_RESPONSE_BEST_PFD, `\`${fn.tag}\` claims PFD ${formatProbability(value)} for an operator response; without a human-reliability analysis (hra-basis=) it is credited at ${formatProbability(HUMAN_RESPONSE_BEST_PFD)} at best`);
+  }
+  if (w.bpcs && w.hasPfd && !humanCapped && below(value, BPCS_LAYER_BEST_PFD)) {
     b.cap('bpcs-layer-cap', BPCS_LAYER_BEST_PFD, `BPCS layer \`${fn.tag}\` claims PFD ${formatProbability(value)}; a BPCS layer is credited at ${formatProbability(BPCS_LAYER_BEST_PFD)} at best (model it as a SIF if it is designed to IEC 61511)`);
   }
   if (w.bpcs && policy.sameControllerLayers === 'none' && causeIsBpcsFailure(ctx.model, ctx.scenario, ctx.facts)) {

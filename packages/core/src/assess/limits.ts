@@ -67,6 +67,15 @@ export const ASSESS_RULES = [
     defaultSeverity: 'voids-credit',
   },
   {
+    id: 'human-response-floor',
+    title: 'Operator response claims a PFD better than 0.1 without a human-reliability basis',
+    rationale:
+      'An alarm with operator response is credited at PFD 0.1 at best, wherever the alarm is raised (BPCS, SIS or a panel), unless a documented human-reliability analysis supports a lower figure (hra-basis).',
+    source:
+      'CCPS, Layer of Protection Analysis (2001), Table 6.5 (human response); CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015), human IPLs',
+    defaultSeverity: 'voids-credit',
+  },
+  {
     id: 'alarm-response-time',
     title: 'Too little time for the operator response',
     rationale:

@@ -18,6 +18,8 @@ export const POLICY_DEFAULTS: ResolvedPolicy = {
 
 /** Best PFD a BPCS layer may claim: RRF 10 (IEC 61511-1:2016 9.3). */
 export const BPCS_LAYER_BEST_PFD = 0.1;
+/** Best PFD an operator response may claim without a human-reliability analysis (CCPS 2001 Table 6.5; CCPS 2015). */
+export const HUMAN_RESPONSE_BEST_PFD = 0.1;
 /** Most BPCS layers credited in one scenario (IEC 61511-1:2016 9.3). */
 export const BPCS_LAYERS_PER_SCENARIO = 2;
 /** Lowest frequency a BPCS loop-failure cause may claim without a justification (IEC 61511-1:2003 8.2.2). */
