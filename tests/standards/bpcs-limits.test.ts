@@ -14,7 +14,7 @@ describe('a BPCS protection layer', () => {
     expect(BPCS_LAYER_BEST_PFD).toBe(0.1);
     const out = assess(`trip LSHH-2 sensors=LT-2 solver=C2 finals=MS-1 pfd=0.001
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LSHH-2
 `);
     expect(out.assessment.layers[0]).toMatchObject({ claimedPfd: { value: 0.001 }, allowedPfd: 0.1, credited: true });
@@ -26,7 +26,7 @@ scenario S-1 category=loc
   it('is not capped by the BPCS limit when it runs in the SIS', () => {
     const out = assess(`trip LSHH-2 sensors=LT-2 solver=SIS-1 finals=MS-1 pfd=0.01
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LSHH-2
 `);
     expect(out.assessment.layers[0]!.allowedPfd).toBe(0.01);
@@ -39,7 +39,7 @@ describe('an operator response, wherever the alarm is raised (issue 9, item 5)',
   it('holds an alarm raised in the SIS at PFD 0.01 to 0.1', () => {
     const out = assess(`${ALARM('LAH-2', 'SIS-1', 0.01)}
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
 `);
     expect(out.assessment.layers[0]!.allowedPfd).toBe(0.1);
@@ -50,7 +50,7 @@ scenario S-1 category=loc
   it('credits the claimed figure when a human-reliability analysis is given (hra-basis=)', () => {
     const out = assess(`${ALARM('LAH-2', 'SIS-1', 0.01)} hra-basis="HRA study MF-HRA-4 (invented)"
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
 `);
     expect(out.assessment.layers[0]!.allowedPfd).toBe(0.01);
@@ -66,7 +66,7 @@ describe('BPCS layers in one scenario', () => {
 ${ALARM('LAH-3', 'C2', 0.1, 'LT-3')}
 ${ALARM('LAH-4', 'C3', 0.1, 'LT-4')}
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
   layer LAH-3
   layer LAH-4
@@ -82,7 +82,7 @@ scenario S-1 category=loc
 ${ALARM('LAH-2', 'C2', 0.1, 'LT-2')}
 trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
   layer LSHH-3
 `;

@@ -52,7 +52,7 @@ describe('common practice, no source', () => {
   it('credit for presence needs presence under about 10%', () => {
     // Common practice, no source (DESIGN.md section 6; RULES.md section 3: owner's policy, default 0.1).
     const at = (p: number) =>
-      assess(`scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p}\n`).assessment.mitigatedAfter;
+      assess(`scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p} basis="time at the site (invented)"\n`).assessment.mitigatedAfter;
     expect(at(0.1)).toBeCloseTo(0.01, 15);
     expect(at(0.5)).toBe(0.1);
   });

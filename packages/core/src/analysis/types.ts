@@ -172,7 +172,8 @@ export interface ScenarioAssessment {
   edge: 'below' | 'at-most';
   /** frequencyAfter / frequencyIfAccepted: present when a limit rule replaces the claimed frequency. */
   cause: { label: string; frequency: Sourced; frequencyAfter?: number; frequencyIfAccepted?: number };
-  enablers: { title: string; probability: number; basis?: string }[];
+  /** allowed, allowedIfAccepted, finding: as for modifiers (an enabler with no basis is not applied until accepted). */
+  enablers: { title: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
   /** allowed: in the headline figure; allowedIfAccepted: in the "if accepted" figure; finding: the key that bars it. */
   modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
   layers: LayerAssessment[];

@@ -170,6 +170,26 @@ function highDemandLimits(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 's
   }
 }
 
+/**
+ * A SIF figure given without a verification basis: credited at the conservative edge of the claimed SIL's band
+ * (Table 4 for a PFD, Table 5 for a PFH in high demand), or not at all without a SIL, until accepted.
+ */
+function unverifiedClaim(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 'sif' }>, highDemand: boolean): void {
+  const w = b.work;
+  const claim = highDemand ? w.claimedPfh : w.claimed;
+  if (!claim || claim.origin !== 'model' || claim.basis !== undefined) return;
+  const what = highDemand ? 'PFH' : 'PFD';
+  const format = highDemand ? formatPerHour : formatProbability;
+  const band = fn.sil === undefined ? undefined : highDemand ? highDemandBand(fn.sil) : lowDemandBand(fn.sil);
+  const head = `\`${fn.tag}\` claims ${what} ${format(claim.value)} with no verification basis (${highDemand ? 'pfh-basis=' : 'pfd-basis= or basis= on the layer line'})`;
+  if (!band) return b.void('sif-claim-no-basis', `${head} and no SIL: it earns no credit until a basis is recorded or a justification accepts it`);
+  // No better than the band's edge, the claim takes no more credit than the SIL alone would give: nothing to verify.
+  if (!below(claim.value, band.high)) return;
+  const message = `${head}: credited at the edge of SIL ${fn.sil}, ${format(band.high)}, until a basis is recorded or a justification accepts it`;
+  if (highDemand) b.capPfh('sif-claim-no-basis', band.high, message);
+  else b.cap('sif-claim-no-basis', band.high, message);
+}
+
 /** Applies the PFD rules to one claimed layer, in the order the brief of issue 4 gives. */
 export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: PlantFunction): LayerWork {
   const b = new LayerBuilder(ctx, claim, fn);
@@ -188,6 +208,7 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
       b.flag('sif-pfd-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFD ${formatProbability(value)}, worse than the band (${formatProbability(band.low)} to ${formatProbability(band.high)}); the PFD is used`);
     }
   }
+  if (fn.kind === 'sif') unverifiedClaim(b, fn, highDemand);
   // The human floor applies wherever the alarm is raised; when it caps, the BPCS cap would say the same again.
   const humanCapped = fn.kind === 'alarm' && fn.hraBasis === undefined && w.hasPfd && below(value, HUMAN_RESPONSE_BEST_PFD);
   if (humanCapped) {

@@ -114,6 +114,39 @@ export const ASSESS_RULES = [
     defaultSeverity: 'needs-justification',
   },
   {
+    id: 'condition-no-basis',
+    title: 'Enabling condition or conditional modifier without a basis',
+    rationale:
+      'An enabling condition or conditional modifier is a credit like any layer and needs a stated basis (a study, records, a time fraction worked out); without one it is not applied until a basis is recorded or a justification accepts it.',
+    source: 'CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013)',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'condition-credit-limit',
+    title: 'Enablers and modifiers together take more credit than the policy allows',
+    rationale:
+      "The combined credit of enabling conditions and conditional modifiers is limited by the owner's policy (condition-credit-limit, default 100, two orders of magnitude); the excess is not taken until a justification accepts it.",
+    source:
+      "CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013); the default limit is owner's policy, from memory",
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'cause-no-basis',
+    title: 'Cause frequency without a basis',
+    rationale:
+      'An initiating-event frequency drives every figure of the scenario; one given without a basis (failure data, site history, a table row) is used as given but stays open until a basis is recorded or a justification accepts it.',
+    source: 'CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015); CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013)',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'sif-claim-no-basis',
+    title: 'SIF claims a PFD or PFH without a verification basis',
+    rationale:
+      "A SIF's PFD (or, in high demand, PFH) must come from a SIL verification; a figure given without a basis is credited only at the conservative edge of its claimed SIL band, or not at all without a SIL, until a basis is recorded or a justification accepts it.",
+    source: 'IEC 61511-1:2016 11.9 (SIF probability of failure verification) [from memory for the clause]',
+    defaultSeverity: 'needs-justification',
+  },
+  {
     id: 'bpcs-cause-frequency-low',
     title: 'BPCS loop failure claimed below 0.1 per year',
     rationale:

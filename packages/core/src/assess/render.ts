@@ -132,7 +132,10 @@ export function renderAssessmentText(a: ScenarioAssessment): string[] {
   lines.push(row('criterion', `${a.category} (${harm}): tolerable ${formatFrequency(a.tolerable)}; the mitigated frequency ${edgeText(a.edge)} it`));
   lines.push(row('cause', `${a.cause.label}: ${formatFrequency(a.cause.frequency.value)}, ${origin(a.cause.frequency)}`));
   if (a.cause.frequencyAfter !== undefined) lines.push(continuation(`${formatFrequency(a.cause.frequencyAfter)} used after independence until a justification accepts the claim`));
-  for (const e of a.enablers) lines.push(row('enabler', `${e.title} ${formatProbability(e.probability)}${e.basis !== undefined ? `, basis: ${e.basis}` : ''}`));
+  for (const e of a.enablers) {
+    const state = e.allowed ? '' : e.allowedIfAccepted ? ', not applied until accepted' : ', not applied';
+    lines.push(row('enabler', `${e.title} ${formatProbability(e.probability)}${e.basis !== undefined ? `, basis: ${e.basis}` : ''}${state}${e.finding !== undefined && !e.allowed ? ` (${e.finding})` : ''}`));
+  }
   for (const m of a.modifiers) {
     const name = m.title !== undefined ? `${m.kind} (${m.title})` : m.kind;
     // A modifier the rules bar is still shown, with the finding that bars it, so nothing the user wrote vanishes.

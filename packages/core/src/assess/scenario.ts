@@ -2,6 +2,7 @@
 // findings, then picks the best creditable set, and computes the figures, the gap and the SIF requirement.
 import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../analysis/types.ts';
 import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
+import { assessConditions } from './conditions.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
 import { PER_100_M_ROWS, PER_ROW_METRES, TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
 import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
@@ -67,6 +68,13 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
     throw new Error(`scenario ${scenario.id}: the cause has no frequency (the loader should have refused the model)`);
   }
   const perFigure = { after: frequency.value, 'if-accepted': frequency.value };
+  if (frequency.origin === 'model' && frequency.basis === undefined) {
+    mine.push(limitFinding(model, scenario.id, 'cause-no-basis', {
+      tags: [],
+      parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : cause.element !== undefined ? { tag: cause.element } : {}) }],
+      message: `the cause frequency ${formatFrequency(frequency.value)} is given without a basis; it is used as given, but record where it comes from (basis=) or accept it`,
+    }));
+  }
   if (frequency.origin === 'model' && causeIsBpcsLoopFailure(model, scenario, facts) && below(frequency.value, BPCS_CAUSE_LOWEST_FREQUENCY)) {
     const f = limitFinding(model, scenario.id, 'bpcs-cause-frequency-low', {
       tags: cause.function !== undefined ? [cause.function] : [],
@@ -77,46 +85,6 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
     for (const figure of FIGURES) if (inForce(f, figure)) perFigure[figure] = BPCS_CAUSE_LOWEST_FREQUENCY;
   }
   return { label, frequency, perFigure };
-}
-
-type ModifierEntry = ScenarioAssessment['modifiers'][number];
-
-function assessModifiers(model: Model, scenario: Scenario, harm: string, mine: Finding[]): ModifierEntry[] {
-  const presenceLimit = resolvedPolicy(model).presenceLimit;
-  const seen = new Map<string, number>();
-  return (scenario.modifiers ?? []).map((m) => {
-    const count = (seen.get(m.kind) ?? 0) + 1;
-    seen.set(m.kind, count);
-    const tag = count === 1 ? m.kind : `${m.kind}-${count}`;
-    const entry: ModifierEntry = {
-      kind: m.kind,
-      ...(m.title !== undefined ? { title: m.title } : {}),
-      probability: m.probability,
-      ...(m.basis !== undefined ? { basis: m.basis } : {}),
-      allowed: true,
-    };
-    let f: Finding | undefined;
-    if (harm !== 'people') {
-      f = limitFinding(model, scenario.id, 'modifier-not-allowed', {
-        tags: [tag],
-        parties: [],
-        message: `the ${m.kind} modifier (${formatProbability(m.probability)}) applies only to harm to people; category \`${scenario.category}\` is ${harm}, so it is not applied`,
-      });
-    } else if (m.kind === 'presence' && above(m.probability, presenceLimit)) {
-      f = limitFinding(model, scenario.id, 'presence-above-limit', {
-        tags: [tag],
-        parties: [],
-        message: `presence ${formatProbability(m.probability)} is above the policy limit ${formatProbability(presenceLimit)}; it is not applied until a justification accepts it`,
-      });
-    }
-    if (f) {
-      mine.push(f);
-      entry.allowed = !inForce(f, 'after');
-      entry.allowedIfAccepted = !inForce(f, 'if-accepted');
-      entry.finding = f.key;
-    }
-    return entry;
-  });
 }
 
 interface Conflict {
@@ -245,8 +213,8 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
 
   const functions = input.functions ?? new Map(model.functions.map((f) => [f.tag, f]));
   const cause = assessCause(model, scenario, facts, functions, mine);
-  const modifiers = assessModifiers(model, scenario, category.harm, mine);
-  const enablers = (scenario.enablers ?? []).map((e) => ({ title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}) }));
+  const conditions = assessConditions(model, scenario, category.harm, mine);
+  const { enablers, modifiers, modifierProduct } = conditions;
 
   const works: LayerWork[] = [];
   for (const claim of scenario.layers ?? []) {
@@ -276,9 +244,7 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
   const selectedAfter = new Set(after.best);
   const selectedIfAccepted = new Set(ifAccepted.best);
 
-  const enablerProduct = product(enablers.map((e) => e.probability));
-  const modifierProduct = (figure: Figure | 'claimed') =>
-    product(modifiers.filter((m) => figure === 'claimed' || (figure === 'after' ? m.allowed : m.allowedIfAccepted ?? m.allowed)).map((m) => m.probability));
+  const enablerProduct = conditions.enablerProduct;
   // The SIF the scenario is judged by: the first credited one, else the first claimed.
   const sifWork = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag)) ?? works.find((w) => w.fn.kind === 'sif');
   const ordered = (w: LayerWork, pfd: number): OrderedLayer => ({ tag: w.fn.tag, pfd, acts: w.order.acts });
@@ -287,7 +253,7 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
     const pfh = sifWork === undefined ? undefined : figure === 'claimed' ? claimedPfhOf(sifWork.fn)?.value : (sifWork.pfh?.[figure] ?? claimedPfhOf(sifWork.fn)?.value);
     return mitigatedFigure({
       cause,
-      enablers: enablerProduct,
+      enablers: enablerProduct(figure),
       modifiers: modifierProduct(figure),
       credited: credited.map((w) => ordered(w, figure === 'claimed' ? w.claimed.value : w.pfd[figure])),
       ...(hasSif ? { sif: { tag: sifWork!.fn.tag, ...(pfh !== undefined ? { pfh } : {}) } } : {}),
@@ -326,7 +292,7 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
     tolerable: category.tolerable,
     edge,
     causeFrequency: cause.perFigure.after,
-    enablers: enablerProduct,
+    enablers: enablerProduct('after'),
     modifiers: modifierProduct('after'),
     credited: works
       .filter((w) => selectedAfter.has(w.fn.tag))

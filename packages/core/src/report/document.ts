@@ -169,7 +169,16 @@ const Scenario = z
         description: "The cause's element set, sorted; null when the analysis did not give it",
       }),
     }),
-    enablers: z.array(z.strictObject({ title: z.string(), probability: z.number(), basis: z.string().optional() })),
+    enablers: z.array(
+      z.strictObject({
+        title: z.string(),
+        probability: z.number(),
+        basis: z.string().optional(),
+        allowed: z.boolean().meta({ description: 'Applied in the headline figure' }),
+        allowedIfAccepted: z.boolean().optional(),
+        finding: z.string().optional().meta({ description: 'The key of the finding that bars it' }),
+      }),
+    ),
     modifiers: z.array(
       z.strictObject({
         kind: z.string(),

@@ -231,7 +231,12 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
       caption: `Enabling conditions and conditional modifiers of ${s.id}`,
       head: ['Factor', 'Probability', 'Applied', 'Basis'],
       rows: [
-        ...s.enablers.map((e) => [[`enabling condition: ${e.title}`], [formatProbability(e.probability)], ['yes'], [e.basis ?? '']]),
+        ...s.enablers.map((e) => [
+          [`enabling condition: ${e.title}`],
+          [formatProbability(e.probability)],
+          [e.allowed ? 'yes' : `no${e.allowedIfAccepted ? ', yes if accepted' : ''}`, ...(e.finding ? [' (', code(e.finding), ')'] : [])],
+          [e.basis ?? ''],
+        ]),
         ...s.modifiers.map((m) => [
           [`${m.kind} modifier${m.title ? `: ${m.title}` : ''}`],
           [formatProbability(m.probability)],
