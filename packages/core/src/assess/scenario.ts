@@ -24,6 +24,11 @@ export interface AssessInput {
   bpcs?: BpcsFacts;
   /** The model's functions by tag; built from the model when absent (give it when assessing many scenarios). */
   functions?: ReadonlyMap<string, PlantFunction>;
+  /**
+   * The independence findings as they stand once the cause's narrowing (cause only=) is accepted: the "if open findings
+   * are accepted" figure uses them, so it equals the figure the tool gives after that acceptance.
+   */
+  findingsIfAccepted?: readonly Finding[];
   /** How many alternative credit sets to list (default 5). */
   alternatives?: number;
 }
@@ -181,6 +186,18 @@ function applyIndependence(findings: readonly Finding[], works: Map<string, Laye
   return againstLayer;
 }
 
+/** The same sorting as applyIndependence, without touching the layers' reasons: for the "if accepted" figure. */
+function independenceEffects(findings: readonly Finding[], works: Map<string, LayerWork>): { conflicts: Conflict[]; againstLayer: Map<string, Finding[]> } {
+  const conflicts: Conflict[] = [];
+  const againstLayer = new Map<string, Finding[]>();
+  for (const f of findings) {
+    const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    if (layers.length === 2 && layers[0] !== layers[1]) conflicts.push({ a: layers[0]!, b: layers[1]!, finding: f });
+    else if (layers.length >= 1) againstLayer.set(layers[0]!, [...(againstLayer.get(layers[0]!) ?? []), f]);
+  }
+  return { conflicts, againstLayer };
+}
+
 function verdictOf(w: LayerWork, eligible: boolean, selected: boolean): LayerAssessment['verdict'] {
   const removes = (r: LayerReason) => r.effect === 'voids' || r.effect === 'unverified';
   const binding = (r: LayerReason) => !r.accepted && r.severity !== 'note';
@@ -230,13 +247,17 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
     byTag.get(c.b)!.reasons.push(reasonOf(c.finding, 'conflict', c.a));
   }
   if (countFinding) for (const w of works.filter((x) => x.bpcs)) w.reasons.push(reasonOf(countFinding, 'conflict'));
+  const groupConflicts = [...conflicts];
   const againstLayer = applyIndependence(scenarioFindings, byTag, conflicts);
+  const narrowed = input.findingsIfAccepted ? independenceEffects(input.findingsIfAccepted.filter((f) => f.scenario === scenario.id), byTag) : undefined;
+  const conflictsFor = (figure: Figure) => (figure === 'if-accepted' && narrowed ? [...groupConflicts, ...narrowed.conflicts] : conflicts);
+  const againstFor = (figure: Figure) => (figure === 'if-accepted' && narrowed ? narrowed.againstLayer : againstLayer);
 
   const eligible = (w: LayerWork, figure: Figure) =>
-    !w.noCredit[figure] && !(againstLayer.get(w.fn.tag) ?? []).some((f) => inForce(f, figure));
+    !w.noCredit[figure] && !(againstFor(figure).get(w.fn.tag) ?? []).some((f) => inForce(f, figure));
   const problemFor = (figure: Figure): CreditProblem => ({
     candidates: works.filter((w) => eligible(w, figure)).map((w) => ({ tag: w.fn.tag, pfd: w.pfd[figure], ...(w.bpcs ? { group: 'bpcs' } : {}) })),
-    conflicts: conflicts.filter((c) => inForce(c.finding, figure)).map((c) => [c.a, c.b] as const),
+    conflicts: conflictsFor(figure).filter((c) => inForce(c.finding, figure)).map((c) => [c.a, c.b] as const),
     ...(countFinding && inForce(countFinding, figure) ? { groupLimits: { bpcs: BPCS_LAYERS_PER_SCENARIO } } : {}),
   });
   const after = bestCreditableSet(problemFor('after'), input.alternatives ?? 5);

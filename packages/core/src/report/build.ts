@@ -46,6 +46,7 @@ const POLICY_SWITCHES = [
   { field: 'sharedSolver', name: 'shared-solver' },
   { field: 'minResponseMinutes', name: 'min-response-minutes' },
   { field: 'presenceLimit', name: 'presence-limit' },
+  { field: 'conditionCreditLimit', name: 'condition-credit-limit' },
 ] as const;
 
 function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], undefined> } {
