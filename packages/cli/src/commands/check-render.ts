@@ -6,6 +6,7 @@ import {
   formatFrequency,
   formatPerHour,
   formatRatio,
+  FACTOR_RULES,
   ModelLocator,
   position,
   renderAssessmentText,
@@ -34,6 +35,7 @@ function excerpt(source: SourceText, span: Span, gutter: number): string[] {
 function primarySpan(finding: Finding, locate: ModelLocator): Span | undefined {
   const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
   if (layer?.tag) return locate.layer(finding.scenario, layer.tag);
+  if (finding.scenario && FACTOR_RULES.has(finding.rule)) return locate.factor(finding.scenario, finding.key) ?? locate.cause(finding.scenario);
   if (finding.scenario) return locate.cause(finding.scenario);
   return undefined;
 }

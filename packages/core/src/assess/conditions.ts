@@ -91,9 +91,10 @@ export function assessConditions(model: Model, scenario: Scenario, harm: string,
 
   const rawEnablers = (figure: Figure | 'claimed') => product(enablers.filter((e) => applied(e, figure)).map((e) => e.probability));
   const rawModifiers = (figure: Figure | 'claimed') => product(modifiers.filter((m) => applied(m, figure)).map((m) => m.probability));
-  // The owner's limit on the combined credit: judged on the headline figure's factors, as the team would apply them.
+  // The owner's limit on the combined credit: judged on the factors the "if accepted" figure would apply (a superset
+  // of the headline figure's), so accepting the other findings cannot take the credit past the limit unseen.
   const floor = 1 / policy.conditionCreditLimit;
-  const combined = rawEnablers('after') * rawModifiers('after');
+  const combined = rawEnablers('if-accepted') * rawModifiers('if-accepted');
   let limit: Finding | undefined;
   if (below(combined, floor)) {
     limit = limitFinding(model, scenario.id, 'condition-credit-limit', {
