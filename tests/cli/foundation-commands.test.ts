@@ -61,7 +61,7 @@ describe('check', () => {
     const r = await runCli(['check', file]);
     expect(r.code).toBe(0);
     expect(r.stdout).toContain(file);
-    expect(r.stdout).toMatch(/3 scenarios|scenarios\s+3/);
+    expect(r.stdout).toMatch(/4 scenarios|scenarios\s+4/);
     expect(r.stderr).toBe('');
   });
 });

@@ -22,7 +22,7 @@ describe('scenarioScene', () => {
   it("should draw exactly the cause's and each layer's traced elements and the functions themselves", () => {
     for (const s of model.scenarios) {
       const scene = scenarioScene(model, analysis, s.id);
-      const fns = [s.cause.function!, ...(s.layers ?? []).map((l) => l.function)];
+      const fns = [...(s.cause.function !== undefined ? [s.cause.function] : []), ...(s.layers ?? []).map((l) => l.function)];
       const expected = new Set(fns);
       for (const fn of fns) for (const t of analysis.traces.find((x) => x.function === fn)!.elements) expected.add(t.tag);
       expect(new Set(scene.nodes.map((n) => n.id))).toEqual(expected);

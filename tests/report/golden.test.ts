@@ -37,7 +37,7 @@ describe('demo reports, checked as a reader would', () => {
 
   it('HTML has one section per scenario with headed tables', () => {
     const root = checkHtml(renderReport(input, 'html'), doc);
-    expect(root.querySelectorAll('section.scenario').map((s) => s.id)).toEqual(['scenario-S-101', 'scenario-S-102', 'scenario-S-103']);
+    expect(root.querySelectorAll('section.scenario').map((s) => s.id)).toEqual(['scenario-S-101', 'scenario-S-102', 'scenario-S-103', 'scenario-S-104']);
   });
 
   it('CSV parses back into the JSON report', () => {

@@ -37,7 +37,7 @@ describe.skipIf(!existsSync(CHROMIUM))('HTML report in a browser', () => {
     page.on('request', (r) => requests.push(r.url()));
     await page.goto(`file://${file}`);
     // Canary: the browser really rendered the report.
-    expect(await page.locator('section.scenario h2').count()).toBe(3);
+    expect(await page.locator('section.scenario h2').count()).toBe(4);
     expect(requests).toEqual([`file://${file}`]);
     await page.emulateMedia({ media: 'print' });
     await page.setViewportSize({ width: A4_PRINTABLE_PX, height: 1000 });
@@ -48,7 +48,7 @@ describe.skipIf(!existsSync(CHROMIUM))('HTML report in a browser', () => {
       width: document.documentElement.scrollWidth,
     })`)) as { wide: string[]; breaks: string[]; width: number };
     expect(layout.wide).toEqual([]);
-    expect(layout.breaks).toEqual(['page', 'page', 'page', 'page', 'page']);
+    expect(layout.breaks).toEqual(['page', 'page', 'page', 'page', 'page', 'page']);
     expect(layout.width).toBeLessThanOrEqual(A4_PRINTABLE_PX);
   }, 60_000);
 });

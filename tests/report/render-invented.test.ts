@@ -28,6 +28,7 @@ describe('report document (invented data)', () => {
       'shared-solver=void:default',
       'min-response-minutes=10:default',
       'presence-limit=0.1:default',
+      'condition-credit-limit=100:default',
     ]);
     expect(doc.rules.map((r) => r.id)).toEqual(['same-make-model', 'shared-connection', 'stale-justification']);
   });

@@ -12,24 +12,49 @@ describe('a BPCS protection layer', () => {
   // a BPCS protection layer may claim at most RRF 10, PFD not below 0.1.
   it('may claim no better than PFD 0.1 (RRF 10)', () => {
     expect(BPCS_LAYER_BEST_PFD).toBe(0.1);
-    const out = assess(`${ALARM('LAH-2', 'C2', 0.001)}
+    const out = assess(`trip LSHH-2 sensors=LT-2 solver=C2 finals=MS-1 pfd=0.001
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
-  layer LAH-2
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
+  layer LSHH-2
 `);
     expect(out.assessment.layers[0]).toMatchObject({ claimedPfd: { value: 0.001 }, allowedPfd: 0.1, credited: true });
     expect(out.assessment.mitigatedClaimed).toBeCloseTo(1e-3, 15);
     expect(out.assessment.mitigatedAfter).toBeCloseTo(0.1, 15);
-    expect(out.findings.map((f) => f.key)).toEqual(['bpcs-layer-cap:S-1:LAH-2']);
+    expect(out.findings.map((f) => f.key)).toEqual(['bpcs-layer-cap:S-1:LSHH-2']);
   });
 
-  it('is not capped when it runs in the SIS (it is then a SIF in all but name)', () => {
+  it('is not capped by the BPCS limit when it runs in the SIS', () => {
+    const out = assess(`trip LSHH-2 sensors=LT-2 solver=SIS-1 finals=MS-1 pfd=0.01
+scenario S-1 category=loc
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
+  layer LSHH-2
+`);
+    expect(out.assessment.layers[0]!.allowedPfd).toBe(0.01);
+  });
+});
+
+describe('an operator response, wherever the alarm is raised (issue 9, item 5)', () => {
+  // CCPS, Layer of Protection Analysis (2001), Table 6.5; CCPS, Guidelines for Initiating Events and Independent
+  // Protection Layers (2015): a human response is credited at PFD 0.1 at best without a human-reliability analysis.
+  it('holds an alarm raised in the SIS at PFD 0.01 to 0.1', () => {
     const out = assess(`${ALARM('LAH-2', 'SIS-1', 0.01)}
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
+  layer LAH-2
+`);
+    expect(out.assessment.layers[0]!.allowedPfd).toBe(0.1);
+    expect(out.assessment.mitigatedAfter).toBeCloseTo(0.1, 15);
+    expect(out.findings.map((f) => f.key)).toEqual(['human-response-floor:S-1:LAH-2']);
+  });
+
+  it('credits the claimed figure when a human-reliability analysis is given (hra-basis=)', () => {
+    const out = assess(`${ALARM('LAH-2', 'SIS-1', 0.01)} hra-basis="HRA study MF-HRA-4 (invented)"
+scenario S-1 category=loc
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
 `);
     expect(out.assessment.layers[0]!.allowedPfd).toBe(0.01);
+    expect(out.findings).toEqual([]);
   });
 });
 
@@ -41,7 +66,7 @@ describe('BPCS layers in one scenario', () => {
 ${ALARM('LAH-3', 'C2', 0.1, 'LT-3')}
 ${ALARM('LAH-4', 'C3', 0.1, 'LT-4')}
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
   layer LAH-3
   layer LAH-4
@@ -57,7 +82,7 @@ scenario S-1 category=loc
 ${ALARM('LAH-2', 'C2', 0.1, 'LT-2')}
 trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
 scenario S-1 category=loc
-  cause external="Tanker overfill" frequency=1
+  cause external="Tanker overfill" frequency=1 basis="site history (invented)"
   layer LAH-2
   layer LSHH-3
 `;

@@ -53,6 +53,35 @@ scenario S-1 category=loc
   });
 });
 
+describe('per-100 m piping rows', () => {
+  // CCPS, Layer of Protection Analysis (2001), Table 5.1 gives piping leak 1e-3 and full breach 1e-5 per year per
+  // 100 m of pipe (as RULES.md section 3 quotes it): the figure scales with the length of pipe the scenario covers.
+  it.each([
+    ['piping-leak', 250, 2.5e-3],
+    ['piping-leak', 50, 5e-4],
+    ['piping-breach', 300, 3e-5],
+  ] as const)('%s over %d m: %d per year', (row, metres, frequency) => {
+    const out = assess(`
+scenario S-1 category=loc
+  cause external="Leak from the transfer line" typical=${row} pipe-metres=${metres}
+`);
+    expect(out.assessment.cause.frequency.value).toBeCloseTo(frequency, 12);
+    expect(out.assessment.cause.frequency.origin).toBe('default');
+    expect(out.assessment.cause.frequency.basis).toContain(`x ${metres} m / 100 m`);
+  });
+
+  it('refuses a piping row without a length, and a length on any other row (the loader test pins the spans)', () => {
+    expect(() => assess(`
+scenario S-1 category=loc
+  cause external="Leak from the transfer line" typical=piping-leak
+`)).toThrow(/BH330/);
+    expect(() => assess(`
+scenario S-1 category=loc
+  cause external="Fire" typical=external-fire pipe-metres=100
+`)).toThrow(/BH331/);
+  });
+});
+
 describe('typical IPL PFDs', () => {
   // CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as RULES.md section 3 lists them).
   it.each([

@@ -52,7 +52,7 @@ describe('common practice, no source', () => {
   it('credit for presence needs presence under about 10%', () => {
     // Common practice, no source (DESIGN.md section 6; RULES.md section 3: owner's policy, default 0.1).
     const at = (p: number) =>
-      assess(`scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p}\n`).assessment.mitigatedAfter;
+      assess(`scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p} basis="time at the site (invented)"\n`).assessment.mitigatedAfter;
     expect(at(0.1)).toBeCloseTo(0.01, 15);
     expect(at(0.5)).toBe(0.1);
   });
@@ -87,12 +87,25 @@ ${extra}  layer SIF-1
     expect(sif.note).toMatch(/high demand/);
   });
 
-  it('counts the other credited non-SIF layers as acting before the SIF', () => {
-    // 5 /yr through a relief valve at 0.01 is 0.05 /yr on the SIF: low demand again.
+  it('takes a relief valve as acting after the SIF: it does not lower the demand (issue 9, item 2)', () => {
+    // The issue's check: cause 5 /yr, a relief valve (PFD 0.01, set above the trip) and a SIF. The relief valve acts
+    // after the SIF, so the demand on the SIF is the cause itself, 5 /yr: high demand (common practice, no source,
+    // for the default order by kind; IEC 61511-1:2016 for the mode).
     const sif = assess(DEMAND(5, '  layer PSV-IPL\n')).assessment.sif!;
+    expect(sif.demandRate).toBe(5);
+    expect(sif.mode).toBe('high-demand');
+    expect(sif.order).toBe('acting before SIF-1: none; after it: PSV-IPL');
+    // Required PFH = 1e-4 / (8,760 h x 0.01) = 1.14e-6 /h: SIL 1 by Table 5 (>= 1e-6 to < 1e-5), worked by hand.
+    expect(sif.requiredPfh!.toExponential(2)).toBe('1.14e-6');
+    expect(sif.sil).toBe(1);
+  });
+
+  it('lets the layer line say the relief device acts before the SIF (acts=before)', () => {
+    // Stated before, the relief valve lowers the demand to 5 x 0.01 = 0.05 /yr: low demand.
+    const sif = assess(DEMAND(5, '  layer PSV-IPL acts=before\n')).assessment.sif!;
     expect(sif.demandRate).toBeCloseTo(0.05, 15);
     expect(sif.mode).toBe('low-demand');
-    expect(sif.note).toMatch(/taken to act before the SIF/);
+    expect(sif.order).toBe('acting before SIF-1: PSV-IPL (stated); after it: none');
   });
 });
 

@@ -12,9 +12,9 @@ describe('Lassen 2008, separator overpressure', () => {
   const SEPARATOR = (category: string, sifPfd?: number) => `
 category lassen-e tolerable=3e-5 harm=people
 category lassen-e-at-most tolerable=3e-5 harm=people edge=at-most
-sif PSHH-1 sensors=LT-2 solver=SIS-1 finals=XV-1${sifPfd !== undefined ? ` pfd=${sifPfd}` : ' sil=1'}
+sif PSHH-1 sensors=LT-2 solver=SIS-1 finals=XV-1${sifPfd !== undefined ? ` pfd=${sifPfd} pfd-basis="required PFD as printed (Lassen 2008)"` : ' sil=1'}
 scenario SEP-1 category=${category}
-  cause external="Separator overpressure: sum of the intermediate event likelihoods (Lassen 2008)" frequency=1.717e-3
+  cause external="Separator overpressure: sum of the intermediate event likelihoods (Lassen 2008)" frequency=1.717e-3 basis="Lassen 2008, section 3.4"
   layer PSHH-1
 `;
 
@@ -32,16 +32,16 @@ scenario SEP-1 category=${category}
     const out = assess(`
 policy presence-limit=1
 scenario SEP-2 category=people
-  cause external="Separator overpressure" frequency=1
-  modifier ignition probability=0.3
-  modifier presence probability=0.7
+  cause external="Separator overpressure" frequency=1 basis="Lassen 2008, section 3.4"
+  modifier ignition probability=0.3 basis="Lassen 2008, section 3.4"
+  modifier presence probability=0.7 basis="Lassen 2008, section 3.4"
 `);
     expect(out.assessment.mitigatedAfter.toPrecision(2)).toBe('0.21');
     const strict = assess(`
 scenario SEP-2 category=people
-  cause external="Separator overpressure" frequency=1
-  modifier ignition probability=0.3
-  modifier presence probability=0.7
+  cause external="Separator overpressure" frequency=1 basis="Lassen 2008, section 3.4"
+  modifier ignition probability=0.3 basis="Lassen 2008, section 3.4"
+  modifier presence probability=0.7 basis="Lassen 2008, section 3.4"
 `);
     expect(strict.findings.map((f) => f.rule)).toEqual(['presence-above-limit']);
     expect(strict.assessment.mitigatedIfAccepted.toPrecision(2)).toBe('0.21');

@@ -7,7 +7,7 @@ import { assess, cause, independenceFinding, layer } from './kit.ts';
 // A SIF and an alarm against a loop failure at 0.1/yr; tolerable 1e-3/yr on a containment criterion.
 const MODEL = `
 alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
-sif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005
+sif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005 pfd-basis="SV-1 (invented)"
 scenario S-1 category=loc
   cause function=LIC-1 frequency=0.1
   layer SIF-1

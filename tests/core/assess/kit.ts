@@ -4,29 +4,32 @@ import { loadModelText, type Model } from '@bulkhead/core';
 import type { Finding, Party } from '../../../packages/core/src/vocabulary/types.ts';
 import { assessScenario, type AssessOutput } from '../../../packages/core/src/assess/index.ts';
 
-/** Categories (invented criteria), solvers, and a few instruments that scenarios can claim as layers. */
+/**
+ * Categories (invented criteria), solvers, and a few instruments that scenarios can claim as layers. Active
+ * elements say supply=self-contained: these tests are about the arithmetic, and the supply rules have their own tables.
+ */
 export const PREAMBLE = `
 site "Test works (invented)"
 category people tolerable=1e-4 harm=people
 category people-at-most tolerable=1e-4 harm=people edge=at-most
 category loc tolerable=1e-3 harm=containment
 category asset tolerable=1e-3 harm=asset
-controller C1 system=bpcs
-controller C2 system=bpcs
-controller C3 system=bpcs
-logic-solver SIS-1 system=sis
+controller C1 system=bpcs supply=self-contained
+controller C2 system=bpcs supply=self-contained
+controller C3 system=bpcs supply=self-contained
+logic-solver SIS-1 system=sis supply=self-contained
 vessel V-1
 nozzle N-1 mounted-on=V-1
 nozzle N-2 mounted-on=V-1
 nozzle N-3 mounted-on=V-1
 nozzle N-4 mounted-on=V-1
-transmitter LT-1 mounted-on=N-1
-transmitter LT-2 mounted-on=N-2
-transmitter LT-3 mounted-on=N-3
-transmitter LT-4 mounted-on=N-4
-control-valve LV-1 mounted-on=V-1
-shutdown-valve XV-1 mounted-on=V-1 fails-to=closed
-motor-starter MS-1 fails-to=off
+transmitter LT-1 mounted-on=N-1 supply=self-contained
+transmitter LT-2 mounted-on=N-2 supply=self-contained
+transmitter LT-3 mounted-on=N-3 supply=self-contained
+transmitter LT-4 mounted-on=N-4 supply=self-contained
+control-valve LV-1 mounted-on=V-1 supply=self-contained
+shutdown-valve XV-1 mounted-on=V-1 fails-to=closed supply=self-contained
+motor-starter MS-1 fails-to=off supply=self-contained
 operator OP-1
 relief-valve PSV-1 mounted-on=V-1
 rupture-disc RD-1 mounted-on=V-1

@@ -30,17 +30,19 @@ describe('renderAssessmentText', () => {
       '  criterion    people (harm to people): tolerable 1.0e-4 /yr; the mitigated frequency must be strictly below it',
       '  cause        failure of LIC-1: 1.0e-1 /yr, default: BPCS instrument loop failure: CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)',
       '  modifier     ignition 5.0e-1, basis: ignition study (invented)',
-      '  layers       layer  kind   claimed  allowed  credit  verdict',
-      '               SIF-1  sif    5.0e-3   5.0e-3   no      voided',
+      '  layers       layer  kind   acts     claimed  allowed  credit  verdict',
+      '               SIF-1  sif    the SIF  5.0e-3   5.0e-3   no      voided',
       '                 - shared-connection at BR-1 with the cause: no credit',
-      '               LAH-1  alarm  1.0e-1   1.0e-1   no      voided',
+      '               LAH-1  alarm  before*  1.0e-1   1.0e-1   no      voided',
       '                 - shared-solver at C1 with the cause: no credit',
+      '               acts: before or after the SIF; * by default for this type of layer, not stated on the layer line',
       '  mitigated    as claimed                 2.5e-5 /yr  meets the criterion',
       '               after independence         5.0e-2 /yr  falls short',
       '               if open findings accepted  5.0e-2 /yr  falls short',
       '  gap          500 x tolerable, after independence',
       '  required     SIF-1: PFD < 2.0e-3, RRF > 500: SIL 2 (band 1.0e-3 to 1.0e-2); verify PFD < 2.0e-3',
-      '  demand       demand on SIF-1 1.0e-1 /yr: low demand, the PFDavg bands of IEC 61511-1:2016 Table 4 apply (demand = cause x enablers x the credited non-SIF layers, all taken to act before the SIF)',
+      // The alarm would act before the SIF, but it is voided: only credited layers lower the demand, so 0.1 /yr.
+      '  demand       demand on SIF-1 1.0e-1 /yr (demand = cause x enablers x PFDs of the credited layers acting before the SIF; acting before SIF-1: none; after it: none): at most once a year, low demand; the PFDavg bands of IEC 61511-1:2016 Table 4 apply',
     ]);
   });
 
@@ -83,6 +85,31 @@ scenario S-2 category=loc
     const lines = renderAssessmentText(assess('scenario S-3 category=people\n  cause function=LIC-1 frequency=0.1\n').assessment);
     expect(lines).toContain('  layers       none claimed');
     expect(lines.find((l) => l.includes('required'))).toBe('  required     a new SIF: PFD < 1.0e-3, RRF > 1,000: SIL 3 (band 1.0e-4 to 1.0e-3)');
+  });
+
+  // Issue 9, item 9: the words must follow the verdict under the criterion's edge convention and the tolerance,
+  // never a raw comparison of the required PFD with 1 (common practice, no source, for the edge convention).
+  it('never says "no risk reduction needed" when the scenario falls short on the edge', () => {
+    // Cause 1e-4 /yr against tolerable 1e-4 /yr, strictly below: 1e-4 does not meet it, so the SIF is needed (PFD < 1).
+    const text = `sif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=1\nscenario S-1 category=people\n  cause external="Rare upset" frequency=1e-4 basis="invented"\n  layer SIF-1\n`;
+    const voided = [independenceFinding('S-1', 'shared-connection', [cause(), layer('SIF-1')], { element: 'N-3' })];
+    const a = assess(text, voided).assessment;
+    expect(a.meetsAfter).toBe(false);
+    const required = renderAssessmentText(a).find((l) => l.includes('required'))!;
+    expect(required).not.toContain('no risk reduction');
+    expect(required).toContain('SIF-1: PFD < 1.0e0, RRF > 1');
+    // Under "at most" the same figure meets the criterion, and then no risk reduction is asked of the SIF.
+    const atMost = assess(text.replace('category=people', 'category=people-at-most'), voided).assessment;
+    expect(atMost.meetsAfter).toBe(true);
+    expect(renderAssessmentText(atMost).find((l) => l.includes('required'))).toContain('no risk reduction needed from it');
+  });
+
+  it('reads 1e-3 x 0.1 as exactly the tolerable 1e-4 (floating point), so "at most" asks nothing of the SIF', () => {
+    // 0.001 * 0.1 = 1.0000000000000002e-4 in doubles: the same figure as 1e-4 within the tolerance.
+    const text = `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20\nsif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=1\nscenario S-1 category=people-at-most\n  cause external="Rare upset" frequency=1e-3 basis="invented"\n  layer SIF-1\n  layer LAH-2 pfd=0.1 basis="20 min"\n`;
+    const a = assess(text, [independenceFinding('S-1', 'shared-connection', [cause(), layer('SIF-1')], { element: 'N-3' })]).assessment;
+    expect(a.sif!.noReductionNeeded).toBe(true);
+    expect(renderAssessmentText(a).find((l) => l.includes('required'))).toContain('no risk reduction needed from it');
   });
 
   it('is plain text: no colour codes, no trailing spaces, layer columns aligned', () => {

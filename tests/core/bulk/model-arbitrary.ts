@@ -3,6 +3,7 @@
 // strings full of quotes, backslashes, control characters and unicode. Used by the round-trip properties.
 import fc from 'fast-check';
 import {
+  ACTS,
   ELEMENT_GROUPS,
   ELEMENT_KINDS,
   FAIL_POSITIONS,
@@ -13,6 +14,7 @@ import {
   LINK_FIELDS,
   LINK_TARGETS,
   MODIFIER_KINDS,
+  PER_100_M_ROWS as PIPING_ROWS,
   RULE_IDS,
   SEVERITIES,
   SUPPORT_LINK_KINDS,
@@ -109,7 +111,7 @@ const functionSeed = fc.record({
   trailing,
 });
 
-const claim = fc.record({ pick: fc.nat(), pfd: optional(probability), basis: optional(text), comments, trailing });
+const claim = fc.record({ pick: fc.nat(), pfd: optional(probability), basis: optional(text), acts: optional(fc.constantFrom(...ACTS)), comments, trailing });
 const scenarioSeed = fc.record({
   prefix,
   title: optional(text),
@@ -118,7 +120,7 @@ const scenarioSeed = fc.record({
   causePick: fc.nat(),
   narrow: fc.boolean(),
   external: text,
-  frequency: fc.oneof(positive.map((f) => ({ frequency: f })), fc.constantFrom(...TYPICAL_CAUSES).map((t) => ({ typical: t }))),
+  frequency: fc.oneof(positive.map((f) => ({ frequency: f })), fc.constantFrom(...TYPICAL_CAUSES).map((t) => (PIPING_ROWS.has(t) ? { typical: t, pipeMetres: 150 } : { typical: t }))),
   causeBasis: optional(text),
   causeComments: comments,
   causeTrailing: trailing,
@@ -239,7 +241,7 @@ function buildScenarios(seeds: Seed<typeof scenarioSeed>[], categories: string[]
     const candidates = functions.map((f) => f.tag).filter((t) => t !== causeFunction);
     const layers = candidates.length
       ? [...new Map(s.layers.map((l) => [pick(candidates, l.pick)!, l])).entries()].map(([fn, l]) =>
-          compact({ function: fn, pfd: l.pfd, basis: l.basis, comments: l.comments, trailingComment: l.trailing }),
+          compact({ function: fn, pfd: l.pfd, basis: l.basis, acts: l.acts, comments: l.comments, trailingComment: l.trailing }),
         )
       : [];
     return compact({

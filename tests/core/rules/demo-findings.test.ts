@@ -31,6 +31,8 @@ const S103_SUPPLY_NOTES = [
   row('shared-support:S-103:TIC-301+SIF-301:IA-1', 'note', 'IA-1', [['TIC-301', 'TV-301', 'IA-1'], ['SIF-301', 'XV-301', 'IA-1']]),
   row('shared-support:S-103:TIC-301+SIF-301:UPS-1', 'note', 'UPS-1', [['TIC-301', 'BPCS-C1', 'CKT-11', 'UPS-1'], ['SIF-301', 'SIS-1', 'CKT-21', 'UPS-1']]),
 ];
+// SIF-301 claims PFD 0.05 with no verification basis: credited at the SIL 1 edge, 0.1, until accepted (issue 9, item 10).
+const SIF301_NO_BASIS = { key: 'sif-claim-no-basis:S-103:SIF-301', severity: 'needs-justification' as const, element: undefined, paths: [['SIF-301']], accepted: false };
 // LT-102 (SIF-101) and LT-103 (LAH-101) are both Orrin GR-7: accepted in revision B only. The pair is
 // named by tag (LAH-101 first); revision B accepts it under the key it had in list order, which still counts.
 const diversity = (accepted: boolean) =>
@@ -60,6 +62,7 @@ describe('the demo findings', () => {
       // (the SIF) and so one path, through the first channel; its message names both channels.
       row('voted-group-common-cause:S-103:SIF-301:AI-S-02', 'needs-justification', 'AI-S-02', [['SIF-301', 'TT-302A', 'AI-S-02']]),
       row('voted-group-common-cause:S-103:SIF-301:TW-302', 'needs-justification', 'TW-302', [['SIF-301', 'TT-302A', 'TW-302']]),
+      SIF301_NO_BASIS,
       ...S103_SUPPLY_NOTES,
     ]);
   });
@@ -70,10 +73,13 @@ describe('the demo findings', () => {
       ['S-101', ['SIF-101 voided', 'LAH-101 voided']],
       ['S-102', ['SIF-201 independent', 'IPL-PSV-201 independent']],
       ['S-103', ['SIF-301 open', 'TAH-304 independent']],
+      // High demand (3 /yr, the relief valve acts after): SIF-201 judged by its PFH, independent of the external cause.
+      ['S-104', ['SIF-201 independent', 'IPL-PSV-201 independent']],
     ]);
   });
 
   it('revision B lists none of them: only the fail-safe supply notes and its one accepted diversity finding', () => {
+    // Revision B also gives SIF-301's PFD its verification basis (pfd-basis=), so sif-claim-no-basis is gone too.
     expect(findings('fixtures/demo/marrow-fen-rev-b.bulk')).toEqual([diversity(true), ...S101_SUPPLY_NOTES, ...S102_SUPPLY_NOTES, ...S103_SUPPLY_NOTES]);
     const verdicts = analysed('fixtures/demo/marrow-fen-rev-b.bulk').assessments.flatMap((a) => a.layers.map((l) => [l.function, l.credited]));
     expect(verdicts.every(([, credited]) => credited === true)).toBe(true);

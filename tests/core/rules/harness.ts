@@ -43,11 +43,13 @@ export const solenoidOnBpcsValve: Readonly<Record<string, string>> = {
   'CV-1': 'control-valve CV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1,XY-1 air-from=IA-A',
   'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=CV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01',
 };
-export const BASE_SCENARIO: readonly string[] = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer SF-1'];
+// The cause states a basis so the assessment's own cause-no-basis finding stays out of the independence tables.
+export const BASE_SCENARIO: readonly string[] = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1 basis="rule table"', '  layer SF-1'];
 
-/** A scenario SC-1 on category c with the given cause line and layers (`layer X` lines). */
+/** A scenario SC-1 on category c with the given cause line (a basis added when it has none) and layers (`layer X` lines). */
 export function scenario(cause: string, ...layers: string[]): string[] {
-  return ['scenario SC-1 category=c', `  cause ${cause}`, ...layers.map((l) => `  layer ${l}`)];
+  const withBasis = /frequency=/.test(cause) && !/basis=/.test(cause) ? `${cause} basis="rule table"` : cause;
+  return ['scenario SC-1 category=c', `  cause ${withBasis}`, ...layers.map((l) => `  layer ${l}`)];
 }
 
 export interface Case {

@@ -181,8 +181,8 @@ export function siteText(site: SiteSpec, sharings: readonly Sharing[] = [], name
     ...elements.map((e) => [e.keyword, name(e.tag), ...Object.entries(e.attrs).map(([k, v]) => attr(k, v))].join(' ')),
     ...functions.map(([keyword, tag, ...attrs]) => [keyword, name(tag!), ...attrs.map(rename)].join(' ')),
     `scenario ${name('SCN')} category=${name('CAT')}`,
-    site.cause === 'loop' ? `  cause function=${name('LOOP0')} frequency=0.1` : '  cause external="Feed upset" frequency=0.1',
-    ...site.layers.map((layer, n) => `  layer ${name(`F${n + 1}`)} pfd=${layer.kind === 'trip' || layer.kind === 'alarm' ? 0.1 : layer.pfd}`),
+    site.cause === 'loop' ? `  cause function=${name('LOOP0')} frequency=0.1 basis="generated"` : '  cause external="Feed upset" frequency=0.1 basis="generated"',
+    ...site.layers.map((layer, n) => `  layer ${name(`F${n + 1}`)} pfd=${layer.kind === 'trip' || layer.kind === 'alarm' ? 0.1 : layer.pfd} basis="generated"`),
   ];
   return lines.join('\n') + '\n';
 }

@@ -16,7 +16,7 @@ const lines = {
   'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal',
   'AL-1': 'alarm AL-1 sensors=T-2 raised-in=C-1 operator=OP-1 finals=XV-1 minutes=20',
 };
-const scenario = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1', '  layer AL-1 pfd=0.1'];
+const scenario = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1 basis="rule table"', '  layer AL-1 pfd=0.1'];
 const acceptController = 'accept alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1 by="T. Tester (invented)" date=2026-11-01 reason="test"';
 
 function run(extra: string[] = [], overrides: Record<string, string> = {}) {

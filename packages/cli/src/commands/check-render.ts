@@ -2,7 +2,9 @@
 // claimed layer in the model file, then the LOPA lines and a one-line verdict.
 import {
   ASSESSMENT_CAUTION,
+  edgeRelation,
   formatFrequency,
+  formatPerHour,
   formatRatio,
   ModelLocator,
   renderFindingText,
@@ -20,12 +22,13 @@ export function verdictLine(a: ScenarioAssessment): string {
   const sifLayer = a.layers.find((l) => l.function === a.sif?.function);
   const lost = sifLayer && !sifLayer.creditedIfAccepted ? ` (\`${sifLayer.function}\` as drawn is ${sifLayer.verdict})` : '';
   const who = a.sif?.function && !lost ? `\`${a.sif.function}\`` : 'an independent SIF';
-  const sil = a.sif ? (a.sif.sil === 0 ? '; no SIL needed' : a.sif.sil > 4 ? '; beyond what one SIF can give' : `; ${who} needs SIL ${a.sif.sil}${lost}`) : '';
+  const sil = a.sif ? (a.sif.sil === 0 ? `; ${who} needs an RRF of at most 10, below SIL 1${lost}` : a.sif.sil > 4 ? '; beyond what one SIF can give' : `; ${who} needs SIL ${a.sif.sil}${lost}`) : '';
+  const pfh = a.sif?.mode === 'high-demand' && a.sif.requiredPfh !== undefined && a.sif.sil > 0 && a.sif.sil <= 4 ? ` (high demand: PFH ${edgeRelation(a.edge)} ${formatPerHour(a.sif.requiredPfh)})` : '';
   const open = a.layers.filter((l) => l.verdict === 'open').map((l) => `\`${l.function}\``);
   const hint = a.meetsIfAccepted && open.length
     ? ` (it would meet it if the open findings on ${open.join(', ')} were resolved or accepted)`
     : a.meetsClaimed ? '; it meets it only as claimed' : '';
-  return `${a.scenario}: falls short after independence: ${after} against ${tolerable}, gap ${formatRatio(a.gap)} x${sil}${hint}`;
+  return `${a.scenario}: falls short after independence: ${after} against ${tolerable}, gap ${formatRatio(a.gap)} x${sil}${pfh}${hint}`;
 }
 
 export function renderCheck(result: LoadResult & { model: Model }, analysis: Analysis): string {

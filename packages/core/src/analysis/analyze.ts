@@ -6,6 +6,7 @@ import { applyJustifications, JUSTIFICATION_RULES } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
 import { RULES } from '../rules/registry.ts';
+import { findingKey as independenceFindingKey } from '../rules/define.ts';
 import { causeSide, runRules, type RuleEnvironment } from '../rules/run.ts';
 import { Tracer } from '../trace/trace.ts';
 import type { Analysis, Finding, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
@@ -58,7 +59,10 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   // scenarios times the site.
   const bpcs = bpcsFactsOf(model);
   const byScenario = groupByScenario(independent);
-  const assessed = model.scenarios.map((scenario) => assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions }));
+  const assessed = model.scenarios.map((scenario) => {
+    const narrowed = findingsOnceNarrowed(env, scenario, options);
+    return assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions, ...(narrowed ? { findingsIfAccepted: narrowed } : {}) });
+  });
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications, options.spans);
   return {
@@ -73,6 +77,19 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
 function withCauseElements(assessment: ScenarioAssessment, env: RuleEnvironment, scenario: Scenario): ScenarioAssessment {
   const elements = [...causeSide(env, scenario).elements.keys()].sort();
   return { ...assessment, cause: { ...assessment.cause, elements } };
+}
+
+/**
+ * A narrowed cause (only=) not yet accepted: the rules run again as if its narrowing were accepted, so the "if open
+ * findings are accepted" figure is the figure the tool will give once it is (issue 9, item 7).
+ */
+function findingsOnceNarrowed(env: RuleEnvironment, scenario: Model['scenarios'][number], options: AnalyzeOptions): Finding[] | undefined {
+  const cause = scenario.cause;
+  if (cause.function === undefined || cause.only === undefined) return undefined;
+  const key = independenceFindingKey('cause-narrowed', scenario.id, [{ role: 'cause', tag: cause.function }], cause.only);
+  if (env.acceptedKeys.has(key)) return undefined;
+  const accepted = { ...env, acceptedKeys: new Set([...env.acceptedKeys, key]) };
+  return applyJustifications(runRules(accepted, scenario), env.model.justifications, options.spans).findings;
 }
 
 function groupByScenario(findings: readonly Finding[]): Map<string | undefined, Finding[]> {

@@ -32,6 +32,10 @@ export const TYPICAL_CAUSE_FREQUENCIES: Readonly<Record<TypicalCause, TypicalCau
   'vessel-failure': { title: 'Pressure vessel residual failure', frequency: 1e-6, source: TABLE_5_1 },
 };
 
+/** Rows given per 100 m of pipe: the cause must say how many metres (pipe-metres), and the figure scales with it. */
+export const PER_100_M_ROWS: ReadonlySet<TypicalCause> = new Set<TypicalCause>(['piping-leak', 'piping-breach']);
+export const PER_ROW_METRES = 100;
+
 /**
  * Operator failure to execute a routine procedure, per opportunity (CCPS 2001 Table 5.1 as RULES.md section 3
  * quotes it). Not a frequency: the annual figure is opportunities per year times this, so the model states it

@@ -20,6 +20,8 @@ export {
   TYPICAL_LAYER_PFDS,
   OPERATOR_ERROR_PER_OPPORTUNITY,
   SIF_BAND_SOURCE,
+  PER_100_M_ROWS,
+  PER_ROW_METRES,
   sifDefaultPfd,
   type TypicalCause,
   type TypicalCauseRow,
@@ -30,6 +32,7 @@ export { ASSESS_RULES, assessRulesInForce, rulesInForce, severityInForce, findin
 export {
   POLICY_DEFAULTS,
   BPCS_LAYER_BEST_PFD,
+  HUMAN_RESPONSE_BEST_PFD,
   BPCS_LAYERS_PER_SCENARIO,
   BPCS_CAUSE_LOWEST_FREQUENCY,
   resolvedPolicy,

@@ -2,13 +2,14 @@
 // limits on it (SIL band, BPCS cap, operator response time, check valve, no number), each limit a finding.
 import type { Finding, LayerReason, Sourced } from '../vocabulary/types.ts';
 import type { LayerClaim, Model, PlantFunction, Scenario } from '../model/schema.ts';
-import { lowDemandBand } from './bands.ts';
+import { highDemandBand, lowDemandBand } from './bands.ts';
 import { SIF_BAND_SOURCE, TYPICAL_LAYER_PFDS, sifDefaultPfd, type LayerDefaultKey } from './defaults.ts';
 import { causeIsBpcsFailure, isBpcsLayer, type BpcsFacts } from './facts.ts';
-import { formatProbability } from './format.ts';
+import { formatPerHour, formatProbability } from './format.ts';
 import { inForce, limitFinding, type AssessRuleId, type Figure } from './limits.ts';
 import { above, below } from './numbers.ts';
-import { resolvedPolicy, BPCS_LAYER_BEST_PFD } from '../vocabulary/policy.ts';
+import { orderOf, type LayerOrder } from './order.ts';
+import { resolvedPolicy, BPCS_LAYER_BEST_PFD, HUMAN_RESPONSE_BEST_PFD } from '../vocabulary/policy.ts';
 
 export const FIGURES: readonly Figure[] = ['after', 'if-accepted'];
 
@@ -28,8 +29,23 @@ export interface LayerWork {
   /** A finding in force removes the layer's credit in this figure. */
   noCredit: PerFigure<boolean>;
   bpcs: boolean;
+  /** Whether it acts before or after the scenario's SIF. */
+  order: LayerOrder;
+  /** The scenario's SIF in high demand: its PFH (per hour) as claimed, and as each figure allows it. */
+  claimedPfh?: Sourced;
+  pfh?: PerFigure<number>;
   findings: Finding[];
   reasons: LayerReason[];
+}
+
+export const PFH_BAND_SOURCE = 'IEC 61511-1:2016 Table 5, conservative edge of the claimed SIL band';
+
+/** The PFH a SIF in high demand is judged by: its own pfh=, else the conservative edge of its SIL's Table 5 band. */
+export function claimedPfhOf(fn: PlantFunction): Sourced | undefined {
+  if (fn.kind !== 'sif') return undefined;
+  if (fn.pfh !== undefined) return { value: fn.pfh, origin: 'model', ...(fn.pfhBasis !== undefined ? { basis: fn.pfhBasis } : {}) };
+  const band = fn.sil !== undefined ? highDemandBand(fn.sil) : undefined;
+  return band ? { value: band.high, origin: 'sil-band', basis: `SIL ${fn.sil}: ${PFH_BAND_SOURCE}` } : undefined;
 }
 
 function defaultKeyOf(fn: PlantFunction, facts: BpcsFacts): LayerDefaultKey | undefined {
@@ -66,6 +82,8 @@ interface LayerContext {
   model: Model;
   scenario: Scenario;
   facts: BpcsFacts;
+  /** The scenario's SIF when the demand on it is high: it is judged by PFH (Table 5), not PFD (Table 4). */
+  highDemandSif?: string;
 }
 
 class LayerBuilder {
@@ -80,6 +98,7 @@ class LayerBuilder {
       pfd: { after: claimed.value, 'if-accepted': claimed.value },
       noCredit: { after: false, 'if-accepted': false },
       bpcs: isBpcsLayer(fn, ctx.facts),
+      order: orderOf(claim, fn, ctx.facts),
       findings: [],
       reasons: [],
     };
@@ -120,10 +139,55 @@ class LayerBuilder {
     for (const figure of FIGURES) if (inForce(f, figure)) this.work.noCredit[figure] = true;
   }
 
+  /** Caps the PFH of a SIF in high demand, as cap() does for a PFD. */
+  capPfh(rule: AssessRuleId, limit: number, message: string): void {
+    const f = this.finding(rule, message);
+    this.reason(f, 'caps', limit);
+    const pfh = this.work.pfh!;
+    for (const figure of FIGURES) if (inForce(f, figure)) pfh[figure] = Math.max(pfh[figure], limit);
+  }
+
   /** A finding that changes no number (a SIL claim that the PFD contradicts on the safe side). */
   flag(rule: AssessRuleId, message: string): void {
     this.reason(this.finding(rule, message), 'note');
   }
+}
+
+/** A SIF in high demand: its PFH, checked against the Table 5 band of its claimed SIL (not Table 4). */
+function highDemandLimits(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 'sif' }>): void {
+  const claimed = claimedPfhOf(fn);
+  if (!claimed) {
+    b.void('sif-high-demand-no-pfh', `\`${fn.tag}\` is demanded more than once a year but gives neither pfh= nor a SIL; its PFD does not apply at this demand, so it earns no credit`);
+    return;
+  }
+  b.work.claimedPfh = claimed;
+  b.work.pfh = { after: claimed.value, 'if-accepted': claimed.value };
+  const band = fn.sil !== undefined && claimed.origin === 'model' ? highDemandBand(fn.sil) : undefined;
+  if (band && below(claimed.value, band.low)) {
+    b.capPfh('sif-pfh-outside-sil', band.low, `\`${fn.tag}\` claims PFH ${formatPerHour(claimed.value)}, better than its SIL ${fn.sil} band (${formatPerHour(band.low)} to ${formatPerHour(band.high)}); credited at ${formatPerHour(band.low)}`);
+  } else if (band && above(claimed.value, band.high)) {
+    b.flag('sif-pfh-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFH ${formatPerHour(claimed.value)}, worse than the band (${formatPerHour(band.low)} to ${formatPerHour(band.high)}); the PFH is used`);
+  }
+}
+
+/**
+ * A SIF figure given without a verification basis: credited at the conservative edge of the claimed SIL's band
+ * (Table 4 for a PFD, Table 5 for a PFH in high demand), or not at all without a SIL, until accepted.
+ */
+function unverifiedClaim(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 'sif' }>, highDemand: boolean): void {
+  const w = b.work;
+  const claim = highDemand ? w.claimedPfh : w.claimed;
+  if (!claim || claim.origin !== 'model' || claim.basis !== undefined) return;
+  const what = highDemand ? 'PFH' : 'PFD';
+  const format = highDemand ? formatPerHour : formatProbability;
+  const band = fn.sil === undefined ? undefined : highDemand ? highDemandBand(fn.sil) : lowDemandBand(fn.sil);
+  const head = `\`${fn.tag}\` claims ${what} ${format(claim.value)} with no verification basis (${highDemand ? 'pfh-basis=' : 'pfd-basis= or basis= on the layer line'})`;
+  if (!band) return b.void('sif-claim-no-basis', `${head} and no SIL: it earns no credit until a basis is recorded or a justification accepts it`);
+  // No better than the band's edge, the claim takes no more credit than the SIL alone would give: nothing to verify.
+  if (!below(claim.value, band.high)) return;
+  const message = `${head}: credited at the edge of SIL ${fn.sil}, ${format(band.high)}, until a basis is recorded or a justification accepts it`;
+  if (highDemand) b.capPfh('sif-claim-no-basis', band.high, message);
+  else b.cap('sif-claim-no-basis', band.high, message);
 }
 
 /** Applies the PFD rules to one claimed layer, in the order the brief of issue 4 gives. */
@@ -133,7 +197,9 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
   const policy = resolvedPolicy(ctx.model);
   const value = w.claimed.value;
 
-  if (fn.kind === 'sif' && fn.sil !== undefined && w.claimed.origin === 'model') {
+  const highDemand = fn.kind === 'sif' && ctx.highDemandSif === fn.tag;
+  if (highDemand) highDemandLimits(b, fn);
+  else if (fn.kind === 'sif' && fn.sil !== undefined && w.claimed.origin === 'model') {
     const band = lowDemandBand(fn.sil);
     // The band's conservative edge is the conventional value for it (SIL 2 at 0.01), so it counts as inside.
     if (band && below(value, band.low)) {
@@ -142,7 +208,13 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
       b.flag('sif-pfd-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFD ${formatProbability(value)}, worse than the band (${formatProbability(band.low)} to ${formatProbability(band.high)}); the PFD is used`);
     }
   }
-  if (w.bpcs && w.hasPfd && below(value, BPCS_LAYER_BEST_PFD)) {
+  if (fn.kind === 'sif') unverifiedClaim(b, fn, highDemand);
+  // The human floor applies wherever the alarm is raised; when it caps, the BPCS cap would say the same again.
+  const humanCapped = fn.kind === 'alarm' && fn.hraBasis === undefined && w.hasPfd && below(value, HUMAN_RESPONSE_BEST_PFD);
+  if (humanCapped) {
+    b.cap('human-response-floor', HUMAN_RESPONSE_BEST_PFD, `\`${fn.tag}\` claims PFD ${formatProbability(value)} for an operator response; without a human-reliability analysis (hra-basis=) it is credited at ${formatProbability(HUMAN_RESPONSE_BEST_PFD)} at best`);
+  }
+  if (w.bpcs && w.hasPfd && !humanCapped && below(value, BPCS_LAYER_BEST_PFD)) {
     b.cap('bpcs-layer-cap', BPCS_LAYER_BEST_PFD, `BPCS layer \`${fn.tag}\` claims PFD ${formatProbability(value)}; a BPCS layer is credited at ${formatProbability(BPCS_LAYER_BEST_PFD)} at best (model it as a SIF if it is designed to IEC 61511)`);
   }
   if (w.bpcs && policy.sameControllerLayers === 'none' && causeIsBpcsFailure(ctx.model, ctx.scenario, ctx.facts)) {

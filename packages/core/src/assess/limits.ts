@@ -21,6 +21,22 @@ export const ASSESS_RULES = [
     defaultSeverity: 'needs-justification',
   },
   {
+    id: 'sif-pfh-outside-sil',
+    title: 'SIF PFH outside its claimed SIL band (high demand)',
+    rationale:
+      'Demanded more than once a year, a SIF is judged by its dangerous failure rate per hour. A PFH better than the claimed SIL band is credited only down to the band; a PFH worse than the band is used as claimed and the SIL claim is wrong.',
+    source: 'IEC 61511-1:2016 Table 5',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'sif-high-demand-no-pfh',
+    title: 'SIF in high demand with no PFH and no SIL',
+    rationale:
+      'Demanded more than once a year, a SIF is judged by PFH, not PFD. With neither pfh= nor a claimed SIL (whose Table 5 band edge would serve) there is nothing to judge it by, and it earns no credit.',
+    source: 'IEC 61511-1:2016 definitions of the demand modes and Table 5',
+    defaultSeverity: 'voids-credit',
+  },
+  {
     id: 'bpcs-layer-cap',
     title: 'BPCS layer claims a PFD better than 0.1',
     rationale:
@@ -48,6 +64,15 @@ export const ASSESS_RULES = [
     title: 'BPCS layer credited although a BPCS failure is the cause',
     rationale: 'The owner\'s policy (same-controller-layers=none) allows no BPCS layer when a BPCS failure starts the scenario.',
     source: "owner's policy, stricter than IEC 61511-1:2016 9.3 (common practice, no source)",
+    defaultSeverity: 'voids-credit',
+  },
+  {
+    id: 'human-response-floor',
+    title: 'Operator response claims a PFD better than 0.1 without a human-reliability basis',
+    rationale:
+      'An alarm with operator response is credited at PFD 0.1 at best, wherever the alarm is raised (BPCS, SIS or a panel), unless a documented human-reliability analysis supports a lower figure (hra-basis).',
+    source:
+      'CCPS, Layer of Protection Analysis (2001), Table 6.5 (human response); CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015), human IPLs',
     defaultSeverity: 'voids-credit',
   },
   {
@@ -86,6 +111,39 @@ export const ASSESS_RULES = [
     rationale:
       'Credit for the presence of people needs presence well below all of the time; above the policy limit (presence-limit, default 0.1) the modifier is not applied until justified.',
     source: "owner's policy (common practice, no source)",
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'condition-no-basis',
+    title: 'Enabling condition or conditional modifier without a basis',
+    rationale:
+      'An enabling condition or conditional modifier is a credit like any layer and needs a stated basis (a study, records, a time fraction worked out); without one it is not applied until a basis is recorded or a justification accepts it.',
+    source: 'CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013)',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'condition-credit-limit',
+    title: 'Enablers and modifiers together take more credit than the policy allows',
+    rationale:
+      "The combined credit of enabling conditions and conditional modifiers is limited by the owner's policy (condition-credit-limit, default 100, two orders of magnitude); the excess is not taken until a justification accepts it.",
+    source:
+      "CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013); the default limit is owner's policy, from memory",
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'cause-no-basis',
+    title: 'Cause frequency without a basis',
+    rationale:
+      'An initiating-event frequency drives every figure of the scenario; one given without a basis (failure data, site history, a table row) is used as given but stays open until a basis is recorded or a justification accepts it.',
+    source: 'CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015); CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013)',
+    defaultSeverity: 'needs-justification',
+  },
+  {
+    id: 'sif-claim-no-basis',
+    title: 'SIF claims a PFD or PFH without a verification basis',
+    rationale:
+      "A SIF's PFD (or, in high demand, PFH) must come from a SIL verification; a figure given without a basis is credited only at the conservative edge of its claimed SIL band, or not at all without a SIL, until a basis is recorded or a justification accepts it.",
+    source: 'IEC 61511-1:2016 11.9 (SIF probability of failure verification) [from memory for the clause]',
     defaultSeverity: 'needs-justification',
   },
   {

@@ -61,18 +61,24 @@ function table(rows: string[][]): string[] {
 function layerLines(a: ScenarioAssessment): string[] {
   if (a.layers.length === 0) return [row('layers', 'none claimed')];
   const mark = (s: Sourced) => (s.origin === 'default' ? ' (default)' : s.origin === 'sil-band' ? ' (SIL band)' : '');
-  const rows = [['layer', 'kind', 'claimed', 'allowed', 'credit', 'verdict']];
+  const rows = [['layer', 'kind', 'acts', 'claimed', 'allowed', 'credit', 'verdict']];
   for (const l of a.layers) {
     const allowed = l.allowedPfdIfAccepted !== undefined ? `${pfdText(l.allowedPfd)} (${pfdText(l.allowedPfdIfAccepted)} if accepted)` : pfdText(l.allowedPfd);
     const claimed = l.claimedPfd.value >= 1 && l.claimedPfd.origin === 'default' ? 'none' : `${formatProbability(l.claimedPfd.value)}${mark(l.claimedPfd)}`;
-    rows.push([l.function, l.kind, claimed, allowed, creditText(l), l.verdict]);
+    const acts = l.function === a.sif?.function ? 'the SIF' : `${l.acts ?? 'unknown'}${l.actsStated ? '' : '*'}`;
+    rows.push([l.function, l.kind, acts, claimed, allowed, creditText(l), l.verdict]);
   }
   const [head, ...body] = table(rows);
   const lines = [row('layers', head!)];
   a.layers.forEach((l, i) => {
     lines.push(continuation(body[i]!));
+    if (l.claimedPfh !== undefined) {
+      const allowedPfh = l.allowedPfh !== undefined ? formatPerHour(l.allowedPfh) : 'none';
+      lines.push(continuation(`  high demand: judged by PFH ${formatPerHour(l.claimedPfh.value)} (${origin(l.claimedPfh)}), allowed ${allowedPfh}; its PFD does not apply`));
+    }
     for (const r of (l.reasons ?? []).filter((x) => x.effect !== 'note')) lines.push(continuation(`  ${reasonText(r)}`));
   });
+  lines.push(continuation('acts: before or after the SIF; * by default for this type of layer, not stated on the layer line'));
   return lines;
 }
 
@@ -86,6 +92,12 @@ function silText(sil: number, band: { low: number; high: number } | undefined, f
   return `SIL ${sil} (band ${format(band.low)} to ${format(band.high)})`;
 }
 
+/** The demand note, one sentence a line: it carries the order used and, in high demand, the formula and source. */
+function demandLines(note: string): string[] {
+  const [first, ...rest] = note.split(/(?<=\.) (?=[A-Z])/);
+  return [row('demand', first!), ...rest.map(continuation)];
+}
+
 function requirementLines(a: ScenarioAssessment): string[] {
   const sif = a.sif;
   if (!sif) return [];
@@ -96,17 +108,21 @@ function requirementLines(a: ScenarioAssessment): string[] {
   // Within a band a SIF of that SIL must still be verified to the figure; only the band's own edge is met by any SIF of it.
   const verify = (what: string, need: number, band: { high: number } | undefined, format: (x: number) => string) =>
     band && !(a.edge === 'below' && sameFigure(need, band.high)) ? `; verify ${what} ${rel} ${format(need)}` : '';
-  if (sif.requiredPfd >= 1) return [row('required', `${who}: no risk reduction needed from it`), row('demand', sif.note)];
+  const other = sif.otherReading !== undefined ? [continuation(`at this exact edge, the other reading: ${sif.otherReading}`)] : [];
+  if (sif.noReductionNeeded) {
+    return [row('required', `${who}: no risk reduction needed from it (the other credited layers already meet the criterion)`), ...demandLines(sif.note)];
+  }
   if (sif.mode === 'low-demand') {
     const band = lowDemandBand(sif.sil);
-    return [row('required', `${who}: ${pfdNeed}: ${silText(sif.sil, band, formatProbability)}${verify('PFD', sif.requiredPfd, band, formatProbability)}`), row('demand', sif.note)];
+    return [row('required', `${who}: ${pfdNeed}: ${silText(sif.sil, band, formatProbability)}${verify('PFD', sif.requiredPfd, band, formatProbability)}`), ...other, ...demandLines(sif.note)];
   }
   const pfh = sif.requiredPfh ?? 0;
   const lowSil = sif.lowDemandSil ?? sif.sil;
   return [
     row('required', `${who}: PFH ${rel} ${formatPerHour(pfh)}: ${silText(sif.sil, sif.pfhBand, formatPerHour)}${verify('PFH', pfh, sif.pfhBand, formatPerHour)}`),
+    ...other,
     continuation(`in low-demand terms ${pfdNeed} (${lowSil === BEYOND_SIL_4 ? 'beyond SIL 4' : lowSil === 0 ? 'no SIL' : `SIL ${lowSil}`}), which does not apply at this demand`),
-    row('demand', sif.note),
+    ...demandLines(sif.note),
   ];
 }
 
@@ -116,7 +132,10 @@ export function renderAssessmentText(a: ScenarioAssessment): string[] {
   lines.push(row('criterion', `${a.category} (${harm}): tolerable ${formatFrequency(a.tolerable)}; the mitigated frequency ${edgeText(a.edge)} it`));
   lines.push(row('cause', `${a.cause.label}: ${formatFrequency(a.cause.frequency.value)}, ${origin(a.cause.frequency)}`));
   if (a.cause.frequencyAfter !== undefined) lines.push(continuation(`${formatFrequency(a.cause.frequencyAfter)} used after independence until a justification accepts the claim`));
-  for (const e of a.enablers) lines.push(row('enabler', `${e.title} ${formatProbability(e.probability)}${e.basis !== undefined ? `, basis: ${e.basis}` : ''}`));
+  for (const e of a.enablers) {
+    const state = e.allowed ? '' : e.allowedIfAccepted ? ', not applied until accepted' : ', not applied';
+    lines.push(row('enabler', `${e.title} ${formatProbability(e.probability)}${e.basis !== undefined ? `, basis: ${e.basis}` : ''}${state}${e.finding !== undefined && !e.allowed ? ` (${e.finding})` : ''}`));
+  }
   for (const m of a.modifiers) {
     const name = m.title !== undefined ? `${m.kind} (${m.title})` : m.kind;
     // A modifier the rules bar is still shown, with the finding that bars it, so nothing the user wrote vanishes.

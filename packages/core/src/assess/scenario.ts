@@ -2,13 +2,16 @@
 // findings, then picks the best creditable set, and computes the figures, the gap and the SIF requirement.
 import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../vocabulary/types.ts';
 import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
+import { assessConditions } from './conditions.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
-import { TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
+import { PER_100_M_ROWS, PER_ROW_METRES, TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
 import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
-import { formatFrequency, formatProbability } from './format.ts';
-import { FIGURES, assessLayerLimits, type LayerWork, type PerFigure } from './layers.ts';
+import { formatFrequency } from './format.ts';
+import { mitigatedFigure } from './demand.ts';
+import { FIGURES, assessLayerLimits, claimedPfhOf, type LayerWork, type PerFigure } from './layers.ts';
 import { inForce, limitFinding, type Figure } from './limits.ts';
-import { above, below, meetsCriterion, product } from './numbers.ts';
+import { below, meetsCriterion } from './numbers.ts';
+import type { OrderedLayer } from './order.ts';
 import { BPCS_CAUSE_LOWEST_FREQUENCY, BPCS_LAYERS_PER_SCENARIO, resolvedPolicy } from '../vocabulary/policy.ts';
 import { sifRequirement } from './requirement.ts';
 
@@ -21,6 +24,11 @@ export interface AssessInput {
   bpcs?: BpcsFacts;
   /** The model's functions by tag; built from the model when absent (give it when assessing many scenarios). */
   functions?: ReadonlyMap<string, PlantFunction>;
+  /**
+   * The independence findings as they stand once the cause's narrowing (cause only=) is accepted: the "if open findings
+   * are accepted" figure uses them, so it equals the figure the tool gives after that acceptance.
+   */
+  findingsIfAccepted?: readonly Finding[];
   /** How many alternative credit sets to list (default 5). */
   alternatives?: number;
 }
@@ -56,11 +64,24 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
     frequency = { value: cause.frequency, origin: 'model', ...(cause.basis !== undefined ? { basis: cause.basis } : {}) };
   } else if (cause.typical !== undefined) {
     const row = TYPICAL_CAUSE_FREQUENCIES[cause.typical];
-    frequency = { value: row.frequency, origin: 'default', basis: `${row.title}: ${row.source}` };
+    if (PER_100_M_ROWS.has(cause.typical) && cause.pipeMetres !== undefined) {
+      // The row is per 100 m of pipe (CCPS 2001 Table 5.1); the loader refuses a piping row without a length.
+      const value = (row.frequency * cause.pipeMetres) / PER_ROW_METRES;
+      frequency = { value, origin: 'default', basis: `${row.title} x ${cause.pipeMetres} m / ${PER_ROW_METRES} m: ${row.source}` };
+    } else {
+      frequency = { value: row.frequency, origin: 'default', basis: `${row.title}: ${row.source}` };
+    }
   } else {
     throw new Error(`scenario ${scenario.id}: the cause has no frequency (the loader should have refused the model)`);
   }
   const perFigure = { after: frequency.value, 'if-accepted': frequency.value };
+  if (frequency.origin === 'model' && frequency.basis === undefined) {
+    mine.push(limitFinding(model, scenario.id, 'cause-no-basis', {
+      tags: [],
+      parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : cause.element !== undefined ? { tag: cause.element } : {}) }],
+      message: `the cause frequency ${formatFrequency(frequency.value)} is given without a basis; it is used as given, but record where it comes from (basis=) or accept it`,
+    }));
+  }
   if (frequency.origin === 'model' && causeIsBpcsLoopFailure(model, scenario, facts) && below(frequency.value, BPCS_CAUSE_LOWEST_FREQUENCY)) {
     const f = limitFinding(model, scenario.id, 'bpcs-cause-frequency-low', {
       tags: cause.function !== undefined ? [cause.function] : [],
@@ -71,46 +92,6 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
     for (const figure of FIGURES) if (inForce(f, figure)) perFigure[figure] = BPCS_CAUSE_LOWEST_FREQUENCY;
   }
   return { label, frequency, perFigure };
-}
-
-type ModifierEntry = ScenarioAssessment['modifiers'][number];
-
-function assessModifiers(model: Model, scenario: Scenario, harm: string, mine: Finding[]): ModifierEntry[] {
-  const presenceLimit = resolvedPolicy(model).presenceLimit;
-  const seen = new Map<string, number>();
-  return (scenario.modifiers ?? []).map((m) => {
-    const count = (seen.get(m.kind) ?? 0) + 1;
-    seen.set(m.kind, count);
-    const tag = count === 1 ? m.kind : `${m.kind}-${count}`;
-    const entry: ModifierEntry = {
-      kind: m.kind,
-      ...(m.title !== undefined ? { title: m.title } : {}),
-      probability: m.probability,
-      ...(m.basis !== undefined ? { basis: m.basis } : {}),
-      allowed: true,
-    };
-    let f: Finding | undefined;
-    if (harm !== 'people') {
-      f = limitFinding(model, scenario.id, 'modifier-not-allowed', {
-        tags: [tag],
-        parties: [],
-        message: `the ${m.kind} modifier (${formatProbability(m.probability)}) applies only to harm to people; category \`${scenario.category}\` is ${harm}, so it is not applied`,
-      });
-    } else if (m.kind === 'presence' && above(m.probability, presenceLimit)) {
-      f = limitFinding(model, scenario.id, 'presence-above-limit', {
-        tags: [tag],
-        parties: [],
-        message: `presence ${formatProbability(m.probability)} is above the policy limit ${formatProbability(presenceLimit)}; it is not applied until a justification accepts it`,
-      });
-    }
-    if (f) {
-      mine.push(f);
-      entry.allowed = !inForce(f, 'after');
-      entry.allowedIfAccepted = !inForce(f, 'if-accepted');
-      entry.finding = f.key;
-    }
-    return entry;
-  });
 }
 
 interface Conflict {
@@ -207,6 +188,18 @@ function applyIndependence(findings: readonly Finding[], works: Map<string, Laye
   return againstLayer;
 }
 
+/** The same sorting as applyIndependence, without touching the layers' reasons: for the "if accepted" figure. */
+function independenceEffects(findings: readonly Finding[], works: Map<string, LayerWork>): { conflicts: Conflict[]; againstLayer: Map<string, Finding[]> } {
+  const conflicts: Conflict[] = [];
+  const againstLayer = new Map<string, Finding[]>();
+  for (const f of findings) {
+    const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    if (layers.length === 2 && layers[0] !== layers[1]) conflicts.push({ a: layers[0]!, b: layers[1]!, finding: f });
+    else if (layers.length >= 1) againstLayer.set(layers[0]!, [...(againstLayer.get(layers[0]!) ?? []), f]);
+  }
+  return { conflicts, againstLayer };
+}
+
 function verdictOf(w: LayerWork, eligible: boolean, selected: boolean): LayerAssessment['verdict'] {
   const removes = (r: LayerReason) => r.effect === 'voids' || r.effect === 'unverified';
   const binding = (r: LayerReason) => !r.accepted && r.severity !== 'note';
@@ -218,7 +211,18 @@ function verdictOf(w: LayerWork, eligible: boolean, selected: boolean): LayerAss
   return 'independent';
 }
 
+/**
+ * Assesses once in low-demand terms; when the demand on the scenario's SIF turns out to exceed once a year, assesses
+ * again with that SIF judged by PFH (IEC 61511-1:2016 Table 5) instead of PFD (Table 4).
+ */
 export function assessScenario(input: AssessInput): AssessOutput {
+  const first = assessOnce(input, undefined);
+  const sif = first.assessment.sif;
+  if (sif?.mode === 'high-demand' && sif.function !== undefined) return assessOnce(input, sif.function);
+  return first;
+}
+
+function assessOnce(input: AssessInput, highDemandSif: string | undefined): AssessOutput {
   const { model, scenario } = input;
   const facts = input.bpcs ?? bpcsFactsOf(model);
   const category = model.categories.find((c) => c.id === scenario.category);
@@ -228,13 +232,13 @@ export function assessScenario(input: AssessInput): AssessOutput {
 
   const functions = input.functions ?? new Map(model.functions.map((f) => [f.tag, f]));
   const cause = assessCause(model, scenario, facts, functions, mine);
-  const modifiers = assessModifiers(model, scenario, category.harm, mine);
-  const enablers = (scenario.enablers ?? []).map((e) => ({ title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}) }));
+  const conditions = assessConditions(model, scenario, category.harm, mine);
+  const { enablers, modifiers, modifierProduct } = conditions;
 
   const works: LayerWork[] = [];
   for (const claim of scenario.layers ?? []) {
     const fn = functions.get(claim.function);
-    if (fn) works.push(assessLayerLimits({ model, scenario, facts }, claim, fn));
+    if (fn) works.push(assessLayerLimits({ model, scenario, facts, ...(highDemandSif !== undefined ? { highDemandSif } : {}) }, claim, fn));
   }
   for (const w of works) mine.push(...w.findings);
   const byTag = new Map(works.map((w) => [w.fn.tag, w]));
@@ -245,13 +249,17 @@ export function assessScenario(input: AssessInput): AssessOutput {
     byTag.get(c.b)!.reasons.push(reasonOf(c.finding, 'conflict', c.a));
   }
   if (countFinding) for (const w of works.filter((x) => x.bpcs)) w.reasons.push(reasonOf(countFinding, 'conflict'));
+  const groupConflicts = [...conflicts];
   const againstLayer = applyIndependence(scenarioFindings, byTag, conflicts);
+  const narrowed = input.findingsIfAccepted ? independenceEffects(input.findingsIfAccepted.filter((f) => f.scenario === scenario.id), byTag) : undefined;
+  const conflictsFor = (figure: Figure) => (figure === 'if-accepted' && narrowed ? [...groupConflicts, ...narrowed.conflicts] : conflicts);
+  const againstFor = (figure: Figure) => (figure === 'if-accepted' && narrowed ? narrowed.againstLayer : againstLayer);
 
   const eligible = (w: LayerWork, figure: Figure) =>
-    !w.noCredit[figure] && !(againstLayer.get(w.fn.tag) ?? []).some((f) => inForce(f, figure));
+    !w.noCredit[figure] && !(againstFor(figure).get(w.fn.tag) ?? []).some((f) => inForce(f, figure));
   const problemFor = (figure: Figure): CreditProblem => ({
     candidates: works.filter((w) => eligible(w, figure)).map((w) => ({ tag: w.fn.tag, pfd: w.pfd[figure], ...(w.bpcs ? { group: 'bpcs' } : {}) })),
-    conflicts: conflicts.filter((c) => inForce(c.finding, figure)).map((c) => [c.a, c.b] as const),
+    conflicts: conflictsFor(figure).filter((c) => inForce(c.finding, figure)).map((c) => [c.a, c.b] as const),
     ...(countFinding && inForce(countFinding, figure) ? { groupLimits: { bpcs: BPCS_LAYERS_PER_SCENARIO } } : {}),
   });
   const after = bestCreditableSet(problemFor('after'), input.alternatives ?? 5);
@@ -259,19 +267,24 @@ export function assessScenario(input: AssessInput): AssessOutput {
   const selectedAfter = new Set(after.best);
   const selectedIfAccepted = new Set(ifAccepted.best);
 
-  const enablerProduct = product(enablers.map((e) => e.probability));
-  const modifierProduct = (figure: Figure | 'claimed') =>
-    product(modifiers.filter((m) => figure === 'claimed' || (figure === 'after' ? m.allowed : m.allowedIfAccepted ?? m.allowed)).map((m) => m.probability));
-  const creditedPfds = (figure: Figure, selected: Set<string>) => works.filter((w) => selected.has(w.fn.tag)).map((w) => w.pfd[figure]);
-  const mitigatedClaimed = product([cause.frequency.value, enablerProduct, modifierProduct('claimed'), ...works.map((w) => w.claimed.value)]);
-  const unprotectedAfter = product([cause.perFigure.after, enablerProduct, modifierProduct('after')]);
-  const mitigatedAfter = product([unprotectedAfter, ...creditedPfds('after', selectedAfter)]);
-  const mitigatedIfAccepted = product([
-    cause.perFigure['if-accepted'],
-    enablerProduct,
-    modifierProduct('if-accepted'),
-    ...creditedPfds('if-accepted', selectedIfAccepted),
-  ]);
+  const enablerProduct = conditions.enablerProduct;
+  // The SIF the scenario is judged by: the first credited one, else the first claimed.
+  const sifWork = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag)) ?? works.find((w) => w.fn.kind === 'sif');
+  const ordered = (w: LayerWork, pfd: number): OrderedLayer => ({ tag: w.fn.tag, pfd, acts: w.order.acts });
+  const figureOf = (figure: Figure | 'claimed', credited: readonly LayerWork[], cause: number) => {
+    const hasSif = sifWork !== undefined && credited.includes(sifWork);
+    const pfh = sifWork === undefined ? undefined : figure === 'claimed' ? claimedPfhOf(sifWork.fn)?.value : (sifWork.pfh?.[figure] ?? claimedPfhOf(sifWork.fn)?.value);
+    return mitigatedFigure({
+      cause,
+      enablers: enablerProduct(figure),
+      modifiers: modifierProduct(figure),
+      credited: credited.map((w) => ordered(w, figure === 'claimed' ? w.claimed.value : w.pfd[figure])),
+      ...(hasSif ? { sif: { tag: sifWork!.fn.tag, ...(pfh !== undefined ? { pfh } : {}) } } : {}),
+    }).mitigated;
+  };
+  const mitigatedClaimed = figureOf('claimed', works, cause.frequency.value);
+  const mitigatedAfter = figureOf('after', works.filter((w) => selectedAfter.has(w.fn.tag)), cause.perFigure.after);
+  const mitigatedIfAccepted = figureOf('if-accepted', works.filter((w) => selectedIfAccepted.has(w.fn.tag)), cause.perFigure['if-accepted']);
   const meetsAfter = meetsCriterion(mitigatedAfter, category.tolerable, edge);
 
   const layers: LayerAssessment[] = works.map((w) => {
@@ -290,22 +303,31 @@ export function assessScenario(input: AssessInput): AssessOutput {
       ...(f?.solver !== undefined ? { solver: f.solver } : {}),
       ...(f?.system !== undefined ? { system: f.system } : {}),
       reasons: w.reasons,
+      // The SIF the scenario is judged by is the reference point of the order, so it has none of its own.
+      ...(w !== sifWork ? { acts: w.order.acts, ...(w.order.stated ? { actsStated: true } : {}) } : {}),
+      ...(w.claimedPfh !== undefined ? { claimedPfh: w.claimedPfh } : {}),
+      ...(w.pfh !== undefined && !w.noCredit.after ? { allowedPfh: w.pfh.after } : {}),
     };
   });
 
-  const sifTag = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag))?.fn.tag ?? works.find((w) => w.fn.kind === 'sif')?.fn.tag;
+  const sifTag = sifWork?.fn.tag;
   const sif = sifRequirement({
     tolerable: category.tolerable,
     edge,
     causeFrequency: cause.perFigure.after,
-    enablers: enablerProduct,
+    enablers: enablerProduct('after'),
     modifiers: modifierProduct('after'),
-    credited: works.filter((w) => selectedAfter.has(w.fn.tag)).map((w) => ({ tag: w.fn.tag, kind: w.fn.kind, pfd: w.pfd.after })),
+    credited: works
+      .filter((w) => selectedAfter.has(w.fn.tag))
+      .map((w) => ({ tag: w.fn.tag, kind: w.fn.kind, pfd: w.pfd.after, acts: w.order.acts, ...(w.order.stated ? { stated: true } : {}) })),
     ...(sifTag !== undefined ? { sif: sifTag } : {}),
     meets: meetsAfter,
   });
 
-  const alternatives: CreditAlternative[] = after.alternatives.map((a) => ({ ...a, mitigated: unprotectedAfter * a.pfdProduct }));
+  const alternatives: CreditAlternative[] = after.alternatives.map((a) => ({
+    ...a,
+    mitigated: figureOf('after', works.filter((w) => a.layers.includes(w.fn.tag)), cause.perFigure.after),
+  }));
   mine.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
   const assessment: ScenarioAssessment = {
     scenario: scenario.id,

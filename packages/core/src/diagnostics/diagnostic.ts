@@ -74,6 +74,9 @@ export const CODES = {
   BH317: 'date not in YYYY-MM-DD form',
   BH318: 'narrowed cause names an element outside the failing function',
   BH319: 'unknown rule id',
+  BH330: 'per-100 m piping cause without a pipe length',
+  BH331: 'pipe length on a cause that is not a piping row',
+  BH332: 'condition credit limit below 1',
 } as const;
 
 export type DiagnosticCode = keyof typeof CODES;

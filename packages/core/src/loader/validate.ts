@@ -2,7 +2,7 @@
 // and the shape of each scenario. Every problem is reported, each at the narrowest span we have.
 import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
 import { ELEMENT_GROUPS, groupOf, LINK_FIELDS, LINK_TARGETS, SUPPORT_LINK_KINDS, type ElementGroup } from '../model/kinds.ts';
-import { TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction } from '../model/schema.ts';
+import { TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction, type Scenario } from '../model/schema.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { didYouMean, Suggester } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
@@ -10,6 +10,7 @@ import { spanAt } from './schema-issues.ts';
 import { findCycles, longestChain, MAX_DEPENDENCY_DEPTH } from './cycles.ts';
 import { RULE_IDS } from '../rules/registry.ts';
 import { ASSESS_RULES } from '../assess/limits.ts';
+import { PER_100_M_ROWS } from '../assess/defaults.ts';
 import { JUSTIFICATION_RULES } from '../justify/apply.ts';
 
 const KNOWN_RULE_IDS: ReadonlySet<string> = new Set([...RULE_IDS, ...ASSESS_RULES.map((r) => r.id), ...JUSTIFICATION_RULES.map((r) => r.id)]);
@@ -263,6 +264,7 @@ class Validator {
         if (fn.kind === 'sif' && fn.sil !== undefined && !(Number.isInteger(fn.sil) && fn.sil >= 1 && fn.sil <= 4)) {
           this.push('BH316', `SIL ${fn.sil} is not one of 1, 2, 3, 4`, this.path('functions', i, 'sil'));
         }
+        if (fn.kind === 'sif') this.positive(fn.pfh, this.path('functions', i, 'pfh'), 'PFH');
         return;
       case 'alarm':
         this.role(i, 'sensors', fn.sensors, ['sensor']);
@@ -284,6 +286,12 @@ class Validator {
     const policy = model.policy;
     if (policy?.minResponseMinutes !== undefined) this.positive(policy.minResponseMinutes, 'policy.minResponseMinutes', 'minimum response time');
     this.probability(policy?.presenceLimit, 'policy.presenceLimit', 'presence limit');
+    const creditLimit = policy?.conditionCreditLimit;
+    if (creditLimit !== undefined && !(Number.isFinite(creditLimit) && creditLimit >= 1)) {
+      this.push('BH332', `condition credit limit ${creditLimit} is below 1`, 'policy.conditionCreditLimit', {
+        help: 'the limit is a factor of risk reduction: 1 allows no credit, 100 allows two orders of magnitude',
+      });
+    }
   }
 
   private checkScenario(i: number): void {
@@ -326,6 +334,7 @@ class Validator {
       this.push('BH310', 'the cause gives both a frequency and a typical value', at('cause', 'typical'), { help: 'keep one of them' });
     }
     this.positive(cause.frequency, at('cause', 'frequency'), 'frequency');
+    this.checkPipeLength(cause, at);
     (scenario.enablers ?? []).forEach((e, j) => this.probability(e.probability, at('enablers', j, 'probability'), 'probability'));
     (scenario.modifiers ?? []).forEach((m, j) => this.probability(m.probability, at('modifiers', j, 'probability'), 'probability'));
     const claimed = new Map<string, number>();
@@ -351,6 +360,22 @@ class Validator {
         this.push('BH309', `\`${layer.function}\` fails in the cause and cannot also protect against it`, path);
       }
     });
+  }
+
+  /** The piping rows of the typical table are per 100 m of pipe (CCPS 2001 Table 5.1): without a length they mean nothing. */
+  private checkPipeLength(cause: Scenario['cause'], at: (...rest: (string | number)[]) => PathRef): void {
+    const { name } = this.input;
+    const piping = cause.typical !== undefined && PER_100_M_ROWS.has(cause.typical);
+    if (piping && cause.pipeMetres === undefined) {
+      this.push('BH330', `\`${name('typical')}=${cause.typical}\` is per 100 m of pipe; the cause gives no length`, at('cause', 'typical'), {
+        help: `add ${name('pipeMetres')}=250 (the metres of pipe the scenario covers), or give frequency= with its basis`,
+      });
+    } else if (!piping && cause.pipeMetres !== undefined) {
+      this.push('BH331', `\`${name('pipeMetres')}\` scales only the per-100 m piping rows of \`${name('typical')}\``, at('cause', 'pipeMetres'), {
+        help: `use it with ${name('typical')}=piping-leak or piping-breach, or leave it out`,
+      });
+    }
+    this.positive(cause.pipeMetres, at('cause', 'pipeMetres'), 'pipe length');
   }
 
   private checkRuleSettings(): void {

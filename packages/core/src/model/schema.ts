@@ -77,6 +77,9 @@ export const Policy = z
     }),
     minResponseMinutes: z.number().optional().meta({ description: 'Least time available for operator response' }),
     presenceLimit: Probability.optional().meta({ description: 'Highest presence probability creditable' }),
+    conditionCreditLimit: z.number().optional().meta({
+      description: 'Most combined credit (a factor, 100 = two orders of magnitude) taken for enablers and modifiers together',
+    }),
     basis: Text.optional(),
     ...commentFields,
   })
@@ -172,6 +175,8 @@ export const Sif = z
     ...instrumentedFields,
     sil: z.number().optional().meta({ description: 'SIL claimed, 1 to 4' }),
     ...claimedPfd,
+    pfh: z.number().optional().meta({ description: 'Dangerous failure rate, per hour (PFH), used in high-demand mode' }),
+    pfhBasis: Text.optional(),
     ...commentFields,
   })
   .meta({ id: 'Sif', description: 'A safety instrumented function' });
@@ -191,6 +196,7 @@ export const AlarmResponse = z
     finals: TagList.optional(),
     minutes: z.number().meta({ description: 'Time available for the response, minutes' }),
     ...claimedPfd,
+    hraBasis: Text.optional().meta({ description: 'Documented human-reliability analysis that supports a PFD below 0.1' }),
     ...commentFields,
   })
   .meta({ id: 'AlarmResponse', description: 'An alarm with operator response' });
@@ -241,6 +247,7 @@ export const Cause = z
     }),
     frequency: PerYear.optional(),
     typical: z.enum(TYPICAL_CAUSES).optional(),
+    pipeMetres: z.number().optional().meta({ description: 'Length of pipe, metres: scales the per-100 m piping rows of typical=' }),
     basis: Text.optional(),
     ...commentFields,
   })
@@ -261,8 +268,15 @@ export const Modifier = z
   })
   .meta({ id: 'Modifier' });
 
+export const ACTS = ['before', 'after'] as const;
 export const LayerClaim = z
-  .strictObject({ function: Tag, pfd: Probability.optional(), basis: Text.optional(), ...commentFields })
+  .strictObject({
+    function: Tag,
+    pfd: Probability.optional(),
+    basis: Text.optional(),
+    acts: z.enum(ACTS).optional().meta({ description: 'Whether the layer acts before or after the SIF; absent: the default for its kind' }),
+    ...commentFields,
+  })
   .meta({ id: 'LayerClaim' });
 
 export const Scenario = z

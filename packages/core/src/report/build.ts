@@ -46,6 +46,7 @@ const POLICY_SWITCHES = [
   { field: 'sharedSolver', name: 'shared-solver' },
   { field: 'minResponseMinutes', name: 'min-response-minutes' },
   { field: 'presenceLimit', name: 'presence-limit' },
+  { field: 'conditionCreditLimit', name: 'condition-credit-limit' },
 ] as const;
 
 function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], undefined> } {
@@ -131,6 +132,10 @@ function layerReport(
     solver: layer.solver,
     system: layer.system,
     reasons: layer.reasons?.map((r) => present({ ...r })),
+    acts: layer.acts,
+    actsStated: layer.actsStated,
+    claimedPfh: layer.claimedPfh ? present({ ...layer.claimedPfh }) : undefined,
+    allowedPfh: layer.allowedPfh,
   });
 }
 

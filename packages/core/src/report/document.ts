@@ -111,6 +111,12 @@ const Layer = z
     solver: z.string().optional().meta({ description: 'The controller or logic solver the layer runs in' }),
     system: z.enum(['bpcs', 'sis', 'machine', 'relay']).optional(),
     reasons: z.array(LayerReason).optional().meta({ description: 'What each finding that bears on the layer does to its credit' }),
+    acts: z.enum(['before', 'after', 'unknown']).optional().meta({
+      description: "Whether it acts before or after the scenario's SIF; unknown is taken the conservative way in each figure",
+    }),
+    actsStated: z.boolean().optional().meta({ description: 'The layer line states the order (acts=); otherwise the default for its kind' }),
+    claimedPfh: Sourced.optional().meta({ description: "High demand only: the SIF's PFH (per hour) as claimed or from its SIL band" }),
+    allowedPfh: z.number().optional().meta({ description: 'High demand only: the PFH (per hour) the rules allow' }),
   })
   .meta({ id: 'LayerReport' });
 
@@ -135,6 +141,10 @@ const SifRequirement = z
     note: z.string(),
     requiredPfh: z.number().optional().meta({ description: 'High demand only: the PFH (per hour) the SIF must reach' }),
     lowDemandSil: z.number().optional(),
+    noReductionNeeded: z.boolean().optional().meta({ description: 'The other credited layers already meet the criterion' }),
+    otherReading: z.string().optional().meta({ description: 'At an exact decade edge, the SIL under the other edge convention' }),
+    order: z.string().optional().meta({ description: 'Which credited layers act before and after the SIF' }),
+    formula: z.string().optional().meta({ description: 'High demand only: how the hazard frequency is worked out, and its source' }),
   })
   .meta({ id: 'SifRequirement' });
 
@@ -159,7 +169,16 @@ const Scenario = z
         description: "The cause's element set, sorted; null when the analysis did not give it",
       }),
     }),
-    enablers: z.array(z.strictObject({ title: z.string(), probability: z.number(), basis: z.string().optional() })),
+    enablers: z.array(
+      z.strictObject({
+        title: z.string(),
+        probability: z.number(),
+        basis: z.string().optional(),
+        allowed: z.boolean().meta({ description: 'Applied in the headline figure' }),
+        allowedIfAccepted: z.boolean().optional(),
+        finding: z.string().optional().meta({ description: 'The key of the finding that bars it' }),
+      }),
+    ),
     modifiers: z.array(
       z.strictObject({
         kind: z.string(),

@@ -4,7 +4,7 @@
 import type { Finding } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
-import type { ModelLocator } from './locate.ts';
+import { FACTOR_RULES, type ModelLocator } from './locate.ts';
 
 const KINDS: Record<Finding['severity'], string> = {
   'voids-credit': 'Credit voided',
@@ -15,6 +15,8 @@ const KINDS: Record<Finding['severity'], string> = {
 function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span; role?: string } {
   const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
   if (layer?.tag) return { span: locate.layer(finding.scenario, layer.tag), role: `the claim of layer ${layer.tag}` };
+  const factor = finding.scenario && FACTOR_RULES.has(finding.rule) ? locate.factor(finding.scenario, finding.key) : undefined;
+  if (factor) return { span: factor, role: `the enabler or modifier of ${finding.scenario}` };
   if (finding.scenario) return { span: locate.cause(finding.scenario), role: `the cause of ${finding.scenario}` };
   return {};
 }

@@ -201,6 +201,14 @@ function causeFigures(s: ScenarioReport): string {
   return `${after}${accepted}`;
 }
 
+/** Before or after the SIF, and whether the model says so or the default for the kind of layer was used. */
+function actsText(s: ScenarioReport, l: ScenarioReport['layers'][number]): string {
+  const pfh = l.claimedPfh ? `; high demand, judged by PFH ${formatProbability(l.allowedPfh ?? l.claimedPfh.value)} /h` : '';
+  if (l.function === s.sif?.function) return `the SIF${pfh}`;
+  const acts = l.acts === 'unknown' || l.acts === undefined ? 'order unknown' : `acts ${l.acts}`;
+  return `${acts} (${l.actsStated ? 'stated' : 'default'})${pfh}`;
+}
+
 function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): Block {
   const blocks: Block[] = [
     { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''] },
@@ -223,7 +231,12 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
       caption: `Enabling conditions and conditional modifiers of ${s.id}`,
       head: ['Factor', 'Probability', 'Applied', 'Basis'],
       rows: [
-        ...s.enablers.map((e) => [[`enabling condition: ${e.title}`], [formatProbability(e.probability)], ['yes'], [e.basis ?? '']]),
+        ...s.enablers.map((e) => [
+          [`enabling condition: ${e.title}`],
+          [formatProbability(e.probability)],
+          [e.allowed ? 'yes' : `no${e.allowedIfAccepted ? ', yes if accepted' : ''}`, ...(e.finding ? [' (', code(e.finding), ')'] : [])],
+          [e.basis ?? ''],
+        ]),
         ...s.modifiers.map((m) => [
           [`${m.kind} modifier${m.title ? `: ${m.title}` : ''}`],
           [formatProbability(m.probability)],
@@ -239,10 +252,10 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
     {
       type: 'table',
       caption: `Layers claimed in ${s.id} and their verdicts`,
-      head: ['Layer', 'Kind', 'Claimed PFD', 'Allowed PFD', 'Verdict', 'Credited after independence', 'Credited if accepted'],
+      head: ['Layer', 'Kind and order', 'Claimed PFD', 'Allowed PFD', 'Verdict', 'Credited after independence', 'Credited if accepted'],
       rows: s.layers.map((l) => [
         [code(l.function)],
-        [l.kind],
+        [`${l.kind}; ${actsText(s, l)}`],
         [sourcedProbability(l.claimedPfd)],
         [formatProbability(l.allowedPfd) + (l.allowedPfdIfAccepted !== undefined ? ` (${formatProbability(l.allowedPfdIfAccepted)} if accepted)` : '')],
         verdictCell(l),

@@ -5,6 +5,9 @@ import type { SpanMap } from '../bulk/to-model.ts';
 import { spanAt } from '../loader/schema-issues.ts';
 import type { Model } from '../model/schema.ts';
 
+/** Findings about one enabler or modifier: outputs point at its line, not at the cause. */
+export const FACTOR_RULES: ReadonlySet<string> = new Set(['condition-no-basis', 'modifier-not-allowed', 'presence-above-limit']);
+
 export class ModelLocator {
   private readonly scenarioIndex: Map<string, number>;
   private readonly elementIndex: Map<string, number>;
@@ -56,6 +59,23 @@ export class ModelLocator {
     const cause = this.model.scenarios[i]!.cause;
     const field = cause.only !== undefined ? 'only' : cause.function !== undefined ? 'function' : cause.element !== undefined ? 'element' : 'external';
     return this.at(['scenarios', i, 'cause', field]);
+  }
+
+  /**
+   * The enabler or modifier line a finding about one factor names by the last part of its key: `enabler-2` is the
+   * second enabler, `presence` the first presence modifier, `ignition-2` the second ignition modifier.
+   */
+  factor(scenario: string, findingKey: string): Span | undefined {
+    const i = this.scenarioIndex.get(scenario);
+    if (i === undefined) return undefined;
+    const tag = findingKey.slice(findingKey.lastIndexOf(':') + 1);
+    const s = this.model.scenarios[i]!;
+    const enabler = /^enabler-(\d+)$/.exec(tag);
+    if (enabler) return s.enablers?.[Number(enabler[1]) - 1] ? this.at(['scenarios', i, 'enablers', Number(enabler[1]) - 1, 'title']) : undefined;
+    const [, kind, nth] = /^([a-z]+)(?:-(\d+))?$/.exec(tag) ?? [];
+    let seen = 0;
+    const j = (s.modifiers ?? []).findIndex((m) => m.kind === kind && ++seen === Number(nth ?? 1));
+    return j >= 0 ? this.at(['scenarios', i, 'modifiers', j, 'kind']) : undefined;
   }
 
   scenario(id: string): Span | undefined {

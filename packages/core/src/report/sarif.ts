@@ -6,7 +6,7 @@ import { justifiedKeyOf } from '../justify/apply.ts';
 import type { SeverityLevel } from '../model/schema.ts';
 import type { ReportInput } from './build.ts';
 import type { ReportDocument, ReportFinding } from './document.ts';
-import { ModelLocator } from './locate.ts';
+import { FACTOR_RULES, ModelLocator } from './locate.ts';
 import { policyText } from './text.ts';
 
 export const SARIF_SCHEMA_URI = 'https://json.schemastore.org/sarif-2.1.0.json';
@@ -78,6 +78,10 @@ class ResultBuilder {
     if (justified !== undefined) return this.locator.justification(justified);
     const layer = f.parties.find((p) => p.role === 'layer' && p.tag !== undefined);
     if (layer?.tag) return this.locator.layer(f.scenario, layer.tag);
+    if (f.scenario !== undefined && FACTOR_RULES.has(f.rule)) {
+      const factor = this.locator.factor(f.scenario, f.key);
+      if (factor) return factor;
+    }
     if (f.scenario !== undefined) return this.locator.cause(f.scenario) ?? this.locator.scenario(f.scenario);
     return undefined;
   }

@@ -71,19 +71,22 @@ export function silText(sil: number): string {
   return `SIL ${sil}`;
 }
 
-/** The SIF requirement as one sentence, then the assessment's own note on demand mode. */
+/** The SIF requirement as one sentence, the other reading at an exact edge, then the note on demand mode and order. */
 export function sifText(s: ScenarioReport): Rich | undefined {
   const sif = s.sif;
   if (!sif) return undefined;
   const who: Rich = sif.function ? ['Required of ', code(sif.function), ': '] : ['A SIF that closes the gap would need: '];
   const relation = edgeRelation(s.edge);
-  const pfh = sif.requiredPfh !== undefined ? ` PFH ${relation} ${formatProbability(sif.requiredPfh)} /h` : '';
-  const band =
-    sif.mode === 'high-demand' && sif.pfhBand
-      ? ` High demand:${pfh}, the PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h${sif.lowDemandSil !== undefined ? ` (the low-demand table would give ${silText(sif.lowDemandSil)})` : ''}.`
-      : '';
   const note = sif.note ? ` ${sif.note[0]!.toUpperCase()}${sif.note.slice(1)}${/[.!?]$/.test(sif.note) ? '' : '.'}` : '';
-  return [...who, `PFD ${relation} ${formatProbability(sif.requiredPfd)} (RRF ${relation === '<' ? '>' : '>='} ${formatRatio(sif.requiredRrf)}): ${silText(sif.sil)}.${band}${note}`];
+  if (sif.noReductionNeeded) return [...who, `no risk reduction (the other credited layers already meet the criterion).${note}`];
+  const other = sif.otherReading !== undefined ? ` At this exact edge, the other reading: ${sif.otherReading}.` : '';
+  const pfd = `PFD ${relation} ${formatProbability(sif.requiredPfd)} (RRF ${relation === '<' ? '>' : '>='} ${formatRatio(sif.requiredRrf)})`;
+  if (sif.mode === 'high-demand' && sif.requiredPfh !== undefined) {
+    const band = sif.pfhBand ? `, the PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h` : '';
+    const low = sif.lowDemandSil !== undefined ? ` In low-demand terms ${pfd}, ${silText(sif.lowDemandSil)}, which does not apply at this demand.` : '';
+    return [...who, `high demand: PFH ${relation} ${formatProbability(sif.requiredPfh)} /h: ${silText(sif.sil)}${band}.${other}${low}${note}`];
+  }
+  return [...who, `${pfd}: ${silText(sif.sil)}.${other}${note}`];
 }
 
 export function policyText(doc: ReportDocument): string[] {

@@ -110,6 +110,12 @@ export interface LayerAssessment {
   system?: 'bpcs' | 'sis' | 'machine' | 'relay';
   /** Each finding that bears on the layer and what it does, in the order the assessment applied them. */
   reasons?: LayerReason[];
+  /** Whether it acts before or after the scenario's SIF (unknown: taken the conservative way), and whether the model says so. */
+  acts?: 'before' | 'after' | 'unknown';
+  actsStated?: boolean;
+  /** The scenario's SIF in high demand: the PFH (per hour) claimed and the PFH the rules allow. */
+  claimedPfh?: Sourced;
+  allowedPfh?: number;
 }
 
 /** What one finding does to a layer's credit. */
@@ -140,6 +146,14 @@ export interface SifRequirement {
   /** High demand only: the PFH (per hour) the SIF must reach, and the SIL the low-demand table would give. */
   requiredPfh?: number;
   lowDemandSil?: number;
+  /** The other layers already meet the criterion under its edge convention: no risk reduction is asked of the SIF. */
+  noReductionNeeded?: boolean;
+  /** At an exact decade edge, the SIL the other edge convention would give, in words. */
+  otherReading?: string;
+  /** The order used: which credited layers act before and after the SIF. */
+  order?: string;
+  /** High demand: how the hazard frequency is worked out, and its source. */
+  formula?: string;
 }
 
 export interface CreditAlternative {
@@ -165,7 +179,8 @@ export interface ScenarioAssessment {
     /** The cause's element set as the rules compared it (a narrowed cause: the whole loop until accepted), sorted. */
     elements?: string[];
   };
-  enablers: { title: string; probability: number; basis?: string }[];
+  /** allowed, allowedIfAccepted, finding: as for modifiers (an enabler with no basis is not applied until accepted). */
+  enablers: { title: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
   /** allowed: in the headline figure; allowedIfAccepted: in the "if accepted" figure; finding: the key that bars it. */
   modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
   layers: LayerAssessment[];
