@@ -32,8 +32,7 @@ export const TYPICAL_CAUSE_FREQUENCIES: Readonly<Record<TypicalCause, TypicalCau
   'vessel-failure': { title: 'Pressure vessel residual failure', frequency: 1e-6, source: TABLE_5_1 },
 };
 
-/** Rows given per 100 m of pipe: the cause must say how many metres (pipe-metres), and the figure scales with it. */
-export const PER_100_M_ROWS: ReadonlySet<TypicalCause> = new Set<TypicalCause>(['piping-leak', 'piping-breach']);
+export { PER_100_M_ROWS } from '../model/schema.ts';
 export const PER_ROW_METRES = 100;
 
 /**

@@ -2,18 +2,15 @@
 // and the shape of each scenario. Every problem is reported, each at the narrowest span we have.
 import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
 import { ELEMENT_GROUPS, groupOf, LINK_FIELDS, LINK_TARGETS, SUPPORT_LINK_KINDS, type ElementGroup } from '../model/kinds.ts';
-import { TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction, type Scenario } from '../model/schema.ts';
+import { PER_100_M_ROWS, TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction, type Scenario } from '../model/schema.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { didYouMean, Suggester } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
 import { spanAt } from './schema-issues.ts';
 import { findCycles, longestChain, MAX_DEPENDENCY_DEPTH } from './cycles.ts';
-import { RULE_IDS } from '../rules/registry.ts';
-import { ASSESS_RULES } from '../assess/limits.ts';
-import { PER_100_M_ROWS } from '../assess/defaults.ts';
-import { JUSTIFICATION_RULES } from '../justify/apply.ts';
+import { ALL_RULE_IDS } from '../vocabulary/rule-ids.ts';
 
-const KNOWN_RULE_IDS: ReadonlySet<string> = new Set([...RULE_IDS, ...ASSESS_RULES.map((r) => r.id), ...JUSTIFICATION_RULES.map((r) => r.id)]);
+const KNOWN_RULE_IDS = ALL_RULE_IDS;
 
 export interface Origins {
   elements: number[];

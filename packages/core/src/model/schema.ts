@@ -235,6 +235,9 @@ export const TYPICAL_CAUSES = [
 
 export const CAUSE_DIRECTIONS = ['open', 'closed', 'on', 'off', 'high', 'low'] as const;
 
+/** Rows given per 100 m of pipe: the cause must say how many metres (pipe-metres), and the figure scales with it. */
+export const PER_100_M_ROWS: ReadonlySet<(typeof TYPICAL_CAUSES)[number]> = new Set(['piping-leak', 'piping-breach'] as const);
+
 export const Cause = z
   .strictObject({
     function: Tag.optional(),
