@@ -1,5 +1,5 @@
 // The bundle split: @bulkhead/layout's main entry must not import elkjs at run time, or the viewer's
-// main chunk would carry 1.6 MB of ELK (TOOLCHAIN.md, "keep ELK out of the main chunk").
+// main chunk would carry 1.6 MB of ELK (the page would wait for it before its first paint).
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 

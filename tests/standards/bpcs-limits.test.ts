@@ -8,7 +8,7 @@ const ALARM = (tag: string, controller: string, pfd: number, sensor = 'LT-2') =>
   `alarm ${tag} sensors=${sensor} raised-in=${controller} operator=OP-1 minutes=20 pfd=${pfd}`;
 
 describe('a BPCS protection layer', () => {
-  // IEC 61511-1:2016 9.3 (2003: 9.4) [clause from memory, substance confirmed], as quoted in RULES.md section 2:
+  // IEC 61511-1:2016 9.3 (2003: 9.4) [clause from memory, substance confirmed], as quoted in docs/rule-basis.md section 2:
   // a BPCS protection layer may claim at most RRF 10, PFD not below 0.1.
   it('may claim no better than PFD 0.1 (RRF 10)', () => {
     expect(BPCS_LAYER_BEST_PFD).toBe(0.1);
@@ -59,7 +59,7 @@ scenario S-1 category=loc
 });
 
 describe('BPCS layers in one scenario', () => {
-  // IEC 61511-1:2016 9.3, as quoted in RULES.md section 2: total BPCS reliance at most two orders of magnitude.
+  // IEC 61511-1:2016 9.3, as quoted in docs/rule-basis.md section 2: total BPCS reliance at most two orders of magnitude.
   it('credits at most two BPCS layers: two orders of magnitude', () => {
     expect(BPCS_LAYERS_PER_SCENARIO).toBe(2);
     const out = assess(`${ALARM('LAH-2', 'C1', 0.1, 'LT-2')}
@@ -76,7 +76,7 @@ scenario S-1 category=loc
     expect(out.assessment.mitigatedClaimed).toBeCloseTo(1e-3, 15);
   });
 
-  // IEC 61511-1:2016 9.3, as quoted in RULES.md section 2: two BPCS layers in the same controller earn at most one
+  // IEC 61511-1:2016 9.3, as quoted in docs/rule-basis.md section 2: two BPCS layers in the same controller earn at most one
   // credit of 10. Older CCPS practice (CCPS, Layer of Protection Analysis, 2001) allowed both under conditions.
   const SAME_CONTROLLER = (policy: string) => `${policy}
 ${ALARM('LAH-2', 'C2', 0.1, 'LT-2')}
@@ -97,7 +97,7 @@ scenario S-1 category=loc
   });
 
   it('credits no BPCS layer when a BPCS failure is the cause under the strict owner policy (policy none)', () => {
-    // Common practice, no source (RULES.md section 2: "stricter owners allow no BPCS layer when a BPCS failure is the cause").
+    // Common practice, no source (docs/rule-basis.md section 2: "stricter owners allow no BPCS layer when a BPCS failure is the cause").
     const out = assess(`policy same-controller-layers=none
 ${ALARM('LAH-2', 'C2', 0.1)}
 scenario S-1 category=loc
@@ -110,7 +110,7 @@ scenario S-1 category=loc
 });
 
 describe('a BPCS loop failure as the cause', () => {
-  // IEC 61511-1:2003 8.2.2 (kept in 2016), as quoted in RULES.md section 2: a BPCS not designed to IEC 61511 may
+  // IEC 61511-1:2003 8.2.2 (kept in 2016), as quoted in docs/rule-basis.md section 2: a BPCS not designed to IEC 61511 may
   // not be assumed to fail dangerously less often than 1e-5 per hour, about 0.0876 per year, conventionally 0.1.
   it('is bounded at 1e-5 per hour, about 0.0876 per year, conventionally 0.1 per year', () => {
     expect(1e-5 * HOURS_PER_YEAR).toBeCloseTo(0.0876, 4);

@@ -1,4 +1,4 @@
-// The defaults shipped for causes and layers, each row against the value RULES.md section 3 quotes from the
+// The defaults shipped for causes and layers, each row against the value docs/rule-basis.md section 3 quotes from the
 // CCPS LOPA guidelines (2001), and their use: a value taken from the table is always marked as a default.
 import { describe, expect, it } from 'vitest';
 import { TYPICAL_CAUSES } from '@bulkhead/core';
@@ -11,7 +11,7 @@ import { assess } from '../core/assess/kit.ts';
 
 describe('typical initiating-event frequencies', () => {
   // CCPS, Layer of Protection Analysis (2001), Table 5.1, "value chosen by a company" column, as quoted in
-  // RULES.md section 3 (ranges confirmed in a CCPS-derived table; row labels from memory).
+  // docs/rule-basis.md section 3 (ranges confirmed in a CCPS-derived table; row labels from memory).
   it.each([
     ['bpcs-loop-failure', 0.1],
     ['regulator-failure', 0.1],
@@ -36,7 +36,7 @@ describe('typical initiating-event frequencies', () => {
   });
 
   it('gives operator failure of a routine procedure per opportunity, not per year', () => {
-    // CCPS 2001 Table 5.1 as quoted in RULES.md section 3: 0.01 per opportunity.
+    // CCPS 2001 Table 5.1 as quoted in docs/rule-basis.md section 3: 0.01 per opportunity.
     expect(OPERATOR_ERROR_PER_OPPORTUNITY.probability).toBe(0.01);
   });
 
@@ -55,7 +55,7 @@ scenario S-1 category=loc
 
 describe('per-100 m piping rows', () => {
   // CCPS, Layer of Protection Analysis (2001), Table 5.1 gives piping leak 1e-3 and full breach 1e-5 per year per
-  // 100 m of pipe (as RULES.md section 3 quotes it): the figure scales with the length of pipe the scenario covers.
+  // 100 m of pipe (as docs/rule-basis.md section 3 quotes it): the figure scales with the length of pipe the scenario covers.
   it.each([
     ['piping-leak', 250, 2.5e-3],
     ['piping-leak', 50, 5e-4],
@@ -83,7 +83,7 @@ scenario S-1 category=loc
 });
 
 describe('typical IPL PFDs', () => {
-  // CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as RULES.md section 3 lists them).
+  // CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as docs/rule-basis.md section 3 lists them).
   it.each([
     ['relief-valve', 0.01],
     ['rupture-disc', 0.01],
@@ -95,7 +95,7 @@ describe('typical IPL PFDs', () => {
   });
 
   it('offers no default credit for a single check valve', () => {
-    // RULES.md section 3 (from memory): a single check valve, little or no credit.
+    // docs/rule-basis.md section 3 (from memory): a single check valve, little or no credit.
     expect(TYPICAL_LAYER_PFDS['check-valve'].pfd).toBeUndefined();
   });
 
@@ -120,7 +120,7 @@ scenario S-1 category=loc
       'RD-IPL': [0.01, 'default'],
       'LAH-2': [0.1, 'default'],
       'LSHH-3': [0.1, 'default'],
-      // IEC 61511-1:2016 Table 4: the conservative edge of SIL 2 is 0.01 (as quoted in RULES.md section 1).
+      // IEC 61511-1:2016 Table 4: the conservative edge of SIL 2 is 0.01 (as quoted in docs/rule-basis.md section 1).
       'SIF-4': [0.01, 'sil-band'],
     });
   });

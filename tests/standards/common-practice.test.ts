@@ -1,4 +1,4 @@
-// Facts of the LOPA trade the assessment must reproduce (DESIGN.md section 6), the demand-mode switch of
+// Facts of the LOPA trade the assessment must reproduce (docs/design.md section 6), the demand-mode switch of
 // IEC 61511-1, and the edge cases of the arithmetic: tiny frequencies, no layers, 25 conflicting layers, ties.
 import { describe, expect, it } from 'vitest';
 import type { Finding } from '../../packages/core/src/vocabulary/types.ts';
@@ -15,7 +15,7 @@ ${sif ? '  layer SIF-1\n' : ''}`;
 
 describe('common practice, no source', () => {
   it('a BPCS loop failure at 0.1/yr, no modifier, one safeguard at PFD 0.1, tolerable 1e-4/yr strictly below: SIF PFD below 0.01, SIL 2', () => {
-    // Common practice, no source (DESIGN.md section 6): a BPCS loop fails about once in ten years (0.1/yr); a
+    // Common practice, no source (docs/design.md section 6): a BPCS loop fails about once in ten years (0.1/yr); a
     // safeguard that is 90% reliable has PFD 0.1; a layer that must be at least 99% reliable needs SIL 2.
     const sif = assess(LEVEL()).assessment.sif!;
     expect(sif.function).toBe('SIF-1');
@@ -25,7 +25,7 @@ describe('common practice, no source', () => {
   });
 
   it('the same with the criterion "at most": PFD at most 0.01, SIL 1 verified at 0.01', () => {
-    // RULES.md section 1: with "at most", RRF 100 falls in the SIL 1 row (> 10 to <= 100).
+    // docs/rule-basis.md section 1: with "at most", RRF 100 falls in the SIL 1 row (> 10 to <= 100).
     expect(assess(LEVEL('people-at-most')).assessment.sif!.sil).toBe(1);
   });
 
@@ -38,7 +38,7 @@ describe('common practice, no source', () => {
   });
 
   it('voiding a layer that shares a bridle with the cause raises the required SIL from 2 to 3', () => {
-    // Common practice, no source (DESIGN.md section 6): two transmitters on one level bridle share a common cause.
+    // Common practice, no source (docs/design.md section 6): two transmitters on one level bridle share a common cause.
     const bridle = independenceFinding('S-1', 'shared-connection', [cause('LIC-1'), layer('LAH-2')], { element: 'BR-1' });
     const before = assess(LEVEL()).assessment;
     const after = assess(LEVEL(), [bridle]).assessment;
@@ -50,7 +50,7 @@ describe('common practice, no source', () => {
   });
 
   it('credit for presence needs presence under about 10%', () => {
-    // Common practice, no source (DESIGN.md section 6; RULES.md section 3: owner's policy, default 0.1).
+    // Common practice, no source (docs/design.md section 6; docs/rule-basis.md section 3: owner's policy, default 0.1).
     const at = (p: number) =>
       assess(`scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p} basis="time at the site (invented)"\n`).assessment.mitigatedAfter;
     expect(at(0.1)).toBeCloseTo(0.01, 15);
@@ -59,7 +59,7 @@ describe('common practice, no source', () => {
 });
 
 describe('demand mode, IEC 61511-1', () => {
-  // IEC 61511-1:2016 (as quoted in RULES.md section 1): low demand means the function is demanded at most once a
+  // IEC 61511-1:2016 (as quoted in docs/rule-basis.md section 1): low demand means the function is demanded at most once a
   // year; above that, the PFH bands of Table 5 apply instead of the PFDavg bands of Table 4.
   const DEMAND = (frequency: number, extra = '') => `
 sif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=3

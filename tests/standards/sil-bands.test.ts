@@ -1,5 +1,5 @@
 // The SIL bands and the SIL a requirement lands in, edges included, checked against IEC 61511-1:2016 Tables 4
-// and 5 (the same bands as IEC 61508-1 Tables 2 and 3), as quoted in RULES.md section 1.
+// and 5 (the same bands as IEC 61508-1 Tables 2 and 3), as quoted in docs/rule-basis.md section 1.
 import { describe, expect, it } from 'vitest';
 import {
   HIGH_DEMAND_BANDS,
@@ -12,7 +12,7 @@ import {
 } from '../../packages/core/src/assess/index.ts';
 
 describe('IEC 61511-1:2016 Table 4, low demand', () => {
-  // IEC 61511-1:2016 Table 4 (as quoted in RULES.md section 1): SIL n is PFDavg >= 10^-(n+1) to < 10^-n.
+  // IEC 61511-1:2016 Table 4 (as quoted in docs/rule-basis.md section 1): SIL n is PFDavg >= 10^-(n+1) to < 10^-n.
   it.each([
     [1, 1e-2, 1e-1],
     [2, 1e-3, 1e-2],
@@ -23,11 +23,11 @@ describe('IEC 61511-1:2016 Table 4, low demand', () => {
   });
 
   it('is not printed upside down: the higher SIL has the lower PFD', () => {
-    // RULES.md section 1 warns of secondary copies that invert the table.
+    // docs/rule-basis.md section 1 warns of secondary copies that invert the table.
     expect(LOW_DEMAND_BANDS.find((b) => b.sil === 4)!.high).toBeLessThan(LOW_DEMAND_BANDS.find((b) => b.sil === 1)!.low);
   });
 
-  // IEC 61511-1:2016 Table 4 RRF column (as quoted in RULES.md section 1): SIL 1 > 10 to <= 100, SIL 2 > 100
+  // IEC 61511-1:2016 Table 4 RRF column (as quoted in docs/rule-basis.md section 1): SIL 1 > 10 to <= 100, SIL 2 > 100
   // to <= 1,000, SIL 3 > 1,000 to <= 10,000, SIL 4 > 10,000 to <= 100,000.
   it.each([
     // [required RRF, SIL with "at most" (the RRF rows), SIL with "strictly below"]
@@ -42,7 +42,7 @@ describe('IEC 61511-1:2016 Table 4, low demand', () => {
   });
 
   it.each([
-    // Inside a band both conventions agree. IEC 61511-1:2016 Table 4 (as quoted in RULES.md section 1).
+    // Inside a band both conventions agree. IEC 61511-1:2016 Table 4 (as quoted in docs/rule-basis.md section 1).
     [5, 0],
     [11, 1],
     [57, 1],
@@ -58,7 +58,7 @@ describe('IEC 61511-1:2016 Table 4, low demand', () => {
   });
 
   it('counts 0.1 x 0.1 as exactly 0.01, although the double is 0.010000000000000002', () => {
-    // RULES.md section 1: 0.1 * 0.1 = 0.010000000000000002 in doubles.
+    // docs/rule-basis.md section 1: 0.1 * 0.1 = 0.010000000000000002 in doubles.
     expect(0.1 * 0.1).not.toBe(0.01);
     expect(requiredSil(0.1 * 0.1, 'below')).toBe(2);
     expect(requiredSil(0.1 * 0.1, 'at-most')).toBe(1);
@@ -68,7 +68,7 @@ describe('IEC 61511-1:2016 Table 4, low demand', () => {
   });
 
   it('needs no SIL when no risk reduction is asked of the SIF', () => {
-    // RULES.md section 1: RRF <= 10 (PFD >= 0.1) is below SIL 1.
+    // docs/rule-basis.md section 1: RRF <= 10 (PFD >= 0.1) is below SIL 1.
     expect(requiredSil(0.5, 'below')).toBe(0);
     expect(requiredSil(1, 'below')).toBe(0);
     expect(requiredSil(30, 'at-most')).toBe(0);
@@ -85,19 +85,19 @@ describe('IEC 61511-1:2016 Table 4, low demand', () => {
   });
 
   it('credits a SIL claim at the conservative edge of its band', () => {
-    // RULES.md section 3 (CCPS 2001 Tables 6.3 to 6.5, from memory): SIF by SIL band, 0.1, 0.01, 0.001.
+    // docs/rule-basis.md section 3 (CCPS 2001 Tables 6.3 to 6.5, from memory): SIF by SIL band, 0.1, 0.01, 0.001.
     expect([1, 2, 3, 4].map(conservativePfd)).toEqual([0.1, 0.01, 0.001, 1e-4]);
     expect(conservativePfd(0)).toBeUndefined();
   });
 
   it('is the low-demand table up to one demand a year', () => {
-    // RULES.md section 1: low demand means demanded at most once per year.
+    // docs/rule-basis.md section 1: low demand means demanded at most once per year.
     expect(LOW_DEMAND_LIMIT_PER_YEAR).toBe(1);
   });
 });
 
 describe('IEC 61511-1:2016 Table 5, high demand or continuous mode', () => {
-  // IEC 61511-1:2016 Table 5 (as quoted in RULES.md section 1): PFH per hour, SIL n >= 10^-(n+5) to < 10^-(n+4).
+  // IEC 61511-1:2016 Table 5 (as quoted in docs/rule-basis.md section 1): PFH per hour, SIL n >= 10^-(n+5) to < 10^-(n+4).
   it.each([
     [1, 1e-6, 1e-5],
     [2, 1e-7, 1e-6],

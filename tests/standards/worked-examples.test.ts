@@ -1,12 +1,12 @@
 // Published worked LOPA examples reproduced to their printed precision: the separator overpressure of Lassen
-// (NTNU, 2008) and the buffer vessel of Beedle (IChemE Hazards 30, 2020), as RULES.md section 5 quotes them.
+// (NTNU, 2008) and the buffer vessel of Beedle (IChemE Hazards 30, 2020), as docs/rule-basis.md section 5 quotes them.
 import { describe, expect, it } from 'vitest';
 import { assessScenario, meetsCriterion, requiredSil } from '../../packages/core/src/assess/index.ts';
 import { assess, cause, independenceFinding, layer, load } from '../core/assess/kit.ts';
 
 describe('Lassen 2008, separator overpressure', () => {
   // C. A. Lassen, "Layer of protection analysis (LOPA) for determination of safety integrity level (SIL)", MSc
-  // thesis, NTNU, 2008, section 3.4, as quoted in RULES.md section 5: intermediate event likelihoods summing to
+  // thesis, NTNU, 2008, section 3.4, as quoted in docs/rule-basis.md section 5: intermediate event likelihoods summing to
   // 1.717e-3 per year, criterion 3e-5 per year, required SIF PFD 1.75e-2 (RRF about 57), SIL 1. The thesis gives
   // the sum, not the split between its two causes, so the model takes the sum as one cause.
   const SEPARATOR = (category: string, sifPfd?: number) => `
@@ -28,7 +28,7 @@ scenario SEP-1 category=${category}
   });
 
   it('multiplies ignition 0.3 by occupancy 0.7 to 0.21, and flags occupancy above the default presence limit', () => {
-    // Lassen 2008 section 3.4 (RULES.md section 5): modifiers ignition 0.3 times occupancy 0.7 = 0.21.
+    // Lassen 2008 section 3.4 (docs/rule-basis.md section 5): modifiers ignition 0.3 times occupancy 0.7 = 0.21.
     const out = assess(`
 policy presence-limit=1
 scenario SEP-2 category=people
@@ -54,7 +54,7 @@ scenario SEP-2 category=people
   });
 
   it('falls short with the printed, rounded PFD 1.75e-2, and the printed total 3.03e-5 is above 3e-5', () => {
-    // Lassen 2008 (RULES.md section 5): the printed total mitigated 3.03e-5 is above 3e-5 because of rounding.
+    // Lassen 2008 (docs/rule-basis.md section 5): the printed total mitigated 3.03e-5 is above 3e-5 because of rounding.
     const rounded = assess(SEPARATOR('lassen-e-at-most', 1.75e-2)).assessment;
     expect(rounded.mitigatedAfter.toExponential(2)).toBe('3.00e-5');
     expect(rounded.meetsAfter).toBe(false);
@@ -66,7 +66,7 @@ scenario SEP-2 category=people
 
 describe('Beedle 2020, buffer vessel', () => {
   // S. Beedle, "Calculating yourself into a corner using LOPA", IChemE Hazards 30, Symposium Series 167, 2020,
-  // as quoted in RULES.md section 5 [partial copy]: a BPCS level loop failure at 0.1 per year and an operator
+  // as quoted in docs/rule-basis.md section 5 [partial copy]: a BPCS level loop failure at 0.1 per year and an operator
   // error at 0.2 per year (two fills a year times 0.1); a pressure-control layer in the same BPCS at PFD 0.1
   // loses its credit for the loop-failure cause but keeps it for the operator error: 0.03 per year with both
   // credited, 0.12 per year after independence.

@@ -25,7 +25,7 @@ export const HIGH_DEMAND_BANDS: readonly SilBand[] = [
   { sil: 4, low: 1e-9, high: 1e-8 },
 ];
 
-/** Demanded more often than this (per year), a SIF is in high-demand mode (IEC 61511-1:2016, as RULES.md section 1 quotes it). */
+/** Demanded more often than this (per year), a SIF is in high-demand mode (IEC 61511-1:2016, as docs/rule-basis.md section 1 quotes it). */
 export const LOW_DEMAND_LIMIT_PER_YEAR = 1;
 export const HOURS_PER_YEAR = 8760;
 

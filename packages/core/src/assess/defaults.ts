@@ -15,7 +15,7 @@ export interface TypicalCauseRow {
 const TABLE_5_1 =
   'CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)';
 
-/** Typical initiating-event frequencies, per year (CCPS 2001 Table 5.1 as RULES.md section 3 quotes it). */
+/** Typical initiating-event frequencies, per year (CCPS 2001 Table 5.1 as docs/rule-basis.md section 3 quotes it). */
 export const TYPICAL_CAUSE_FREQUENCIES: Readonly<Record<TypicalCause, TypicalCauseRow>> = {
   'bpcs-loop-failure': { title: 'BPCS instrument loop failure', frequency: 0.1, source: TABLE_5_1 },
   'regulator-failure': { title: 'Pressure regulator failure', frequency: 0.1, source: TABLE_5_1 },
@@ -36,7 +36,7 @@ export { PER_100_M_ROWS } from '../model/schema.ts';
 export const PER_ROW_METRES = 100;
 
 /**
- * Operator failure to execute a routine procedure, per opportunity (CCPS 2001 Table 5.1 as RULES.md section 3
+ * Operator failure to execute a routine procedure, per opportunity (CCPS 2001 Table 5.1 as docs/rule-basis.md section 3
  * quotes it). Not a frequency: the annual figure is opportunities per year times this, so the model states it
  * as a frequency with its basis; the row is here for that arithmetic and for the tests.
  */
@@ -55,7 +55,7 @@ export interface LayerDefaultRow {
   source: string;
 }
 
-const TABLES_6 = 'CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as RULES.md section 3 lists it)';
+const TABLES_6 = 'CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as docs/rule-basis.md section 3 lists it)';
 
 /** Typical IPL PFDs by kind of layer. A SIF's default comes from its SIL band (sifDefaultPfd). */
 export const TYPICAL_LAYER_PFDS: Readonly<Record<LayerDefaultKey, LayerDefaultRow>> = {
