@@ -52,7 +52,11 @@ describe('the demo in the viewer', () => {
       it('marks each element a finding names, with its sides in words', async () => {
         await focus(scenario.id);
         const findings = truth.analysis.findings.filter((f) => f.scenario === scenario.id && f.element);
-        expect(findings.length).toBeGreaterThan(0);
+        // A scenario with no shared element (S-104: an external cause) must mark none.
+        if (findings.length === 0) {
+          await page.waitForSelector('svg[data-testid=graph] g.box');
+          expect(await page.locator('svg[data-testid=graph] g.box[data-shared="yes"]').count()).toBe(0);
+        }
         for (const f of findings) {
           const box = page.locator(`svg[data-testid=graph] g.box[data-tag="${f.element}"]`);
           await expect.poll(() => box.getAttribute('data-shared'), { message: `${f.element} marked` }).toBe('yes');
