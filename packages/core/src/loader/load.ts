@@ -8,7 +8,7 @@ import { firstInvalidUtf8, positionOfByte } from '../util/utf8.ts';
 import type { z } from 'zod';
 import { readJson } from '../json/reader.ts';
 import { kebab } from '../model/fields.ts';
-import { Category, Element, Function, Model, Scenario } from '../model/schema.ts';
+import { Category, Element, Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { issueToDiagnostics, type FieldNamer } from './schema-issues.ts';
 import { validateModel, type Origins } from './validate.ts';
 
@@ -65,7 +65,7 @@ const NOT_TEXT_HELP = 'is this a model file? models are UTF-8 text (.bulk) or JS
 
 const COLLECTIONS = [
   ['elements', Element],
-  ['functions', Function],
+  ['functions', PlantFunction],
   ['scenarios', Scenario],
   ['categories', Category],
 ] as const;

@@ -1,7 +1,7 @@
 // Reads the zod schema's shapes so the .bulk reader, printer and loader share one list of fields
 // per statement: the schema stays the only place where a field is declared.
 import { z } from 'zod';
-import { Category, Cause, Element, Enabler, Function, Justification, LayerClaim, Modifier, Policy, RuleSetting, Scenario, Site } from './schema.ts';
+import { Category, Cause, Element, Enabler, Justification, LayerClaim, Modifier, PlantFunction, Policy, RuleSetting, Scenario, Site } from './schema.ts';
 
 export type FieldType =
   | { type: 'string' }
@@ -66,7 +66,7 @@ for (const option of optionsOf(Element)) {
   for (const kind of kinds) elementSpecs.set(kind, { schema: option, positional: 'tag' });
 }
 const functionSpecs = new Map<string, StatementSpec>();
-for (const option of optionsOf(Function)) {
+for (const option of optionsOf(PlantFunction)) {
   const kind = (unwrap(option.shape.kind) as z.ZodLiteral<string>).value;
   functionSpecs.set(kind, { schema: option, positional: 'tag' });
 }

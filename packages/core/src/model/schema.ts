@@ -212,7 +212,7 @@ export const MechanicalDevice = z
   })
   .meta({ id: 'MechanicalDevice', description: 'A relief valve, rupture disc or check valve as a layer' });
 
-export const Function = z
+export const PlantFunction = z
   .discriminatedUnion('kind', [ControlLoop, Sif, InstrumentedTrip, AlarmResponse, MechanicalDevice])
   .meta({ id: 'Function' });
 
@@ -313,7 +313,7 @@ export const Model = z
     categories: z.array(Category),
     rules: nonEmpty(RuleSetting).optional(),
     elements: z.array(Element),
-    functions: z.array(Function),
+    functions: z.array(PlantFunction),
     scenarios: z.array(Scenario),
     justifications: nonEmpty(Justification).optional(),
     endComments: nonEmpty(CommentLine).optional(),
@@ -326,7 +326,7 @@ export type Category = z.infer<typeof Category>;
 export type Policy = z.infer<typeof Policy>;
 export type RuleSetting = z.infer<typeof RuleSetting>;
 export type Element = z.infer<typeof Element>;
-export type PlantFunction = z.infer<typeof Function>;
+export type PlantFunction = z.infer<typeof PlantFunction>;
 export type Scenario = z.infer<typeof Scenario>;
 export type Cause = z.infer<typeof Cause>;
 export type LayerClaim = z.infer<typeof LayerClaim>;
