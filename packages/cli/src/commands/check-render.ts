@@ -10,6 +10,7 @@ import {
   renderFindingText,
   renderAssessmentText,
   type Analysis,
+  type Finding,
   type LoadResult,
   type Model,
   type ScenarioAssessment,
@@ -35,8 +36,11 @@ export function renderCheck(result: LoadResult & { model: Model }, analysis: Ana
   const { model, source } = result;
   const locate = new ModelLocator(model, result.spans);
   const out: string[] = [];
+  // Grouped once: filtering every finding for each scenario would grow with scenarios times findings.
+  const byScenario = new Map<string | undefined, Finding[]>();
+  for (const f of analysis.findings) (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
   for (const assessment of analysis.assessments) {
-    const findings = analysis.findings.filter((f) => f.scenario === assessment.scenario);
+    const findings = byScenario.get(assessment.scenario) ?? [];
     out.push(`== ${assessment.scenario}${assessment.title ? `: ${assessment.title}` : ''} ==`, '');
     for (const f of findings) out.push(renderFindingText(f, source, locate), '');
     out.push(...renderAssessmentText(assessment), '');

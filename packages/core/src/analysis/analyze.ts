@@ -2,7 +2,7 @@
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
 import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy } from '../assess/index.ts';
 import { buildPlantGraph } from '../graph/plant-graph.ts';
-import { applyJustifications, JUSTIFICATION_RULES } from '../justify/index.ts';
+import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
 import { RULES } from '../rules/registry.ts';
@@ -59,8 +59,10 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   // scenarios times the site.
   const bpcs = bpcsFactsOf(model);
   const byScenario = groupByScenario(independent);
+  const acceptances = acceptancesOf(model.justifications);
+  const narrowedEnv = environmentOnceNarrowed(env);
   const assessed = model.scenarios.map((scenario) => {
-    const narrowed = findingsOnceNarrowed(env, scenario, options);
+    const narrowed = findingsOnceNarrowed(env, narrowedEnv, scenario, acceptances);
     return assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions, ...(narrowed ? { findingsIfAccepted: narrowed } : {}) });
   });
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
@@ -79,17 +81,31 @@ function withCauseElements(assessment: ScenarioAssessment, env: RuleEnvironment,
   return { ...assessment, cause: { ...assessment.cause, elements } };
 }
 
+/** The key of the finding that a scenario's cause is narrowed (only=), if it is. */
+function narrowingKey(scenario: Scenario): string | undefined {
+  const cause = scenario.cause;
+  if (cause.function === undefined || cause.only === undefined) return undefined;
+  return independenceFindingKey('cause-narrowed', scenario.id, [{ role: 'cause', tag: cause.function }], cause.only);
+}
+
+/**
+ * The rule environment with every narrowing accepted. Built once: each key names its own scenario, so one
+ * set serves all, and a copy of the accepted keys per narrowed scenario would grow with scenarios times
+ * justifications.
+ */
+function environmentOnceNarrowed(env: RuleEnvironment): RuleEnvironment {
+  const keys = env.model.scenarios.map(narrowingKey).filter((k): k is string => k !== undefined && !env.acceptedKeys.has(k));
+  return keys.length ? { ...env, acceptedKeys: new Set([...env.acceptedKeys, ...keys]) } : env;
+}
+
 /**
  * A narrowed cause (only=) not yet accepted: the rules run again as if its narrowing were accepted, so the "if open
  * findings are accepted" figure is the figure the tool will give once it is (issue 9, item 7).
  */
-function findingsOnceNarrowed(env: RuleEnvironment, scenario: Model['scenarios'][number], options: AnalyzeOptions): Finding[] | undefined {
-  const cause = scenario.cause;
-  if (cause.function === undefined || cause.only === undefined) return undefined;
-  const key = independenceFindingKey('cause-narrowed', scenario.id, [{ role: 'cause', tag: cause.function }], cause.only);
-  if (env.acceptedKeys.has(key)) return undefined;
-  const accepted = { ...env, acceptedKeys: new Set([...env.acceptedKeys, key]) };
-  return applyJustifications(runRules(accepted, scenario), env.model.justifications, options.spans).findings;
+function findingsOnceNarrowed(env: RuleEnvironment, narrowedEnv: RuleEnvironment, scenario: Scenario, acceptances: Acceptances): Finding[] | undefined {
+  const key = narrowingKey(scenario);
+  if (key === undefined || env.acceptedKeys.has(key)) return undefined;
+  return acceptFindings(runRules(narrowedEnv, scenario), acceptances).findings;
 }
 
 function groupByScenario(findings: readonly Finding[]): Map<string | undefined, Finding[]> {

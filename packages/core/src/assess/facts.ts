@@ -2,6 +2,7 @@
 // solver's system (BPCS or SIS), and what a mechanical layer's device is. Read from the model, or given.
 import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { SYSTEMS } from '../model/schema.ts';
+import { elementByTag, functionByTag } from '../model/lookup.ts';
 
 export type SolverSystem = (typeof SYSTEMS)[number];
 
@@ -51,7 +52,7 @@ export function causeIsBpcsFailure(model: Model, scenario: Scenario, facts: Bpcs
   if (cause.typical === 'bpcs-loop-failure') return true;
   if (cause.function !== undefined) return facts[cause.function]?.system === 'bpcs';
   if (cause.element !== undefined) {
-    const element = model.elements.find((e) => e.tag === cause.element);
+    const element = elementByTag(model, cause.element);
     return element !== undefined && 'system' in element && element.system === 'bpcs';
   }
   return false;
@@ -62,6 +63,6 @@ export function causeIsBpcsLoopFailure(model: Model, scenario: Scenario, facts: 
   const cause = scenario.cause;
   if (cause.typical === 'bpcs-loop-failure') return true;
   if (cause.function === undefined) return false;
-  const fn = model.functions.find((f) => f.tag === cause.function);
+  const fn = functionByTag(model, cause.function);
   return fn?.kind === 'loop' && facts[fn.tag]?.system === 'bpcs';
 }

@@ -23,12 +23,16 @@ export function formatProbability(p: number, digits = SIGNIFICANT_FIGURES): stri
   return formatScientific(p, digits);
 }
 
+// Made once: `toLocaleString` with a locale builds a new formatter on every call, which costs as much
+// as the rest of a scenario's assessment.
+const PLAIN_DIGITS = new Intl.NumberFormat('en-US', { maximumFractionDigits: 20 });
+
 /** A ratio such as an RRF or a gap, to two significant figures in plain digits: 57, 500, 12,000, 0.25. */
 export function formatRatio(x: number, digits = SIGNIFICANT_FIGURES): string {
   if (!Number.isFinite(x) || x <= 0) return formatScientific(x, digits);
   if (x >= 1e7 || x < 1e-3) return formatScientific(x, digits);
   const rounded = Number(x.toPrecision(digits));
-  return rounded.toLocaleString('en-US', { maximumFractionDigits: 20 });
+  return PLAIN_DIGITS.format(rounded);
 }
 
 /** The criterion's edge convention as the outputs print it. */

@@ -2,6 +2,7 @@
 // rule records, so the rule set in force can list them beside the independence rules, and the findings they make.
 import type { Finding, RuleInForce } from '../vocabulary/types.ts';
 import type { Model, SeverityLevel } from '../model/schema.ts';
+import { justificationOf } from '../model/lookup.ts';
 
 export interface AssessRule {
   id: string;
@@ -208,7 +209,7 @@ export interface LimitFindingInput {
 export function limitFinding(model: Model, scenario: string, id: AssessRuleId, input: LimitFindingInput): Finding {
   const rule = assessRule(id);
   const key = findingKey(rule.id, scenario, input.tags);
-  const justification = model.justifications?.find((j) => j.finding === key);
+  const justification = justificationOf(model, key);
   return {
     key,
     rule: rule.id,

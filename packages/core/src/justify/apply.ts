@@ -84,12 +84,17 @@ function metaFinding(rule: (typeof JUSTIFICATION_RULES)[number], key: string, me
   };
 }
 
-export function applyJustifications(
-  findings: readonly Finding[],
-  justifications: readonly Justification[] | undefined,
-  spans?: SpanMap,
-): JustifiedFindings {
-  const byKey = new Map<string, { chosen: Justification; index: number; count: number }>();
+interface Chosen {
+  chosen: Justification;
+  index: number;
+  count: number;
+}
+
+/** The justifications by the finding key they name, each key with the acceptance kept and how many named it. */
+export type Acceptances = ReadonlyMap<string, Chosen>;
+
+export function acceptancesOf(justifications: readonly Justification[] | undefined): Acceptances {
+  const byKey = new Map<string, Chosen>();
   (justifications ?? []).forEach((j, index) => {
     const seen = byKey.get(j.finding);
     if (!seen) byKey.set(j.finding, { chosen: j, index, count: 1 });
@@ -98,6 +103,14 @@ export function applyJustifications(
       byKey.set(j.finding, { chosen, index: chosen === j ? index : seen.index, count: seen.count + 1 });
     }
   });
+  return byKey;
+}
+
+/**
+ * The findings, in their order, each marked accepted when a justification names its key, and the mirrored key
+ * of each finding that has one. Costs what the findings cost, whatever the number of justifications.
+ */
+export function acceptFindings(findings: readonly Finding[], byKey: Acceptances): { findings: Finding[]; mirrored: Map<string, string> } {
   // A justification written against a key with the two layers the other way round (keys once followed
   // list order) still accepts its finding; the finding keeps its own key.
   const mirrored = new Map<string, string>();
@@ -105,7 +118,6 @@ export function applyJustifications(
     const mirror = mirroredKeyOf(f);
     if (mirror !== undefined && mirror !== f.key) mirrored.set(f.key, mirror);
   }
-  const known = new Set([...findings.map((f) => f.key), ...mirrored.values()]);
   const out = findings.map((f): Finding => {
     const mirror = mirrored.get(f.key);
     const j = byKey.get(f.key) ?? (mirror !== undefined ? byKey.get(mirror) : undefined);
@@ -113,6 +125,17 @@ export function applyJustifications(
     const accepted: Acceptance = { by: j.chosen.by, date: j.chosen.date, reason: j.chosen.reason };
     return { ...f, accepted };
   });
+  return { findings: out, mirrored };
+}
+
+export function applyJustifications(
+  findings: readonly Finding[],
+  justifications: readonly Justification[] | undefined,
+  spans?: SpanMap,
+): JustifiedFindings {
+  const byKey = acceptancesOf(justifications);
+  const { findings: out, mirrored } = acceptFindings(findings, byKey);
+  const known = new Set([...findings.map((f) => f.key), ...mirrored.values()]);
   const stale: Finding[] = [];
   const locations: Record<string, Span> = Object.create(null) as Record<string, Span>; // keyed by finding keys
   const [duplicateRule, staleRule] = JUSTIFICATION_RULES;

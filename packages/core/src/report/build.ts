@@ -4,6 +4,7 @@ import type { Analysis, Finding, FunctionTrace, LayerAssessment, RuleInForce, Sc
 import type { SpanMap } from '../bulk/to-model.ts';
 import { JUSTIFICATION_RULES } from '../justify/apply.ts';
 import type { Model } from '../model/schema.ts';
+import { scenarioById } from '../model/lookup.ts';
 import { meetsCriterion } from '../assess/numbers.ts';
 import { POLICY_DEFAULTS } from '../vocabulary/policy.ts';
 import { ASSESS_RULES } from '../assess/limits.ts';
@@ -84,7 +85,7 @@ function causeElements(model: Model, assessment: ScenarioAssessment, traces: Map
   // The analysis gives the cause set the rules compared (an element cause, a narrowed cause included).
   const given = assessment.cause.elements;
   if (given !== undefined) return [...given].sort(compareTags);
-  const cause = model.scenarios.find((s) => s.id === assessment.scenario)?.cause;
+  const cause = scenarioById(model, assessment.scenario)?.cause;
   if (cause?.function !== undefined && cause.only === undefined) {
     const trace = traces.get(cause.function);
     if (trace) return trace.elements.map((e) => e.tag).sort(compareTags);
@@ -142,16 +143,16 @@ function layerReport(
 function scenarioReport(
   model: Model,
   assessment: ScenarioAssessment,
-  findings: Finding[],
+  findings: FindingIndex,
   traces: Map<string, FunctionTrace>,
   titles: Map<string, string | undefined>,
 ): ScenarioReport {
-  const scenario = model.scenarios.find((s) => s.id === assessment.scenario);
+  const scenario = scenarioById(model, assessment.scenario);
   const cause = scenario?.cause;
   const elements = causeElements(model, assessment, traces);
   const inCause = new Set(elements ?? []);
   const mine = new Set(assessment.findings);
-  const scenarioFindings = findings.filter((f) => mine.has(f.key) || f.scenario === assessment.scenario);
+  const scenarioFindings = findings.about(assessment.scenario, mine);
   const layers = [...assessment.layers]
     .sort(byTag((l) => l.function))
     .map((l) => layerReport(l, scenarioFindings, traces.get(l.function), inCause, titles));
@@ -194,6 +195,26 @@ function scenarioReport(
   });
 }
 
+/** The sorted findings, indexed so each scenario picks its own without scanning them all. */
+class FindingIndex {
+  private readonly byScenario = new Map<string | undefined, number[]>();
+  private readonly byKey = new Map<string, number[]>();
+
+  constructor(private readonly sorted: readonly Finding[]) {
+    sorted.forEach((f, i) => {
+      (this.byScenario.get(f.scenario) ?? this.byScenario.set(f.scenario, []).get(f.scenario)!).push(i);
+      (this.byKey.get(f.key) ?? this.byKey.set(f.key, []).get(f.key)!).push(i);
+    });
+  }
+
+  /** The findings of a scenario and those its assessment names by key, in the sorted order. */
+  about(scenario: string, keys: ReadonlySet<string>): Finding[] {
+    const at = new Set(this.byScenario.get(scenario));
+    for (const key of keys) for (const i of this.byKey.get(key) ?? []) at.add(i);
+    return [...at].sort((a, b) => a - b).map((i) => this.sorted[i]!);
+  }
+}
+
 function findingReport(f: Finding): ReportDocument['findings'][number] {
   return present({
     key: f.key,
@@ -216,9 +237,10 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
   const titles = elementTitles(model);
   const traces = new Map(analysis.traces.map((t) => [t.function, t]));
   const findings = [...analysis.findings].sort(compareFindings);
+  const index = new FindingIndex(findings);
   const scenarios = [...analysis.assessments]
     .sort(byTag((a) => a.scenario))
-    .map((a) => scenarioReport(model, a, findings, traces, titles));
+    .map((a) => scenarioReport(model, a, index, traces, titles));
   const functionTitles = new Map(model.functions.map((f) => [f.tag, f.title]));
   const count = (severity: Finding['severity']) => findings.filter((f) => f.severity === severity).length;
   return present({

@@ -8,6 +8,12 @@ import { ACTIVE_KINDS, SUPPLY_LINKS, type ElementGroup, type LinkField } from '.
 
 const PROCESS_SIDE: ReadonlySet<ElementGroup> = new Set(['connection', 'impulse', 'equipment']);
 
+/** Whether any item passes, without copying the items into an array first. */
+function some<T>(items: Iterable<T>, test: (item: T) => boolean): boolean {
+  for (const item of items) if (test(item)) return true;
+  return false;
+}
+
 export class Tracer {
   private readonly closures = new Map<string, ReadonlySet<string>>();
   private readonly pathsFrom = new Map<string, TracedElement[]>();
@@ -86,7 +92,7 @@ export class Tracer {
       if (attributes.role === 'signalVia') branches.push(to);
     });
     if (branches.length < 2 || this.closure(target).has(solver)) return true;
-    const servesOthersOnly = [...this.closure(target)].some((t) => this.group(t) === 'solver');
+    const servesOthersOnly = some(this.closure(target), (t) => this.group(t) === 'solver');
     return !(servesOthersOnly && branches.some((b) => this.closure(b).has(solver)));
   }
 
@@ -157,7 +163,7 @@ export class Tracer {
     const missing: MissingPart[] = [];
     const sensors = channels.filter((c) => c.role === 'sensor');
     const finals = channels.filter((c) => c.role === 'final');
-    const reachesProcess = (elements: Iterable<string>) => [...elements].some((t) => PROCESS_SIDE.has(this.group(t)!));
+    const reachesProcess = (elements: Iterable<string>) => some(elements, (t) => PROCESS_SIDE.has(this.group(t)!));
     if (a.kind === 'device') {
       const device = this.graph.outNeighbors(tag)[0];
       if (device === undefined || !reachesProcess(this.closure(device))) missing.push('process-connection');

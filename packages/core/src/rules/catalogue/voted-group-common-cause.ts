@@ -29,7 +29,8 @@ export const votedGroupCommonCause = defineScenarioRule({
           }
         });
         // Report only the elements closest to the channels: what a shared element relies on is shared too.
-        const reported = [...shared.keys()].filter((tag) => ![...shared.keys()].some((other) => other !== tag && ctx.tracer.closure(other).has(tag)));
+        const candidates = [...shared.keys()];
+        const reported = candidates.filter((tag) => !candidates.some((other) => other !== tag && ctx.tracer.closure(other).has(tag)));
         for (const tag of reported.sort()) {
           const element = ctx.element(tag);
           if (ctx.tracer.group(tag) === 'support' && failsSafeOnLoss(layer, element, ctx)) continue;
