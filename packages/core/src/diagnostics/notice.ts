@@ -31,12 +31,12 @@ export interface Notice {
 }
 
 /** Makes control characters visible so an excerpt never moves the terminal cursor. */
-export function visible(line: string): string {
+function visible(line: string): string {
   // eslint-disable-next-line no-control-regex -- matching control characters is the point of this pattern
   return line.replace(/[\u0000-\u0008\u000b-\u001f\u007f]/g, '?');
 }
 
-export const MAX_EXCERPT = 120;
+const MAX_EXCERPT = 120;
 const LABEL_WIDTH = 9;
 const MARK = '‾';
 const RAIL = '┆';
