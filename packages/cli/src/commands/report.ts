@@ -7,10 +7,9 @@ import {
   renderReport,
   reportJsonSchema,
   REPORT_FORMATS,
-  type SeverityLevel,
 } from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError, writeFileAtomic } from '../io.ts';
-import { failingFindings, parseFailOn } from './fail-on.ts';
+import { gateFindings } from './fail-on.ts';
 import { cliVersion } from '../version.ts';
 import { checkOutput, isReportText } from '../output.ts';
 
@@ -23,9 +22,6 @@ export interface ReportOptions {
   /** Replace an existing -o file that Bulkhead did not write. */
   force?: boolean;
 }
-
-/** Without --fail-on, a voided credit fails the run: the conservative default for a CI gate. */
-export const DEFAULT_FAIL_ON: SeverityLevel = 'voids-credit';
 
 /** A real calendar date in YYYY-MM-DD: 2025-02-30 is refused, not rolled over to March. */
 function checkDate(date: string): string {
@@ -48,7 +44,7 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   if (format === undefined) throw new UsageError(`\`bulkhead report\` needs --format ${REPORT_FORMATS.join('|')}`);
   if (!isReportFormat(format)) throw new UsageError(`--format takes ${REPORT_FORMATS.join(', ')}; found \`${format}\``);
   const date = options.date === undefined ? undefined : checkDate(options.date);
-  const failOn = options.failOn === undefined ? DEFAULT_FAIL_ON : parseFailOn(options.failOn);
+  const gate = gateFindings(options.failOn, options.out);
   if (options.out) checkOutput(options.out, { inputs: [file], force: options.force ?? false, replaceable: isReportText, what: 'report', unlike: 'is not a Bulkhead report' });
   const result = readModel(file);
   if (!result.model || !result.bytes) {
@@ -70,12 +66,5 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   );
   if (options.out) writeFileAtomic(options.out, text);
   else process.stdout.write(text);
-  const failing = failingFindings(analysis.findings, failOn);
-  if (failing.length > 0) {
-    process.stderr.write(
-      `${file}: ${failing.length} unaccepted finding${failing.length === 1 ? '' : 's'} at or above ${failOn}${options.out ? `; report written to ${options.out}` : ''}\n`,
-    );
-    return 1;
-  }
-  return 0;
+  return gate(file, analysis.findings);
 }

@@ -24,7 +24,14 @@ const failOn = { 'fail-on': { type: 'string' } } as const satisfies Options;
 const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
 
 export const COMMANDS = new Map<string, CommandSpec>([
-  ['check', { options: failOn, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => checkCommand(file!, str(v['fail-on'])) }],
+  [
+    'check',
+    {
+      options: { ...failOn, verbose: { type: 'boolean', short: 'v' } },
+      positionals: { min: 1, max: 1, what: 'a model file' },
+      run: (v, [file]) => checkCommand(file!, { failOn: str(v['fail-on']), verbose: v.verbose === true }),
+    },
+  ],
   ['trace', { options: {}, positionals: { min: 1, max: 2, what: 'a model file and a function or element tag' }, run: (_v, [file, tag]) => traceCommand(file!, tag) }],
   ['schema', { options: {}, positionals: { min: 0, max: 0, what: 'no file' }, run: () => schemaCommand() }],
   [

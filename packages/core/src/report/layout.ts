@@ -1,6 +1,7 @@
 // The evidence list's layout, shared by the Markdown and HTML reports: header, summary, one section per
 // scenario (cause, layers with their traced elements and verdicts, LOPA lines), then the appendices.
 import { justifiedKeyOf } from '../justify/apply.ts';
+import { alikeDevices } from './alike.ts';
 import type { LayerReport, ReportDocument, ReportFinding, ScenarioReport } from './document.ts';
 import { code, codeList, richFromMessage, status, strong, type Block, type Rich } from './blocks.ts';
 import {
@@ -11,7 +12,7 @@ import {
   criterionText,
   formatFrequency,
   formatProbability,
-  formatRatio,
+  gapText,
   pathText,
   policyText,
   sifText,
@@ -99,7 +100,9 @@ function ruleSet(doc: ReportDocument): Block[] {
 
 function findingLines(f: ReportFinding): Rich[] {
   const lines: Rich[] = [[strong(SEVERITY_LABELS[f.severity]), ' ', code(f.rule), ` (${f.title}): `, ...richFromMessage(f.message)]];
-  if (f.element) lines.push(['Shared element: ', code(f.element)]);
+  const alike = alikeDevices(f);
+  if (alike) lines.push(['Devices of the same make and model (nothing is shared): ', ...codeList(alike)]);
+  else if (f.element) lines.push(['Shared element: ', code(f.element)]);
   f.parties.forEach((p, i) => {
     const path = f.paths[i];
     const who = p.role === 'cause' ? 'From the cause' : 'From layer';
@@ -109,7 +112,8 @@ function findingLines(f: ReportFinding): Rich[] {
   const justified = justifiedKeyOf(f);
   if (justified !== undefined) lines.push(['To resolve: remove or correct the ', code('accept'), ' statement for ', code(justified), '; no justification can accept this finding.']);
   else if (f.accepted) lines.push([strong('Accepted'), ` by ${f.accepted.by} on ${f.accepted.date}: ${f.accepted.reason}`]);
-  else lines.push(['Not accepted. Key for a justification: ', code(f.key)]);
+  else if (f.severity === 'note') lines.push(['A note changes no credit and needs no acceptance. Key: ', code(f.key)]);
+  else lines.push(['Open: no justification accepts it yet. Key for a justification: ', code(f.key)]);
   return lines;
 }
 
@@ -279,7 +283,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
       ]),
       rowHeaders: true,
     },
-    { type: 'paragraph', text: [`Gap after independence: ${formatRatio(s.gap)} times the tolerable frequency.`] },
+    { type: 'paragraph', text: [`After independence, ${gapText(s.gap)}.`] },
   );
   const sif = sifText(s);
   if (sif) blocks.push({ type: 'paragraph', text: sif });
