@@ -12,8 +12,10 @@ commands:
   fmt FILE... [--check] rewrite .bulk files in canonical form (--check: only report)
   convert FILE --to json|bulk [-o OUT [--force]]
                         convert a model between .bulk and JSON
-  report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD] [--fail-on LEVEL]
-                        write the evidence list (report --json-schema: the JSON report's schema)
+  report FILE --format md|html|csv|json|sarif [--contents evidence|worksheet|actions] [-o OUT [--force]]
+         [--date YYYY-MM-DD] [--document NO] [--revision REV] [--status TEXT] [--fail-on LEVEL]
+                        write the evidence list, the LOPA worksheet or the actions list
+                        (report --json-schema: the JSON report's schema)
   view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
 
 exit codes (check and report alike): 0 no unaccepted finding at or above --fail-on, 1 there is one
@@ -29,7 +31,8 @@ Prints everything function (or element) TAG relies on, as a tree: each element h
 that brings it in, with the link that does (sensor, mounted-on, signal-via, powered-by, ...). Tracing stops
 at process equipment. For a function it also lists each voting channel and any part the model is missing.
 `,
-  report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD]
+  report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [--contents evidence|worksheet|actions]
+                       [-o OUT [--force]] [--date YYYY-MM-DD] [--document NO] [--revision REV] [--status TEXT]
                        [--fail-on voids-credit|needs-justification|note|none]
        bulkhead report --json-schema
 
@@ -42,6 +45,13 @@ then every function's trace and every finding. Accepted findings stay in the rep
   -o, --out    write to OUT instead of standard output; never over FILE itself, and over an existing
                file only when it is a Bulkhead report (else exit 2, nothing written)
   --force      replace an existing OUT that is not a Bulkhead report
+  --contents   evidence (default): the evidence list, every format, with document control, sign-off lines
+               and the sources appendix; worksheet: the LOPA worksheet, one row per scenario and layer
+               (md, html, csv); actions: one row per action to change or justify, with owner and due
+               date columns to fill (csv)
+  --document, --revision, --status
+               document control printed on the report (and on every printed HTML page); each replaces
+               the model's own (site ... document= revision= status=)
   --date       print this date in the header; without it the output is the same on every run
   --fail-on    exit 1 when an unaccepted finding is at or above this severity (default voids-credit;
                none: never on findings)

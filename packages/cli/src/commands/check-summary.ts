@@ -6,8 +6,9 @@ import {
   formatFrequency,
   formatPerHour,
   gapParts,
+  decidingReasons,
+  decidingText,
   type LayerAssessment,
-  type LayerReason,
   type ScenarioAssessment,
 } from '@bulkhead/core';
 import type { Paint } from '../colour.ts';
@@ -30,11 +31,6 @@ export function requirementText(a: ScenarioAssessment): string | undefined {
   return `${who} needs SIL ${sif.sil}${pfh}${lost}`;
 }
 
-/** The reasons that keep credit from a layer now: open or voiding, never a note or an accepted one. */
-function standing(layer: LayerAssessment): LayerReason[] {
-  return (layer.reasons ?? []).filter((r) => r.effect !== 'note' && !r.accepted);
-}
-
 const VERDICT_TEXT: Record<LayerAssessment['verdict'], string> = {
   independent: 'independent',
   accepted: 'credited on accepted findings',
@@ -49,20 +45,10 @@ const VERDICT_TEXT: Record<LayerAssessment['verdict'], string> = {
  * decide it, one line. A voided layer names what voids it; open findings on it are only counted.
  */
 export function lostCreditText(layer: LayerAssessment): string {
-  const all = standing(layer);
-  const voiding = all.filter((r) => r.severity === 'voids-credit');
-  const decisive = voiding.length ? voiding : all;
-  const why = new Map<string, string[]>();
-  for (const r of decisive) {
-    const what = r.element ?? (r.effect === 'caps' && r.cap !== undefined ? 'its claimed PFD' : r.rule);
-    const rules = why.get(what) ?? why.set(what, []).get(what)!;
-    if (!rules.includes(r.rule)) rules.push(r.rule);
-  }
-  const decided = [...why].map(([what, rules]) => `${what} (${rules.join(', ')})`);
+  const { deciding, open } = decidingReasons(layer.reasons);
   const by = layer.verdict === 'voided' ? ' by ' : ': ';
-  const open = all.length - decisive.length;
   const rest = open > 0 ? `; ${open} open finding${open === 1 ? '' : 's'} too` : '';
-  return `${layer.function} ${VERDICT_TEXT[layer.verdict]}${decided.length ? `${by}${decided.join(', ')}` : ''}${rest}`;
+  return `${layer.function} ${VERDICT_TEXT[layer.verdict]}${deciding.length ? `${by}${decidingText(deciding)}` : ''}${rest}`;
 }
 
 export function scenarioSummary(a: ScenarioAssessment, paint: Paint): string[] {

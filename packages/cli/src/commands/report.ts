@@ -3,7 +3,10 @@
 import { createHash } from 'node:crypto';
 import {
   analyze,
+  FORMATS_OF,
+  isReportContents,
   isReportFormat,
+  REPORT_CONTENTS,
   renderReport,
   reportJsonSchema,
   REPORT_FORMATS,
@@ -21,6 +24,12 @@ export interface ReportOptions {
   jsonSchema?: boolean;
   /** Replace an existing -o file that Bulkhead did not write. */
   force?: boolean;
+  /** evidence (default), worksheet or actions. */
+  contents?: string;
+  /** Document control: each replaces the model's own. */
+  document?: string;
+  revision?: string;
+  status?: string;
 }
 
 /** A real calendar date in YYYY-MM-DD: 2025-02-30 is refused, not rolled over to March. */
@@ -43,6 +52,14 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   const format = options.format;
   if (format === undefined) throw new UsageError(`\`bulkhead report\` needs --format ${REPORT_FORMATS.join('|')}`);
   if (!isReportFormat(format)) throw new UsageError(`--format takes ${REPORT_FORMATS.join(', ')}; found \`${format}\``);
+  const contents = options.contents ?? 'evidence';
+  if (!isReportContents(contents)) throw new UsageError(`--contents takes ${REPORT_CONTENTS.join(', ')}; found \`${contents}\``);
+  if (!FORMATS_OF[contents].includes(format)) {
+    throw new UsageError(`the ${contents} report comes as ${FORMATS_OF[contents].join(', ')}, not \`${format}\``);
+  }
+  for (const [name, value] of [['document', options.document], ['revision', options.revision], ['status', options.status]] as const) {
+    if (value !== undefined && value.trim() === '') throw new UsageError(`--${name} needs a value`);
+  }
   const date = options.date === undefined ? undefined : checkDate(options.date);
   const gate = gateFindings(options.failOn, options.out);
   if (options.out) checkOutput(options.out, { inputs: [file], force: options.force ?? false, replaceable: isReportText, what: 'report', unlike: 'is not a Bulkhead report' });
@@ -61,8 +78,14 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
       toolVersion: cliVersion(),
       ...(date ? { date } : {}),
       spans: result.spans,
+      control: {
+        ...(options.document !== undefined ? { document: options.document } : {}),
+        ...(options.revision !== undefined ? { revision: options.revision } : {}),
+        ...(options.status !== undefined ? { status: options.status } : {}),
+      },
     },
     format,
+    contents,
   );
   if (options.out) writeFileAtomic(options.out, text);
   else process.stdout.write(text);

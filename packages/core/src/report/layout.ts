@@ -2,6 +2,8 @@
 // scenario (cause, layers with their traced elements and verdicts, LOPA lines), then the appendices.
 import { justifiedKeyOf } from '../justify/apply.ts';
 import { alikeDevices } from './alike.ts';
+import { studyText } from './worksheet.ts';
+import { assumptionsBlocks, issueBlock, referencesOf, signOff, sourcesAppendix } from './control-layout.ts';
 import type { LayerReport, ReportDocument, ReportFinding, ScenarioReport } from './document.ts';
 import { code, codeList, richFromMessage, status, strong, type Block, type Rich } from './blocks.ts';
 import {
@@ -34,8 +36,6 @@ function header(doc: ReportDocument): Block[] {
   const rows: Rich[][] = [
     [['Site'], [doc.site.name]],
     ...(doc.site.description ? [[['Description'], [doc.site.description]]] : []),
-    [['Model file'], [code(doc.model.file)]],
-    [['SHA-256 of the model file'], [code(doc.model.sha256)]],
     [['Tool'], [`bulkhead ${doc.tool.version}`]],
     [['Report format version'], [String(doc.formatVersion)]],
     ...(doc.date ? [[['Date'], [doc.date]]] : []),
@@ -43,8 +43,10 @@ function header(doc: ReportDocument): Block[] {
   ];
   return [
     { type: 'heading', level: 1, text: [`Independence evidence list: ${doc.site.name}`] },
+    issueBlock(doc),
     { type: 'table', caption: 'What this report covers', head: ['Item', 'Value'], rows, rowHeaders: true },
     { type: 'caution', title: 'Caution', items: doc.cautions.map((c) => [c]) },
+    ...signOff(doc),
   ];
 }
 
@@ -82,19 +84,20 @@ function ruleSet(doc: ReportDocument): Block[] {
     { type: 'heading', level: 2, text: ['Rule set in force'] },
     {
       type: 'table',
-      caption: 'Rules applied, with the severity in force and its source',
-      head: ['Rule', 'Title', 'Severity', 'Default', 'Source'],
+      caption: 'Rules applied, with the severity in force and its sources (listed in Appendix C)',
+      head: ['Rule', 'Title', 'Severity', 'Default', 'Sources'],
       rows: doc.rules.map((r) => [
         [code(r.id)],
         [r.title],
         [SEVERITY_LABELS[r.severity] + (r.reason ? ` (changed by the model: ${r.reason})` : '')],
         [SEVERITY_LABELS[r.defaultSeverity]],
-        [r.source],
+        [referencesOf(doc, r.id)],
       ]),
       rowHeaders: true,
     },
     { type: 'heading', level: 2, text: ['Conventions'] },
     { type: 'list', items: doc.conventions.map((c) => [c]) },
+    ...assumptionsBlocks(doc),
   ];
 }
 
@@ -108,7 +111,7 @@ function findingLines(f: ReportFinding): Rich[] {
     const who = p.role === 'cause' ? 'From the cause' : 'From layer';
     if (path && path.length > 0) lines.push([`${who}${p.tag && p.role === 'layer' ? ' ' : ''}`, ...(p.role === 'layer' && p.tag ? [code(p.tag)] : []), ': ', ...pathText(path)]);
   });
-  lines.push([`Why: ${f.rationale} Source: ${f.source}.`]);
+  lines.push([`Why: ${f.rationale} Sources: ${f.source}.`]);
   const justified = justifiedKeyOf(f);
   if (justified !== undefined) lines.push(['To resolve: remove or correct the ', code('accept'), ' statement for ', code(justified), '; no justification can accept this finding.']);
   else if (f.accepted) lines.push([strong('Accepted'), ` by ${f.accepted.by} on ${f.accepted.date}: ${f.accepted.reason}`]);
@@ -217,6 +220,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
   const blocks: Block[] = [
     { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''] },
     { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
+    ...(s.study ? [{ type: 'paragraph' as const, text: [`From the hazard study: ${studyText(s)}.`] }] : []),
     { type: 'heading', level: 3, text: ['Initiating cause'] },
     { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.${causeFigures(s)}`] },
     {
@@ -336,10 +340,13 @@ function appendices(doc: ReportDocument): Block[] {
 }
 
 export function layoutReport(doc: ReportDocument): Block[] {
-  const byKey = new Map(doc.findings.map((f) => [f.key, f]));
+  // Each finding cites its sources by their Appendix C references, so a source is written out once.
+  const byKey = new Map(doc.findings.map((f) => [f.key, { ...f, source: `${referencesOf(doc, f.rule) || 'none'} (Appendix C)` }]));
+  const findings = doc.findings.map((f) => byKey.get(f.key)!);
   return [
     { type: 'section', kind: 'front', id: 'front', blocks: [...header(doc), ...summary(doc), ...ruleSet(doc)] },
     ...doc.scenarios.map((s) => scenarioSection(s, byKey)),
-    ...appendices(doc),
+    ...appendices({ ...doc, findings }),
+    sourcesAppendix(doc),
   ];
 }
