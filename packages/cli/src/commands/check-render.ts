@@ -96,7 +96,7 @@ export function renderCheck(result: LoadResult & { model: Model }, analysis: Ana
   const total = analysis.assessments.length;
 
   const out: string[] = [
-    paint.strong(`${result.source.file}: ${plural(total, 'scenario')}, ${meeting} meeting its criterion after independence, ${total - meeting} falling short`),
+    paint.strong(`${result.source.file}: ${plural(total, 'scenario')}, ${meeting} meeting ${meeting === 1 ? 'its' : 'their'} criterion after independence, ${total - meeting} falling short`),
     '',
   ];
   for (const a of analysis.assessments) out.push(...scenarioSummary(a, paint), '');

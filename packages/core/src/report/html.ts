@@ -114,7 +114,7 @@ function pageStyle(options: PageOptions): string {
   return `@media print {
   @page {${size} margin: 14mm 12mm 18mm;
     @bottom-left { content: ${cssString(options.footer)}; font: 7pt ui-monospace, Menlo, Consolas, monospace; color: #333; }
-    @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 8pt system-ui, sans-serif; color: #333; }
+    @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 8pt system-ui, sans-serif; color: #333; white-space: nowrap; }
   }
 }`;
 }

@@ -322,6 +322,11 @@ function appendices(doc: ReportDocument): Block[] {
       ]),
     ],
   };
+  // A finding already written out in full under the layer it decides is listed here in one row; the
+  // others (about a cause, a modifier, a note, the model) are written out here, once.
+  const detailed = new Map<string, string>();
+  for (const s of doc.scenarios) for (const l of s.layers) for (const key of l.findings) if (!detailed.has(key)) detailed.set(key, `${s.id}, layer ${l.function}`);
+  const listed = doc.findings.filter((f) => detailed.has(f.key));
   const findings: Block = {
     type: 'section',
     kind: 'appendix',
@@ -329,7 +334,14 @@ function appendices(doc: ReportDocument): Block[] {
     blocks: [
       { type: 'heading', level: 2, text: ['Appendix B: every finding'] },
       ...(doc.findings.length === 0 ? [{ type: 'paragraph' as const, text: ['No findings.'] }] : []),
-      ...doc.findings.flatMap((f): Block[] => [
+      {
+        type: 'table',
+        caption: 'Findings written out in full in their scenario, under the layer they decide',
+        head: ['Finding', 'Severity', 'Written out under', 'State'],
+        rows: listed.map((f) => [[code(f.key)], [SEVERITY_LABELS[f.severity]], [detailed.get(f.key)!], [f.accepted ? `accepted by ${f.accepted.by} on ${f.accepted.date}` : 'open']]),
+        rowHeaders: true,
+      },
+      ...doc.findings.filter((f) => !detailed.has(f.key)).flatMap((f): Block[] => [
         { type: 'heading', level: 3, text: [code(f.key)], id: anchorOf('finding', f.key) },
         { type: 'paragraph', text: [f.scenario ? 'Scenario ' : 'Model-wide', ...(f.scenario ? [code(f.scenario)] : []), '.'] },
         { type: 'list', items: findingLines(f) },
