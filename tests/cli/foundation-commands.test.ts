@@ -57,8 +57,8 @@ describe('help and usage', () => {
 
 describe('check', () => {
   // What check prints after loading belongs to the analysis; here only that a valid model loads.
-  it.each([DEMO, DEMO_JSON])('loads the valid model %s and exits 0 (no --fail-on given)', async (file) => {
-    const r = await runCli(['check', file]);
+  it.each([DEMO, DEMO_JSON])('loads the valid model %s and exits 0 with --fail-on none', async (file) => {
+    const r = await runCli(['check', file, '--fail-on', 'none']);
     expect(r.code).toBe(0);
     expect(r.stdout).toContain(file);
     expect(r.stdout).toMatch(/4 scenarios|scenarios\s+4/);

@@ -13,6 +13,7 @@ const CASES: { name: string; file: string; formats: readonly ReportFormat[] }[] 
 
 /** The pinned text; only an explicit UPDATE_GOLDEN=1 writes one, so a missing golden file fails. */
 function golden(name: string, format: ReportFormat, actual: string): string {
+  // name may carry the contents (`marrow-fen.worksheet`); the evidence list has none.
   const path = `${GOLDEN_DIR}${name}.${format}`;
   if (process.env.UPDATE_GOLDEN === '1') writeFileSync(path, actual);
   if (!existsSync(path)) throw new Error(`golden file ${path} is missing: run with UPDATE_GOLDEN=1, then review it by hand`);
@@ -24,6 +25,19 @@ describe.each(CASES)('golden report of $file', ({ name, file, formats }) => {
   it.each(formats)('%s matches the golden file', (format) => {
     const actual = renderReport(input, format);
     expect(actual).toBe(golden(name, format, actual));
+  });
+});
+
+describe('golden worksheet and actions list of the demo', () => {
+  const input = demoInput(DEMO);
+  it.each([
+    ['worksheet', 'md'],
+    ['worksheet', 'html'],
+    ['worksheet', 'csv'],
+    ['actions', 'csv'],
+  ] as const)('%s %s matches the golden file', (contents, format) => {
+    const actual = renderReport(input, format, contents);
+    expect(actual).toBe(golden(`marrow-fen.${contents}`, format, actual));
   });
 });
 

@@ -5,18 +5,21 @@ export const HELP = `bulkhead: checks that the protection layers claimed in a LO
 usage: bulkhead COMMAND [options]
 
 commands:
-  check FILE [--fail-on LEVEL]
-                        validate a model, analyse every scenario: findings, LOPA, verdicts
+  check FILE [--fail-on LEVEL] [--verbose]
+                        validate a model, analyse every scenario: verdicts first, then LOPA, findings
   trace FILE TAG        what a function (or element) relies on, as a tree of paths
   schema                print the JSON Schema of the model
   fmt FILE... [--check] rewrite .bulk files in canonical form (--check: only report)
   convert FILE --to json|bulk [-o OUT [--force]]
                         convert a model between .bulk and JSON
-  report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD] [--fail-on LEVEL]
-                        write the evidence list (report --json-schema: the JSON report's schema)
+  report FILE --format md|html|csv|json|sarif [--contents evidence|worksheet|actions] [-o OUT [--force]]
+         [--date YYYY-MM-DD] [--document NO] [--revision REV] [--status TEXT] [--fail-on LEVEL]
+                        write the evidence list, the LOPA worksheet or the actions list
+                        (report --json-schema: the JSON report's schema)
   view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
 
-exit codes: 0 clean, 1 findings at or above --fail-on (or fmt --check found changes),
+exit codes (check and report alike): 0 no unaccepted finding at or above --fail-on, 1 there is one
+            (default level voids-credit; --fail-on none never fails on findings; fmt --check: changes),
             2 bad input or usage, 3 internal error
 Decision support only: it does not replace a competent LOPA team, IEC 61511, local codes or licensed practice.
 `;
@@ -28,8 +31,9 @@ Prints everything function (or element) TAG relies on, as a tree: each element h
 that brings it in, with the link that does (sensor, mounted-on, signal-via, powered-by, ...). Tracing stops
 at process equipment. For a function it also lists each voting channel and any part the model is missing.
 `,
-  report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD]
-                       [--fail-on voids-credit|needs-justification|note]
+  report: `usage: bulkhead report FILE --format md|html|csv|json|sarif [--contents evidence|worksheet|actions]
+                       [-o OUT [--force]] [--date YYYY-MM-DD] [--document NO] [--revision REV] [--status TEXT]
+                       [--fail-on voids-credit|needs-justification|note|none]
        bulkhead report --json-schema
 
 Analyses FILE and writes the evidence list: for every scenario the cause and its elements, each claimed
@@ -41,18 +45,34 @@ then every function's trace and every finding. Accepted findings stay in the rep
   -o, --out    write to OUT instead of standard output; never over FILE itself, and over an existing
                file only when it is a Bulkhead report (else exit 2, nothing written)
   --force      replace an existing OUT that is not a Bulkhead report
+  --contents   evidence (default): the evidence list, every format, with document control, sign-off lines
+               and the sources appendix; worksheet: the LOPA worksheet, one row per scenario and layer
+               (md, html, csv); actions: one row per action to change or justify, with owner and due
+               date columns to fill (csv)
+  --document, --revision, --status
+               document control printed on the report (and on every printed HTML page); each replaces
+               the model's own (site ... document= revision= status=)
   --date       print this date in the header; without it the output is the same on every run
-  --fail-on    exit 1 when an unaccepted finding is at or above this severity (default voids-credit)
+  --fail-on    exit 1 when an unaccepted finding is at or above this severity (default voids-credit;
+               none: never on findings)
 
 exit codes: 0 no unaccepted finding at or above --fail-on, 1 there is one, 2 bad input or usage
 `,
-  check: `usage: bulkhead check FILE [--fail-on voids-credit|needs-justification|note]
+  check: `usage: bulkhead check FILE [--fail-on voids-credit|needs-justification|note|none] [--verbose]
 
-Loads FILE (.bulk or .json). Bad input: every problem with file:line:column, exit 2. Otherwise, per
-scenario: each independence finding (pointing at the claimed layer, with the path from each side to the
-shared element, the rule's rationale and source, and the finding's key for an \`accept\` statement), the
-LOPA as claimed, after independence and if open findings are accepted, the gap and the required SIL; then
-a one-line verdict per scenario. Exit 0, or 1 with --fail-on when an unaccepted finding reaches LEVEL.
+Loads FILE (.bulk or .json). Bad input: every problem with file:line:column, exit 2. Otherwise the answer
+first: per scenario its verdict after independence, the gap (or margin) to the tolerable frequency, the SIL
+its SIF needs and each layer that lost credit with the element that voided it. Then per scenario the LOPA
+(as claimed, after independence, if open findings are accepted) and its findings grouped by layer, each
+with the path from each side to the shared element and the key an \`accept\` statement names; a legend
+gives each rule's rationale and source once, at the end.
+
+  --fail-on    exit 1 when an unaccepted finding is at or above this severity (default voids-credit;
+               none: never on findings). The same rule as \`bulkhead report\`
+  -v, --verbose  list the notes too (findings that change no credit); without it they are only counted
+
+Colour only when standard output is a terminal; none under NO_COLOR or a pipe.
+exit codes: 0 no unaccepted finding at or above --fail-on, 1 there is one, 2 bad input or usage
 `,
   view: `usage: bulkhead view FILE [--port N]
 

@@ -3,11 +3,15 @@
 import { closeSync, openSync, readSync, statSync } from 'node:fs';
 import { UsageError } from './io.ts';
 
-/** The first bytes of each report format, as `renderReport` writes them: enough to know our own files. */
+/** The first bytes of each report, as `renderReport` writes them: enough to know our own files. */
 const REPORT_SIGNATURES: readonly RegExp[] = [
   /^# Independence evidence list: /, // md
   /^<!DOCTYPE html>[\s\S]{0,2000}<title>Independence evidence list/, // html
   /^row_kind,scenario,/, // csv
+  /^# LOPA worksheet: /, // worksheet md
+  /^<!DOCTYPE html>[\s\S]{0,2000}<title>LOPA worksheet/, // worksheet html
+  /^scenario,scenario_title,study_reference,/, // worksheet csv
+  /^action,severity,what_to_do,/, // actions csv
   /^\{\s*"formatVersion": \d+,\s*"tool": \{\s*"name": "bulkhead"/, // json
   /^\{\s*"\$schema": "[^"]*sarif[^"]*",[\s\S]{0,400}"driver": \{\s*"name": "bulkhead"/, // sarif
 ];

@@ -23,26 +23,26 @@ const VOIDING = [
 describe('renderAssessmentText', () => {
   it('prints the demo-like scenario as worked by hand', () => {
     // By hand: as claimed 0.1 x 0.5 x 0.005 x 0.1 = 2.5e-5 /yr (meets 1e-4); both layers voided, so after
-    // independence 0.1 x 0.5 = 5.0e-2 /yr, 500 times the tolerable; the SIF must reach PFD < 1e-4 / 0.05 = 2.0e-3,
+    // independence 0.1 x 0.5 = 0.05 /yr, 500 times the tolerable; the SIF must reach PFD < 1e-4 / 0.05 = 2.0e-3,
     // RRF > 500, which is inside SIL 2 (1e-3 to 1e-2), so SIL 2 verified to 2.0e-3; demand on it 0.1 /yr, low demand.
     expect(renderAssessmentText(assess(DEMO_LIKE, VOIDING).assessment)).toEqual([
       'S-1  Vessel overfills',
       '  criterion    people (harm to people): tolerable 1.0e-4 /yr; the mitigated frequency must be strictly below it',
-      '  cause        failure of LIC-1: 1.0e-1 /yr, default: BPCS instrument loop failure: CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)',
-      '  modifier     ignition 5.0e-1, basis: ignition study (invented)',
+      '  cause        failure of LIC-1: 0.1 /yr, default: BPCS instrument loop failure: CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)',
+      '  modifier     ignition 0.5, basis: ignition study (invented)',
       '  layers       layer  kind   acts     claimed  allowed  credit  verdict',
       '               SIF-1  sif    the SIF  5.0e-3   5.0e-3   no      voided',
       '                 - shared-connection at BR-1 with the cause: no credit',
-      '               LAH-1  alarm  before*  1.0e-1   1.0e-1   no      voided',
+      '               LAH-1  alarm  before*  0.1      0.1      no      voided',
       '                 - shared-solver at C1 with the cause: no credit',
       '               acts: before or after the SIF; * by default for this type of layer, not stated on the layer line',
       '  mitigated    as claimed                 2.5e-5 /yr  meets the criterion',
-      '               after independence         5.0e-2 /yr  falls short',
-      '               if open findings accepted  5.0e-2 /yr  falls short',
+      '               after independence         0.05 /yr    falls short',
+      '               if open findings accepted  0.05 /yr    falls short',
       '  gap          500 x tolerable, after independence',
-      '  required     SIF-1: PFD < 2.0e-3, RRF > 500: SIL 2 (band 1.0e-3 to 1.0e-2); verify PFD < 2.0e-3',
+      '  required     SIF-1: PFD < 2.0e-3, RRF > 500: SIL 2 (band 1.0e-3 to 0.01); verify PFD < 2.0e-3',
       // The alarm would act before the SIF, but it is voided: only credited layers lower the demand, so 0.1 /yr.
-      '  demand       demand on SIF-1 1.0e-1 /yr (demand = cause x enablers x PFDs of the credited layers acting before the SIF; acting before SIF-1: none; after it: none): at most once a year, low demand; the PFDavg bands of IEC 61511-1:2016 Table 4 apply',
+      '  demand       demand on SIF-1 0.1 /yr (demand = cause x enablers x PFDs of the credited layers acting before the SIF; acting before SIF-1: none; after it: none): at most once a year, low demand; the PFDavg bands of IEC 61511-1:2016 Table 4 apply',
     ]);
   });
 
@@ -55,8 +55,8 @@ describe('renderAssessmentText', () => {
   it('shows the unvoided scenario meeting its criterion with the SIF requirement on the band edge', () => {
     const lines = renderAssessmentText(assess(DEMO_LIKE).assessment);
     expect(lines).toContain('               after independence         2.5e-5 /yr  meets the criterion');
-    // Required PFD = 1e-4 / (0.1 x 0.5 x 0.1) = 0.02: SIL 1, verified to 2.0e-2.
-    expect(lines.find((l) => l.includes('required'))).toBe('  required     SIF-1: PFD < 2.0e-2, RRF > 50: SIL 1 (band 1.0e-2 to 1.0e-1); verify PFD < 2.0e-2');
+    // Required PFD = 1e-4 / (0.1 x 0.5 x 0.1) = 0.02: SIL 1, verified to 0.02.
+    expect(lines.find((l) => l.includes('required'))).toBe('  required     SIF-1: PFD < 0.02, RRF > 50: SIL 1 (band 0.01 to 0.1); verify PFD < 0.02');
   });
 
   it('marks defaults, shows barred modifiers and open findings, and lists alternatives', () => {
@@ -74,11 +74,11 @@ scenario S-2 category=loc
         [independenceFinding('S-2', 'shared-console', [layer('PSV-IPL'), layer('LAH-2')], { severity: 'needs-justification' })],
       ).assessment,
     );
-    expect(lines).toContain('  modifier     ignition 5.0e-1, not applied (modifier-not-allowed:S-2:ignition)');
-    expect(lines.find((l) => l.includes('PSV-IPL  device'))).toMatch(/1\.0e-2 \(default\)\s+1\.0e-2\s+yes\s+independent/);
+    expect(lines).toContain('  modifier     ignition 0.5, not applied (modifier-not-allowed:S-2:ignition)');
+    expect(lines.find((l) => l.includes('PSV-IPL  device'))).toMatch(/0\.01 \(default\)\s+0\.01\s+yes\s+independent/);
     expect(lines.find((l) => l.includes('LAH-2  '))).toMatch(/if accepted\s+not-selected/);
     expect(lines).toContain('                 - shared-console with PSV-IPL: not credited together, open until accepted');
-    expect(lines).toContain('  alternative  LAH-2: PFD product 1.0e-1, mitigated 1.0e-2 /yr');
+    expect(lines).toContain('  alternative  LAH-2: PFD product 0.1, mitigated 0.01 /yr');
   });
 
   it('says so when no layer is claimed, and sizes a new SIF', () => {
@@ -97,7 +97,7 @@ scenario S-2 category=loc
     expect(a.meetsAfter).toBe(false);
     const required = renderAssessmentText(a).find((l) => l.includes('required'))!;
     expect(required).not.toContain('no risk reduction');
-    expect(required).toContain('SIF-1: PFD < 1.0e0, RRF > 1');
+    expect(required).toContain('SIF-1: PFD < 1, RRF > 1');
     // Under "at most" the same figure meets the criterion, and then no risk reduction is asked of the SIF.
     const atMost = assess(text.replace('category=people', 'category=people-at-most'), voided).assessment;
     expect(atMost.meetsAfter).toBe(true);
@@ -119,7 +119,8 @@ scenario S-2 category=loc
       expect(l).toBe(l.trimEnd());
     }
     const table = lines.filter((l) => / (sif|alarm|kind) /.test(l));
-    const column = (l: string) => l.indexOf(l.includes('kind') ? 'claimed' : /\d\.\de-\d/.exec(l)![0]);
+    // The claimed PFD is the first figure after the `acts` column (5.0e-3 or 0.1: either number form).
+    const column = (l: string) => (l.includes('kind') ? l.indexOf('claimed') : /(?:the SIF|before\*)\s+/.exec(l)!.index + /(?:the SIF|before\*)\s+/.exec(l)![0].length);
     expect(new Set(table.map(column)).size).toBe(1);
   });
 });

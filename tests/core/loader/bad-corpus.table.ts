@@ -47,7 +47,7 @@ export const CORPUS: readonly CorpusRow[] = [
   { file: 'layer-not-function.bulk', code: 'BH307', line: 20, column: 9, says: 'is a shutdown-valve, not a function' },
   { file: 'line-too-long.bulk', code: 'BH105', line: 6, column: 10001, says: 'the limit is 10000' },
   { file: 'missing-frequency.bulk', code: 'BH310', line: 19, column: 3, says: 'no frequency' },
-  { file: 'missing-kind.json', code: 'BH200', line: 13, column: 5, says: 'missing `kind` in element 1' },
+  { file: 'missing-kind.json', code: 'BH200', line: 13, column: 5, says: 'missing `kind` in element `V-1`' },
   { file: 'missing-required.bulk', code: 'BH200', line: 16, column: 5, says: 'missing `solver`' },
   { file: 'missing-value.bulk', code: 'BH116', line: 5, column: 17, says: 'missing value after `title=`' },
   { file: 'nesting-after-broken-string.json', code: 'BH106', line: 4, column: 315, says: 'nested more than 64 levels' },

@@ -1,10 +1,10 @@
 // Number and word formatting for the viewer: the core's number formats (the same figures as `check`
 // and the reports), and the words for verdicts and severities.
-import { formatFrequency, formatRatio, formatScientific } from '@bulkhead/core';
+import { formatFigure as coreFigure, formatFrequency, formatRatio } from '@bulkhead/core';
 
-/** Frequencies and probabilities as every Bulkhead output writes them: 2.5e-5, 1.0e-1. */
+/** Frequencies and probabilities as every Bulkhead output writes them: 2.5e-5, 0.1, 3 (core's one formatter). */
 export function formatFigure(n: number): string {
-  return formatScientific(n);
+  return coreFigure(n);
 }
 
 /** Ratios (gap, RRF) in plain digits: 500, 0.4. */

@@ -3,14 +3,16 @@
 import { createHash } from 'node:crypto';
 import {
   analyze,
+  FORMATS_OF,
+  isReportContents,
   isReportFormat,
+  REPORT_CONTENTS,
   renderReport,
   reportJsonSchema,
   REPORT_FORMATS,
-  type SeverityLevel,
 } from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError, writeFileAtomic } from '../io.ts';
-import { failingFindings, parseFailOn } from './fail-on.ts';
+import { gateFindings } from './fail-on.ts';
 import { cliVersion } from '../version.ts';
 import { checkOutput, isReportText } from '../output.ts';
 
@@ -22,10 +24,13 @@ export interface ReportOptions {
   jsonSchema?: boolean;
   /** Replace an existing -o file that Bulkhead did not write. */
   force?: boolean;
+  /** evidence (default), worksheet or actions. */
+  contents?: string;
+  /** Document control: each replaces the model's own. */
+  document?: string;
+  revision?: string;
+  status?: string;
 }
-
-/** Without --fail-on, a voided credit fails the run: the conservative default for a CI gate. */
-export const DEFAULT_FAIL_ON: SeverityLevel = 'voids-credit';
 
 /** A real calendar date in YYYY-MM-DD: 2025-02-30 is refused, not rolled over to March. */
 function checkDate(date: string): string {
@@ -47,8 +52,16 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   const format = options.format;
   if (format === undefined) throw new UsageError(`\`bulkhead report\` needs --format ${REPORT_FORMATS.join('|')}`);
   if (!isReportFormat(format)) throw new UsageError(`--format takes ${REPORT_FORMATS.join(', ')}; found \`${format}\``);
+  const contents = options.contents ?? 'evidence';
+  if (!isReportContents(contents)) throw new UsageError(`--contents takes ${REPORT_CONTENTS.join(', ')}; found \`${contents}\``);
+  if (!FORMATS_OF[contents].includes(format)) {
+    throw new UsageError(`the ${contents} report comes as ${FORMATS_OF[contents].join(', ')}, not \`${format}\``);
+  }
+  for (const [name, value] of [['document', options.document], ['revision', options.revision], ['status', options.status]] as const) {
+    if (value !== undefined && value.trim() === '') throw new UsageError(`--${name} needs a value`);
+  }
   const date = options.date === undefined ? undefined : checkDate(options.date);
-  const failOn = options.failOn === undefined ? DEFAULT_FAIL_ON : parseFailOn(options.failOn);
+  const gate = gateFindings(options.failOn, options.out);
   if (options.out) checkOutput(options.out, { inputs: [file], force: options.force ?? false, replaceable: isReportText, what: 'report', unlike: 'is not a Bulkhead report' });
   const result = readModel(file);
   if (!result.model || !result.bytes) {
@@ -65,17 +78,16 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
       toolVersion: cliVersion(),
       ...(date ? { date } : {}),
       spans: result.spans,
+      control: {
+        ...(options.document !== undefined ? { document: options.document } : {}),
+        ...(options.revision !== undefined ? { revision: options.revision } : {}),
+        ...(options.status !== undefined ? { status: options.status } : {}),
+      },
     },
     format,
+    contents,
   );
   if (options.out) writeFileAtomic(options.out, text);
   else process.stdout.write(text);
-  const failing = failingFindings(analysis.findings, failOn);
-  if (failing.length > 0) {
-    process.stderr.write(
-      `${file}: ${failing.length} unaccepted finding${failing.length === 1 ? '' : 's'} at or above ${failOn}${options.out ? `; report written to ${options.out}` : ''}\n`,
-    );
-    return 1;
-  }
-  return 0;
+  return gate(file, analysis.findings);
 }

@@ -24,7 +24,14 @@ const failOn = { 'fail-on': { type: 'string' } } as const satisfies Options;
 const str = (v: string | boolean | undefined): string | undefined => (typeof v === 'string' ? v : undefined);
 
 export const COMMANDS = new Map<string, CommandSpec>([
-  ['check', { options: failOn, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => checkCommand(file!, str(v['fail-on'])) }],
+  [
+    'check',
+    {
+      options: { ...failOn, verbose: { type: 'boolean', short: 'v' } },
+      positionals: { min: 1, max: 1, what: 'a model file' },
+      run: (v, [file]) => checkCommand(file!, { failOn: str(v['fail-on']), verbose: v.verbose === true }),
+    },
+  ],
   ['trace', { options: {}, positionals: { min: 1, max: 2, what: 'a model file and a function or element tag' }, run: (_v, [file, tag]) => traceCommand(file!, tag) }],
   ['schema', { options: {}, positionals: { min: 0, max: 0, what: 'no file' }, run: () => schemaCommand() }],
   [
@@ -52,12 +59,27 @@ export const COMMANDS = new Map<string, CommandSpec>([
         date: { type: 'string' },
         'json-schema': { type: 'boolean' },
         force: { type: 'boolean' },
+        contents: { type: 'string' },
+        document: { type: 'string' },
+        revision: { type: 'string' },
+        status: { type: 'string' },
         ...failOn,
       },
       // `report --json-schema` needs no file; reportCommand says so when one is missing otherwise.
       positionals: { min: 0, max: 1, what: 'one model file' },
       run: (v, [file]) =>
-        reportCommand(file, { format: str(v.format), out: str(v.out), date: str(v.date), failOn: str(v['fail-on']), jsonSchema: v['json-schema'] === true, force: v.force === true }),
+        reportCommand(file, {
+          format: str(v.format),
+          out: str(v.out),
+          date: str(v.date),
+          failOn: str(v['fail-on']),
+          jsonSchema: v['json-schema'] === true,
+          force: v.force === true,
+          contents: str(v.contents),
+          document: str(v.document),
+          revision: str(v.revision),
+          status: str(v.status),
+        }),
     },
   ],
   ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],

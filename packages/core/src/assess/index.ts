@@ -44,6 +44,9 @@ export { sifRequirement, type RequirementInput, type ScenarioSifRequirement } fr
 export { RELATIVE_TOLERANCE, sameFigure, decadeLog10, meetsCriterion, type Edge } from './numbers.ts';
 export {
   formatScientific,
+  formatFigure,
+  gapText,
+  gapParts,
   formatFrequency,
   formatPerHour,
   formatProbability,

@@ -2,7 +2,7 @@
 // layer with claimed and allowed PFD and verdict, the three mitigated figures, gap, SIF requirement, demand mode.
 import type { LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../vocabulary/types.ts';
 import { BEYOND_SIL_4, lowDemandBand } from './bands.ts';
-import { edgeRelation, edgeText, formatFrequency, formatPerHour, formatProbability, formatRatio } from './format.ts';
+import { edgeRelation, edgeText, formatFrequency, formatPerHour, formatProbability, formatRatio, gapParts } from './format.ts';
 import { sameFigure } from './numbers.ts';
 
 /** Printed once by a command that shows assessments: the tool supports a LOPA team, it does not replace one. */
@@ -149,7 +149,8 @@ export function renderAssessmentText(a: ScenarioAssessment): string[] {
     ['if open findings accepted', formatFrequency(a.mitigatedIfAccepted), verdictWord(a.meetsIfAccepted ?? a.mitigatedIfAccepted < a.tolerable)],
   ]);
   lines.push(row('mitigated', figures[0]!), ...figures.slice(1).map(continuation));
-  lines.push(row('gap', `${formatRatio(a.gap)} x tolerable, after independence`));
+  const gap = gapParts(a.gap);
+  lines.push(row(gap.word, `${gap.figure}, after independence`));
   lines.push(...requirementLines(a));
   for (const alt of a.alternatives) {
     const set = alt.layers.length > 0 ? alt.layers.join(' + ') : 'no layer';

@@ -157,7 +157,7 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
   for (const issue of parsed.error.issues) {
     if (reportedPaths.has(issue.path.map(String).join('.'))) continue;
     if (isMissing(issue) && issue.path.some((_, n) => incompletePaths.has(issue.path.slice(0, n).map(String).join('.')))) continue;
-    diagnostics.push(...issueToDiagnostics(issue, spans, name));
+    diagnostics.push(...issueToDiagnostics(issue, spans, name, raw));
   }
   const salvaged = salvage(raw, brokenTags);
   if (salvaged) diagnostics.push(...validateModel({ ...salvaged, spans, name }));

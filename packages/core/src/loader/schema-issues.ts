@@ -31,13 +31,34 @@ const ITEM_NAMES: Record<string, string> = {
   endComments: 'comment',
 };
 
-/** "element 3", "layer 2 of scenario 1": the innermost numbered item on the path, and its parent. */
-function describeItem(path: readonly PropertyKey[]): string {
+/** The tag, id or function a user gave the item, when it has one: that is how they know it, not its place. */
+function nameOf(item: unknown): string | undefined {
+  if (typeof item !== 'object' || item === null) return undefined;
+  for (const key of ['tag', 'id', 'function', 'finding']) {
+    const value = (item as Record<string, unknown>)[key];
+    if (typeof value === 'string' && value !== '') return value;
+  }
+  return undefined;
+}
+
+/**
+ * "function `LIC-101`", "layer `SIF-1` of scenario `S-1`": the innermost item on the path and its parent,
+ * by the name the user gave it; "element 3" only when the item has no name yet.
+ */
+function describeItem(path: readonly PropertyKey[], raw?: unknown): string {
   const parts: string[] = [];
-  for (let i = 0; i + 1 < path.length; i++) {
+  let at: unknown = raw;
+  for (let i = 0; i < path.length; i++) {
     const key = path[i];
     const index = path[i + 1];
-    if (typeof key === 'string' && typeof index === 'number') parts.unshift(`${(Object.hasOwn(ITEM_NAMES, key) ? ITEM_NAMES[key] : undefined) ?? key} ${index + 1}`);
+    const next = typeof at === 'object' && at !== null && Object.hasOwn(at, key as string) ? (at as Record<PropertyKey, unknown>)[key as string] : undefined;
+    if (typeof key === 'string' && typeof index === 'number') {
+      const item = Array.isArray(next) ? next[index] : undefined;
+      const word = (Object.hasOwn(ITEM_NAMES, key) ? ITEM_NAMES[key] : undefined) ?? key;
+      const name = nameOf(item);
+      parts.unshift(name !== undefined ? `${word} \`${name}\`` : `${word} ${index + 1}`);
+    }
+    at = next;
   }
   if (parts.length) return parts.slice(0, 2).join(' of ');
   const head = path[0];
@@ -50,10 +71,11 @@ function article(type: string): string {
 
 const POSITIONAL = ['tag', 'id', 'name', 'function', 'title', 'finding'];
 
-export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name: FieldNamer): Diagnostic[] {
+/** `raw` is the input as read, so an item is named by its tag rather than its place in a list. */
+export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name: FieldNamer, raw?: unknown): Diagnostic[] {
   const path = issue.path;
   const last = path[path.length - 1];
-  const field = typeof last === 'string' ? name(last) : describeItem(path);
+  const field = typeof last === 'string' ? name(last) : describeItem(path, raw);
   const span = spanAt(spans, path);
   const input = (issue as { input?: unknown }).input;
   // .bulk names fields in kebab case, JSON in camel case; the hints differ with the syntax.
@@ -72,7 +94,7 @@ export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name
             help: last === 'site' ? 'start the model with `site "Site name"`' : `add ${field}`,
           })];
         }
-        return [error('BH200', `missing \`${field}\` in ${describeItem(path)}`, span, {
+        return [error('BH200', `missing \`${field}\` in ${describeItem(path, raw)}`, span, {
           help: typeof last !== 'string'
             ? 'add the missing item'
             : !isBulk
@@ -109,11 +131,11 @@ export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name
       if (discriminator) {
         // zod puts the discriminator on the path; the item is the path without it.
         const itemPath = path[path.length - 1] === discriminator ? path.slice(0, -1) : path;
-        const what = describeItem(itemPath).replace(/ \d+( of .*)?$/, '');
+        const what = describeItem(itemPath, raw).replace(/ (\d+|`[^`]*`)( of .*)?$/, '');
         const options = ((issue as { options?: unknown[] }).options ?? []).map(String);
         const value = input && typeof input === 'object' ? (input as Record<string, unknown>)[discriminator] : undefined;
         if (value === undefined) {
-          return [error('BH200', `missing \`${name(discriminator)}\` in ${describeItem(itemPath)}`, span, {
+          return [error('BH200', `missing \`${name(discriminator)}\` in ${describeItem(itemPath, raw)}`, span, {
             help: `say which ${what} this is: one of ${options.join(', ')}`,
           })];
         }
@@ -129,7 +151,7 @@ export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name
       }
       return [error('BH201', `\`${field}\`: ${issue.message.toLowerCase()}`, span)];
     case 'invalid_format':
-      return [error('BH201', `${describeItem(path)} holds a line break or control character`, span, {
+      return [error('BH201', `${describeItem(path, raw)} holds a line break or control character`, span, {
         help: 'a comment is one line of plain text; split it into several comments',
       })];
     default:

@@ -40,6 +40,7 @@ export const COMMENT_FIELDS = new Set(['comments', 'trailingComment']);
 /** Fields whose values are free text: always quoted when printed. */
 export const TEXT_FIELDS = new Set([
   'name', 'description', 'title', 'basis', 'pfdBasis', 'pfhBasis', 'hraBasis', 'creditBasis', 'reason', 'by', 'make', 'model', 'external',
+  'document', 'revision', 'status', 'basedOn', 'preparedBy', 'checkedBy', 'approvedBy', 'study', 'studyNode', 'studyDeviation',
 ]);
 
 export function kebab(field: string): string {

@@ -43,6 +43,15 @@ export const Site = z
   .strictObject({
     name: Text,
     description: Text.optional(),
+    document: Text.optional().meta({ description: 'Document number of the evidence list, printed on every page' }),
+    revision: Text.optional().meta({ description: 'Revision of the evidence list, such as A or 2' }),
+    status: Text.optional().meta({ description: 'Issue status, such as "for review" or "approved for construction"' }),
+    basedOn: z.array(Text).min(1).optional().meta({
+      description: 'The source documents and their revisions the model was built from, such as "P&ID 100-PID-001 rev C"',
+    }),
+    preparedBy: Text.optional(),
+    checkedBy: Text.optional(),
+    approvedBy: Text.optional(),
     ...commentFields,
   })
   .meta({ id: 'Site' });
@@ -287,6 +296,10 @@ export const Scenario = z
     id: Tag,
     title: Text.optional(),
     category: Tag,
+    study: Text.optional().meta({ description: 'The hazard study the scenario comes from: its document number and revision' }),
+    studyNode: Text.optional().meta({ description: 'The node of the hazard study' }),
+    studyDeviation: Text.optional().meta({ description: 'The deviation of the hazard study, such as "high level"' }),
+    studyRecommendations: TagList.optional().meta({ description: 'Recommendation numbers of the hazard study this scenario answers' }),
     cause: Cause,
     enablers: nonEmpty(Enabler).optional(),
     modifiers: nonEmpty(Modifier).optional(),

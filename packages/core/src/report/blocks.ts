@@ -16,6 +16,10 @@ export interface Table {
   rows: Rich[][];
   /** The first cell of each row names the row (a row header). */
   rowHeaders: boolean;
+  /** Lines to sign by hand: printed with room to write in the empty cells. */
+  sign?: boolean;
+  /** Many columns: printed in a smaller type. */
+  compact?: boolean;
 }
 
 export type Block =

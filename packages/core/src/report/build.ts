@@ -11,6 +11,8 @@ import { ASSESS_RULES } from '../assess/limits.ts';
 import { RULES } from '../rules/registry.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';
 import { byTag, compareFindings, compareTags } from './order.ts';
+import { assumptions, documentControl } from './control.ts';
+import { sourceList } from './sources.ts';
 
 export interface ReportInput {
   model: Model;
@@ -24,6 +26,8 @@ export interface ReportInput {
   date?: string;
   /** The loader's spans: SARIF locations come from them. */
   spans?: SpanMap;
+  /** Document number, revision and status from the command line; each replaces the model's own. */
+  control?: { document?: string; revision?: string; status?: string };
 }
 
 export const CAUTIONS = [
@@ -164,6 +168,7 @@ function scenarioReport(
     harm: assessment.harm,
     tolerable: assessment.tolerable,
     edge: assessment.edge,
+    study: studyOf(scenario),
     cause: present({
       label: assessment.cause.label,
       function: cause?.function,
@@ -193,6 +198,17 @@ function scenarioReport(
     alternatives: assessment.alternatives.map((a) => present({ layers: [...a.layers], pfdProduct: a.pfdProduct, mitigated: a.mitigated })),
     findings: scenarioFindings.map((f) => f.key),
   });
+}
+
+function studyOf(scenario: Model['scenarios'][number] | undefined): ScenarioReport['study'] {
+  if (!scenario) return undefined;
+  const study = present({
+    document: scenario.study,
+    node: scenario.studyNode,
+    deviation: scenario.studyDeviation,
+    recommendations: scenario.studyRecommendations ? [...scenario.studyRecommendations] : undefined,
+  });
+  return Object.keys(study).length ? study : undefined;
 }
 
 /** The sorted findings, indexed so each scenario picks its own without scanning them all. */
@@ -243,21 +259,26 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
     .map((a) => scenarioReport(model, a, index, traces, titles));
   const functionTitles = new Map(model.functions.map((f) => [f.tag, f.title]));
   const count = (severity: Finding['severity']) => findings.filter((f) => f.severity === severity).length;
+  const policy = POLICY_SWITCHES.map(({ field, name }) => {
+    const value = model.policy?.[field];
+    return value === undefined
+      ? { name, value: String(POLICY_DEFAULTS[field]), origin: 'default' as const }
+      : { name, value: String(value), origin: 'model' as const };
+  });
+  const rules = rulesInForce(analysis);
   return present({
     formatVersion: REPORT_FORMAT_VERSION,
     tool: { name: 'bulkhead' as const, version: input.toolVersion },
     model: { file: input.file, sha256: input.sha256 },
     site: present({ name: model.site.name, description: model.site.description }),
     date: input.date,
+    control: documentControl(model, input.control),
+    assumptions: assumptions(model, policy),
+    sources: sourceList(rules),
     cautions: [...CAUTIONS],
     conventions: [...CONVENTIONS],
-    policy: POLICY_SWITCHES.map(({ field, name }) => {
-      const value = model.policy?.[field];
-      return value === undefined
-        ? { name, value: String(POLICY_DEFAULTS[field]), origin: 'default' as const }
-        : { name, value: String(value), origin: 'model' as const };
-    }),
-    rules: rulesInForce(analysis),
+    policy,
+    rules,
     summary: {
       scenarios: scenarios.length,
       scenariosMeetingAfter: scenarios.filter((s) => s.lopa[1]!.meets).length,

@@ -156,6 +156,15 @@ const Scenario = z
     harm: z.enum(['people', 'containment', 'asset']),
     tolerable: z.number(),
     edge: z.enum(['below', 'at-most']),
+    study: z
+      .strictObject({
+        document: z.string().optional(),
+        node: z.string().optional(),
+        deviation: z.string().optional(),
+        recommendations: Tags.optional(),
+      })
+      .optional()
+      .meta({ description: 'Where the scenario comes from in the hazard study, as the model gives it' }),
     cause: z.strictObject({
       label: z.string(),
       function: z.string().optional(),
@@ -219,6 +228,35 @@ export const ReportDocument = z
       sha256: z.string().regex(/^[0-9a-f]{64}$/),
     }),
     site: z.strictObject({ name: z.string(), description: z.string().optional() }),
+    control: z
+      .strictObject({
+        document: z.string().optional(),
+        revision: z.string().optional(),
+        status: z.string().optional(),
+        basedOn: Tags.meta({ description: 'Source documents and revisions the model was built from' }),
+        preparedBy: z.string().optional(),
+        checkedBy: z.string().optional(),
+        approvedBy: z.string().optional(),
+      })
+      .optional()
+      .meta({ id: 'DocumentControl', description: 'Document number, revision and status from the model or the command line' }),
+    assumptions: Tags.optional().meta({ description: 'The conventions and policy in force that the figures rest on' }),
+    sources: z
+      .array(
+        z.strictObject({
+          id: z.string().meta({ description: 'Reference used by the rules table: R1, R2, ...' }),
+          work: z.string(),
+          edition: z.string().optional(),
+          clauses: Tags,
+          checked: z.enum(['yes', 'partly', 'from-memory', 'no-source']).meta({
+            description:
+              'yes: no clause cited from it is marked from memory; partly: some are (marked on the clause); from-memory: all are; no-source: common practice or policy',
+          }),
+          rules: Tags,
+        }),
+      )
+      .optional()
+      .meta({ description: 'Every source the rules cite, once' }),
     date: z.string().optional().meta({ description: 'Only when given on the command line, so output stays reproducible' }),
     cautions: Tags,
     conventions: Tags,

@@ -5,6 +5,7 @@ import type { Finding } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
 import { FACTOR_RULES, type ModelLocator } from './locate.ts';
+import { alikeDevices } from './alike.ts';
 
 const KINDS: Record<Finding['severity'], string> = {
   'voids-credit': 'Credit voided',
@@ -28,8 +29,10 @@ export function findingNotice(finding: Finding, locate: ModelLocator): Notice {
     const path = finding.paths[i];
     if (path && path.length > 1) facts.push({ label: party.role === 'cause' ? 'cause' : 'layer', text: path.join(' -> ') });
   });
+  const alike = alikeDevices(finding);
   const elementSpan = finding.element ? locate.element(finding.element) : undefined;
-  if (finding.element && elementSpan) facts.push({ label: 'element', text: `${finding.element}, defined at ${place(elementSpan)}` });
+  if (alike) facts.push({ label: 'devices', text: `${alike.join(', ')}: the same make and model; nothing is shared` });
+  else if (finding.element && elementSpan) facts.push({ label: 'element', text: `${finding.element}, defined at ${place(elementSpan)}` });
   if (finding.accepted) facts.push({ label: 'accepted', text: `by ${finding.accepted.by} on ${finding.accepted.date}: ${finding.accepted.reason}` });
   facts.push({ label: 'why', text: `${finding.rationale} (${finding.source})` });
   return {

@@ -31,6 +31,8 @@ ul { padding-left: 1.3rem; }
 .verdict-independent, .verdict-accepted { color: #005a8c; }
 .verdict-voided { color: #8a3b00; font-weight: 600; }
 .verdict-unverified, .verdict-open { color: #6b4a00; font-weight: 600; }
+table.sign td { height: 2.6rem; min-width: 8rem; }
+table.worksheet td, table.worksheet th { font-size: .85em; }
 @media print {
   body { max-width: none; padding: 0; font-size: 10.5pt; }
   @page { margin: 14mm 12mm; }
@@ -78,7 +80,7 @@ function block(b: Block, out: string[]): void {
         out.push(`<p><em>${escapeHtml(b.caption)}: none.</em></p>`);
         return;
       }
-      out.push('<table>', `<caption>${escapeHtml(b.caption)}</caption>`);
+      out.push(b.sign ? '<table class="sign">' : b.compact ? '<table class="worksheet">' : '<table>', `<caption>${escapeHtml(b.caption)}</caption>`);
       out.push(`<thead><tr>${b.head.map((h) => `<th scope="col">${escapeHtml(h)}</th>`).join('')}</tr></thead>`, '<tbody>');
       for (const row of b.rows) out.push(`<tr>${row.map((c, i) => cell(c, b.rowHeaders && i === 0)).join('')}</tr>`);
       out.push('</tbody>', '</table>');
@@ -91,7 +93,33 @@ function block(b: Block, out: string[]): void {
   }
 }
 
-export function renderHtml(blocks: readonly Block[], title: string): string {
+export interface PageOptions {
+  /** Printed at the foot of every page, with the page number and count: the document, the model file, its hash. */
+  footer?: string;
+  landscape?: boolean;
+}
+
+/** Text for a CSS string: quotes and backslashes escaped, and `<` too, so nothing closes the style element. */
+function cssString(text: string): string {
+  return `"${text.replace(/[\\"<>\n\r]/g, (c) => `\\${c.charCodeAt(0).toString(16)} `)}"`;
+}
+
+/**
+ * Page boxes for print: the footer and "page N of M" in the bottom margin of every page, which Chromium
+ * (131 and later) and other engines with CSS Paged Media margin boxes print on each page.
+ */
+function pageStyle(options: PageOptions): string {
+  const size = options.landscape ? ' size: A4 landscape;' : '';
+  if (options.footer === undefined) return options.landscape ? `@media print { @page {${size} } }` : '';
+  return `@media print {
+  @page {${size} margin: 14mm 12mm 18mm;
+    @bottom-left { content: ${cssString(options.footer)}; font: 7pt ui-monospace, Menlo, Consolas, monospace; color: #333; }
+    @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 8pt system-ui, sans-serif; color: #333; white-space: nowrap; }
+  }
+}`;
+}
+
+export function renderHtml(blocks: readonly Block[], title: string, options: PageOptions = {}): string {
   const out: string[] = [
     '<!DOCTYPE html>',
     '<html lang="en">',
@@ -102,7 +130,7 @@ export function renderHtml(blocks: readonly Block[], title: string): string {
     `<meta http-equiv="Content-Security-Policy" content="default-src 'none'; style-src 'unsafe-inline'; img-src data:">`,
     '<link rel="icon" href="data:,">',
     `<title>${escapeHtml(title)}</title>`,
-    `<style>${STYLE}</style>`,
+    `<style>${STYLE}${pageStyle(options)}</style>`,
     '</head>',
     '<body>',
     '<main>',

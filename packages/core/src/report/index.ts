@@ -6,24 +6,48 @@ import { renderHtml } from './html.ts';
 import { layoutReport } from './layout.ts';
 import { renderMarkdown } from './markdown.ts';
 import { renderSarif } from './sarif.ts';
+import { runningFooter } from './control-layout.ts';
+import { layoutWorksheet, renderWorksheetCsv } from './worksheet.ts';
+import { groupActions, renderActionsCsv, withWorth } from './actions.ts';
 
 export const REPORT_FORMATS = ['md', 'html', 'csv', 'json', 'sarif'] as const;
 export type ReportFormat = (typeof REPORT_FORMATS)[number];
+
+/** What a report holds: the evidence list (every format), the LOPA worksheet, or the actions list. */
+export const REPORT_CONTENTS = ['evidence', 'worksheet', 'actions'] as const;
+export type ReportContents = (typeof REPORT_CONTENTS)[number];
+export const FORMATS_OF: Record<ReportContents, readonly ReportFormat[]> = {
+  evidence: REPORT_FORMATS,
+  worksheet: ['md', 'html', 'csv'],
+  actions: ['csv'],
+};
 
 export function isReportFormat(word: string): word is ReportFormat {
   return (REPORT_FORMATS as readonly string[]).includes(word);
 }
 
+export function isReportContents(word: string): word is ReportContents {
+  return (REPORT_CONTENTS as readonly string[]).includes(word);
+}
+
 /** Renders one report. The same input gives byte-identical output: nothing here reads a clock or a locale. */
-export function renderReport(input: ReportInput, format: ReportFormat): string {
+export function renderReport(input: ReportInput, format: ReportFormat, contents: ReportContents = 'evidence'): string {
+  if (!FORMATS_OF[contents].includes(format)) throw new Error(`the ${contents} report has no ${format} format`);
   const doc = buildReportDocument(input);
+  const footer = runningFooter(doc);
+  if (contents === 'worksheet') {
+    if (format === 'csv') return renderWorksheetCsv(doc);
+    const blocks = layoutWorksheet(doc);
+    return format === 'md' ? renderMarkdown(blocks) : renderHtml(blocks, `LOPA worksheet: ${doc.site.name}`, { footer, landscape: true });
+  }
+  if (contents === 'actions') return renderActionsCsv(withWorth(groupActions(doc), input.model, doc));
   switch (format) {
     case 'json':
       return `${JSON.stringify(doc, null, 2)}\n`;
     case 'md':
       return renderMarkdown(layoutReport(doc));
     case 'html':
-      return renderHtml(layoutReport(doc), `Independence evidence list: ${doc.site.name}`);
+      return renderHtml(layoutReport(doc), `Independence evidence list: ${doc.site.name}`, { footer });
     case 'csv':
       return renderCsv(doc);
     case 'sarif':
@@ -45,3 +69,7 @@ export { SARIF_LEVELS, FINGERPRINT } from './sarif.ts';
 export { escapeHtml } from './html.ts';
 export { escapeMarkdown } from './markdown.ts';
 export { compareTags } from './order.ts';
+export { WORKSHEET_COLUMNS, worksheetRows, type WorksheetRow } from './worksheet.ts';
+export { ACTION_COLUMNS, groupActions, withWorth, type Action } from './actions.ts';
+export { decidingReasons, decidingText, type Deciding } from './deciding.ts';
+export { sourceList, splitCitations, readCitation, type SourceEntry } from './sources.ts';

@@ -1,6 +1,9 @@
 // The evidence list's layout, shared by the Markdown and HTML reports: header, summary, one section per
 // scenario (cause, layers with their traced elements and verdicts, LOPA lines), then the appendices.
 import { justifiedKeyOf } from '../justify/apply.ts';
+import { alikeDevices } from './alike.ts';
+import { studyText } from './worksheet.ts';
+import { assumptionsBlocks, issueBlock, referencesOf, signOff, sourcesAppendix } from './control-layout.ts';
 import type { LayerReport, ReportDocument, ReportFinding, ScenarioReport } from './document.ts';
 import { code, codeList, richFromMessage, status, strong, type Block, type Rich } from './blocks.ts';
 import {
@@ -11,7 +14,7 @@ import {
   criterionText,
   formatFrequency,
   formatProbability,
-  formatRatio,
+  gapText,
   pathText,
   policyText,
   sifText,
@@ -33,8 +36,6 @@ function header(doc: ReportDocument): Block[] {
   const rows: Rich[][] = [
     [['Site'], [doc.site.name]],
     ...(doc.site.description ? [[['Description'], [doc.site.description]]] : []),
-    [['Model file'], [code(doc.model.file)]],
-    [['SHA-256 of the model file'], [code(doc.model.sha256)]],
     [['Tool'], [`bulkhead ${doc.tool.version}`]],
     [['Report format version'], [String(doc.formatVersion)]],
     ...(doc.date ? [[['Date'], [doc.date]]] : []),
@@ -42,8 +43,10 @@ function header(doc: ReportDocument): Block[] {
   ];
   return [
     { type: 'heading', level: 1, text: [`Independence evidence list: ${doc.site.name}`] },
+    issueBlock(doc),
     { type: 'table', caption: 'What this report covers', head: ['Item', 'Value'], rows, rowHeaders: true },
     { type: 'caution', title: 'Caution', items: doc.cautions.map((c) => [c]) },
+    ...signOff(doc),
   ];
 }
 
@@ -81,35 +84,39 @@ function ruleSet(doc: ReportDocument): Block[] {
     { type: 'heading', level: 2, text: ['Rule set in force'] },
     {
       type: 'table',
-      caption: 'Rules applied, with the severity in force and its source',
-      head: ['Rule', 'Title', 'Severity', 'Default', 'Source'],
+      caption: 'Rules applied, with the severity in force and its sources (listed in Appendix C)',
+      head: ['Rule', 'Title', 'Severity', 'Default', 'Sources'],
       rows: doc.rules.map((r) => [
         [code(r.id)],
         [r.title],
         [SEVERITY_LABELS[r.severity] + (r.reason ? ` (changed by the model: ${r.reason})` : '')],
         [SEVERITY_LABELS[r.defaultSeverity]],
-        [r.source],
+        [referencesOf(doc, r.id)],
       ]),
       rowHeaders: true,
     },
     { type: 'heading', level: 2, text: ['Conventions'] },
     { type: 'list', items: doc.conventions.map((c) => [c]) },
+    ...assumptionsBlocks(doc),
   ];
 }
 
 function findingLines(f: ReportFinding): Rich[] {
   const lines: Rich[] = [[strong(SEVERITY_LABELS[f.severity]), ' ', code(f.rule), ` (${f.title}): `, ...richFromMessage(f.message)]];
-  if (f.element) lines.push(['Shared element: ', code(f.element)]);
+  const alike = alikeDevices(f);
+  if (alike) lines.push(['Devices of the same make and model (nothing is shared): ', ...codeList(alike)]);
+  else if (f.element) lines.push(['Shared element: ', code(f.element)]);
   f.parties.forEach((p, i) => {
     const path = f.paths[i];
     const who = p.role === 'cause' ? 'From the cause' : 'From layer';
     if (path && path.length > 0) lines.push([`${who}${p.tag && p.role === 'layer' ? ' ' : ''}`, ...(p.role === 'layer' && p.tag ? [code(p.tag)] : []), ': ', ...pathText(path)]);
   });
-  lines.push([`Why: ${f.rationale} Source: ${f.source}.`]);
+  lines.push([`Why: ${f.rationale} Sources: ${f.source}.`]);
   const justified = justifiedKeyOf(f);
   if (justified !== undefined) lines.push(['To resolve: remove or correct the ', code('accept'), ' statement for ', code(justified), '; no justification can accept this finding.']);
   else if (f.accepted) lines.push([strong('Accepted'), ` by ${f.accepted.by} on ${f.accepted.date}: ${f.accepted.reason}`]);
-  else lines.push(['Not accepted. Key for a justification: ', code(f.key)]);
+  else if (f.severity === 'note') lines.push(['A note changes no credit and needs no acceptance. Key: ', code(f.key)]);
+  else lines.push(['Open: no justification accepts it yet. Key for a justification: ', code(f.key)]);
   return lines;
 }
 
@@ -213,6 +220,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
   const blocks: Block[] = [
     { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''] },
     { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
+    ...(s.study ? [{ type: 'paragraph' as const, text: [`From the hazard study: ${studyText(s)}.`] }] : []),
     { type: 'heading', level: 3, text: ['Initiating cause'] },
     { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.${causeFigures(s)}`] },
     {
@@ -279,7 +287,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
       ]),
       rowHeaders: true,
     },
-    { type: 'paragraph', text: [`Gap after independence: ${formatRatio(s.gap)} times the tolerable frequency.`] },
+    { type: 'paragraph', text: [`After independence, ${gapText(s.gap)}.`] },
   );
   const sif = sifText(s);
   if (sif) blocks.push({ type: 'paragraph', text: sif });
@@ -314,6 +322,11 @@ function appendices(doc: ReportDocument): Block[] {
       ]),
     ],
   };
+  // A finding already written out in full under the layer it decides is listed here in one row; the
+  // others (about a cause, a modifier, a note, the model) are written out here, once.
+  const detailed = new Map<string, string>();
+  for (const s of doc.scenarios) for (const l of s.layers) for (const key of l.findings) if (!detailed.has(key)) detailed.set(key, `${s.id}, layer ${l.function}`);
+  const listed = doc.findings.filter((f) => detailed.has(f.key));
   const findings: Block = {
     type: 'section',
     kind: 'appendix',
@@ -321,7 +334,14 @@ function appendices(doc: ReportDocument): Block[] {
     blocks: [
       { type: 'heading', level: 2, text: ['Appendix B: every finding'] },
       ...(doc.findings.length === 0 ? [{ type: 'paragraph' as const, text: ['No findings.'] }] : []),
-      ...doc.findings.flatMap((f): Block[] => [
+      {
+        type: 'table',
+        caption: 'Findings written out in full in their scenario, under the layer they decide',
+        head: ['Finding', 'Severity', 'Written out under', 'State'],
+        rows: listed.map((f) => [[code(f.key)], [SEVERITY_LABELS[f.severity]], [detailed.get(f.key)!], [f.accepted ? `accepted by ${f.accepted.by} on ${f.accepted.date}` : 'open']]),
+        rowHeaders: true,
+      },
+      ...doc.findings.filter((f) => !detailed.has(f.key)).flatMap((f): Block[] => [
         { type: 'heading', level: 3, text: [code(f.key)], id: anchorOf('finding', f.key) },
         { type: 'paragraph', text: [f.scenario ? 'Scenario ' : 'Model-wide', ...(f.scenario ? [code(f.scenario)] : []), '.'] },
         { type: 'list', items: findingLines(f) },
@@ -332,10 +352,13 @@ function appendices(doc: ReportDocument): Block[] {
 }
 
 export function layoutReport(doc: ReportDocument): Block[] {
-  const byKey = new Map(doc.findings.map((f) => [f.key, f]));
+  // Each finding cites its sources by their Appendix C references, so a source is written out once.
+  const byKey = new Map(doc.findings.map((f) => [f.key, { ...f, source: `${referencesOf(doc, f.rule) || 'none'} (Appendix C)` }]));
+  const findings = doc.findings.map((f) => byKey.get(f.key)!);
   return [
     { type: 'section', kind: 'front', id: 'front', blocks: [...header(doc), ...summary(doc), ...ruleSet(doc)] },
     ...doc.scenarios.map((s) => scenarioSection(s, byKey)),
-    ...appendices(doc),
+    ...appendices({ ...doc, findings }),
+    sourcesAppendix(doc),
   ];
 }

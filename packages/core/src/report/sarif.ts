@@ -7,6 +7,7 @@ import type { SeverityLevel } from '../model/schema.ts';
 import type { ReportInput } from './build.ts';
 import type { ReportDocument, ReportFinding } from './document.ts';
 import { FACTOR_RULES, ModelLocator } from './locate.ts';
+import { alikeDevices } from './alike.ts';
 import { policyText } from './text.ts';
 
 export const SARIF_SCHEMA_URI = 'https://json.schemastore.org/sarif-2.1.0.json';
@@ -89,7 +90,9 @@ class ResultBuilder {
   private related(f: ReportFinding): Sarif.Location[] {
     const out: Sarif.Location[] = [];
     let id = 1;
-    if (f.element !== undefined) out.push(this.location(this.locator.element(f.element), `shared element \`${f.element}\` is defined here`, id++));
+    const alike = alikeDevices(f);
+    if (alike) for (const tag of alike) out.push(this.location(this.locator.element(tag), `\`${tag}\`, of the same make and model, is defined here`, id++));
+    else if (f.element !== undefined) out.push(this.location(this.locator.element(f.element), `shared element \`${f.element}\` is defined here`, id++));
     const firstLayer = f.parties.findIndex((p) => p.role === 'layer' && p.tag !== undefined);
     f.parties.forEach((p, i) => {
       if (i === firstLayer) return;
@@ -143,7 +146,7 @@ class ResultBuilder {
         key: f.key,
         severity: f.severity,
         ...(f.scenario !== undefined ? { scenario: f.scenario } : {}),
-        ...(f.element !== undefined ? { sharedElement: f.element } : {}),
+        ...(alikeDevices(f) ? { sameMakeModel: alikeDevices(f) } : f.element !== undefined ? { sharedElement: f.element } : {}),
         rationale: f.rationale,
         source: f.source,
       },

@@ -1,10 +1,10 @@
 // The words and number formats the reports share: verdict labels, sourced values, paths, SIF lines.
 // Numbers follow the assessment's own text format, so a report and `bulkhead check` print the same figures.
-import { edgeRelation, edgeText, formatFrequency, formatProbability, formatRatio } from '../assess/format.ts';
+import { edgeRelation, edgeText, formatFrequency, formatProbability, formatRatio, gapText } from '../assess/format.ts';
 import type { ReportDocument, ScenarioReport } from './document.ts';
 import { code, codeList, type Rich } from './blocks.ts';
 
-export { formatFrequency, formatProbability, formatRatio };
+export { formatFrequency, formatProbability, formatRatio, gapText };
 
 export const VERDICT_LABELS: Record<ScenarioReport['layers'][number]['verdict'], string> = {
   independent: 'independent',
