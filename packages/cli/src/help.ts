@@ -15,6 +15,12 @@ commands:
   report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD] [--fail-on LEVEL]
                         write the evidence list (report --json-schema: the JSON report's schema)
   view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
+  cut-sets FILE [--order N] [--format text|json]
+                        per scenario, the smallest sets of elements that start it and defeat every layer
+  common-causes FILE [--format text|json|csv]
+                        the elements behind findings, ranked by what they cost across the site
+  diff OLD NEW | diff FILE --git REV [--format text|md|json|sarif] [--fail-on worse]
+                        what a revision did to independence: changes, findings, verdicts, stale justifications
 
 exit codes: 0 clean, 1 findings at or above --fail-on (or fmt --check found changes),
             2 bad input or usage, 3 internal error
@@ -65,6 +71,24 @@ with errors shows them and keeps the last good view. Serves only the viewer's ow
 
 Needs the built viewer: run \`npm run build -w @bulkhead/viewer\` once (exit 2 says so if it is missing).
 exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwise runs until Ctrl+C (0)
+`,
+  'cut-sets': `usage: bulkhead cut-sets FILE [--order N] [--format text|json]
+
+For each scenario, every minimal set of elements whose joint failure both starts the scenario (an element
+the cause relies on) and defeats every claimed layer, single points of failure first, with the path from
+each side to each element and the findings about it. A MooN group is defeated when N-M+1 channels are.
+Exact (MOCUS, Fussell and Vesely 1972; NUREG-0492 ch. VII), up to the order asked.
+
+  --order N    largest set listed, 1 to 4 (default 2: single points and pairs)
+  --format     text (default) or json
+`,
+  'common-causes': `usage: bulkhead common-causes FILE [--format text|json|csv]
+
+Every element that takes part in an independence finding, ranked by the mitigated frequency it costs on
+its own, then by the frequency at stake in the layers it touches, then by layers and scenarios. Each
+affected scenario is assessed again without the element's findings; the order is printed with the list.
+
+  --format     text (default), json or csv
 `,
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',

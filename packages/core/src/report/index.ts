@@ -45,3 +45,4 @@ export { SARIF_LEVELS, FINGERPRINT } from './sarif.ts';
 export { escapeHtml } from './html.ts';
 export { escapeMarkdown } from './markdown.ts';
 export { compareTags } from './order.ts';
+export { renderCutSetsText, renderCommonCausesText, renderCommonCausesCsv, COMMON_CAUSE_CSV_COLUMNS, CUT_SET_METHOD } from './site-wide.ts';
