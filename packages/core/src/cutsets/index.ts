@@ -34,7 +34,7 @@ export interface CutSet {
 export interface ScenarioCutSets {
   scenario: string;
   maxOrder: number;
-  /** The claimed layers the tree requires defeated, in claim order. */
+  /** The claimed layers the tree requires defeated, sorted by tag (statement order does not matter). */
   layers: string[];
   /** True when no element of the model starts the scenario (an external cause): it has no cut set. */
   noStartingElement: boolean;
@@ -51,6 +51,8 @@ export interface CutSetOptions {
   tracer?: Tracer;
 }
 
+const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
 /** Minimal cut sets up to `maxOrder` for every scenario, in model order. */
 export function modelCutSets(model: Model, options: CutSetOptions = {}): ScenarioCutSets[] {
   const maxOrder = options.maxOrder ?? DEFAULT_CUT_SET_ORDER;
@@ -66,7 +68,8 @@ export function modelCutSets(model: Model, options: CutSetOptions = {}): Scenari
       for (const element of elements) {
         const fromCause = built.causePaths.get(element);
         if (fromCause) paths.push({ element, party: 'cause', path: [...fromCause] });
-        for (const [layer, tags] of built.layerPaths) {
+        for (const layer of [...built.layerPaths.keys()].sort(compareText)) {
+          const tags = built.layerPaths.get(layer)!;
           const path = tags.get(element);
           if (path) paths.push({ element, party: layer, path: [...path] });
         }
@@ -77,11 +80,11 @@ export function modelCutSets(model: Model, options: CutSetOptions = {}): Scenari
     return {
       scenario: scenario.id,
       maxOrder,
-      layers: (scenario.layers ?? []).map((l) => l.function),
+      layers: (scenario.layers ?? []).map((l) => l.function).sort(compareText),
       noStartingElement: built.tree === undefined,
       cutSets,
-      incompleteLayers: built.incompleteLayers,
-      unknownLayers: built.unknownLayers,
+      incompleteLayers: [...built.incompleteLayers].sort(compareText),
+      unknownLayers: [...built.unknownLayers].sort(compareText),
     };
   });
 }

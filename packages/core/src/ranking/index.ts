@@ -18,7 +18,7 @@ export interface CommonCause {
   title?: string;
   /** Claimed layers (scenario and layer) named by the element's open findings. */
   layers: number;
-  /** Scenarios with an open finding about the element, in model order. */
+  /** Scenarios with an open finding about the element, by id. */
   scenarios: string[];
   /** Every finding about the element, notes and accepted ones included. */
   findings: number;
@@ -39,6 +39,9 @@ export interface CommonCause {
 /** How much lower `after` is than `before`; rounding noise and a rise (which removing findings cannot cause) count as none. */
 const drop = (before: number, after: number) => (sameFigure(before, after) ? 0 : Math.max(0, before - after));
 
+// Sums run over scenarios in id order, so the figures (and ties) do not depend on statement order.
+const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
+
 const isOpen = (f: Finding) => f.accepted === undefined && f.severity !== 'note';
 
 interface ScenarioFigure {
@@ -53,7 +56,6 @@ export function rankCommonCauses(model: Model, analysis: Analysis): CommonCause[
   const byScenario = new Map<string, Finding[]>();
   for (const f of independence) (byScenario.get(f.scenario!) ?? byScenario.set(f.scenario!, []).get(f.scenario!)!).push(f);
   const scenarios = new Map(model.scenarios.map((s) => [s.id, s]));
-  const order = new Map(model.scenarios.map((s, i) => [s.id, i]));
   const bpcs = bpcsFactsOf(model);
   const functions = new Map(model.functions.map((f) => [f.tag, f]));
   const figure = (scenario: Scenario, findings: readonly Finding[]): ScenarioFigure => {
@@ -71,7 +73,7 @@ export function rankCommonCauses(model: Model, analysis: Analysis): CommonCause[
   for (const [tag, findings] of about) {
     const open = findings.filter(isOpen);
     const layers = new Set(open.flatMap((f) => f.parties.filter((p) => p.role === 'layer').map((p) => `${f.scenario} ${p.tag}`)));
-    const touched = [...new Set(open.map((f) => f.scenario!))].sort((a, b) => order.get(a)! - order.get(b)!);
+    const touched = [...new Set(open.map((f) => f.scenario!))].sort(compareText);
     let frequencyCost = 0;
     let gapReduction = 0;
     let frequencyAtStake = 0;
@@ -101,6 +103,6 @@ export function rankCommonCauses(model: Model, analysis: Analysis): CommonCause[
       wouldMeet,
     });
   }
-  rows.sort((a, b) => b.frequencyCost - a.frequencyCost || b.frequencyAtStake - a.frequencyAtStake || b.layers - a.layers || b.scenarios.length - a.scenarios.length || (a.element < b.element ? -1 : a.element > b.element ? 1 : 0));
+  rows.sort((a, b) => b.frequencyCost - a.frequencyCost || b.frequencyAtStake - a.frequencyAtStake || b.layers - a.layers || b.scenarios.length - a.scenarios.length || compareText(a.element, b.element));
   return rows.map((row, i) => ({ rank: i + 1, ...row }));
 }

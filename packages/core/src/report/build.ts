@@ -9,6 +9,9 @@ import { meetsCriterion } from '../assess/numbers.ts';
 import { POLICY_DEFAULTS } from '../vocabulary/policy.ts';
 import { ASSESS_RULES } from '../assess/limits.ts';
 import { RULES } from '../rules/registry.ts';
+import { DEFAULT_CUT_SET_ORDER, modelCutSets } from '../cutsets/index.ts';
+import { RANKING_ORDER, rankCommonCauses } from '../ranking/index.ts';
+import { CUT_SET_METHOD } from './site-wide.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';
 import { byTag, compareFindings, compareTags } from './order.ts';
 
@@ -276,5 +279,11 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       }),
     ),
     findings: findings.map(findingReport),
+    cutSets: {
+      method: CUT_SET_METHOD,
+      maxOrder: DEFAULT_CUT_SET_ORDER,
+      scenarios: modelCutSets(model, { findings: analysis.findings }).sort(byTag((s) => s.scenario)),
+    },
+    commonCauses: { order: RANKING_ORDER, elements: rankCommonCauses(model, analysis) },
   });
 }
