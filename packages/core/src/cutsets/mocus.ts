@@ -77,17 +77,29 @@ function compareSets(a: readonly string[], b: readonly string[]): number {
   return 0;
 }
 
+/** Whether some proper subset of `set` (sorted) is already kept: by lookup of each subset while sets are small. */
+function containsKept(set: readonly string[], kept: ReadonlySet<string>, keptSets: readonly ReadonlySet<string>[]): boolean {
+  if (set.length > 12) return keptSets.some((k) => k.size < set.length && [...k].every((e) => set.includes(e)));
+  for (let mask = 1; mask < (1 << set.length) - 1; mask++) {
+    if (kept.has(JSON.stringify(set.filter((_, i) => mask & (1 << i))))) return true;
+  }
+  return false;
+}
+
 /** Drops duplicates and every set that contains a smaller one; the result is sorted by size, then by tags. */
 export function minimalSets(sets: readonly (readonly string[])[]): string[][] {
-  const sorted = sets.map((s) => [...s].sort()).sort(compareSets);
-  const kept: string[][] = [];
+  const sorted = sets.map((s) => [...new Set(s)].sort()).sort(compareSets);
+  const out: string[][] = [];
+  const kept = new Set<string>();
   const keptSets: Set<string>[] = [];
   for (const candidate of sorted) {
-    if (keptSets.some((k) => k.size <= candidate.length && [...k].every((e) => candidate.includes(e)))) continue;
-    kept.push(candidate);
+    const key = JSON.stringify(candidate);
+    if (kept.has(key) || containsKept(candidate, kept, keptSets)) continue;
+    out.push(candidate);
+    kept.add(key);
     keptSets.push(new Set(candidate));
   }
-  return kept;
+  return out;
 }
 
 /**
