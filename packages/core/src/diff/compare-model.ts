@@ -157,6 +157,8 @@ function compareItems(before: Model, after: Model, kind: ItemKind, renames: Read
       continue;
     }
     matched.add(twin.id);
+    // Most items of a revision are untouched: the same text is no change, without the attribute walk.
+    if (JSON.stringify(item.body) === JSON.stringify(twin.body)) continue;
     const { tag: _a, id: _b, ...a } = normalised(item.body, renames) as Plain;
     const { tag: _c, id: _d, ...b } = normalised(twin.body, new Map()) as Plain;
     const diff = attributeChanges(a, b);

@@ -106,7 +106,7 @@ export function isEmptyDiff(diff: RevisionDiff): boolean {
 
 /** SARIF 2.1.0 of the findings the new revision added (appeared, or raised in severity), for code review. */
 export function renderDiffSarif(diff: RevisionDiff, input: ReportInput): string {
-  const doc = buildReportDocument(input);
+  const doc = buildReportDocument(input, { siteWide: false });
   const fresh = new Set([...diff.appeared.map((f) => f.key), ...diff.severityChanged.map((c) => c.new.key)]);
   return renderSarif({ ...doc, findings: doc.findings.filter((f) => fresh.has(f.key)) }, input);
 }

@@ -235,7 +235,22 @@ function findingReport(f: Finding): ReportDocument['findings'][number] {
   });
 }
 
-export function buildReportDocument(input: ReportInput): ReportDocument {
+/**
+ * `siteWide` adds the minimal cut sets and the common-cause ranking (the JSON report carries them); the
+ * other formats do not show them, so they skip the work.
+ */
+function siteWide({ model, analysis }: ReportInput): Pick<ReportDocument, 'cutSets' | 'commonCauses'> {
+  return {
+    cutSets: {
+      method: CUT_SET_METHOD,
+      maxOrder: DEFAULT_CUT_SET_ORDER,
+      scenarios: modelCutSets(model, { findings: analysis.findings }).sort(byTag((s) => s.scenario)),
+    },
+    commonCauses: { order: RANKING_ORDER, elements: rankCommonCauses(model, analysis) },
+  };
+}
+
+export function buildReportDocument(input: ReportInput, options: { siteWide?: boolean } = {}): ReportDocument {
   const { model, analysis } = input;
   const titles = elementTitles(model);
   const traces = new Map(analysis.traces.map((t) => [t.function, t]));
@@ -279,11 +294,6 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       }),
     ),
     findings: findings.map(findingReport),
-    cutSets: {
-      method: CUT_SET_METHOD,
-      maxOrder: DEFAULT_CUT_SET_ORDER,
-      scenarios: modelCutSets(model, { findings: analysis.findings }).sort(byTag((s) => s.scenario)),
-    },
-    commonCauses: { order: RANKING_ORDER, elements: rankCommonCauses(model, analysis) },
+    ...(options.siteWide === false ? {} : siteWide(input)),
   });
 }

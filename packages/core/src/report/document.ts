@@ -280,8 +280,8 @@ export const ReportDocument = z
     scenarios: z.array(Scenario),
     functions: z.array(FunctionTrace),
     findings: z.array(Finding),
-    cutSets: CutSets,
-    commonCauses: CommonCauses,
+    cutSets: CutSets.optional().meta({ description: 'Always present in the JSON report' }),
+    commonCauses: CommonCauses.optional().meta({ description: 'Always present in the JSON report' }),
   })
   .meta({
     id: 'BulkheadReport',

@@ -16,7 +16,7 @@ export function isReportFormat(word: string): word is ReportFormat {
 
 /** Renders one report. The same input gives byte-identical output: nothing here reads a clock or a locale. */
 export function renderReport(input: ReportInput, format: ReportFormat): string {
-  const doc = buildReportDocument(input);
+  const doc = buildReportDocument(input, { siteWide: format === 'json' });
   switch (format) {
     case 'json':
       return `${JSON.stringify(doc, null, 2)}\n`;
