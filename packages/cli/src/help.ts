@@ -72,6 +72,22 @@ with errors shows them and keeps the last good view. Serves only the viewer's ow
 Needs the built viewer: run \`npm run build -w @bulkhead/viewer\` once (exit 2 says so if it is missing).
 exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwise runs until Ctrl+C (0)
 `,
+  diff: `usage: bulkhead diff OLD NEW [--format text|md|json|sarif] [--fail-on worse]
+       bulkhead diff FILE --git REV [--format ...] [--fail-on worse]
+
+What the change from OLD to NEW did to independence. First line: how many scenarios got worse and better.
+Then each scenario whose verdict, mitigated frequency after independence or required SIL moved (before
+and after), findings that appeared, disappeared or changed severity or acceptance (matched by key, and by
+rule, parties and element where a tag was renamed), justifications the change made stale, and every
+model change: > renamed, + added, - removed, ~ attribute changed. Statement order never matters.
+
+  --git REV    read OLD from git revision REV of FILE (run in FILE's folder)
+  --format     text (default), md, json, or sarif (only the findings NEW added, for code review)
+  --fail-on    worse: exit 1 when a scenario got worse, an added scenario falls short, or an open
+               finding (above a note) is new, more severe or no longer accepted
+
+exit codes: 0 nothing worse (or no --fail-on), 1 worse with --fail-on worse, 2 bad input or usage
+`,
   'cut-sets': `usage: bulkhead cut-sets FILE [--order N] [--format text|json]
 
 For each scenario, every minimal set of elements whose joint failure both starts the scenario (an element

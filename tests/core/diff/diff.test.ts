@@ -159,3 +159,15 @@ describe('properties of every diff', () => {
     expect(isEmptyDiff(diff(a, shuffled(a)))).toBe(true);
   });
 });
+
+describe('justifications a change makes stale', () => {
+  it('reports the acceptance of a finding the change removed, and counts it as worse', () => {
+    // Rev B accepts same-make-model for LT-102/LT-103; giving LT-103 another model removes that finding.
+    const remade = REV_B.replace('transmitter LT-103 variable=level make="Orrin" model="GR-7"', 'transmitter LT-103 variable=level make="Orrin" model="GR-9"');
+    expect(remade).not.toBe(REV_B);
+    const d = diff(load(REV_B), load(remade));
+    expect(d.staleJustifications).toEqual([{ finding: 'same-make-model:S-101:SIF-101+LAH-101:LT-103:LT-102', reason: 'it no longer matches any finding' }]);
+    expect(d.disappeared.map((f) => f.rule)).toEqual(['same-make-model']);
+    expect(madeWorse(d)).toBe(true);
+  });
+});

@@ -87,7 +87,10 @@ export function diffRevisions(before: Revision, after: Revision): RevisionDiff {
   };
 }
 
-/** Whether the change made anything worse: a scenario, a new scenario falling short, or a new open finding above a note. */
+/**
+ * Whether the change made anything worse: a scenario, a new scenario falling short, or an open finding
+ * above a note that is new, more severe, or no longer accepted.
+ */
 export function madeWorse(diff: RevisionDiff): boolean {
   const openAbove = (f: { accepted: boolean; severity: string }) => !f.accepted && f.severity !== 'note';
   const rank = { note: 0, 'needs-justification': 1, 'voids-credit': 2 } as const;
@@ -95,7 +98,8 @@ export function madeWorse(diff: RevisionDiff): boolean {
     diff.summary.worse > 0 ||
     diff.summary.addedFallingShort > 0 ||
     diff.appeared.some(openAbove) ||
-    diff.severityChanged.some((c) => openAbove(c.new) && rank[c.new.severity] > rank[c.old.severity])
+    diff.severityChanged.some((c) => openAbove(c.new) && rank[c.new.severity] > rank[c.old.severity]) ||
+    diff.acceptanceChanged.some((c) => openAbove(c.new))
   );
 }
 
