@@ -38,7 +38,7 @@ export function renderCutSetsText(model: Model, all: readonly ScenarioCutSets[])
     lines.push(`== ${s.scenario}${title ? `: ${title}` : ''} ==`);
     lines.push(`  layers claimed: ${s.layers.length ? s.layers.join(', ') : 'none (any cause element alone is a cut set)'}`);
     if (s.noStartingElement) {
-      lines.push('  no cut set: the cause is external, so no element of the model starts the scenario', '');
+      lines.push('  no cut set: no element of the model starts the scenario (an external cause)', '');
       continue;
     }
     lines.push(`  ${countByOrder(s)}`);
