@@ -30,7 +30,7 @@ const sizes = process.argv.slice(2).map(Number).filter((n) => n > 0);
 for (const size of sizes.length ? sizes : [100000]) {
   const files = ensureGenerated(size);
   const model = loadModelText(files.bulk, readFileSync(files.bulk)).model!;
-  const analysis = best(1, () => analyze(model));
+  const analysis = best(3, () => analyze(model));
   const cutSets = best(3, () => modelCutSets(model, { maxOrder: 2, findings: analysis.result.findings }));
   const sets = cutSets.result.flatMap((s) => s.cutSets);
   const singles = sets.filter((c) => c.elements.length === 1).length;
