@@ -124,6 +124,8 @@ function findRenames(before: Model, after: Model): Rename[] {
       const newItems = itemsOf(after, kind);
       const oldIds = new Set(oldItems.map((i) => i.id));
       const newIds = new Set(newItems.map((i) => i.id));
+      const left = oldItems.filter((item) => !newIds.has(item.id) && !renames.has(item.id));
+      if (left.length === 0) continue;
       const taken = new Set(renames.values());
       const arrived = new Map<string, string[]>();
       for (const item of newItems) {
@@ -131,8 +133,7 @@ function findRenames(before: Model, after: Model): Rename[] {
         const sig = signature(item, new Map());
         (arrived.get(sig) ?? arrived.set(sig, []).get(sig)!).push(item.id);
       }
-      for (const item of [...oldItems].sort((x, y) => compareText(x.id, y.id))) {
-        if (newIds.has(item.id) || renames.has(item.id)) continue;
+      for (const item of left.sort((x, y) => compareText(x.id, y.id))) {
         const candidates = (arrived.get(signature(item, renames)) ?? []).filter((id) => !taken.has(id)).sort(compareText);
         if (candidates.length === 0) continue;
         renames.set(item.id, candidates[0]!);
