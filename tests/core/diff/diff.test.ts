@@ -141,6 +141,17 @@ describe('properties of every diff', () => {
     expect(d.verdicts.every((v) => v.change === 'same')).toBe(true);
   });
 
+  it('matches a renamed function and a renamed scenario the same way', () => {
+    const renamed = REV_A.replace(/\bSIF-101\b/g, 'SIF-901').replace(/\bS-101\b/g, 'S-901');
+    const d = diff(load(REV_A), load(renamed));
+    expect(d.renames).toEqual([
+      { kind: 'function', old: 'SIF-101', new: 'SIF-901' },
+      { kind: 'scenario', old: 'S-101', new: 'S-901' },
+    ]);
+    expect([d.appeared, d.disappeared, d.severityChanged]).toEqual([[], [], []]);
+    expect(d.verdicts.find((v) => v.scenario === 'S-901')).toMatchObject({ oldId: 'S-101', change: 'same' });
+  });
+
   it('a renamed element that also changed is a removal and an addition, not a silent rename', () => {
     const changed = REV_A.replace(/\bLT-102\b/g, 'LT-902').replace('technology=radar supply=from-signal mounted-on=BR-101 signal-via=AI-S-01', 'technology=dp supply=from-signal mounted-on=BR-101 signal-via=AI-S-01');
     const d = diff(load(REV_A), load(changed));
