@@ -1,6 +1,6 @@
 // The revision diff as text (answer first: how many scenarios got worse or better) and as Markdown for a
 // review comment. Both list the same facts in the same order as the JSON.
-import { formatFrequency, formatRatio } from '../assess/index.ts';
+import { ASSESSMENT_CAUTION, formatFrequency, formatRatio } from '../assess/index.ts';
 import { escapeMarkdown } from '../report/markdown.ts';
 import type { FindingRef, ScenarioFigures } from './compare-analysis.ts';
 import type { AttributeChange, ItemChanges } from './compare-model.ts';
@@ -61,6 +61,7 @@ export function renderDiffText(diff: RevisionDiff): string {
   }
   const model = modelChangeLines(diff);
   if (model.length) out.push('Model changes:', ...model.map((l) => `  ${l}`), '');
+  out.push(ASSESSMENT_CAUTION);
   return `${out.join('\n')}\n`;
 }
 
@@ -106,5 +107,6 @@ export function renderDiffMarkdown(diff: RevisionDiff): string {
   }
   const model = modelChangeLines(diff);
   if (model.length) out.push('## Model changes', '', '```', ...model.map((l) => l.replace(/`{3,}/g, "'''")), '```', '');
+  out.push(`> ${ASSESSMENT_CAUTION}`, '');
   return out.join('\n');
 }

@@ -1,7 +1,7 @@
 // The site-wide views as text and CSV: minimal cut sets per scenario (single points of failure first)
 // and the common-cause ranking with its order stated. Answer first, then the evidence, one line a fact.
 import { stringify } from 'csv-stringify/browser/esm/sync';
-import { formatFrequency } from '../assess/index.ts';
+import { ASSESSMENT_CAUTION, formatFrequency } from '../assess/index.ts';
 import type { ScenarioCutSets } from '../cutsets/index.ts';
 import type { Model } from '../model/schema.ts';
 import { RANKING_ORDER, type CommonCause } from '../ranking/index.ts';
@@ -50,6 +50,7 @@ export function renderCutSetsText(model: Model, all: readonly ScenarioCutSets[])
     });
     lines.push('');
   }
+  lines.push(ASSESSMENT_CAUTION, '');
   return lines.join('\n');
 }
 
@@ -73,6 +74,7 @@ export function renderCommonCausesText(ranking: readonly CommonCause[]): string 
     );
     lines.push(`       alone it costs ${frequency(r.frequencyCost)} (summed gap lower by ${frequency(r.gapReduction)}); ${frequency(r.frequencyAtStake)} at stake in its layers${meet}`);
   }
+  lines.push('', ASSESSMENT_CAUTION);
   return `${lines.join('\n')}\n`;
 }
 
