@@ -258,4 +258,9 @@ if (largest) {
   process.stdout.write(`\nFor comparison, not a target: \`node ${flag}\` check of the ${largest.m.elements}-element site: ${ms(tuned.wallMs)} ms, ${mb(tuned.maxRss)} MB\n`);
 }
 await layoutBenchmark();
+// Issue 15: minimal cut sets at order 2, the common-cause ranking and the diff on the largest site (bench/site-wide.ts).
+if (largest) {
+  const siteWide = spawnSync(process.execPath, ['--import', 'tsx', path('site-wide.ts', HERE), String(largest.size)], { cwd: path('.'), encoding: 'utf8', maxBuffer: 1 << 24 });
+  process.stdout.write(`\nSite-wide views (best of 3, ms):\n${siteWide.status === 0 ? siteWide.stdout : `failed: ${siteWide.stderr.slice(0, 500)}\n`}`);
+}
 if (values.strict && results.some((r) => !r.ok)) process.exitCode = 1;

@@ -18,7 +18,7 @@ const doc = buildReportDocument(input);
 
 describe('report document (invented data)', () => {
   it('should carry the header the auditor needs', () => {
-    expect(doc.formatVersion).toBe(1);
+    expect(doc.formatVersion).toBe(2);
     expect(doc.model).toEqual({ file: 'tests/invented/tiny.bulk', sha256: 'a'.repeat(64) });
     expect(doc.date).toBeUndefined();
     expect(doc.cautions.join(' ')).toMatch(/Decision support only/);
@@ -66,7 +66,7 @@ describe('report document (invented data)', () => {
     expect(schema.$schema).toBe('https://json-schema.org/draft/2020-12/schema');
     const validate = new Ajv2020({ allErrors: true, strict: false }).compile(schema);
     expect(validate(json), JSON.stringify(validate.errors)).toBe(true);
-    expect(validate({ ...json, formatVersion: 2 })).toBe(false);
+    expect(validate({ ...json, formatVersion: 1 })).toBe(false);
   });
 });
 

@@ -17,6 +17,12 @@ commands:
                         write the evidence list, the LOPA worksheet or the actions list
                         (report --json-schema: the JSON report's schema)
   view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
+  cut-sets FILE [--order N] [--format text|json]
+                        per scenario, the smallest sets of elements that start it and defeat every layer
+  common-causes FILE [--format text|json|csv]
+                        the elements behind findings, ranked by what they cost across the site
+  diff OLD NEW | diff FILE --git REV [--format text|md|json|sarif] [--fail-on worse]
+                        what a revision did to independence: changes, findings, verdicts, stale justifications
 
 exit codes (check and report alike): 0 no unaccepted finding at or above --fail-on, 1 there is one
             (default level voids-credit; --fail-on none never fails on findings; fmt --check: changes),
@@ -85,6 +91,40 @@ with errors shows them and keeps the last good view. Serves only the viewer's ow
 
 Needs the built viewer: run \`npm run build -w @bulkhead/viewer\` once (exit 2 says so if it is missing).
 exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwise runs until Ctrl+C (0)
+`,
+  diff: `usage: bulkhead diff OLD NEW [--format text|md|json|sarif] [--fail-on worse]
+       bulkhead diff FILE --git REV [--format ...] [--fail-on worse]
+
+What the change from OLD to NEW did to independence. First line: how many scenarios got worse and better.
+Then each scenario whose verdict, mitigated frequency after independence or required SIL moved (before
+and after), findings that appeared, disappeared or changed severity or acceptance (matched by key, and by
+rule, parties and element where a tag was renamed), justifications the change made stale, and every
+model change: > renamed, + added, - removed, ~ attribute changed. Statement order never matters.
+
+  --git REV    read OLD from git revision REV of FILE (run in FILE's folder)
+  --format     text (default), md, json, or sarif (only the findings NEW added, for code review)
+  --fail-on    worse: exit 1 when a scenario got worse, an added scenario falls short, or an open
+               finding (above a note) is new, more severe or no longer accepted
+
+exit codes: 0 nothing worse (or no --fail-on), 1 worse with --fail-on worse, 2 bad input or usage
+`,
+  'cut-sets': `usage: bulkhead cut-sets FILE [--order N] [--format text|json]
+
+For each scenario, every minimal set of elements whose joint failure both starts the scenario (an element
+the cause relies on) and defeats every claimed layer, single points of failure first, with the path from
+each side to each element and the findings about it. A MooN group is defeated when N-M+1 channels are.
+Exact (MOCUS, Fussell and Vesely 1972; NUREG-0492 ch. VII), up to the order asked.
+
+  --order N    largest set listed, 1 to 4 (default 2: single points and pairs)
+  --format     text (default) or json
+`,
+  'common-causes': `usage: bulkhead common-causes FILE [--format text|json|csv]
+
+Every element that takes part in an independence finding, ranked by the mitigated frequency it costs on
+its own, then by the frequency at stake in the layers it touches, then by layers and scenarios. Each
+affected scenario is assessed again without the element's findings; the order is printed with the list.
+
+  --format     text (default), json or csv
 `,
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',

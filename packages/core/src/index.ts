@@ -26,3 +26,6 @@ export * from './report/index.ts';
 export { ModelLocator, FACTOR_RULES } from './report/locate.ts';
 export { findingNotice, renderFindingText } from './report/finding-notice.ts';
 export { suggest as suggestTag } from './util/suggest.ts';
+export * from './cutsets/index.ts';
+export * from './ranking/index.ts';
+export * from './diff/index.ts';

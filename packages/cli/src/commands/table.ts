@@ -4,9 +4,11 @@ import type { ParseArgsConfig } from 'node:util';
 import { UsageError } from '../io.ts';
 import { checkCommand } from './check.ts';
 import { convertCommand } from './convert.ts';
+import { diffCommand } from './diff.ts';
 import { fmtCommand } from './fmt.ts';
 import { reportCommand } from './report.ts';
 import { schemaCommand } from './schema.ts';
+import { commonCausesCommand, cutSetsCommand } from './site-wide.ts';
 import { traceCommand } from './trace.ts';
 import { viewCommand } from './view.ts';
 
@@ -82,6 +84,23 @@ export const COMMANDS = new Map<string, CommandSpec>([
         }),
     },
   ],
+  [
+    'cut-sets',
+    {
+      options: { order: { type: 'string' }, format: { type: 'string' } },
+      positionals: { min: 1, max: 1, what: 'a model file' },
+      run: (v, [file]) => cutSetsCommand(file!, str(v.order), str(v.format)),
+    },
+  ],
+  [
+    'diff',
+    {
+      options: { git: { type: 'string' }, format: { type: 'string' }, ...failOn },
+      positionals: { min: 1, max: 2, what: 'two model files (OLD NEW), or one with --git REV' },
+      run: (v, files) => diffCommand(files, { git: str(v.git), format: str(v.format), failOn: str(v['fail-on']) }),
+    },
+  ],
+  ['common-causes', { options: { format: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => commonCausesCommand(file!, str(v.format)) }],
   ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],
 ]);
 

@@ -9,6 +9,9 @@ import { meetsCriterion } from '../assess/numbers.ts';
 import { POLICY_DEFAULTS } from '../vocabulary/policy.ts';
 import { ASSESS_RULES } from '../assess/limits.ts';
 import { RULES } from '../rules/registry.ts';
+import { DEFAULT_CUT_SET_ORDER, modelCutSets } from '../cutsets/index.ts';
+import { RANKING_ORDER, rankCommonCauses } from '../ranking/index.ts';
+import { CUT_SET_METHOD } from './site-wide.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';
 import { byTag, compareFindings, compareTags } from './order.ts';
 import { assumptions, documentControl } from './control.ts';
@@ -248,7 +251,22 @@ function findingReport(f: Finding): ReportDocument['findings'][number] {
   });
 }
 
-export function buildReportDocument(input: ReportInput): ReportDocument {
+/**
+ * `siteWide` adds the minimal cut sets and the common-cause ranking (the JSON report carries them); the
+ * other formats do not show them, so they skip the work.
+ */
+function siteWide({ model, analysis }: ReportInput): Pick<ReportDocument, 'cutSets' | 'commonCauses'> {
+  return {
+    cutSets: {
+      method: CUT_SET_METHOD,
+      maxOrder: DEFAULT_CUT_SET_ORDER,
+      scenarios: modelCutSets(model, { findings: analysis.findings }).sort(byTag((s) => s.scenario)),
+    },
+    commonCauses: { order: RANKING_ORDER, elements: rankCommonCauses(model, analysis) },
+  };
+}
+
+export function buildReportDocument(input: ReportInput, options: { siteWide?: boolean } = {}): ReportDocument {
   const { model, analysis } = input;
   const titles = elementTitles(model);
   const traces = new Map(analysis.traces.map((t) => [t.function, t]));
@@ -297,5 +315,6 @@ export function buildReportDocument(input: ReportInput): ReportDocument {
       }),
     ),
     findings: findings.map(findingReport),
+    ...(options.siteWide === false ? {} : siteWide(input)),
   });
 }

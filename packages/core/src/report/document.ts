@@ -7,7 +7,8 @@ import { SEVERITIES } from '../model/schema.ts';
  * Raise when a field is removed or changes meaning; adding an optional field keeps the version.
  * Readers should refuse a formatVersion they do not know.
  */
-export const REPORT_FORMAT_VERSION = 1;
+/** 2: adds `cutSets` and `commonCauses` (issue 15). */
+export const REPORT_FORMAT_VERSION = 2;
 
 const Severity = z.enum(SEVERITIES);
 const Tags = z.array(z.string());
@@ -219,6 +220,52 @@ const FunctionTrace = z
   })
   .meta({ id: 'FunctionTraceReport' });
 
+const CutSets = z
+  .strictObject({
+    method: z.string(),
+    maxOrder: z.number(),
+    scenarios: z.array(
+      z.strictObject({
+        scenario: z.string(),
+        maxOrder: z.number(),
+        layers: Tags,
+        noStartingElement: z.boolean(),
+        cutSets: z.array(
+          z.strictObject({
+            elements: Tags,
+            paths: z.array(z.strictObject({ element: z.string(), party: z.string(), path: Tags })),
+            findings: Tags,
+          }),
+        ),
+        incompleteLayers: Tags,
+        unknownLayers: Tags,
+      }),
+    ),
+  })
+  .meta({ id: 'CutSetsReport', description: 'Minimal cut sets per scenario up to maxOrder (MOCUS), by scenario id' });
+
+const CommonCauses = z
+  .strictObject({
+    order: z.string().meta({ description: 'How the ranking is ordered, in words' }),
+    elements: z.array(
+      z.strictObject({
+        rank: z.number(),
+        element: z.string(),
+        kind: z.string(),
+        title: z.string().optional(),
+        layers: z.number(),
+        scenarios: Tags,
+        findings: z.number(),
+        openFindings: z.number(),
+        frequencyCost: z.number(),
+        frequencyAtStake: z.number(),
+        gapReduction: z.number(),
+        wouldMeet: Tags,
+      }),
+    ),
+  })
+  .meta({ id: 'CommonCausesReport', description: 'Elements that take part in findings, ranked across the site' });
+
 export const ReportDocument = z
   .strictObject({
     formatVersion: z.literal(REPORT_FORMAT_VERSION),
@@ -271,6 +318,8 @@ export const ReportDocument = z
     scenarios: z.array(Scenario),
     functions: z.array(FunctionTrace),
     findings: z.array(Finding),
+    cutSets: CutSets.optional().meta({ description: 'Always present in the JSON report' }),
+    commonCauses: CommonCauses.optional().meta({ description: 'Always present in the JSON report' }),
   })
   .meta({
     id: 'BulkheadReport',

@@ -33,7 +33,8 @@ export function isReportContents(word: string): word is ReportContents {
 /** Renders one report. The same input gives byte-identical output: nothing here reads a clock or a locale. */
 export function renderReport(input: ReportInput, format: ReportFormat, contents: ReportContents = 'evidence'): string {
   if (!FORMATS_OF[contents].includes(format)) throw new Error(`the ${contents} report has no ${format} format`);
-  const doc = buildReportDocument(input);
+  // Cut sets and the ranking cost more than the analysis; only the JSON evidence list carries them.
+  const doc = buildReportDocument(input, { siteWide: format === 'json' && contents === 'evidence' });
   const footer = runningFooter(doc);
   if (contents === 'worksheet') {
     if (format === 'csv') return renderWorksheetCsv(doc);
@@ -73,3 +74,4 @@ export { WORKSHEET_COLUMNS, worksheetRows, type WorksheetRow } from './worksheet
 export { ACTION_COLUMNS, groupActions, withWorth, type Action } from './actions.ts';
 export { decidingReasons, decidingText, type Deciding } from './deciding.ts';
 export { sourceList, splitCitations, readCitation, type SourceEntry } from './sources.ts';
+export { renderCutSetsText, renderCommonCausesText, renderCommonCausesCsv, COMMON_CAUSE_CSV_COLUMNS, CUT_SET_METHOD } from './site-wide.ts';
