@@ -26,3 +26,4 @@ export * from './report/index.ts';
 export { ModelLocator, FACTOR_RULES } from './report/locate.ts';
 export { findingNotice, renderFindingText } from './report/finding-notice.ts';
 export { suggest as suggestTag } from './util/suggest.ts';
+export * from './verify/index.ts';

@@ -8,6 +8,7 @@ import { fmtCommand } from './fmt.ts';
 import { reportCommand } from './report.ts';
 import { schemaCommand } from './schema.ts';
 import { traceCommand } from './trace.ts';
+import { verifyCommand } from './verify.ts';
 import { viewCommand } from './view.ts';
 
 type Options = NonNullable<ParseArgsConfig['options']>;
@@ -26,6 +27,14 @@ const str = (v: string | boolean | undefined): string | undefined => (typeof v =
 export const COMMANDS = new Map<string, CommandSpec>([
   ['check', { options: failOn, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => checkCommand(file!, str(v['fail-on'])) }],
   ['trace', { options: {}, positionals: { min: 1, max: 2, what: 'a model file and a function or element tag' }, run: (_v, [file, tag]) => traceCommand(file!, tag) }],
+  [
+    'verify',
+    {
+      options: { format: { type: 'string' } },
+      positionals: { min: 1, max: 2, what: 'a model file and optionally a SIF tag' },
+      run: (v, [file, sif]) => verifyCommand(file!, sif, str(v.format)),
+    },
+  ],
   ['schema', { options: {}, positionals: { min: 0, max: 0, what: 'no file' }, run: () => schemaCommand() }],
   [
     'fmt',

@@ -1,0 +1,139 @@
+// SIF verification from failure data: each subsystem's PFDavg and PFH by the Annex B equations, the total
+// against the claim and against the most demanding requirement of the scenarios that credit the SIF, the
+// shared elements of voted groups in series with them, and the architectural constraints.
+import { analyze } from '../analysis/analyze.ts';
+import { requiredSil, requiredSilForPfh } from '../assess/bands.ts';
+import { meetsCriterion } from '../assess/numbers.ts';
+import type { FunctionKindOf, Model, Subsystem } from '../model/schema.ts';
+import { Tracer } from '../trace/trace.ts';
+import { buildPlantGraph } from '../graph/plant-graph.ts';
+import type { Analysis } from '../vocabulary/types.ts';
+import { HFT_SOURCE, requiredHft } from './architecture.ts';
+import { FailureDataIndex } from './figures.ts';
+import { SubsystemCalculator, type SubsystemResult } from './subsystems.ts';
+import { sifTarget, type SifTarget } from './target.ts';
+
+export const VERIFY_CAUTION =
+  'The calculation supports, and does not replace, a SIL verification by a competent person. It uses the simplified ' +
+  'equations of IEC 61508-6:2010 Annex B and the failure data in the model; defer to IEC 61511, the device safety ' +
+  'manuals, local codes and licensed practice.';
+
+export type VerifyFindingCode = 'no-basis' | 'no-test-basis' | 'common-cause-default' | 'common-cause-no-basis' | 'incomplete' | 'hft-short';
+
+/** A problem with the verification's inputs or result. Stable code, subject, words. */
+export interface VerifyFinding {
+  code: VerifyFindingCode;
+  subject: string;
+  message: string;
+}
+
+export interface SifVerification {
+  sif: string;
+  title?: string;
+  subsystems: SubsystemResult[];
+  /** Present only when every subsystem was computed. */
+  pfd?: number;
+  pfh?: number;
+  /** Each subsystem's share of the total PFD, 0 to 1, in subsystem order. */
+  shares?: number[];
+  claimed: { pfd?: number; pfh?: number; sil?: number };
+  target: SifTarget;
+  /** Computed figure against the governing requirement: ratio above 1 falls short by that factor. */
+  againstTarget?: { mode: 'low-demand' | 'high-demand'; required: number; computed: number; meets: boolean; ratio: number };
+  againstClaim?: { pfdMeets?: boolean; pfhMeets?: boolean };
+  /** The SIL the computed figure reaches (0: below SIL 1). */
+  silReached?: number;
+  architecture: { sil: number; mode: 'low-demand' | 'high-demand'; required: number; source: string; bySubsystem: { subsystem: Subsystem; hft: number; meets: boolean }[] } | undefined;
+  /** Shared elements of voted groups, as the independence rules see them, now in the figure. */
+  sharedInSeries: { subsystem: Subsystem; tags: string[]; withoutData: string[] }[];
+  findings: VerifyFinding[];
+}
+
+type Sif = FunctionKindOf<'sif'>;
+
+export const SUBSYSTEM_WORDS: Record<Subsystem, string> = { sensors: 'sensors', solver: 'logic solver', finals: 'final elements' };
+
+function basisFindings(results: readonly SubsystemResult[]): VerifyFinding[] {
+  const out: VerifyFinding[] = [];
+  const seen = new Set<string>();
+  for (const r of results) {
+    for (const input of r.inputs) {
+      if (seen.has(input.row)) continue;
+      seen.add(input.row);
+      if (input.basis === undefined) out.push({ code: 'no-basis', subject: input.row, message: `failure data ${input.row} (used for ${input.tag}) gives rates with no basis` });
+      if (input.testBasis === undefined && (input.t1 !== undefined || input.missionHours !== undefined)) {
+        out.push({ code: 'no-test-basis', subject: input.row, message: `failure data ${input.row} gives a proof-test interval with no test-basis` });
+      }
+    }
+    if (r.beta?.fromDefault) {
+      out.push({ code: 'common-cause-default', subject: r.subsystem, message: `the ${SUBSYSTEM_WORDS[r.subsystem]} group has no common-cause factors: beta ${r.beta.beta} taken by default (top of the IEC 61508-6 Annex D range, from memory)` });
+    } else if (r.beta && r.beta.basis === undefined) {
+      out.push({ code: 'common-cause-no-basis', subject: r.subsystem, message: `the common-cause factors of the ${SUBSYSTEM_WORDS[r.subsystem]} group give no basis` });
+    }
+    for (const m of r.missing) out.push({ code: 'incomplete', subject: m.tag, message: `${m.tag} ${m.why}: the ${SUBSYSTEM_WORDS[r.subsystem]} subsystem is not computed` });
+    for (const tag of r.sharedWithoutData) {
+      out.push({ code: 'incomplete', subject: tag, message: `${tag} is shared by the ${SUBSYSTEM_WORDS[r.subsystem]} channels and has no failure data: its failure defeats the group, and the figure leaves it out` });
+    }
+  }
+  return out;
+}
+
+export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tracer, data: FailureDataIndex): SifVerification {
+  const calc = new SubsystemCalculator(tracer, data);
+  const subsystems = [calc.votedGroup(sif, 'sensors'), calc.solver(sif), calc.votedGroup(sif, 'finals')];
+  const findings = basisFindings(subsystems);
+  const target = sifTarget(model, analysis.assessments, sif.tag);
+  const computed = subsystems.every((s) => s.pfd !== undefined);
+  const pfd = computed ? subsystems.reduce((s, r) => s + r.pfd!, 0) : undefined;
+  const pfh = computed ? subsystems.reduce((s, r) => s + r.pfh!, 0) : undefined;
+  const incomplete = findings.some((f) => f.code === 'incomplete');
+  const result: SifVerification = {
+    sif: sif.tag,
+    ...(sif.title !== undefined ? { title: sif.title } : {}),
+    subsystems,
+    claimed: { ...(sif.pfd !== undefined ? { pfd: sif.pfd } : {}), ...(sif.pfh !== undefined ? { pfh: sif.pfh } : {}), ...(sif.sil !== undefined ? { sil: sif.sil } : {}) },
+    target,
+    architecture: undefined,
+    sharedInSeries: subsystems
+      .filter((s) => s.shared.length || s.sharedWithoutData.length)
+      .map((s) => ({ subsystem: s.subsystem, tags: s.shared.map((c) => c.tag), withoutData: s.sharedWithoutData })),
+    findings,
+  };
+  if (pfd !== undefined && pfh !== undefined) {
+    result.pfd = pfd;
+    result.pfh = pfh;
+    result.shares = subsystems.map((s) => (pfd === 0 ? 0 : s.pfd! / pfd));
+    result.againstClaim = {
+      ...(sif.pfd !== undefined ? { pfdMeets: pfd <= sif.pfd } : {}),
+      ...(sif.pfh !== undefined ? { pfhMeets: pfh <= sif.pfh } : {}),
+    };
+    const governing = target.governingPfh ?? target.governingPfd;
+    if (governing) {
+      const high = governing.mode === 'high-demand';
+      const required = high ? governing.requiredPfh! : governing.requiredPfd!;
+      const value = high ? pfh : pfd;
+      result.againstTarget = { mode: governing.mode, required, computed: value, meets: !incomplete && meetsCriterion(value, required, governing.edge), ratio: value / required };
+    }
+    result.silReached = target.governingPfh ? requiredSilForPfh(pfh, 'below') : requiredSil(pfd, 'below');
+  }
+  const mode = target.governingPfh ? 'high-demand' : 'low-demand';
+  const sil = sif.sil ?? (target.governingPfd ? requiredSil(target.governingPfd.requiredPfd!, target.governingPfd.edge) : undefined);
+  if (sil !== undefined && sil >= 1 && sil <= 4) {
+    const required = requiredHft(sil, mode);
+    const bySubsystem = subsystems.map((s) => ({ subsystem: s.subsystem, hft: s.hft, meets: s.hft >= required }));
+    result.architecture = { sil, mode, required, source: HFT_SOURCE, bySubsystem };
+    for (const s of bySubsystem.filter((b) => !b.meets)) {
+      findings.push({ code: 'hft-short', subject: s.subsystem, message: `the ${SUBSYSTEM_WORDS[s.subsystem]} have HFT ${s.hft}; SIL ${sil} in ${mode} needs ${required} (${HFT_SOURCE})` });
+    }
+  }
+  return result;
+}
+
+/** Verifies one SIF, or every SIF of the model; undefined entries never appear. */
+export function verifyModel(model: Model, only?: string, analysis: Analysis = analyze(model)): SifVerification[] {
+  const tracer = new Tracer(buildPlantGraph(model));
+  const data = new FailureDataIndex(model);
+  return model.functions
+    .filter((f): f is Sif => f.kind === 'sif' && (only === undefined || f.tag === only))
+    .map((f) => verifySif(model, f, analysis, tracer, data));
+}
