@@ -27,14 +27,6 @@ const str = (v: string | boolean | undefined): string | undefined => (typeof v =
 export const COMMANDS = new Map<string, CommandSpec>([
   ['check', { options: failOn, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => checkCommand(file!, str(v['fail-on'])) }],
   ['trace', { options: {}, positionals: { min: 1, max: 2, what: 'a model file and a function or element tag' }, run: (_v, [file, tag]) => traceCommand(file!, tag) }],
-  [
-    'verify',
-    {
-      options: { format: { type: 'string' } },
-      positionals: { min: 1, max: 2, what: 'a model file and optionally a SIF tag' },
-      run: (v, [file, sif]) => verifyCommand(file!, sif, str(v.format)),
-    },
-  ],
   ['schema', { options: {}, positionals: { min: 0, max: 0, what: 'no file' }, run: () => schemaCommand() }],
   [
     'fmt',
@@ -67,6 +59,14 @@ export const COMMANDS = new Map<string, CommandSpec>([
       positionals: { min: 0, max: 1, what: 'one model file' },
       run: (v, [file]) =>
         reportCommand(file, { format: str(v.format), out: str(v.out), date: str(v.date), failOn: str(v['fail-on']), jsonSchema: v['json-schema'] === true, force: v.force === true }),
+    },
+  ],
+  [
+    'verify',
+    {
+      options: { format: { type: 'string' } },
+      positionals: { min: 1, max: 2, what: 'a model file and optionally a SIF tag' },
+      run: (v, [file, sif]) => verifyCommand(file!, sif, str(v.format)),
     },
   ],
   ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],
