@@ -21,7 +21,7 @@ describe('bulkhead verify', () => {
     const r = await runCli(['verify', 'fixtures/demo/marrow-fen-rev-b.bulk', 'SIF-201']);
     expect(r.code).toBe(1);
     expect(r.stdout).toMatch(/verdict: {2}computed \S+ \/h falls short of the requirement by a factor of \d/);
-    expect(r.stdout).toContain('[hft-short] the final elements have HFT 0; SIL 2 in high-demand needs 1');
+    expect(r.stdout).toContain('[hft-short] HFT of the final elements is 0; SIL 2 in high-demand needs 1');
   });
 
   it('writes every SIF as JSON with --format json', async () => {

@@ -93,6 +93,23 @@ failure-data FD-LS element=LS-1 lambda-du=1e-9 lambda-dd=0 proof-test-hours=8760
 failure-data FD-XV element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760 basis="vendor (invented)" test-basis="site (invented)"
 `;
 
+describe('a 1oo2D pair (IEC 61508-6:2010 B.3.2.2.4, from memory)', () => {
+  it('is accepted as a vote and computed by the 1oo2D equation', () => {
+    const text = BASE + 'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=1oo2D solver=LS-1 finals=XV-1\ncommon-cause SIF-1 group=sensors beta=0.05 basis="scoring (invented)"\n';
+    const sensors = sub(only(load(text), 'SIF-1'), 'sensors');
+    expect(sensors.equation?.architecture).toBe('1oo2D');
+    expect(sensors.hft).toBe(1);
+    // lambdaDU 1e-7, lambdaDD = lambdaSD = 0, T1 8,760 h, MTTR = MRT = 8 h, beta 5%: t'CE = 4,388 h, t'GE = 2,928 h;
+    // 2 x 0.95e-7 x 0.95e-7 x 4,388 x 2,928 = 2.3191e-7; + 0.05 x 1e-7 x 4,388 = 2.194e-5; total 2.2172e-5.
+    expect(sensors.groupPfd).toBeCloseTo(2.2172e-5, 8);
+  });
+
+  it('refuses a D suffix on any vote but 1oo2', () => {
+    const result = loadModelText('t.bulk', BASE + 'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=2oo2D solver=LS-1 finals=XV-1\n');
+    expect(result.diagnostics.map((d) => d.code)).toEqual(['BH306']);
+  });
+});
+
 describe('findings on the inputs', () => {
   const pair = 'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=1oo2 solver=LS-1 finals=XV-1 trip=close\n';
 

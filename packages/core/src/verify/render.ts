@@ -117,7 +117,7 @@ export function renderVerificationText(v: SifVerification): string {
       lines.push(inputLine(f));
     }
   }
-  if (!seen.size) lines.push('    none: the model gives no failure data for this SIF');
+  if (!seen.size) lines.push('    none: the model gives no failure data for this SIF; add failure-data lines (see docs/failure-data.md)');
   const equations = new Map(v.subsystems.filter((s) => s.equation).map((s) => [s.equation!.architecture, s.equation!]));
   lines.push('  equations:');
   for (const e of equations.values()) lines.push(`    ${e.architecture}: PFDavg = ${e.pfd}; PFH = ${e.pfh} (${ANNEX_B} ${e.clause})`);

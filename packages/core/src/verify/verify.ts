@@ -123,7 +123,7 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
     const bySubsystem = subsystems.map((s) => ({ subsystem: s.subsystem, hft: s.hft, meets: s.hft >= required }));
     result.architecture = { sil, mode, required, source: HFT_SOURCE, bySubsystem };
     for (const s of bySubsystem.filter((b) => !b.meets)) {
-      findings.push({ code: 'hft-short', subject: s.subsystem, message: `the ${SUBSYSTEM_WORDS[s.subsystem]} have HFT ${s.hft}; SIL ${sil} in ${mode} needs ${required} (${HFT_SOURCE})` });
+      findings.push({ code: 'hft-short', subject: s.subsystem, message: `HFT of the ${SUBSYSTEM_WORDS[s.subsystem]} is ${s.hft}; SIL ${sil} in ${mode} needs ${required} (${HFT_SOURCE})` });
     }
   }
   return result;
