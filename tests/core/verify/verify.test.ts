@@ -176,3 +176,10 @@ describe('the SIF target across scenarios (CCPS LOPA 2001 practice, from memory)
     expect(only(m, 'SIF-1').againstTarget?.meets).toBe(false);
   });
 });
+
+describe('common-cause factors for the logic solver', () => {
+  it('are refused: the solver is one element, its redundancy is the hft= of its failure data (BH345)', () => {
+    const result = loadModelText('t.bulk', BASE + 'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1\ncommon-cause SIF-1 group=solver beta=0.02 basis="x"\n');
+    expect(result.diagnostics.map((d) => [d.code, d.span?.line])).toEqual([['BH345', 18]]);
+  });
+});

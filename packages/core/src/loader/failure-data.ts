@@ -82,7 +82,11 @@ export function checkFailureData(model: Model, push: Push): void {
     const fn = functions.get(cc.function);
     if (fn === undefined) push('BH300', `unknown function \`${cc.function}\` in \`common-cause\``, at('function'));
     else if (fn.kind !== 'sif') push('BH345', `\`${cc.function}\` is a ${fn.kind} function; common-cause factors are for a SIF's voted groups`, at('function'));
-    else if (cc.group !== 'solver' && (cc.group === 'sensors' ? fn.sensors : fn.finals).length < 2) {
+    else if (cc.group === 'solver') {
+      push('BH345', `the logic solver of \`${cc.function}\` is one element here, not a voted group`, at('group'), {
+        help: 'give a redundant logic solver\'s hft= and failure figures (from its safety manual) on its failure-data line',
+      });
+    } else if ((cc.group === 'sensors' ? fn.sensors : fn.finals).length < 2) {
       push('BH345', `\`${cc.function}\` has one ${cc.group === 'sensors' ? 'sensor' : 'final element'}: there is no voted group to share a common cause`, at('group'));
     }
     for (const field of ['beta', 'betaD'] as const) {

@@ -329,7 +329,7 @@ export const SUBSYSTEMS = ['sensors', 'solver', 'finals'] as const;
 export const CommonCause = z
   .strictObject({
     function: Tag,
-    group: z.enum(SUBSYSTEMS).meta({ description: 'The voted group: the SIF\'s sensors, logic solver or final elements' }),
+    group: z.enum(SUBSYSTEMS).meta({ description: 'The voted group: the SIF\'s sensors or final elements (solver is refused: a logic solver is one element, with its hft= on its failure data)' }),
     beta: z.number().meta({ description: 'Common-cause factor for dangerous undetected failures, 0 to 1' }),
     betaD: z.number().optional().meta({ description: 'Common-cause factor for dangerous detected failures; absent: beta / 2' }),
     basis: Text.optional(),
