@@ -183,3 +183,14 @@ describe('common-cause factors for the logic solver', () => {
     expect(result.diagnostics.map((d) => [d.code, d.span?.line])).toEqual([['BH345', 18]]);
   });
 });
+
+describe('a SIF in low demand in one scenario and high demand in another (revision B, SIF-201)', () => {
+  it('checks both: PFD against S-102 and PFH against S-104, and the high-demand shortfall decides', () => {
+    const v = only(demo('marrow-fen-rev-b.bulk'), 'SIF-201');
+    expect(v.againstTargets?.map((t) => [t.mode, t.scenarios, t.meets])).toEqual([
+      ['low-demand', ['S-102'], true],
+      ['high-demand', ['S-104'], false],
+    ]);
+    expect(v.againstTarget?.mode).toBe('high-demand');
+  });
+});

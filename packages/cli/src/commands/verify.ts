@@ -9,7 +9,7 @@ export const VERIFY_FORMATS = ['text', 'json'] as const;
 /** A SIF passes when it is computed, and meets its claim and its requirement where it has them. */
 function passes(v: SifVerification): boolean {
   if (v.pfd === undefined || v.findings.some((f) => f.code === 'incomplete' || f.code === 'hft-short')) return false;
-  if (v.againstTarget && !v.againstTarget.meets) return false;
+  if (v.againstTargets?.some((t) => !t.meets)) return false;
   return v.againstClaim?.pfdMeets !== false && v.againstClaim?.pfhMeets !== false;
 }
 

@@ -4,5 +4,5 @@ export { HFT_SOURCE, requiredHft } from './architecture.ts';
 export { DEFAULT_MTTR_HOURS, FailureDataIndex, inSeries, type ElementFigures } from './figures.ts';
 export { BETA_D_SHARE, DEFAULT_BETA, type SubsystemResult } from './subsystems.ts';
 export { OUTCOME_SUM_SOURCE, sifTarget, type SifTarget, type TargetCandidate } from './target.ts';
-export { VERIFY_CAUTION, verifyModel, verifySif, type SifVerification, type VerifyFinding, type VerifyFindingCode } from './verify.ts';
+export { SUBSYSTEM_WORDS, VERIFY_CAUTION, verifyModel, verifySif, type SifVerification, type TargetCheck, type VerifyFinding, type VerifyFindingCode } from './verify.ts';
 export { renderVerificationText, renderVerificationsText } from './render.ts';

@@ -6,7 +6,7 @@ import { ANNEX_B, PROOF_TEST_EXTENSION } from './annex-b.ts';
 import type { ElementFigures } from './figures.ts';
 import type { SubsystemResult } from './subsystems.ts';
 import { OUTCOME_SUM_SOURCE, type TargetCandidate } from './target.ts';
-import { SUBSYSTEM_WORDS, VERIFY_CAUTION, type SifVerification } from './verify.ts';
+import { SUBSYSTEM_WORDS, VERIFY_CAUTION, type SifVerification, type TargetCheck } from './verify.ts';
 
 const NAMES = SUBSYSTEM_WORDS;
 
@@ -51,6 +51,15 @@ function requirementWords(c: TargetCandidate): string {
     : `PFD ${relation} ${formatProbability(c.requiredPfd!)} (${where}, low demand)`;
 }
 
+function verdictWords(t: TargetCheck): string {
+  const figure = t.mode === 'high-demand' ? formatPerHour(t.computed) : formatProbability(t.computed);
+  const where = `(${t.mode}, ${t.scenarios.join(' + ')})`;
+  if (t.meets) return `computed ${figure} meets the requirement ${where}, margin x${formatRatio(1 / t.ratio)}`;
+  if (!Number.isFinite(t.ratio)) return `cannot be met ${where}: the outcome's other scenarios already use the whole tolerable frequency`;
+  if (t.ratio < 1) return `computed ${figure} would meet the requirement ${where}, but the calculation is incomplete: unverified`;
+  return `computed ${figure} falls short of the requirement ${where} by a factor of ${formatRatio(t.ratio)}`;
+}
+
 function verdictLines(v: SifVerification): string[] {
   const lines: string[] = [];
   const claim: string[] = [];
@@ -58,31 +67,23 @@ function verdictLines(v: SifVerification): string[] {
   if (v.claimed.pfh !== undefined) claim.push(`PFH ${formatPerHour(v.claimed.pfh)}${v.againstClaim?.pfhMeets === undefined ? '' : v.againstClaim.pfhMeets ? ' (computed meets it)' : ' (computed does NOT meet it)'}`);
   if (v.claimed.sil !== undefined) claim.push(`SIL ${v.claimed.sil}`);
   lines.push(`  claimed:  ${claim.length ? claim.join(', ') : 'nothing'}`);
-  const governing = v.target.governingPfh ?? v.target.governingPfd;
-  if (governing) {
-    lines.push(`  required: ${requirementWords(governing)}, the most demanding of ${v.target.candidates.length} requirement${v.target.candidates.length === 1 ? '' : 's'}`);
-    if (governing.outcome !== undefined) lines.push(`            ${OUTCOME_SUM_SOURCE}${governing.note ? `; ${governing.note}` : ''}`);
-  } else lines.push('  required: no scenario credits this SIF');
+  const governing = [v.target.governingPfd, v.target.governingPfh].filter((g) => g !== undefined);
+  const count = v.target.candidates.length;
+  for (const g of governing) {
+    lines.push(`  required: ${requirementWords(g)}: the most demanding in ${g.mode === 'high-demand' ? 'high' : 'low'} demand (${count} requirement${count === 1 ? '' : 's'} in all)`);
+    if (g.outcome !== undefined) lines.push(`            ${OUTCOME_SUM_SOURCE}${g.note ? `; ${g.note}` : ''}`);
+  }
+  if (!governing.length) lines.push('  required: no scenario credits this SIF');
+  for (const t of v.againstTargets ?? []) lines.push(`  verdict:  ${verdictWords(t)}`);
+  if (v.pfd === undefined) lines.push('  verdict:  not computed: unverified (see below)');
   const t = v.againstTarget;
-  if (t) {
-    const figure = t.mode === 'high-demand' ? formatPerHour(t.computed) : formatProbability(t.computed);
+  for (const s of t ? v.sharedInSeries : []) {
+    const tags = [...s.tags, ...s.withoutData].join(', ');
     lines.push(
-      t.meets
-        ? `  verdict:  computed ${figure} meets the requirement (margin x${formatRatio(1 / t.ratio)})`
-        : t.ratio < 1
-          ? `  verdict:  computed ${figure} would meet the requirement, but the calculation is incomplete: unverified`
-          : `  verdict:  computed ${figure} falls short of the requirement by a factor of ${formatRatio(t.ratio)}`,
+      t!.meets
+        ? `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF still meets its requirement, so the layer may be credited at the computed figure`
+        : `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF falls short${Number.isFinite(t!.ratio) && t!.ratio >= 1 ? ` by a factor of ${formatRatio(t!.ratio)}` : ''}`,
     );
-  } else if (v.pfd === undefined) lines.push('  verdict:  not computed: unverified (see below)');
-  if (v.sharedInSeries.length && t) {
-    for (const s of v.sharedInSeries) {
-      const tags = [...s.tags, ...s.withoutData].join(', ');
-      lines.push(
-        t.meets
-          ? `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF still meets the requirement, so the layer may be credited at the computed figure`
-          : `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF falls short${t.ratio >= 1 ? ` by a factor of ${formatRatio(t.ratio)}` : ' (incomplete)'}`,
-      );
-    }
   }
   if (v.architecture) {
     const a = v.architecture;

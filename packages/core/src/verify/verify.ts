@@ -38,8 +38,13 @@ export interface SifVerification {
   shares?: number[];
   claimed: { pfd?: number; pfh?: number; sil?: number };
   target: SifTarget;
-  /** Computed figure against the governing requirement: ratio above 1 falls short by that factor. */
-  againstTarget?: { mode: 'low-demand' | 'high-demand'; required: number; computed: number; meets: boolean; ratio: number };
+  /**
+   * The computed figure against the governing requirement of each demand mode the scenarios put the SIF in (PFD
+   * in low demand, PFH in high demand); a ratio above 1 falls short by that factor.
+   */
+  againstTargets?: TargetCheck[];
+  /** The deciding one of againstTargets: the furthest from being met. */
+  againstTarget?: TargetCheck;
   againstClaim?: { pfdMeets?: boolean; pfhMeets?: boolean };
   /** The SIL the computed figure reaches (0: below SIL 1). */
   silReached?: number;
@@ -47,6 +52,15 @@ export interface SifVerification {
   /** Shared elements of voted groups, as the independence rules see them, now in the figure. */
   sharedInSeries: { subsystem: Subsystem; tags: string[]; withoutData: string[] }[];
   findings: VerifyFinding[];
+}
+
+export interface TargetCheck {
+  mode: 'low-demand' | 'high-demand';
+  scenarios: string[];
+  required: number;
+  computed: number;
+  meets: boolean;
+  ratio: number;
 }
 
 type Sif = FunctionKindOf<'sif'>;
@@ -107,12 +121,19 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
       ...(sif.pfd !== undefined ? { pfdMeets: pfd <= sif.pfd } : {}),
       ...(sif.pfh !== undefined ? { pfhMeets: pfh <= sif.pfh } : {}),
     };
-    const governing = target.governingPfh ?? target.governingPfd;
-    if (governing) {
-      const high = governing.mode === 'high-demand';
-      const required = high ? governing.requiredPfh! : governing.requiredPfd!;
-      const value = high ? pfh : pfd;
-      result.againstTarget = { mode: governing.mode, required, computed: value, meets: !incomplete && meetsCriterion(value, required, governing.edge), ratio: value / required };
+    const checks = [target.governingPfd, target.governingPfh]
+      .filter((g) => g !== undefined)
+      .map((g): TargetCheck => {
+        const high = g.mode === 'high-demand';
+        const required = high ? g.requiredPfh! : g.requiredPfd!;
+        const value = high ? pfh : pfd;
+        // A required figure at or below zero: the other scenarios of the outcome use up the tolerable frequency.
+        const ratio = required > 0 ? value / required : Number.POSITIVE_INFINITY;
+        return { mode: g.mode, scenarios: g.scenarios, required, computed: value, meets: !incomplete && required > 0 && meetsCriterion(value, required, g.edge), ratio };
+      });
+    if (checks.length) {
+      result.againstTargets = checks;
+      result.againstTarget = checks.reduce((worst, c) => (!c.meets && worst.meets) || (c.meets === worst.meets && c.ratio > worst.ratio) ? c : worst);
     }
     result.silReached = target.governingPfh ? requiredSilForPfh(pfh, 'below') : requiredSil(pfd, 'below');
   }
