@@ -92,6 +92,13 @@ function basisFindings(results: readonly SubsystemResult[]): VerifyFinding[] {
   return out;
 }
 
+/** The SIL the most demanding requirement needs, when the SIF claims none: the higher of the two modes'. */
+function targetSil(target: SifTarget): number | undefined {
+  const low = target.governingPfd ? requiredSil(target.governingPfd.requiredPfd!, target.governingPfd.edge) : undefined;
+  const high = target.governingPfh ? requiredSilForPfh(target.governingPfh.requiredPfh!, target.governingPfh.edge) : undefined;
+  return low === undefined ? high : high === undefined ? low : Math.max(low, high);
+}
+
 export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tracer, data: FailureDataIndex): SifVerification {
   const calc = new SubsystemCalculator(tracer, data);
   const subsystems = [calc.votedGroup(sif, 'sensors'), calc.solver(sif), calc.votedGroup(sif, 'finals')];
@@ -138,7 +145,7 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
     result.silReached = target.governingPfh ? requiredSilForPfh(pfh, 'below') : requiredSil(pfd, 'below');
   }
   const mode = target.governingPfh ? 'high-demand' : 'low-demand';
-  const sil = sif.sil ?? (target.governingPfd ? requiredSil(target.governingPfd.requiredPfd!, target.governingPfd.edge) : undefined);
+  const sil = sif.sil ?? targetSil(target);
   if (sil !== undefined && sil >= 1 && sil <= 4) {
     const required = requiredHft(sil, mode);
     const bySubsystem = subsystems.map((s) => ({ subsystem: s.subsystem, hft: s.hft, meets: s.hft >= required }));
