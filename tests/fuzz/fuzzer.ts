@@ -2,7 +2,7 @@
 // one to four mutations of the kinds that broke the loader before (byte flips, truncation, swapped and
 // duplicated lines, object property names as keywords, huge and over-precise numbers, deep nesting, long
 // lines, deep indentation, CRLF, BOM, NUL, invalid UTF-8), run in-process through the loader, the
-// analysis and every renderer. Shared by the suite's fixed-budget test and `npm run fuzz`.
+// analysis, SIF verification and every renderer. Shared by the suite's fixed-budget test and `npm run fuzz`.
 import { readdirSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import {
@@ -13,8 +13,10 @@ import {
   printJson,
   renderDiagnostics,
   renderReport,
+  renderVerificationsText,
   REPORT_FORMATS,
   splitLines,
+  verifyModel,
   type Span,
 } from '@bulkhead/core';
 import { scenarioScene, siteOverview } from '@bulkhead/layout';
@@ -216,6 +218,7 @@ export function runOne(input: FuzzInput): Outcome {
         const text = renderReport(report, format);
         if (format === 'sarif') outside.push(...sarifOutside(text, result.source.lines));
       }
+      renderVerificationsText(verifyModel(model, undefined, analysis));
       printBulk(model);
       printJson(model);
       siteOverview(model, analysis);

@@ -8,6 +8,8 @@ commands:
   check FILE [--fail-on LEVEL] [--verbose]
                         validate a model, analyse every scenario: verdicts first, then LOPA, findings
   trace FILE TAG        what a function (or element) relies on, as a tree of paths
+  verify FILE [SIF] [--format text|json]
+                        a SIF's PFDavg and PFH from failure data, by subsystem, against its targets
   schema                print the JSON Schema of the model
   fmt FILE... [--check] rewrite .bulk files in canonical form (--check: only report)
   convert FILE --to json|bulk [-o OUT [--force]]
@@ -63,6 +65,22 @@ then every function's trace and every finding. Accepted findings stay in the rep
                none: never on findings)
 
 exit codes: 0 no unaccepted finding at or above --fail-on, 1 there is one, 2 bad input or usage
+`,
+  verify: `usage: bulkhead verify FILE [SIF] [--format text|json]
+
+Computes each SIF's PFDavg (low demand) and PFH (high demand) from the failure-data and common-cause lines
+of the model, subsystem by subsystem (sensors, logic solver, final elements), with the simplified equations
+of IEC 61508-6:2010 Annex B. An element two channels of a voted group share (one thermowell under a 1oo2
+pair) is counted as a single point in series with the group. Prints the subsystem table with each equation
+and its source, the total against the claimed PFD and PFH and against the most demanding requirement of the
+scenarios that credit the SIF, the hardware fault tolerance against IEC 61511-1:2016 11.4, every input with
+its basis, and findings (a figure with no basis, a default used, an element with no data).
+
+  --format     text (default) or json
+
+exit codes: 0 every SIF verified and meeting its claim and requirement, 1 one falls short or cannot be
+            verified, 2 bad input or usage
+The calculation supports, and does not replace, a SIL verification by a competent person.
 `,
   check: `usage: bulkhead check FILE [--fail-on voids-credit|needs-justification|note|none] [--verbose]
 

@@ -29,3 +29,4 @@ export { suggest as suggestTag } from './util/suggest.ts';
 export * from './cutsets/index.ts';
 export * from './ranking/index.ts';
 export * from './diff/index.ts';
+export * from './verify/index.ts';

@@ -59,11 +59,12 @@ describe('the demo findings', () => {
       ...S101_SUPPLY_NOTES,
       ...S102_SUPPLY_NOTES,
       // TT-302A and TT-302B (1oo2) share thermowell TW-302 and input card AI-S-02. The finding has one party
-      // (the SIF) and so one path, through the first channel; its message names both channels.
-      row('voted-group-common-cause:S-103:SIF-301:AI-S-02', 'needs-justification', 'AI-S-02', [['SIF-301', 'TT-302A', 'AI-S-02']]),
+      // (the SIF) and so one path, through the first channel; its message names both channels. AI-S-02 is a
+      // card of SIF-301's own solver: part of the logic-solver subsystem, a note (issue 16, item 6).
       row('voted-group-common-cause:S-103:SIF-301:TW-302', 'needs-justification', 'TW-302', [['SIF-301', 'TT-302A', 'TW-302']]),
       SIF301_NO_BASIS,
       ...S103_SUPPLY_NOTES,
+      row('voted-group-common-cause:S-103:SIF-301:AI-S-02', 'note', 'AI-S-02', [['SIF-301', 'TT-302A', 'AI-S-02']]),
     ]);
   });
 

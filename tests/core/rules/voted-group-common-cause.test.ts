@@ -34,10 +34,11 @@ ruleTable('voted-group-common-cause', {
       findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:N-2', severity: 'needs-justification', element: 'N-2', parties: ['SF-1'] }],
     },
     {
-      name: '1oo2 transmitters on one input card (its power belongs to the solver side)',
+      // Issue 16, item 6: a card of the function's own solver is part of the logic-solver subsystem (a note).
+      name: '1oo2 transmitters on one input card of their own solver: a note, counted in the logic-solver subsystem',
       source: SOURCE,
       lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-3 signal-via=IO-2 supply=from-signal'),
-      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IO-2', severity: 'needs-justification', element: 'IO-2', parties: ['SF-1'] }],
+      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IO-2', severity: 'note', element: 'IO-2', parties: ['SF-1'] }],
     },
     {
       name: '1oo2 valves on one air header, the second valve fail action not stated',

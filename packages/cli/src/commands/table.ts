@@ -10,6 +10,7 @@ import { reportCommand } from './report.ts';
 import { schemaCommand } from './schema.ts';
 import { commonCausesCommand, cutSetsCommand } from './site-wide.ts';
 import { traceCommand } from './trace.ts';
+import { verifyCommand } from './verify.ts';
 import { viewCommand } from './view.ts';
 
 type Options = NonNullable<ParseArgsConfig['options']>;
@@ -101,6 +102,14 @@ export const COMMANDS = new Map<string, CommandSpec>([
     },
   ],
   ['common-causes', { options: { format: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => commonCausesCommand(file!, str(v.format)) }],
+  [
+    'verify',
+    {
+      options: { format: { type: 'string' } },
+      positionals: { min: 1, max: 2, what: 'a model file and optionally a SIF tag' },
+      run: (v, [file, sif]) => verifyCommand(file!, sif, str(v.format)),
+    },
+  ],
   ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],
 ]);
 

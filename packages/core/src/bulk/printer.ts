@@ -94,6 +94,8 @@ export function printBulk(model: Model): string {
     }
     blocks.push({ section: 'scenario', lines, commented: true });
   }
+  for (const d of model.failureData ?? []) blocks.push(block('failure-data', d, printLine('failure-data', LIST_SPECS['failure-data'], d, '')));
+  for (const c of model.commonCauses ?? []) blocks.push(block('common-cause', c, printLine('common-cause', LIST_SPECS['common-cause'], c, '')));
   for (const j of model.justifications ?? []) blocks.push(block('accept', j, printLine('accept', LIST_SPECS.accept, j, '')));
   const out: string[] = [];
   blocks.forEach((b, i) => {

@@ -77,6 +77,12 @@ export const CODES = {
   BH330: 'per-100 m piping cause without a pipe length',
   BH331: 'pipe length on a cause that is not a piping row',
   BH332: 'condition credit limit below 1',
+  BH340: 'failure data must name one element, or one make and model',
+  BH341: 'failure rates given in neither or both forms (lambda-du with lambda-dd, or lambda-d with dc)',
+  BH342: 'failure rate, fraction or time out of range',
+  BH343: 'failure figures given twice for one element, make and model, or voted group',
+  BH344: 'proof-test coverage below 1 without a mission time',
+  BH345: 'common-cause factors for something that is not a voted group of a SIF',
 } as const;
 
 export type DiagnosticCode = keyof typeof CODES;

@@ -9,6 +9,7 @@ import type { FieldNamer } from './schema-issues.ts';
 import { spanAt } from './schema-issues.ts';
 import { findCycles, longestChain, MAX_DEPENDENCY_DEPTH } from './cycles.ts';
 import { ALL_RULE_IDS } from '../vocabulary/rule-ids.ts';
+import { checkFailureData } from './failure-data.ts';
 
 const KNOWN_RULE_IDS = ALL_RULE_IDS;
 
@@ -66,6 +67,7 @@ class Validator {
     this.input.model.scenarios.forEach((_, i) => this.checkScenario(i));
     this.checkJustifications();
     this.checkRuleSettings();
+    checkFailureData(this.input.model, (code, message, path, extra) => this.push(code, message, path, extra));
     return this.diagnostics;
   }
 
@@ -209,9 +211,9 @@ class Validator {
       }
       return;
     }
-    const match = /^(\d+)oo(\d+)$/.exec(voting);
-    if (!match) {
-      this.push('BH306', `\`${voting}\` is not MooN voting`, path, { help: 'write M out of N as MooN, e.g. 1oo2 or 2oo3' });
+    const match = /^(\d+)oo(\d+)(D?)$/.exec(voting);
+    if (!match || (match[3] === 'D' && voting !== '1oo2D')) {
+      this.push('BH306', `\`${voting}\` is not MooN voting`, path, { help: 'write M out of N as MooN, e.g. 1oo2 or 2oo3 (1oo2D for a pair with diagnostics)' });
       return;
     }
     const m = Number(match[1]);

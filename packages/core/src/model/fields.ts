@@ -1,7 +1,7 @@
 // Reads the zod schema's shapes so the .bulk reader, printer and loader share one list of fields
 // per statement: the schema stays the only place where a field is declared.
 import { z } from 'zod';
-import { Category, Cause, Element, Enabler, Justification, LayerClaim, Modifier, PlantFunction, Policy, RuleSetting, Scenario, Site } from './schema.ts';
+import { Category, Cause, CommonCause, FailureData, Element, Enabler, Justification, LayerClaim, Modifier, PlantFunction, Policy, RuleSetting, Scenario, Site } from './schema.ts';
 
 export type FieldType =
   | { type: 'string' }
@@ -39,7 +39,7 @@ export const COMMENT_FIELDS = new Set(['comments', 'trailingComment']);
 
 /** Fields whose values are free text: always quoted when printed. */
 export const TEXT_FIELDS = new Set([
-  'name', 'description', 'title', 'basis', 'pfdBasis', 'pfhBasis', 'hraBasis', 'creditBasis', 'reason', 'by', 'make', 'model', 'external',
+  'name', 'description', 'title', 'basis', 'pfdBasis', 'pfhBasis', 'testBasis', 'hraBasis', 'creditBasis', 'reason', 'by', 'make', 'model', 'external',
   'document', 'revision', 'status', 'basedOn', 'preparedBy', 'checkedBy', 'approvedBy', 'study', 'studyNode', 'studyDeviation',
 ]);
 
@@ -76,10 +76,12 @@ export const SINGLE_SPECS: Record<'site' | 'policy', StatementSpec> = {
   site: { schema: Site, positional: 'name' },
   policy: { schema: Policy },
 };
-export const LIST_SPECS: Record<'category' | 'rule' | 'scenario' | 'accept', StatementSpec & { collection: string }> = {
+export const LIST_SPECS: Record<'category' | 'rule' | 'scenario' | 'failure-data' | 'common-cause' | 'accept', StatementSpec & { collection: string }> = {
   category: { schema: Category, positional: 'id', collection: 'categories' },
   rule: { schema: RuleSetting, positional: 'id', collection: 'rules' },
   scenario: { schema: Scenario, positional: 'id', collection: 'scenarios' },
+  'failure-data': { schema: FailureData, positional: 'id', collection: 'failureData' },
+  'common-cause': { schema: CommonCause, positional: 'function', collection: 'commonCauses' },
   accept: { schema: Justification, positional: 'finding', collection: 'justifications' },
 };
 export type ScenarioLineSpec = StatementSpec & { collection: string; single?: boolean };

@@ -300,6 +300,9 @@ export const Scenario = z
     studyNode: Text.optional().meta({ description: 'The node of the hazard study' }),
     studyDeviation: Text.optional().meta({ description: 'The deviation of the hazard study, such as "high level"' }),
     studyRecommendations: TagList.optional().meta({ description: 'Recommendation numbers of the hazard study this scenario answers' }),
+    outcome: Tag.optional().meta({
+      description: 'The consequence this scenario leads to, shared by scenarios that lead to the same one: their frequencies sum against one tolerable frequency',
+    }),
     cause: Cause,
     enablers: nonEmpty(Enabler).optional(),
     modifiers: nonEmpty(Modifier).optional(),
@@ -307,6 +310,45 @@ export const Scenario = z
     ...commentFields,
   })
   .meta({ id: 'Scenario' });
+
+/**
+ * Failure figures for one element, or for every element of one make and model (an element row wins).
+ * Rates are per hour, times in hours. `basis` backs the rates, `testBasis` the proof test and repair
+ * figures: a figure with no basis is reported by `bulkhead verify` (see docs/failure-data.md).
+ */
+export const FailureData = z
+  .strictObject({
+    id: Tag,
+    element: Tag.optional().meta({ description: 'The element these figures are for' }),
+    make: Text.optional().meta({ description: 'With model: every element of this make and model' }),
+    model: Text.optional(),
+    lambdaDu: z.number().optional().meta({ description: 'Dangerous undetected failure rate, per hour' }),
+    lambdaDd: z.number().optional().meta({ description: 'Dangerous detected failure rate, per hour' }),
+    lambdaD: z.number().optional().meta({ description: 'Dangerous failure rate, per hour: give it with dc instead of lambda-du and lambda-dd' }),
+    dc: z.number().optional().meta({ description: 'Diagnostic coverage, 0 to 1 (with lambda-d)' }),
+    lambdaSd: z.number().optional().meta({ description: 'Safe detected failure rate, per hour (1oo2D groups)' }),
+    hft: z.number().optional().meta({ description: 'Hardware fault tolerance inside the device (a redundant logic solver); absent: 0' }),
+    basis: Text.optional().meta({ description: 'Where the failure rates come from' }),
+    proofTestHours: z.number().optional().meta({ description: 'Proof-test interval T1, hours' }),
+    proofTestCoverage: z.number().optional().meta({ description: 'Share of dangerous undetected failures a proof test reveals, 0 to 1; absent: 1' }),
+    missionHours: z.number().optional().meta({ description: 'Mission time, hours: how long failures a proof test misses stay hidden' }),
+    mttrHours: z.number().optional().meta({ description: 'Mean time to restoration (and mean repair time), hours' }),
+    testBasis: Text.optional().meta({ description: 'Where the proof-test, coverage and repair figures come from' }),
+    ...commentFields,
+  })
+  .meta({ id: 'FailureData' });
+
+export const SUBSYSTEMS = ['sensors', 'solver', 'finals'] as const;
+export const CommonCause = z
+  .strictObject({
+    function: Tag,
+    group: z.enum(SUBSYSTEMS).meta({ description: 'The voted group: the SIF\'s sensors or final elements (solver is refused: a logic solver is one element, with its hft= on its failure data)' }),
+    beta: z.number().meta({ description: 'Common-cause factor for dangerous undetected failures, 0 to 1' }),
+    betaD: z.number().optional().meta({ description: 'Common-cause factor for dangerous detected failures; absent: beta / 2' }),
+    basis: Text.optional(),
+    ...commentFields,
+  })
+  .meta({ id: 'CommonCause', description: 'The common-cause factors of one voted group of a SIF' });
 
 export const Justification = z
   .strictObject({
@@ -328,6 +370,8 @@ export const Model = z
     elements: z.array(Element),
     functions: z.array(PlantFunction),
     scenarios: z.array(Scenario),
+    failureData: nonEmpty(FailureData).optional(),
+    commonCauses: nonEmpty(CommonCause).optional(),
     justifications: nonEmpty(Justification).optional(),
     endComments: nonEmpty(CommentLine).optional(),
   })
@@ -344,6 +388,9 @@ export type Scenario = z.infer<typeof Scenario>;
 export type Cause = z.infer<typeof Cause>;
 export type LayerClaim = z.infer<typeof LayerClaim>;
 export type Justification = z.infer<typeof Justification>;
+export type FailureData = z.infer<typeof FailureData>;
+export type CommonCause = z.infer<typeof CommonCause>;
+export type Subsystem = (typeof SUBSYSTEMS)[number];
 export type SupplyExemption = (typeof SUPPLY_EXEMPTIONS)[number];
 export type CauseDirection = (typeof CAUSE_DIRECTIONS)[number];
 export type SeverityLevel = (typeof SEVERITIES)[number];

@@ -11,7 +11,7 @@ import type { Analysis, Finding } from '../vocabulary/types.ts';
 export const RANKING_ORDER =
   'Ranked by the mitigated frequency the element alone costs (each scenario assessed again without the findings about it, summed, per year), then by the frequency at stake in the layers it touches (assessed again without every open finding on those layers), then by the number of claimed layers its open findings touch, then by the number of scenarios, then by tag. Open findings: not accepted and not notes. A layer voided by several elements costs nothing for any one of them alone: that shows as frequency at stake.';
 
-export interface CommonCause {
+export interface RankedCommonCause {
   rank: number;
   element: string;
   kind: string;
@@ -51,7 +51,7 @@ interface ScenarioFigure {
 }
 
 /** Ranks every element that takes part in an independence finding. */
-export function rankCommonCauses(model: Model, analysis: Analysis): CommonCause[] {
+export function rankCommonCauses(model: Model, analysis: Analysis): RankedCommonCause[] {
   const independence = analysis.findings.filter((f) => RULE_IDS.has(f.rule) && f.scenario !== undefined);
   const byScenario = new Map<string, Finding[]>();
   for (const f of independence) (byScenario.get(f.scenario!) ?? byScenario.set(f.scenario!, []).get(f.scenario!)!).push(f);
@@ -69,7 +69,7 @@ export function rankCommonCauses(model: Model, analysis: Analysis): CommonCause[
   const about = new Map<string, Finding[]>();
   for (const f of independence) if (f.element !== undefined) (about.get(f.element) ?? about.set(f.element, []).get(f.element)!).push(f);
   const elements = new Map(model.elements.map((e) => [e.tag, e]));
-  const rows: Omit<CommonCause, 'rank'>[] = [];
+  const rows: Omit<RankedCommonCause, 'rank'>[] = [];
   for (const [tag, findings] of about) {
     const open = findings.filter(isOpen);
     const layers = new Set(open.flatMap((f) => f.parties.filter((p) => p.role === 'layer').map((p) => `${f.scenario} ${p.tag}`)));

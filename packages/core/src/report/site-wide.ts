@@ -4,7 +4,7 @@ import { stringify } from 'csv-stringify/browser/esm/sync';
 import { ASSESSMENT_CAUTION, formatFrequency } from '../assess/index.ts';
 import type { ScenarioCutSets } from '../cutsets/index.ts';
 import type { Model } from '../model/schema.ts';
-import { RANKING_ORDER, type CommonCause } from '../ranking/index.ts';
+import { RANKING_ORDER, type RankedCommonCause } from '../ranking/index.ts';
 import { guardFormula } from './csv.ts';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
@@ -57,7 +57,7 @@ export function renderCutSetsText(model: Model, all: readonly ScenarioCutSets[])
 const frequency = (perYear: number) => formatFrequency(Math.max(0, perYear));
 
 /** Text for `bulkhead common-causes`: the first line names the element that matters most. */
-export function renderCommonCausesText(ranking: readonly CommonCause[]): string {
+export function renderCommonCausesText(ranking: readonly RankedCommonCause[]): string {
   const open = ranking.filter((r) => r.openFindings > 0);
   const top = open[0];
   const lines = [
@@ -95,7 +95,7 @@ export const COMMON_CAUSE_CSV_COLUMNS = [
 ] as const;
 
 /** RFC 4180 CSV, one row per element, in rank order; text cells are guarded against spreadsheet formulas. */
-export function renderCommonCausesCsv(ranking: readonly CommonCause[]): string {
+export function renderCommonCausesCsv(ranking: readonly RankedCommonCause[]): string {
   const rows = ranking.map((r) => [
     r.rank,
     guardFormula(r.element),

@@ -35,6 +35,18 @@ export const votedGroupCommonCause = defineScenarioRule({
           const element = ctx.element(tag);
           if (ctx.tracer.group(tag) === 'support' && failsSafeOnLoss(layer, element, ctx)) continue;
           const channels = [...new Set(shared.get(tag))].sort(); // by tag, not list order
+          // An input or output card of the function's own logic solver belongs to the logic-solver subsystem,
+          // a single point in series with the solver that SIF verification counts there (issue 16, item 6).
+          if (element.kind === 'io-card' && ctx.tracer.closure(tag).has(fn.solver)) {
+            drafts.push({
+              parties: [layer.party],
+              element: tag,
+              paths: [layer.elements.get(tag)?.path ?? [fn.tag, tag]],
+              severity: 'note',
+              message: `the ${role} channels ${channels.map((c) => `\`${c}\``).join(', ')} of \`${fn.tag}\` share \`${tag}\`, a card of its own logic solver \`${fn.solver}\`: part of the logic-solver subsystem, counted there by \`bulkhead verify\`, not a common cause of the voted group`,
+            });
+            continue;
+          }
           drafts.push({
             parties: [layer.party],
             element: tag,
