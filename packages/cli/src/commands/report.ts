@@ -15,10 +15,10 @@ import { cliVersion } from '../version.ts';
 import { checkOutput, isReportText } from '../output.ts';
 
 export interface ReportOptions {
-  format?: string;
-  out?: string;
-  date?: string;
-  failOn?: string;
+  format?: string | undefined;
+  out?: string | undefined;
+  date?: string | undefined;
+  failOn?: string | undefined;
   jsonSchema?: boolean;
   /** Replace an existing -o file that Bulkhead did not write. */
   force?: boolean;

@@ -50,7 +50,7 @@ export interface JustifiedFindings {
 }
 
 /** The key a stale or duplicate finding is about: the justification's own `finding` text. */
-export function justifiedKeyOf(finding: Finding): string | undefined {
+export function justifiedKeyOf(finding: Pick<Finding, 'rule' | 'key'>): string | undefined {
   for (const rule of [STALE_JUSTIFICATION, DUPLICATE_JUSTIFICATION]) {
     if (finding.rule === rule && finding.key.startsWith(`${rule}:`)) return finding.key.slice(rule.length + 1);
   }

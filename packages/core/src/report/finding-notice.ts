@@ -12,7 +12,7 @@ const KINDS: Record<Finding['severity'], string> = {
   note: 'Note',
 };
 
-function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span; role?: string } {
+function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span | undefined; role?: string } {
   const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
   if (layer?.tag) return { span: locate.layer(finding.scenario, layer.tag), role: `the claim of layer ${layer.tag}` };
   const factor = finding.scenario && FACTOR_RULES.has(finding.rule) ? locate.factor(finding.scenario, finding.key) : undefined;
