@@ -14,6 +14,24 @@ export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';
 export { summarize, type ModelSummary } from './model/summary.ts';
 export * from './vocabulary/types.ts';
+export {
+  ALL_RULE_IDS,
+  ASSESSMENT_ENTRIES,
+  CATALOGUE,
+  catalogueEntry,
+  INDEPENDENCE_ENTRIES,
+  JUSTIFICATION_ENTRIES,
+  renderMessage,
+  ruleIdOf,
+  say,
+  type FindingMessage,
+  type FindingMessages,
+  type MessageId,
+  type MessageOf,
+  type RuleId,
+} from './catalogue/catalogue.ts';
+export type { RuleEntry, RuleKind } from './catalogue/define.ts';
+export type { SideRef } from './catalogue/words.ts';
 export { analyze, independenceRulesInForce, ruleEnvironment, type AnalyzeOptions } from './analysis/analyze.ts';
 export { buildPlantGraph, roleTargets, type PlantGraph, type NodeAttributes, type EdgeAttributes } from './graph/plant-graph.ts';
 export { Tracer } from './trace/trace.ts';

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { applyJustifications, STALE_JUSTIFICATION, DUPLICATE_JUSTIFICATION } from '../../../packages/core/src/justify/index.ts';
 import type { Finding } from '../../../packages/core/src/vocabulary/types.ts';
+import { say } from '../../../packages/core/src/catalogue/catalogue.ts';
 import { loadInvented } from '../../report/invented.ts';
 
 const finding = (key: string, severity: Finding['severity'] = 'voids-credit'): Finding => ({
@@ -13,6 +14,7 @@ const finding = (key: string, severity: Finding['severity'] = 'voids-credit'): F
   scenario: 'S-1',
   parties: [{ role: 'layer', tag: 'SIF-1' }],
   paths: [],
+  ...say('incomplete-trace/untraced', { function: 'invented', missing: [] }),
   message: 'invented',
   rationale: 'invented',
   source: 'invented',

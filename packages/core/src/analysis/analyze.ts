@@ -1,11 +1,11 @@
 // The analysis, one straight line: model -> graph -> traces -> independence findings -> justifications
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
-import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy } from '../assess/index.ts';
+import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy, rulesInForce } from '../assess/index.ts';
+import { INDEPENDENCE_ENTRIES } from '../catalogue/catalogue.ts';
 import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
-import { RULES } from '../rules/registry.ts';
 import { findingKey as independenceFindingKey } from '../rules/define.ts';
 import { causeSide, runRules, type RuleEnvironment } from '../rules/run.ts';
 import { Tracer } from '../trace/trace.ts';
@@ -18,18 +18,7 @@ export interface AnalyzeOptions {
 
 /** The independence rules with the severity the model's policy and rule settings put in force. */
 export function independenceRulesInForce(model: Model): RuleInForce[] {
-  return RULES.map((rule) => {
-    const setting = model.rules?.find((r) => r.id === rule.id);
-    const severity: SeverityLevel = setting?.severity ?? rule.defaultSeverity;
-    return {
-      id: rule.id,
-      title: rule.title,
-      severity,
-      defaultSeverity: rule.defaultSeverity,
-      source: rule.source,
-      ...(setting?.reason !== undefined && severity !== rule.defaultSeverity ? { reason: setting.reason } : {}),
-    };
-  });
+  return rulesInForce(model, INDEPENDENCE_ENTRIES);
 }
 
 /** What the rules read besides the scenario: lookups, policy and severities in force, built once per model. */

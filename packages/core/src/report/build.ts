@@ -7,8 +7,7 @@ import type { Model } from '../model/schema.ts';
 import { scenarioById } from '../model/lookup.ts';
 import { meetsCriterion } from '../assess/numbers.ts';
 import { POLICY_DEFAULTS } from '../vocabulary/policy.ts';
-import { ASSESS_RULES } from '../assess/limits.ts';
-import { RULES } from '../rules/registry.ts';
+import { CATALOGUE } from '../catalogue/catalogue.ts';
 import { REPORT_FORMAT_VERSION, type LayerReport, type ReportDocument, type ScenarioReport } from './document.ts';
 import { byTag, compareFindings, compareTags } from './order.ts';
 
@@ -55,9 +54,9 @@ function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], 
 }
 
 function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
-  // RuleInForce carries no rationale: take it from the rule tables, so a rule with no finding in this run
+  // RuleInForce carries no rationale: take it from the rule catalogue, so a rule with no finding in this run
   // still shows why it exists; a rule from elsewhere takes it from its first finding.
-  const rationaleOf = new Map<string, string>([...RULES, ...ASSESS_RULES, ...JUSTIFICATION_RULES].map((r) => [r.id, r.rationale]));
+  const rationaleOf = new Map<string, string>(CATALOGUE.map((r) => [r.id, r.rationale]));
   for (const f of [...analysis.findings].sort(compareFindings)) if (!rationaleOf.has(f.rule)) rationaleOf.set(f.rule, f.rationale);
   const rules = new Map<string, RuleInForce & { rationale?: string }>();
   for (const r of analysis.rules) rules.set(r.id, r);
