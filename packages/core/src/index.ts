@@ -41,6 +41,6 @@ export { findingKey as independenceFindingKey, SEVERITY_RANK, type Rule, type Sh
 export * from './assess/index.ts';
 export * from './justify/index.ts';
 export * from './report/index.ts';
-export { ModelLocator, FACTOR_RULES } from './report/locate.ts';
+export { ModelLocator, FACTOR_RULES, findingSpans } from './loader/locate.ts';
 export { findingNotice, renderFindingText } from './report/finding-notice.ts';
 export { suggest as suggestTag } from './util/suggest.ts';

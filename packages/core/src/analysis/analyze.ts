@@ -5,6 +5,7 @@ import { INDEPENDENCE_ENTRIES } from '../catalogue/catalogue.ts';
 import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
+import { findingSpans, ModelLocator } from '../loader/locate.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
 import { findingKey as independenceFindingKey } from '../rules/define.ts';
 import { causeSide, runRules, type RuleEnvironment } from '../rules/run.ts';
@@ -12,7 +13,7 @@ import { Tracer } from '../trace/trace.ts';
 import type { Analysis, Finding, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
 
 export interface AnalyzeOptions {
-  /** Spans from the loader, so findings about justifications can point at them. */
+  /** Spans from the loader, so each finding can point at the model lines it concerns. */
   spans?: SpanMap;
 }
 
@@ -56,12 +57,21 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   });
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications, options.spans);
+  const findings = [...sortByScenario(model, all), ...stale];
   return {
     traces,
-    findings: [...sortByScenario(model, all), ...stale],
+    findings: options.spans ? withSpans(findings, new ModelLocator(model, options.spans)) : findings,
     assessments: assessed.map((a, i) => withCauseElements(a.assessment, env, model.scenarios[i]!)),
     rules: [...independence, ...assessRulesInForce(model), ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule)],
   };
+}
+
+/** Each finding with the places it points at in the model file, where the loader gave them. */
+function withSpans(findings: Finding[], locate: ModelLocator): Finding[] {
+  return findings.map((f) => {
+    const { span, related } = findingSpans(f, locate);
+    return { ...f, ...(span ? { span } : {}), ...(related.length ? { related } : {}) };
+  });
 }
 
 /** The cause's element set travels with the assessment, so reports show what the rules compared. */

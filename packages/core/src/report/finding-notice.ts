@@ -4,7 +4,7 @@
 import type { Finding } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
-import { FACTOR_RULES, type ModelLocator } from './locate.ts';
+import { FACTOR_RULES, type ModelLocator } from '../loader/locate.ts';
 
 const KINDS: Record<Finding['severity'], string> = {
   'voids-credit': 'Credit voided',

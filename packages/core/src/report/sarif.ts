@@ -6,7 +6,7 @@ import { justifiedKeyOf } from '../justify/apply.ts';
 import type { SeverityLevel } from '../model/schema.ts';
 import type { ReportInput } from './build.ts';
 import type { ReportDocument, ReportFinding } from './document.ts';
-import { FACTOR_RULES, ModelLocator } from './locate.ts';
+import { FACTOR_RULES, ModelLocator } from '../loader/locate.ts';
 import { policyText } from './text.ts';
 
 export const SARIF_SCHEMA_URI = 'https://json.schemastore.org/sarif-2.1.0.json';

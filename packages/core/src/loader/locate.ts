@@ -1,8 +1,10 @@
-// Where each part of a report points in the model file: a claimed layer, a shared element's definition,
-// a cause, an `accept` statement. Spans come from the loader; a model built in code has none, and that is fine.
+// Where each part of a finding or report points in the model file: a claimed layer, a shared element's
+// definition, a cause, an `accept` statement. Spans come from the loader; a model built in code has none,
+// and that is fine.
 import type { Span } from '../diagnostics/diagnostic.ts';
+import type { Finding, RelatedSpan } from '../vocabulary/types.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
-import { spanAt } from '../loader/schema-issues.ts';
+import { spanAt } from './schema-issues.ts';
 import type { Model } from '../model/schema.ts';
 
 /** Findings about one enabler or modifier: outputs point at its line, not at the cause. */
@@ -87,4 +89,41 @@ export class ModelLocator {
     const i = this.justificationIndex.get(findingKey);
     return i === undefined ? undefined : this.at(['justifications', i, 'finding']);
   }
+}
+
+/** Rules whose finding is about an `accept` statement: its key is the rule id, a colon, and the key accepted. */
+const ABOUT_ACCEPTANCE: ReadonlySet<string> = new Set(['stale-justification', 'duplicate-justification']);
+
+type Located = Pick<Finding, 'key' | 'rule' | 'scenario' | 'parties' | 'element' | 'accepted'>;
+
+/**
+ * Where a finding points: its primary span (the claim of the layer it concerns, else the enabler or modifier,
+ * else the cause; for a finding about a justification, the `accept` statement) and the other places it
+ * concerns (the other layer, the cause, the shared element's definition, the accepting statement). Places the
+ * model has no span for are left out.
+ */
+export function findingSpans(finding: Located, locate: ModelLocator): { span?: Span; related: RelatedSpan[] } {
+  const related: RelatedSpan[] = [];
+  const add = (role: RelatedSpan['role'], name: string, span: Span | undefined) => {
+    if (span) related.push({ role, name, span });
+  };
+  let span: Span | undefined;
+  if (ABOUT_ACCEPTANCE.has(finding.rule) && finding.key.startsWith(`${finding.rule}:`)) {
+    span = locate.justification(finding.key.slice(finding.rule.length + 1));
+    return span ? { span, related } : { related };
+  }
+  const primary = [...finding.parties].reverse().find((p) => p.role === 'layer' && p.tag !== undefined);
+  const scenario = finding.scenario;
+  if (primary?.tag !== undefined) span = locate.layer(scenario, primary.tag);
+  else if (scenario !== undefined && FACTOR_RULES.has(finding.rule)) span = locate.factor(scenario, finding.key);
+  else if (scenario !== undefined) span = locate.cause(scenario);
+  for (const party of finding.parties) {
+    if (party.role === 'layer' && party !== primary && party.tag !== undefined) add('layer', party.tag, locate.layer(scenario, party.tag));
+    if (party.role === 'cause' && scenario !== undefined && (primary !== undefined || FACTOR_RULES.has(finding.rule))) {
+      add('cause', party.tag ?? 'external', locate.cause(scenario));
+    }
+  }
+  if (finding.element !== undefined) add('element', finding.element, locate.element(finding.element));
+  if (finding.accepted) add('accept', finding.key, locate.justification(finding.key));
+  return span ? { span, related } : { related };
 }
