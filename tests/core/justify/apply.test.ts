@@ -53,7 +53,9 @@ describe('applyJustifications', () => {
     expect(stale.rule).toBe(STALE_JUSTIFICATION);
     expect(stale.severity).toBe('needs-justification');
     expect(stale.key).toBe(`${STALE_JUSTIFICATION}:gone:S-9`);
-    expect(stale.message).toContain('`gone:S-9`');
+    expect(stale.messageId).toBe('stale-justification/matches-nothing');
+    expect(stale.data).toEqual({ key: 'gone:S-9', by: 'B', date: '2024-06-01' });
+    expect(stale.message).toBe('the justification for `gone:S-9` (by B, 2024-06-01) matches no finding');
     expect(stale.accepted).toBeUndefined();
   });
 
@@ -78,6 +80,7 @@ describe('applyJustifications', () => {
       const out = applyJustifications([finding('r:S-1:a')], order);
       expect(out.findings[0]!.accepted).toEqual({ by: 'B', date: '2024-01-01', reason: 'new' });
       expect(out.stale.map((f) => [f.rule, f.severity])).toEqual([[DUPLICATE_JUSTIFICATION, 'note']]);
+      expect(out.stale.map((f) => [f.messageId, f.data])).toEqual([['duplicate-justification/accepted-again', { key: 'r:S-1:a', count: 2, by: 'B', date: '2024-01-01' }]]);
     }
   });
 
