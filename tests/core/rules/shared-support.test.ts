@@ -126,7 +126,23 @@ ruleTable('shared-support', {
       source: `${CCPS} (the loss must contribute to the scenario)`,
       lines: { 'XV-1': xvOnAirA('open') },
       scenario: scenario('element=CV-1 frequency=0.1 drives-to=open', 'SF-1'),
-      findings: [{ ...onAir('IA-A', 'note'), key: 'shared-support:SC-1:CV-1+SF-1:IA-A', messageId: 'shared-support/support', data: { a: { role: 'cause', tag: 'CV-1' }, b: { role: 'layer', tag: 'SF-1' }, element: 'IA-A', kind: 'air-header', beneath: [], cause: { dangerous: false, why: 'its loss drives `CV-1` closed, away from the dangerous open of `CV-1`: it cannot start the scenario' } }, at: '27:9', parties: ['CV-1', 'SF-1'] }],
+      findings: [
+        {
+          ...onAir('IA-A', 'note'),
+          key: 'shared-support:SC-1:CV-1+SF-1:IA-A',
+          // The cause side, judged as data: losing IA-A drives CV-1 closed, away from its dangerous direction (open).
+          data: {
+            a: { role: 'cause', tag: 'CV-1' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'IA-A',
+            kind: 'air-header',
+            beneath: [],
+            cause: { dangerous: false, why: { reason: 'moves-away', heads: ['CV-1'], positions: ['closed'], cause: 'CV-1', direction: 'open' } },
+          },
+          at: '27:9',
+          parties: ['CV-1', 'SF-1'],
+        },
+      ],
     },
   ],
 });
