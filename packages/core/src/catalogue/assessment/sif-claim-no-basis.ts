@@ -3,7 +3,7 @@ import { ruleEntry } from '../define.ts';
 import { formatPerHour, formatProbability } from '../../util/figures.ts';
 
 /** A SIF figure given with no verification basis: a PFD, or in high demand a PFH. */
-interface UnverifiedClaim {
+export interface UnverifiedClaim {
   function: string;
   quantity: 'PFD' | 'PFH';
   claimed: number;
