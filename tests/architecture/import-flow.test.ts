@@ -9,7 +9,7 @@ import { describe, expect, it } from 'vitest';
 const SRC = fileURLToPath(new URL('../../packages/core/src/', import.meta.url));
 
 /** Bottom first. A folder may import from any folder before it. */
-const FLOW = ['diagnostics', 'util', 'model', 'vocabulary', 'bulk', 'json', 'loader', 'graph', 'trace', 'rules', 'assess', 'justify', 'analysis', 'verify', 'cutsets', 'ranking', 'report', 'diff'];
+const FLOW = ['diagnostics', 'util', 'model', 'catalogue', 'vocabulary', 'bulk', 'json', 'loader', 'graph', 'trace', 'rules', 'assess', 'justify', 'analysis', 'verify', 'cutsets', 'ranking', 'report', 'diff'];
 
 function files(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {

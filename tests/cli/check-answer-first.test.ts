@@ -46,8 +46,8 @@ describe('check on the demo, answer first', () => {
     const verbose = await runCli(['check', DEMO, '--verbose']);
     const notes = (text: string) => text.split('\n').filter((l) => l.startsWith('Note: ')).length;
     expect(notes(plain.stdout)).toBe(0);
-    expect(plain.stdout).toContain('7 notes (--verbose lists them)');
-    expect(notes(verbose.stdout)).toBe(7);
+    expect(plain.stdout).toContain('8 notes (--verbose lists them)');
+    expect(notes(verbose.stdout)).toBe(8);
   });
 
   it('writes no colour codes to a pipe, even without NO_COLOR', async () => {

@@ -1,6 +1,6 @@
 // Invented test data for the report tests: a tiny model in .bulk (loaded for real, so spans are real)
 // and a hand-built Analysis for it. Not a real site, and not the output of the analysis pipeline.
-import { loadModelText, type LoadResult, type Model } from '@bulkhead/core';
+import { loadModelText, say, type LoadResult, type Model } from '@bulkhead/core';
 import type { Analysis, Finding } from '../../packages/core/src/vocabulary/types.ts';
 import { applyJustifications } from '../../packages/core/src/justify/index.ts';
 
@@ -53,6 +53,15 @@ const sharedNozzle: Finding = {
   parties: [{ role: 'cause', tag: 'LIC-1' }, { role: 'layer', tag: 'SIF-1' }],
   element: 'N-1',
   paths: [['LIC-1', 'LT-1', 'N-1'], ['SIF-1', 'LT-2', 'N-1']],
+  ...say('shared-process-connection/shared', {
+    a: { role: 'cause', tag: 'LIC-1', functionKind: 'loop' },
+    b: { role: 'layer', tag: 'SIF-1' },
+    element: 'N-1',
+    kind: 'nozzle',
+    severity: 'voids-credit',
+    beneath: [],
+  }),
+  // Invented words, not the catalogue's: the report shows whatever `message` holds.
   message: '`SIF-1` and the cause `LIC-1` both rely on `N-1`',
   rationale: 'A plugged nozzle blinds both transmitters.',
   source: 'invented source for a test',
@@ -67,6 +76,14 @@ const sameMake: Finding = {
   parties: [{ role: 'cause', tag: 'LIC-1' }, { role: 'layer', tag: 'SIF-1' }],
   element: 'LT-2',
   paths: [['LIC-1', 'LT-1'], ['SIF-1', 'LT-2']],
+  ...say('same-make-model/same-device', {
+    element: 'LT-2',
+    other: 'LT-1',
+    a: { role: 'cause', tag: 'LIC-1', functionKind: 'loop' },
+    b: { role: 'layer', tag: 'SIF-1' },
+    make: 'Acme',
+    model: 'L1',
+  }),
   message: '`LT-1` and `LT-2` are both Acme L1',
   rationale: 'Systematic common cause.',
   source: 'invented source for a test',

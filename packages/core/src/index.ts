@@ -14,6 +14,24 @@ export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';
 export { summarize, type ModelSummary } from './model/summary.ts';
 export * from './vocabulary/types.ts';
+export {
+  ALL_RULE_IDS,
+  ASSESSMENT_ENTRIES,
+  CATALOGUE,
+  catalogueEntry,
+  INDEPENDENCE_ENTRIES,
+  JUSTIFICATION_ENTRIES,
+  renderMessage,
+  ruleIdOf,
+  say,
+  type FindingMessage,
+  type FindingMessages,
+  type MessageId,
+  type MessageOf,
+  type RuleId,
+} from './catalogue/catalogue.ts';
+export type { RuleEntry, RuleKind } from './catalogue/define.ts';
+export type { SideRef } from './catalogue/words.ts';
 export { analyze, independenceRulesInForce, ruleEnvironment, type AnalyzeOptions } from './analysis/analyze.ts';
 export { buildPlantGraph, roleTargets, type PlantGraph, type NodeAttributes, type EdgeAttributes } from './graph/plant-graph.ts';
 export { Tracer } from './trace/trace.ts';
@@ -23,7 +41,7 @@ export { findingKey as independenceFindingKey, SEVERITY_RANK, type Rule, type Sh
 export * from './assess/index.ts';
 export * from './justify/index.ts';
 export * from './report/index.ts';
-export { ModelLocator, FACTOR_RULES } from './report/locate.ts';
+export { ModelLocator, FACTOR_RULES, findingSpans } from './loader/locate.ts';
 export { findingNotice, renderFindingText } from './report/finding-notice.ts';
 export { suggest as suggestTag } from './util/suggest.ts';
 export * from './cutsets/index.ts';

@@ -1,6 +1,6 @@
 // Small models for the assessment tests: a .bulk preamble with one BPCS with two controllers and one SIS,
 // a loader that fails loudly, and a maker for the independence findings the trace rules would produce.
-import { loadModelText, type Model } from '@bulkhead/core';
+import { loadModelText, say, type Model } from '@bulkhead/core';
 import type { Finding, Party } from '../../../packages/core/src/vocabulary/types.ts';
 import { assessScenario, type AssessOutput } from '../../../packages/core/src/assess/index.ts';
 
@@ -70,6 +70,8 @@ export function independenceFinding(
     parties,
     ...(options.element !== undefined ? { element: options.element } : {}),
     paths: parties.map(() => []),
+    // What it says is not under test here; any message of the catalogue serves.
+    ...say('incomplete-trace/untraced', { function: `hand-built ${rule}`, missing: [] }),
     message: `hand-built ${rule}`,
     rationale: 'test input',
     source: 'test input',

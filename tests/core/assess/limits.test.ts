@@ -2,6 +2,7 @@
 // and the verdict, allowed PFD and credit of each layer. One harness runs every table.
 import { describe, expect, it } from 'vitest';
 import { ASSESS_RULES, assessRulesInForce } from '../../../packages/core/src/assess/index.ts';
+import type { FindingMessage } from '../../../packages/core/src/catalogue/catalogue.ts';
 import { assess, independenceFinding, layer, load, verdicts } from './kit.ts';
 
 interface Case {
@@ -12,6 +13,8 @@ interface Case {
   allowed?: Record<string, number>;
   credited?: string[];
   creditedIfAccepted?: string[];
+  /** What the table's own rule says in this case: each finding's message id and data, in order. */
+  says?: FindingMessage[];
 }
 
 const SCENARIO = (category: string, ...lines: string[]) =>
@@ -40,6 +43,7 @@ const TABLES: Record<string, Case[]> = {
       name: 'a PFD better than the band is credited at the band edge until accepted',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfd=0.002 pfd-basis="SV-1 (invented)"\n${SCENARIO('loc', 'layer SIF-1')}`,
       rules: ['sif-pfd-outside-sil'],
+      says: [{ messageId: 'sif-pfd-outside-sil/better', data: { function: 'SIF-1', claimed: 0.002, sil: 1, low: 0.01, high: 0.1 } }],
       verdicts: { 'SIF-1': 'independent' },
       allowed: { 'SIF-1': 0.01 },
     },
@@ -68,6 +72,7 @@ const TABLES: Record<string, Case[]> = {
       name: 'a BPCS trip claiming 0.01 is capped at 0.1',
       model: `trip LSHH-2 sensors=LT-2 solver=C2 finals=MS-1 pfd=0.01\n${SCENARIO('loc', 'layer LSHH-2')}`,
       rules: ['bpcs-layer-cap'],
+      says: [{ messageId: 'bpcs-layer-cap/capped', data: { function: 'LSHH-2', claimed: 0.01, best: 0.1 } }],
       verdicts: { 'LSHH-2': 'independent' },
       allowed: { 'LSHH-2': 0.1 },
       credited: ['LSHH-2'],
@@ -93,6 +98,8 @@ trip LSHH-3 sensors=LT-3 solver=C3 finals=MS-1 pfd=0.1
 alarm LAH-4 sensors=LT-4 raised-in=C1 operator=OP-1 minutes=20 pfd=0.1
 ${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3', 'layer LAH-4')}`,
       rules: ['bpcs-layer-count'],
+      // The layers in the order claimed; the message names them all.
+      says: [{ messageId: 'bpcs-layer-count/too-many', data: { layers: ['LAH-2', 'LSHH-3', 'LAH-4'], most: 2 } }],
       verdicts: { 'LAH-2': 'independent', 'LSHH-3': 'not-selected', 'LAH-4': 'independent' },
       credited: ['LAH-2', 'LAH-4'],
     },
@@ -104,6 +111,7 @@ ${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3', 'layer LAH-4')}`,
 trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
 ${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`,
       rules: ['bpcs-same-controller'],
+      says: [{ messageId: 'bpcs-same-controller/one-controller', data: { layers: ['LAH-2', 'LSHH-3'], controller: 'C2' } }],
       verdicts: { 'LAH-2': 'independent', 'LSHH-3': 'not-selected' },
       credited: ['LAH-2'],
     },
@@ -144,6 +152,7 @@ alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
 device PSV-IPL device=PSV-1
 ${SCENARIO('loc', 'layer LAH-2', 'layer PSV-IPL')}`,
       rules: ['bpcs-layer-with-bpcs-cause'],
+      says: [{ messageId: 'bpcs-layer-with-bpcs-cause/no-credit', data: { function: 'LAH-2' } }],
       verdicts: { 'LAH-2': 'voided', 'PSV-IPL': 'independent' },
       allowed: { 'LAH-2': 1 },
       credited: ['PSV-IPL'],
@@ -165,6 +174,7 @@ scenario S-1 category=loc
       name: 'five minutes: no credit',
       model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=5 pfd=0.1\n${SCENARIO('loc', 'layer LAH-2')}`,
       rules: ['alarm-response-time'],
+      says: [{ messageId: 'alarm-response-time/too-little-time', data: { function: 'LAH-2', minutes: 5, required: 10 } }],
       verdicts: { 'LAH-2': 'voided' },
       allowed: { 'LAH-2': 1 },
       credited: [],
@@ -187,6 +197,7 @@ scenario S-1 category=loc
       name: 'a check valve without a credit basis: no credit',
       model: `device NRV-IPL device=NRV-1 pfd=0.1\n${SCENARIO('loc', 'layer NRV-IPL')}`,
       rules: ['check-valve-no-credit'],
+      says: [{ messageId: 'check-valve-no-credit/no-basis', data: { function: 'NRV-IPL', device: 'NRV-1' } }],
       verdicts: { 'NRV-IPL': 'voided' },
       allowed: { 'NRV-IPL': 1 },
     },
@@ -208,6 +219,7 @@ scenario S-1 category=loc
       name: 'a SIF with neither PFD nor SIL: no credit',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1\n${SCENARIO('loc', 'layer SIF-1')}`,
       rules: ['layer-no-pfd'],
+      says: [{ messageId: 'layer-no-pfd/no-figure', data: { function: 'SIF-1', kind: 'sif' } }],
       verdicts: { 'SIF-1': 'voided' },
       credited: [],
     },
@@ -223,6 +235,7 @@ scenario S-1 category=loc
       name: 'ignition on a loss-of-containment criterion: not applied',
       model: SCENARIO('loc', 'modifier ignition probability=0.5'),
       rules: ['modifier-not-allowed'],
+      says: [{ messageId: 'modifier-not-allowed/not-people', data: { modifier: 'ignition', probability: 0.5, category: 'loc', harm: 'containment' } }],
     },
     {
       name: 'on an asset criterion: not applied',
@@ -240,6 +253,7 @@ scenario S-1 category=loc
       name: 'presence 0.5 above the default limit 0.1',
       model: SCENARIO('people', 'modifier presence probability=0.5'),
       rules: ['presence-above-limit'],
+      says: [{ messageId: 'presence-above-limit/above-limit', data: { probability: 0.5, limit: 0.1 } }],
     },
     {
       name: 'presence exactly at the limit is allowed',
@@ -263,6 +277,7 @@ scenario S-1 category=loc
       name: 'a PFH better than the band is credited at the band edge until accepted',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfh=1e-7 pfh-basis="SV-1 (invented)"\n${HIGH('layer SIF-1')}`,
       rules: ['sif-pfh-outside-sil'],
+      says: [{ messageId: 'sif-pfh-outside-sil/better', data: { function: 'SIF-1', claimed: 1e-07, sil: 1, low: 1e-06, high: 1e-05 } }],
       verdicts: { 'SIF-1': 'independent' },
     },
     {
@@ -281,6 +296,7 @@ scenario S-1 category=loc
       name: 'a SIF with only a PFD earns no credit in high demand',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 pfd=0.005 pfd-basis="SV-1 (invented)"\n${HIGH('layer SIF-1')}`,
       rules: ['sif-high-demand-no-pfh'],
+      says: [{ messageId: 'sif-high-demand-no-pfh/no-figure', data: { function: 'SIF-1' } }],
       verdicts: { 'SIF-1': 'voided' },
       credited: [],
     },
@@ -304,6 +320,7 @@ scenario S-1 category=loc
       name: 'an alarm raised in the SIS at 0.01 is credited at 0.1',
       model: `alarm LAH-2 sensors=LT-2 raised-in=SIS-1 operator=OP-1 minutes=20 pfd=0.01\n${SCENARIO('loc', 'layer LAH-2')}`,
       rules: ['human-response-floor'],
+      says: [{ messageId: 'human-response-floor/capped', data: { function: 'LAH-2', claimed: 0.01, best: 0.1 } }],
       verdicts: { 'LAH-2': 'independent' },
       allowed: { 'LAH-2': 0.1 },
     },
@@ -344,6 +361,7 @@ scenario S-1 category=loc
       name: 'a presence of 0.01 with no basis is not applied until accepted',
       model: SCENARIO('people', 'modifier presence probability=0.01'),
       rules: ['condition-no-basis'],
+      says: [{ messageId: 'condition-no-basis/no-basis', data: { factor: 'modifier', name: 'presence', probability: 0.01 } }],
     },
     {
       name: 'an enabler with no basis is not applied until accepted',
@@ -367,6 +385,7 @@ scenario S-1 category=loc
       name: 'enabler 0.1 and ignition 0.05 (credit 200) exceed the default 100',
       model: SCENARIO('people', 'enabler "Startup only" probability=0.1 basis="records (invented)"', 'modifier ignition probability=0.05 basis="study (invented)"'),
       rules: ['condition-credit-limit'],
+      says: [{ messageId: 'condition-credit-limit/above-limit', data: { product: 0.1 * 0.05, limit: 100 } }],
     },
     {
       name: 'exactly 100 is allowed',
@@ -384,6 +403,7 @@ scenario S-1 category=loc
       name: 'a cause frequency with no basis is open',
       model: `scenario S-1 category=loc\n  cause external="Lifting accident" frequency=0.01\n`,
       rules: ['cause-no-basis'],
+      says: [{ messageId: 'cause-no-basis/no-basis', data: { frequency: 0.01 } }],
     },
     {
       name: 'a frequency with a basis raises nothing',
@@ -401,6 +421,7 @@ scenario S-1 category=loc
       name: 'a SIL 2 SIF claiming PFD 0.005 with no basis is credited at the SIL 2 edge, 0.01',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005\n${SCENARIO('loc', 'layer SIF-1')}`,
       rules: ['sif-claim-no-basis'],
+      says: [{ messageId: 'sif-claim-no-basis/at-band-edge', data: { function: 'SIF-1', quantity: 'PFD', claimed: 0.005, sil: 2, edge: 0.01 } }],
       allowed: { 'SIF-1': 0.01 },
     },
     {
@@ -434,6 +455,7 @@ scenario S-1 category=loc
       name: 'a BPCS loop failure at 0.01 per year needs a justification',
       model: `scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.01\n`,
       rules: ['bpcs-cause-frequency-low'],
+      says: [{ messageId: 'bpcs-cause-frequency-low/below-floor', data: { frequency: 0.01, lowest: 0.1 } }],
     },
     {
       name: 'at 0.1 per year it does not',
@@ -468,6 +490,7 @@ describe('limit rule tables', () => {
           expect(f.key.startsWith(`${f.rule}:S-1`)).toBe(true);
           expect(f.paths).toHaveLength(f.parties.length);
         }
+        if (c.says) expect(out.findings.filter((f) => f.rule === rule).map((f) => ({ messageId: f.messageId, data: f.data }))).toEqual(c.says);
         if (c.verdicts) expect(verdicts(out)).toMatchObject(c.verdicts);
         if (c.allowed) expect(Object.fromEntries(out.assessment.layers.map((l) => [l.function, l.allowedPfd]))).toMatchObject(c.allowed);
         if (c.credited) expect(out.assessment.layers.filter((l) => l.credited).map((l) => l.function)).toEqual(c.credited);

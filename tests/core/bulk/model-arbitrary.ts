@@ -286,7 +286,7 @@ export const validModel: fc.Arbitrary<Model> = fc
     const categories = seed.categories.map((c, i) =>
       compact({ id: `${c.prefix}.C${i}`, title: c.title, tolerable: c.tolerable, harm: c.harm, edge: c.edge, basis: c.basis, comments: c.comments, trailingComment: c.trailing }),
     );
-    const trailingAs = <T extends { trailing?: string }>({ trailing: t, ...rest }: T) => compact({ ...rest, trailingComment: t });
+    const trailingAs = <T extends { trailing?: string | undefined }>({ trailing: t, ...rest }: T) => compact({ ...rest, trailingComment: t });
     return compact({
       site: trailingAs(seed.site),
       policy: seed.policy && trailingAs(seed.policy),

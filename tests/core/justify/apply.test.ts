@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { applyJustifications, STALE_JUSTIFICATION, DUPLICATE_JUSTIFICATION } from '../../../packages/core/src/justify/index.ts';
 import type { Finding } from '../../../packages/core/src/vocabulary/types.ts';
+import { say } from '../../../packages/core/src/catalogue/catalogue.ts';
 import { loadInvented } from '../../report/invented.ts';
 
 const finding = (key: string, severity: Finding['severity'] = 'voids-credit'): Finding => ({
@@ -13,6 +14,7 @@ const finding = (key: string, severity: Finding['severity'] = 'voids-credit'): F
   scenario: 'S-1',
   parties: [{ role: 'layer', tag: 'SIF-1' }],
   paths: [],
+  ...say('incomplete-trace/untraced', { function: 'invented', missing: [] }),
   message: 'invented',
   rationale: 'invented',
   source: 'invented',
@@ -51,7 +53,9 @@ describe('applyJustifications', () => {
     expect(stale.rule).toBe(STALE_JUSTIFICATION);
     expect(stale.severity).toBe('needs-justification');
     expect(stale.key).toBe(`${STALE_JUSTIFICATION}:gone:S-9`);
-    expect(stale.message).toContain('`gone:S-9`');
+    expect(stale.messageId).toBe('stale-justification/matches-nothing');
+    expect(stale.data).toEqual({ key: 'gone:S-9', by: 'B', date: '2024-06-01' });
+    expect(stale.message).toBe('the justification for `gone:S-9` (by B, 2024-06-01) matches no finding');
     expect(stale.accepted).toBeUndefined();
   });
 
@@ -76,6 +80,7 @@ describe('applyJustifications', () => {
       const out = applyJustifications([finding('r:S-1:a')], order);
       expect(out.findings[0]!.accepted).toEqual({ by: 'B', date: '2024-01-01', reason: 'new' });
       expect(out.stale.map((f) => [f.rule, f.severity])).toEqual([[DUPLICATE_JUSTIFICATION, 'note']]);
+      expect(out.stale.map((f) => [f.messageId, f.data])).toEqual([['duplicate-justification/accepted-again', { key: 'r:S-1:a', count: 2, by: 'B', date: '2024-01-01' }]]);
     }
   });
 

@@ -8,7 +8,7 @@ const SOURCE = 'CCPS, Guidelines for Initiating Events and Independent Protectio
 const narrowed = scenario('function=LC-1 only=CV-1 frequency=0.1', 'SF-1');
 const accept = 'accept cause-narrowed:SC-1:LC-1:CV-1 by="T. Tester (invented)" date=2026-11-01 reason="Valve failure only (test)"';
 const sifOnLoopTransmitter = { 'SF-1': 'sif SF-1 sensors=T-1 solver=S-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' };
-const toValve = { key: 'cause-narrowed:SC-1:LC-1:CV-1', element: 'CV-1', parties: ['LC-1'] };
+const toValve = { key: 'cause-narrowed:SC-1:LC-1:CV-1', messageId: 'cause-narrowed/narrowed' as const, element: 'CV-1', parties: ['LC-1'] };
 
 ruleTable('cause-narrowed', {
   valid: [
@@ -22,7 +22,7 @@ ruleTable('cause-narrowed', {
       name: 'narrowed to the transmitter',
       source: SOURCE,
       scenario: scenario('function=LC-1 only=T-1 frequency=0.1', 'SF-1'),
-      findings: [{ key: 'cause-narrowed:SC-1:LC-1:T-1', severity: 'needs-justification', element: 'T-1', parties: ['LC-1'] }],
+      findings: [{ key: 'cause-narrowed:SC-1:LC-1:T-1', messageId: 'cause-narrowed/narrowed', data: { loop: 'LC-1', only: 'T-1' }, at: '26:28', severity: 'needs-justification', element: 'T-1', parties: ['LC-1'] }],
     },
   ],
 });

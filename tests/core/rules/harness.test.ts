@@ -7,7 +7,7 @@ const sharedOnN1 = { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=
 const onN1: InvalidCase = {
   name: 'on N-1',
   lines: sharedOnN1,
-  findings: [{ key: 'shared-process-connection:SC-1:LC-1+SF-1:N-1', severity: 'voids-credit', element: 'N-1', parties: ['LC-1', 'SF-1'] }],
+  findings: [{ key: 'shared-process-connection:SC-1:LC-1+SF-1:N-1', messageId: 'shared-process-connection/shared', severity: 'voids-credit', element: 'N-1', parties: ['LC-1', 'SF-1'] }],
 };
 const onTapping: InvalidCase = {
   ...onN1,
@@ -49,5 +49,16 @@ describe('the rule case harness', () => {
     expect(got).not.toEqual([{ ...onN1.findings[0]!, severity: 'note' }]);
     expect(got).not.toEqual([]);
     expect(ruleFindings('shared-process-connection', { name: 'base' })).not.toEqual(onN1.findings);
+  });
+
+  it('sees a wrong message id, wrong message data and a wrong position when a case gives them', () => {
+    const want = onN1.findings[0]!;
+    const pinned = { ...want, data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'N-1', kind: 'nozzle', severity: 'voids-credit', beneath: [] }, at: '27:9' };
+    expect(ruleFindings('shared-process-connection', onN1, [pinned])).toEqual([pinned]);
+    expect(ruleFindings('shared-process-connection', onN1)).not.toEqual([{ ...want, messageId: 'shared-bridle/shared' }]);
+    const wrongData = { ...pinned, data: { ...pinned.data, element: 'N-2' } };
+    expect(ruleFindings('shared-process-connection', onN1, [wrongData])).not.toEqual([wrongData]);
+    const wrongPlace = { ...pinned, at: '26:9' };
+    expect(ruleFindings('shared-process-connection', onN1, [wrongPlace])).not.toEqual([wrongPlace]);
   });
 });

@@ -1,7 +1,7 @@
 // The rule case harness: each rule's table of small .bulk models that must, or must not, make it
 // report, in the way a linter tests its rules. Case models are invented test data.
 import { describe, expect, it } from 'vitest';
-import { analyze, loadModelText, RULES, type Analysis, type SeverityLevel } from '@bulkhead/core';
+import { analyze, loadModelText, RULES, type Analysis, type MessageId, type SeverityLevel } from '@bulkhead/core';
 
 /**
  * A clean site: one BPCS loop LC-1 as the cause and one fully separate SIF SF-1, each with its own
@@ -67,9 +67,15 @@ export interface Case {
   source?: string;
 }
 
-/** One finding a case must produce: the rule is the table's; parties are the tags of the sides. */
+/**
+ * One finding a case must produce: the rule is the table's; parties are the tags of the sides. The message id
+ * is always checked; its data and the primary span (`line:column` in the case model) when the case gives them.
+ */
 export interface Expected {
   key: string;
+  messageId: MessageId;
+  data?: unknown;
+  at?: string;
   severity: SeverityLevel;
   element?: string;
   parties: string[];
@@ -104,9 +110,12 @@ export function analyseCase(c: Case): Analysis {
   return analyze(loaded.model, { spans: loaded.spans });
 }
 
-function summary(f: Analysis['findings'][number]): Expected {
+function summary(f: Analysis['findings'][number], wanted?: Expected): Expected {
   return {
     key: f.key,
+    messageId: f.messageId,
+    ...(wanted && 'data' in wanted ? { data: f.data } : {}),
+    ...(wanted?.at !== undefined ? { at: f.span ? `${f.span.line}:${f.span.column}` : 'no span' } : {}),
     severity: f.severity,
     ...(f.element !== undefined ? { element: f.element } : {}),
     parties: f.parties.map((p) => p.tag ?? 'external'),
@@ -138,6 +147,7 @@ export function checkTable(ruleId: string, table: RuleTable): void {
     if (c.findings.length === 0) problems.push(`invalid case "${c.name}" lists no finding; make it a valid case`);
     const keys = c.findings.map((f) => f.key);
     for (const key of keys) if (!key.startsWith(`${ruleId}:`)) problems.push(`case "${c.name}": key \`${key}\` is not a key of rule ${ruleId}`);
+    for (const f of c.findings) if (!f.messageId.startsWith(`${ruleId}/`)) problems.push(`case "${c.name}": message \`${f.messageId}\` is not a message of rule ${ruleId}`);
     if (new Set(keys).size !== keys.length) problems.push(`case "${c.name}" lists a finding twice`);
   }
   if (problems.length > 0) throw new Error(`table of ${ruleId}: ${problems.join('; ')}`);
@@ -145,9 +155,13 @@ export function checkTable(ruleId: string, table: RuleTable): void {
 
 const byKey = (a: Expected, b: Expected) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0);
 
-/** The findings of one rule for a case, as the tables write them, sorted by key. */
-export function ruleFindings(ruleId: string, c: Case): Expected[] {
-  return analyseCase(c).findings.filter((f) => f.rule === ruleId).map(summary).sort(byKey);
+/** The findings of one rule for a case, as the tables write them (with data and span where `wanted` lists them), sorted by key. */
+export function ruleFindings(ruleId: string, c: Case, wanted: readonly Expected[] = []): Expected[] {
+  const byWantedKey = new Map(wanted.map((w) => [w.key, w]));
+  return analyseCase(c)
+    .findings.filter((f) => f.rule === ruleId)
+    .map((f) => summary(f, byWantedKey.get(f.key)))
+    .sort(byKey);
 }
 const titled = (kind: string, c: Case) => `${kind}: ${c.name}${c.source ? ` [${c.source}]` : ''}`;
 
@@ -164,7 +178,7 @@ export function ruleTable(ruleId: string, table: RuleTable): void {
     }
     for (const c of table.invalid) {
       it(titled('invalid', c), () => {
-        expect(ruleFindings(ruleId, c)).toEqual([...c.findings].sort(byKey));
+        expect(ruleFindings(ruleId, c, c.findings)).toEqual([...c.findings].sort(byKey));
       });
     }
   });

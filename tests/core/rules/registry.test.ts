@@ -16,14 +16,14 @@ describe('the independence rule set', () => {
     }
   });
 
-  it('keeps each rule in one source file named by its id, so a rule is found from its id', () => {
-    const catalogue = new URL('../../../packages/core/src/rules/catalogue/', import.meta.url);
-    const ruleFiles = readdirSync(catalogue).filter((f) => f !== 'messages.ts');
+  it("keeps each rule's check in one source file named by its id, so a rule is found from its id", () => {
+    const checks = new URL('../../../packages/core/src/rules/checks/', import.meta.url);
+    const ruleFiles = readdirSync(checks);
     expect(ruleFiles.sort()).toEqual(RULES.map((r) => `${r.id}.ts`).sort());
     for (const rule of RULES) {
-      const text = readFileSync(new URL(`${rule.id}.ts`, catalogue), 'utf8');
+      const text = readFileSync(new URL(`${rule.id}.ts`, checks), 'utf8');
       expect(text.match(/\bdefine\w*Rule\(/g), `${rule.id}.ts defines one rule`).toHaveLength(1);
-      expect(text).toContain(`'${rule.id}'`);
+      expect(text, `${rule.id}.ts takes its data from the catalogue`).toContain(`catalogue/independence/${rule.id}.ts'`);
     }
   });
 

@@ -34,20 +34,20 @@ ruleTable('shared-final-element', {
       name: 'a SIS solenoid on the BPCS control valve: the valve is shared',
       source: SOURCE,
       lines: solenoidOnBpcsValve,
-      findings: [{ key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1', severity: 'voids-credit', element: 'CV-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [{ key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1', messageId: 'shared-final-element/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'CV-1', kind: 'control-valve', severity: 'voids-credit', beneath: ['IA-A'] }, at: '29:9', severity: 'voids-credit', element: 'CV-1', parties: ['LC-1', 'SF-1'] }],
     },
     {
       name: 'the SIF closes the control valve of the failing loop',
       source: SOURCE,
       lines: { 'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=CV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' },
-      findings: [{ key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1', severity: 'voids-credit', element: 'CV-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [{ key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1', messageId: 'shared-final-element/shared', severity: 'voids-credit', element: 'CV-1', parties: ['LC-1', 'SF-1'] }],
     },
     {
       name: 'two device layers claimed on one relief valve',
       source: 'CCPS, Layer of Protection Analysis (2001), ch. 6',
       lines: { ...reliefDevices, 'D-2': 'device D-2 device=PSV-1' },
       scenario: twoDevices,
-      findings: [{ key: 'shared-final-element:SC-1:D-1+D-2:PSV-1', severity: 'voids-credit', element: 'PSV-1', parties: ['D-1', 'D-2'] }],
+      findings: [{ key: 'shared-final-element:SC-1:D-1+D-2:PSV-1', messageId: 'shared-final-element/shared', severity: 'voids-credit', element: 'PSV-1', parties: ['D-1', 'D-2'] }],
     },
   ],
 });

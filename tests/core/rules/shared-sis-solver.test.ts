@@ -15,7 +15,7 @@ const secondSif = (solver: string) => ({
   'SF-2': `sif SF-2 sensors=T-3 solver=${solver} finals=XV-2 trip=close trip-mode=de-energise sil=1 pfd=0.1`,
 });
 const twoSifs = scenario('function=LC-1 frequency=0.1', 'SF-1', 'SF-2');
-const finding = (a: string, b: string) => ({ key: `shared-sis-solver:SC-1:${a}+${b}:S-1`, severity: 'needs-justification' as const, element: 'S-1', parties: [a, b] });
+const finding = (a: string, b: string) => ({ key: `shared-sis-solver:SC-1:${a}+${b}:S-1`, messageId: 'shared-sis-solver/both-layers' as const, severity: 'needs-justification' as const, element: 'S-1', parties: [a, b] });
 
 ruleTable('shared-sis-solver', {
   valid: [
@@ -28,7 +28,14 @@ ruleTable('shared-sis-solver', {
     },
   ],
   invalid: [
-    { name: 'two SIFs in one SIS logic solver', source: SOURCE, lines: secondSif('S-1'), scenario: twoSifs, findings: [finding('SF-1', 'SF-2')] },
+    {
+      name: 'two SIFs in one SIS logic solver',
+      source: SOURCE,
+      lines: secondSif('S-1'),
+      scenario: twoSifs,
+      // Points at the second layer's claim (the scenario's last line); the solver's power supply is spoken for.
+      findings: [{ ...finding('SF-1', 'SF-2'), data: { layers: ['SF-1', 'SF-2'], element: 'S-1', beneath: ['UPS-B'] }, at: '35:9' }],
+    },
     {
       name: 'an alarm raised in the SIS logic solver that also runs the SIF',
       source: SOURCE,

@@ -11,6 +11,7 @@ const sif = (mode: string, finals = 'XV-1', voting = '') =>
   `sif SF-1 sensors=T-2 solver=S-1 finals=${finals}${voting ? ` final-voting=${voting}` : ''} trip=close trip-mode=${mode} sil=2 pfd=0.01`;
 const onAir = (element: string, severity: 'note' | 'voids-credit') => ({
   key: `shared-support:SC-1:LC-1+SF-1:${element}`,
+  messageId: 'shared-support/support' as const,
   severity,
   element,
   parties: ['LC-1', 'SF-1'],
@@ -125,7 +126,23 @@ ruleTable('shared-support', {
       source: `${CCPS} (the loss must contribute to the scenario)`,
       lines: { 'XV-1': xvOnAirA('open') },
       scenario: scenario('element=CV-1 frequency=0.1 drives-to=open', 'SF-1'),
-      findings: [{ ...onAir('IA-A', 'note'), key: 'shared-support:SC-1:CV-1+SF-1:IA-A', parties: ['CV-1', 'SF-1'] }],
+      findings: [
+        {
+          ...onAir('IA-A', 'note'),
+          key: 'shared-support:SC-1:CV-1+SF-1:IA-A',
+          // The cause side, judged as data: losing IA-A drives CV-1 closed, away from its dangerous direction (open).
+          data: {
+            a: { role: 'cause', tag: 'CV-1' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'IA-A',
+            kind: 'air-header',
+            beneath: [],
+            cause: { dangerous: false, why: { reason: 'moves-away', heads: ['CV-1'], positions: ['closed'], cause: 'CV-1', direction: 'open' } },
+          },
+          at: '27:9',
+          parties: ['CV-1', 'SF-1'],
+        },
+      ],
     },
   ],
 });

@@ -15,7 +15,14 @@ const bareOutputs = (mode: string) => ({
   'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=XY-2 air-from=IA-B',
   'SF-1': `sif SF-1 sensors=T-2 solver=S-1 finals=XV-1 trip=close trip-mode=${mode} sil=2 pfd=0.01`,
 });
-const onLayer = (element: string, severity: 'note' | 'voids-credit') => ({ key: `undeclared-supply:SC-1:SF-1:${element}`, severity, element, parties: ['SF-1'] });
+const onLayer = (element: string, severity: 'note' | 'voids-credit') => ({
+  key: `undeclared-supply:SC-1:SF-1:${element}`,
+  // A note only where the element's loss drives the layer to its trip position.
+  messageId: severity === 'note' ? ('undeclared-supply/layer-fails-safe' as const) : ('undeclared-supply/layer-unverified' as const),
+  severity,
+  element,
+  parties: ['SF-1'],
+});
 const relief = { 'N-3': 'nozzle N-3 mounted-on=V-1', 'PSV-1': 'relief-valve PSV-1 mounted-on=N-3', 'D-1': 'device D-1 device=PSV-1' };
 const bareLoopTransmitter = { 'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1' };
 
@@ -81,7 +88,7 @@ ruleTable('undeclared-supply', {
       name: 'the cause transmitter declares no supply: a supply shared with the SIF cannot be ruled out, needs a justification',
       source: 'CCPS, Layer of Protection Analysis (2001), ch. 6 (a layer that relies on the utility whose loss is the cause is not independent); conservative default of this tool',
       lines: bareLoopTransmitter,
-      findings: [{ key: 'undeclared-supply:SC-1:LC-1+SF-1:T-1', severity: 'needs-justification', element: 'T-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [{ key: 'undeclared-supply:SC-1:LC-1+SF-1:T-1', messageId: 'undeclared-supply/cause-unverified', data: { element: 'T-1', kind: 'transmitter', cause: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, layer: { role: 'layer', tag: 'SF-1' }, stoppable: 'IO-2' }, at: '27:9', severity: 'needs-justification', element: 'T-1', parties: ['LC-1', 'SF-1'] }],
     },
   ],
 });

@@ -31,20 +31,20 @@ ruleTable('voted-group-common-cause', {
       name: '1oo2 transmitters on one nozzle',
       source: SOURCE,
       lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal'),
-      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:N-2', severity: 'needs-justification', element: 'N-2', parties: ['SF-1'] }],
+      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:N-2', messageId: 'voted-group-common-cause/shared-in-group', data: { role: 'sensor', channels: ['T-2', 'T-3'], function: 'SF-1', element: 'N-2', kind: 'nozzle' }, at: '30:9', severity: 'needs-justification', element: 'N-2', parties: ['SF-1'] }],
     },
     {
       // Issue 16, item 6: a card of the function's own solver is part of the logic-solver subsystem (a note).
       name: '1oo2 transmitters on one input card of their own solver: a note, counted in the logic-solver subsystem',
       source: SOURCE,
       lines: pair('transmitter T-3 make="Brill" model="B2" mounted-on=N-3 signal-via=IO-2 supply=from-signal'),
-      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IO-2', severity: 'note', element: 'IO-2', parties: ['SF-1'] }],
+      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IO-2', messageId: 'voted-group-common-cause/own-solver-card', severity: 'note', element: 'IO-2', parties: ['SF-1'] }],
     },
     {
       name: '1oo2 valves on one air header, the second valve fail action not stated',
       source: SOURCE,
       lines: valves('shutdown-valve XV-2 mounted-on=L-1 signal-via=IO-6 air-from=IA-B'),
-      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IA-B', severity: 'needs-justification', element: 'IA-B', parties: ['SF-1'] }],
+      findings: [{ key: 'voted-group-common-cause:SC-1:SF-1:IA-B', messageId: 'voted-group-common-cause/shared-in-group', severity: 'needs-justification', element: 'IA-B', parties: ['SF-1'] }],
     },
   ],
 });

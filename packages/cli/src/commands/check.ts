@@ -8,7 +8,7 @@ import { COLOUR, PLAIN, wantsColour } from '../colour.ts';
 import { renderCheck } from './check-render.ts';
 import { gateFindings } from './fail-on.ts';
 
-export function checkCommand(file: string, options: { failOn?: string; verbose?: boolean } = {}): number {
+export function checkCommand(file: string, options: { failOn?: string | undefined; verbose?: boolean } = {}): number {
   const gate = gateFindings(options.failOn);
   const result = readModel(file);
   if (!result.model) {

@@ -10,9 +10,9 @@ import { cliVersion } from '../version.ts';
 export const DIFF_FORMATS = ['text', 'md', 'json', 'sarif'] as const;
 
 export interface DiffOptions {
-  git?: string;
-  format?: string;
-  failOn?: string;
+  git?: string | undefined;
+  format?: string | undefined;
+  failOn?: string | undefined;
 }
 
 /** The file as it stands in git revision `rev`, read with `git show` from the file's own folder. */

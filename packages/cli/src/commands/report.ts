@@ -17,19 +17,19 @@ import { cliVersion } from '../version.ts';
 import { checkOutput, isReportText } from '../output.ts';
 
 export interface ReportOptions {
-  format?: string;
-  out?: string;
-  date?: string;
-  failOn?: string;
+  format?: string | undefined;
+  out?: string | undefined;
+  date?: string | undefined;
+  failOn?: string | undefined;
   jsonSchema?: boolean;
   /** Replace an existing -o file that Bulkhead did not write. */
   force?: boolean;
   /** evidence (default), worksheet or actions. */
-  contents?: string;
+  contents?: string | undefined;
   /** Document control: each replaces the model's own. */
-  document?: string;
-  revision?: string;
-  status?: string;
+  document?: string | undefined;
+  revision?: string | undefined;
+  status?: string | undefined;
 }
 
 /** A real calendar date in YYYY-MM-DD: 2025-02-30 is refused, not rolled over to March. */

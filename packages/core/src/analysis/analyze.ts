@@ -1,35 +1,25 @@
 // The analysis, one straight line: model -> graph -> traces -> independence findings -> justifications
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
-import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy } from '../assess/index.ts';
+import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy, rulesInForce } from '../assess/index.ts';
+import { INDEPENDENCE_ENTRIES } from '../catalogue/catalogue.ts';
 import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
+import { findingSpans, ModelLocator } from '../loader/locate.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
-import { RULES } from '../rules/registry.ts';
 import { findingKey as independenceFindingKey } from '../rules/define.ts';
 import { causeSide, runRules, type RuleEnvironment } from '../rules/run.ts';
 import { Tracer } from '../trace/trace.ts';
 import type { Analysis, Finding, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
 
 export interface AnalyzeOptions {
-  /** Spans from the loader, so findings about justifications can point at them. */
+  /** Spans from the loader, so each finding can point at the model lines it concerns. */
   spans?: SpanMap;
 }
 
 /** The independence rules with the severity the model's policy and rule settings put in force. */
 export function independenceRulesInForce(model: Model): RuleInForce[] {
-  return RULES.map((rule) => {
-    const setting = model.rules?.find((r) => r.id === rule.id);
-    const severity: SeverityLevel = setting?.severity ?? rule.defaultSeverity;
-    return {
-      id: rule.id,
-      title: rule.title,
-      severity,
-      defaultSeverity: rule.defaultSeverity,
-      source: rule.source,
-      ...(setting?.reason !== undefined && severity !== rule.defaultSeverity ? { reason: setting.reason } : {}),
-    };
-  });
+  return rulesInForce(model, INDEPENDENCE_ENTRIES);
 }
 
 /** What the rules read besides the scenario: lookups, policy and severities in force, built once per model. */
@@ -67,12 +57,21 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   });
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications, options.spans);
+  const findings = [...sortByScenario(model, all), ...stale];
   return {
     traces,
-    findings: [...sortByScenario(model, all), ...stale],
+    findings: options.spans ? withSpans(findings, new ModelLocator(model, options.spans)) : findings,
     assessments: assessed.map((a, i) => withCauseElements(a.assessment, env, model.scenarios[i]!)),
     rules: [...independence, ...assessRulesInForce(model), ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule)],
   };
+}
+
+/** Each finding with the places it points at in the model file, where the loader gave them. */
+function withSpans(findings: Finding[], locate: ModelLocator): Finding[] {
+  return findings.map((f) => {
+    const { span, related } = findingSpans(f, locate);
+    return { ...f, ...(span ? { span } : {}), ...(related.length ? { related } : {}) };
+  });
 }
 
 /** The cause's element set travels with the assessment, so reports show what the rules compared. */

@@ -2,7 +2,7 @@
 // basis) and the owner's limit on their combined credit (CCPS, Enabling Conditions and Conditional Modifiers, 2013).
 import type { Finding, ScenarioAssessment } from '../vocabulary/types.ts';
 import type { Model, Scenario } from '../model/schema.ts';
-import { formatProbability, formatRatio } from './format.ts';
+import { say } from '../catalogue/catalogue.ts';
 import { inForce, limitFinding, type Figure } from './limits.ts';
 import { above, below, product } from './numbers.ts';
 import { resolvedPolicy } from '../vocabulary/policy.ts';
@@ -34,11 +34,11 @@ function bar<T extends { allowed: boolean; allowedIfAccepted?: boolean; finding?
   return entry;
 }
 
-function noBasis(model: Model, scenario: Scenario, tag: string, what: string, probability: number): Finding {
-  return limitFinding(model, scenario.id, 'condition-no-basis', {
+function noBasis(model: Model, scenario: Scenario, tag: string, factor: 'enabler' | 'modifier', name: string, probability: number): Finding {
+  return limitFinding(model, scenario.id, {
     tags: [tag],
     parties: [],
-    message: `the ${what} (${formatProbability(probability)}) is given without a basis; it is not applied until a basis is recorded (basis=) or a justification accepts it`,
+    says: say('condition-no-basis/no-basis', { factor, name, probability }),
   });
 }
 
@@ -47,7 +47,7 @@ export function assessConditions(model: Model, scenario: Scenario, harm: string,
   const enablers = (scenario.enablers ?? []).map((e, i): EnablerEntry => {
     const entry: EnablerEntry = { title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}), allowed: true };
     if (e.basis === undefined) {
-      const f = noBasis(model, scenario, `enabler-${i + 1}`, `enabling condition "${e.title}"`, e.probability);
+      const f = noBasis(model, scenario, `enabler-${i + 1}`, 'enabler', e.title, e.probability);
       mine.push(f);
       bar(entry, f);
     }
@@ -67,20 +67,20 @@ export function assessConditions(model: Model, scenario: Scenario, harm: string,
     };
     const found: Finding[] = [];
     if (harm !== 'people') {
-      found.push(limitFinding(model, scenario.id, 'modifier-not-allowed', {
+      found.push(limitFinding(model, scenario.id, {
         tags: [tag],
         parties: [],
-        message: `the ${m.kind} modifier (${formatProbability(m.probability)}) applies only to harm to people; category \`${scenario.category}\` is ${harm}, so it is not applied`,
+        says: say('modifier-not-allowed/not-people', { modifier: m.kind, probability: m.probability, category: scenario.category, harm }),
       }));
     } else {
       if (m.kind === 'presence' && above(m.probability, policy.presenceLimit)) {
-        found.push(limitFinding(model, scenario.id, 'presence-above-limit', {
+        found.push(limitFinding(model, scenario.id, {
           tags: [tag],
           parties: [],
-          message: `presence ${formatProbability(m.probability)} is above the policy limit ${formatProbability(policy.presenceLimit)}; it is not applied until a justification accepts it`,
+          says: say('presence-above-limit/above-limit', { probability: m.probability, limit: policy.presenceLimit }),
         }));
       }
-      if (m.basis === undefined) found.push(noBasis(model, scenario, tag, `${m.kind} modifier`, m.probability));
+      if (m.basis === undefined) found.push(noBasis(model, scenario, tag, 'modifier', m.kind, m.probability));
     }
     for (const f of found) {
       mine.push(f);
@@ -97,12 +97,10 @@ export function assessConditions(model: Model, scenario: Scenario, harm: string,
   const combined = rawEnablers('if-accepted') * rawModifiers('if-accepted');
   let limit: Finding | undefined;
   if (below(combined, floor)) {
-    limit = limitFinding(model, scenario.id, 'condition-credit-limit', {
+    limit = limitFinding(model, scenario.id, {
       tags: [],
       parties: [],
-      message:
-        `enablers and modifiers together give a credit of ${formatRatio(1 / combined)} (product ${formatProbability(combined)}), above the policy limit of ${formatRatio(policy.conditionCreditLimit)}; ` +
-        `${formatRatio(policy.conditionCreditLimit)} is used until a justification accepts it`,
+      says: say('condition-credit-limit/above-limit', { product: combined, limit: policy.conditionCreditLimit }),
     });
     mine.push(limit);
   }

@@ -5,8 +5,8 @@ import type { LayerClaim, Model, PlantFunction, Scenario } from '../model/schema
 import { highDemandBand, lowDemandBand } from './bands.ts';
 import { SIF_BAND_SOURCE, TYPICAL_LAYER_PFDS, sifDefaultPfd, type LayerDefaultKey } from './defaults.ts';
 import { causeIsBpcsFailure, isBpcsLayer, type BpcsFacts } from './facts.ts';
-import { formatPerHour, formatProbability } from './format.ts';
-import { inForce, limitFinding, type AssessRuleId, type Figure } from './limits.ts';
+import { say } from '../catalogue/catalogue.ts';
+import { inForce, limitFinding, type AssessmentMessage, type Figure } from './limits.ts';
 import { above, below } from './numbers.ts';
 import { orderOf, type LayerOrder } from './order.ts';
 import { resolvedPolicy, BPCS_LAYER_BEST_PFD, HUMAN_RESPONSE_BEST_PFD } from '../vocabulary/policy.ts';
@@ -104,14 +104,9 @@ class LayerBuilder {
     };
   }
 
-  private finding(rule: AssessRuleId, message: string, element?: string): Finding {
+  private finding(says: AssessmentMessage): Finding {
     const tag = this.work.fn.tag;
-    const f = limitFinding(this.ctx.model, this.ctx.scenario.id, rule, {
-      tags: [tag],
-      parties: [{ role: 'layer', tag }],
-      ...(element !== undefined ? { element } : {}),
-      message,
-    });
+    const f = limitFinding(this.ctx.model, this.ctx.scenario.id, { tags: [tag], parties: [{ role: 'layer', tag }], says });
     this.work.findings.push(f);
     return f;
   }
@@ -127,29 +122,29 @@ class LayerBuilder {
     });
   }
 
-  cap(rule: AssessRuleId, limit: number, message: string): void {
-    const f = this.finding(rule, message);
+  cap(limit: number, says: AssessmentMessage): void {
+    const f = this.finding(says);
     this.reason(f, 'caps', limit);
     for (const figure of FIGURES) if (inForce(f, figure)) this.work.pfd[figure] = Math.max(this.work.pfd[figure], limit);
   }
 
-  void(rule: AssessRuleId, message: string): void {
-    const f = this.finding(rule, message);
+  void(says: AssessmentMessage): void {
+    const f = this.finding(says);
     this.reason(f, 'voids');
     for (const figure of FIGURES) if (inForce(f, figure)) this.work.noCredit[figure] = true;
   }
 
   /** Caps the PFH of a SIF in high demand, as cap() does for a PFD. */
-  capPfh(rule: AssessRuleId, limit: number, message: string): void {
-    const f = this.finding(rule, message);
+  capPfh(limit: number, says: AssessmentMessage): void {
+    const f = this.finding(says);
     this.reason(f, 'caps', limit);
     const pfh = this.work.pfh!;
     for (const figure of FIGURES) if (inForce(f, figure)) pfh[figure] = Math.max(pfh[figure], limit);
   }
 
   /** A finding that changes no number (a SIL claim that the PFD contradicts on the safe side). */
-  flag(rule: AssessRuleId, message: string): void {
-    this.reason(this.finding(rule, message), 'note');
+  flag(says: AssessmentMessage): void {
+    this.reason(this.finding(says), 'note');
   }
 }
 
@@ -157,17 +152,15 @@ class LayerBuilder {
 function highDemandLimits(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 'sif' }>): void {
   const claimed = claimedPfhOf(fn);
   if (!claimed) {
-    b.void('sif-high-demand-no-pfh', `\`${fn.tag}\` is demanded more than once a year but gives neither pfh= nor a SIL; its PFD does not apply at this demand, so it earns no credit`);
+    b.void(say('sif-high-demand-no-pfh/no-figure', { function: fn.tag }));
     return;
   }
   b.work.claimedPfh = claimed;
   b.work.pfh = { after: claimed.value, 'if-accepted': claimed.value };
   const band = fn.sil !== undefined && claimed.origin === 'model' ? highDemandBand(fn.sil) : undefined;
-  if (band && below(claimed.value, band.low)) {
-    b.capPfh('sif-pfh-outside-sil', band.low, `\`${fn.tag}\` claims PFH ${formatPerHour(claimed.value)}, better than its SIL ${fn.sil} band (${formatPerHour(band.low)} to ${formatPerHour(band.high)}); credited at ${formatPerHour(band.low)}`);
-  } else if (band && above(claimed.value, band.high)) {
-    b.flag('sif-pfh-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFH ${formatPerHour(claimed.value)}, worse than the band (${formatPerHour(band.low)} to ${formatPerHour(band.high)}); the PFH is used`);
-  }
+  const data = band && { function: fn.tag, claimed: claimed.value, sil: fn.sil!, low: band.low, high: band.high };
+  if (data && below(claimed.value, data.low)) b.capPfh(data.low, say('sif-pfh-outside-sil/better', data));
+  else if (data && above(claimed.value, data.high)) b.flag(say('sif-pfh-outside-sil/worse', data));
 }
 
 /**
@@ -178,16 +171,14 @@ function unverifiedClaim(b: LayerBuilder, fn: Extract<PlantFunction, { kind: 'si
   const w = b.work;
   const claim = highDemand ? w.claimedPfh : w.claimed;
   if (!claim || claim.origin !== 'model' || claim.basis !== undefined) return;
-  const what = highDemand ? 'PFH' : 'PFD';
-  const format = highDemand ? formatPerHour : formatProbability;
   const band = fn.sil === undefined ? undefined : highDemand ? highDemandBand(fn.sil) : lowDemandBand(fn.sil);
-  const head = `\`${fn.tag}\` claims ${what} ${format(claim.value)} with no verification basis (${highDemand ? 'pfh-basis=' : 'pfd-basis= or basis= on the layer line'})`;
-  if (!band) return b.void('sif-claim-no-basis', `${head} and no SIL: it earns no credit until a basis is recorded or a justification accepts it`);
+  const claimed = { function: fn.tag, quantity: highDemand ? 'PFH' : 'PFD', claimed: claim.value } as const;
+  if (!band) return b.void(say('sif-claim-no-basis/no-sil', claimed));
   // No better than the band's edge, the claim takes no more credit than the SIL alone would give: nothing to verify.
   if (!below(claim.value, band.high)) return;
-  const message = `${head}: credited at the edge of SIL ${fn.sil}, ${format(band.high)}, until a basis is recorded or a justification accepts it`;
-  if (highDemand) b.capPfh('sif-claim-no-basis', band.high, message);
-  else b.cap('sif-claim-no-basis', band.high, message);
+  const says = say('sif-claim-no-basis/at-band-edge', { ...claimed, sil: fn.sil!, edge: band.high });
+  if (highDemand) b.capPfh(band.high, says);
+  else b.cap(band.high, says);
 }
 
 /** Applies the PFD rules to one claimed layer, in the order the brief of issue 4 gives. */
@@ -202,32 +193,30 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
   else if (fn.kind === 'sif' && fn.sil !== undefined && w.claimed.origin === 'model') {
     const band = lowDemandBand(fn.sil);
     // The band's conservative edge is the conventional value for it (SIL 2 at 0.01), so it counts as inside.
-    if (band && below(value, band.low)) {
-      b.cap('sif-pfd-outside-sil', band.low, `\`${fn.tag}\` claims PFD ${formatProbability(value)}, better than its SIL ${fn.sil} band (${formatProbability(band.low)} to ${formatProbability(band.high)}); credited at ${formatProbability(band.low)}`);
-    } else if (band && above(value, band.high)) {
-      b.flag('sif-pfd-outside-sil', `\`${fn.tag}\` claims SIL ${fn.sil} but PFD ${formatProbability(value)}, worse than the band (${formatProbability(band.low)} to ${formatProbability(band.high)}); the PFD is used`);
-    }
+    const data = band && { function: fn.tag, claimed: value, sil: fn.sil, low: band.low, high: band.high };
+    if (data && below(value, data.low)) b.cap(data.low, say('sif-pfd-outside-sil/better', data));
+    else if (data && above(value, data.high)) b.flag(say('sif-pfd-outside-sil/worse', data));
   }
   if (fn.kind === 'sif') unverifiedClaim(b, fn, highDemand);
   // The human floor applies wherever the alarm is raised; when it caps, the BPCS cap would say the same again.
   const humanCapped = fn.kind === 'alarm' && fn.hraBasis === undefined && w.hasPfd && below(value, HUMAN_RESPONSE_BEST_PFD);
   if (humanCapped) {
-    b.cap('human-response-floor', HUMAN_RESPONSE_BEST_PFD, `\`${fn.tag}\` claims PFD ${formatProbability(value)} for an operator response; without a human-reliability analysis (hra-basis=) it is credited at ${formatProbability(HUMAN_RESPONSE_BEST_PFD)} at best`);
+    b.cap(HUMAN_RESPONSE_BEST_PFD, say('human-response-floor/capped', { function: fn.tag, claimed: value, best: HUMAN_RESPONSE_BEST_PFD }));
   }
   if (w.bpcs && w.hasPfd && !humanCapped && below(value, BPCS_LAYER_BEST_PFD)) {
-    b.cap('bpcs-layer-cap', BPCS_LAYER_BEST_PFD, `BPCS layer \`${fn.tag}\` claims PFD ${formatProbability(value)}; a BPCS layer is credited at ${formatProbability(BPCS_LAYER_BEST_PFD)} at best (model it as a SIF if it is designed to IEC 61511)`);
+    b.cap(BPCS_LAYER_BEST_PFD, say('bpcs-layer-cap/capped', { function: fn.tag, claimed: value, best: BPCS_LAYER_BEST_PFD }));
   }
   if (w.bpcs && policy.sameControllerLayers === 'none' && causeIsBpcsFailure(ctx.model, ctx.scenario, ctx.facts)) {
-    b.void('bpcs-layer-with-bpcs-cause', `a BPCS failure is the cause, and the policy (same-controller-layers=none) credits no BPCS layer: \`${fn.tag}\` earns no credit`);
+    b.void(say('bpcs-layer-with-bpcs-cause/no-credit', { function: fn.tag }));
   }
   if (fn.kind === 'alarm' && below(fn.minutes, policy.minResponseMinutes)) {
-    b.void('alarm-response-time', `\`${fn.tag}\` allows ${fn.minutes} minutes for the response; the criteria ask for at least ${policy.minResponseMinutes}`);
+    b.void(say('alarm-response-time/too-little-time', { function: fn.tag, minutes: fn.minutes, required: policy.minResponseMinutes }));
   }
   const isCheckValve = fn.kind === 'device' && ctx.facts[fn.tag]?.deviceKind === 'check-valve';
   if (isCheckValve && fn.kind === 'device' && fn.creditBasis === undefined) {
-    b.void('check-valve-no-credit', `\`${fn.tag}\` relies on check valve \`${fn.device}\`, which earns no credit unless credit-basis says why`);
+    b.void(say('check-valve-no-credit/no-basis', { function: fn.tag, device: fn.device }));
   } else if (!w.hasPfd) {
-    b.void('layer-no-pfd', `\`${fn.tag}\` has no PFD, and no default applies to a ${fn.kind} of this kind: give pfd= with its basis`);
+    b.void(say('layer-no-pfd/no-figure', { function: fn.tag, kind: fn.kind }));
   }
   return w;
 }

@@ -6,7 +6,7 @@ import { assessConditions } from './conditions.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
 import { PER_100_M_ROWS, PER_ROW_METRES, TYPICAL_CAUSE_FREQUENCIES } from './defaults.ts';
 import { bpcsFactsOf, causeIsBpcsLoopFailure, type BpcsFacts } from './facts.ts';
-import { formatFrequency } from './format.ts';
+import { say } from '../catalogue/catalogue.ts';
 import { mitigatedFigure } from './demand.ts';
 import { FIGURES, assessLayerLimits, claimedPfhOf, type LayerWork, type PerFigure } from './layers.ts';
 import { inForce, limitFinding, type Figure } from './limits.ts';
@@ -76,17 +76,17 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
   }
   const perFigure = { after: frequency.value, 'if-accepted': frequency.value };
   if (frequency.origin === 'model' && frequency.basis === undefined) {
-    mine.push(limitFinding(model, scenario.id, 'cause-no-basis', {
+    mine.push(limitFinding(model, scenario.id, {
       tags: [],
       parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : cause.element !== undefined ? { tag: cause.element } : {}) }],
-      message: `the cause frequency ${formatFrequency(frequency.value)} is given without a basis; it is used as given, but record where it comes from (basis=) or accept it`,
+      says: say('cause-no-basis/no-basis', { frequency: frequency.value }),
     }));
   }
   if (frequency.origin === 'model' && causeIsBpcsLoopFailure(model, scenario, facts) && below(frequency.value, BPCS_CAUSE_LOWEST_FREQUENCY)) {
-    const f = limitFinding(model, scenario.id, 'bpcs-cause-frequency-low', {
+    const f = limitFinding(model, scenario.id, {
       tags: cause.function !== undefined ? [cause.function] : [],
       parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : {}) }],
-      message: `the BPCS loop failure is claimed at ${formatFrequency(frequency.value)}, below ${formatFrequency(BPCS_CAUSE_LOWEST_FREQUENCY)}; ${formatFrequency(BPCS_CAUSE_LOWEST_FREQUENCY)} is used until a justification accepts it`,
+      says: say('bpcs-cause-frequency-low/below-floor', { frequency: frequency.value, lowest: BPCS_CAUSE_LOWEST_FREQUENCY }),
     });
     mine.push(f);
     for (const figure of FIGURES) if (inForce(f, figure)) perFigure[figure] = BPCS_CAUSE_LOWEST_FREQUENCY;
@@ -121,10 +121,10 @@ function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[],
   const conflicts: Conflict[] = [];
   let countFinding: Finding | undefined;
   if (bpcs.length > BPCS_LAYERS_PER_SCENARIO) {
-    countFinding = limitFinding(model, scenario.id, 'bpcs-layer-count', {
+    countFinding = limitFinding(model, scenario.id, {
       tags: [],
       parties: bpcs.map((w) => ({ role: 'layer' as const, tag: w.fn.tag })),
-      message: `${bpcs.length} BPCS layers are claimed (${bpcs.map((w) => `\`${w.fn.tag}\``).join(', ')}); at most ${BPCS_LAYERS_PER_SCENARIO} are credited`,
+      says: say('bpcs-layer-count/too-many', { layers: bpcs.map((w) => w.fn.tag), most: BPCS_LAYERS_PER_SCENARIO }),
     });
     mine.push(countFinding);
   }
@@ -134,7 +134,7 @@ function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[],
         const [x, y] = [bpcs[i]!.fn.tag, bpcs[j]!.fn.tag].sort() as [string, string];
         const controller = facts[x]?.solver;
         if (controller === undefined || controller !== facts[y]?.solver || reportedPair(reported, x, y, controller)) continue;
-        const f = limitFinding(model, scenario.id, 'bpcs-same-controller', {
+        const f = limitFinding(model, scenario.id, {
           tags: [x, y],
           parties: [
             { role: 'layer', tag: x },
@@ -145,7 +145,7 @@ function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[],
             [x, controller],
             [y, controller],
           ],
-          message: `BPCS layers \`${x}\` and \`${y}\` both run in controller \`${controller}\`: at most one of them is credited`,
+          says: say('bpcs-same-controller/one-controller', { layers: [x, y], controller }),
         });
         mine.push(f);
         conflicts.push({ a: x, b: y, finding: f });

@@ -11,8 +11,8 @@ export type ItemKind = 'element' | 'function' | 'scenario';
 export interface AttributeChange {
   /** The attribute as written in .bulk (`fails-to`, `cause frequency`, `layer SIF-101 pfd`). */
   attribute: string;
-  old?: string;
-  new?: string;
+  old?: string | undefined;
+  new?: string | undefined;
 }
 
 export interface ItemChanges {

@@ -6,39 +6,23 @@ import type { SpanMap } from '../bulk/to-model.ts';
 import type { Justification } from '../model/schema.ts';
 import { spanAt } from '../loader/schema-issues.ts';
 import { mirroredKeyOf } from '../rules/define.ts';
+import { catalogueEntry, JUSTIFICATION_ENTRIES, renderMessage, ruleIdOf, say, type FindingMessage, type JustificationRuleId } from '../catalogue/catalogue.ts';
 
 export const STALE_JUSTIFICATION = 'stale-justification';
 export const DUPLICATE_JUSTIFICATION = 'duplicate-justification';
 
-const COMMON_PRACTICE = 'common practice, no source';
-
 /**
- * The two rules this module raises, in the same shape as the independence rules so that reports list
- * them in the rule set in force. Stale is `needs-justification`: an acceptance that no longer refers to
- * anything cannot void credit by itself, but someone must look at it (the finding it was written for may
- * have changed key while the problem remains), so `--fail-on needs-justification` catches it and SARIF
- * shows it as a warning. A note would let it pass review unseen; that is what this rule exists to stop.
+ * The two rules this module raises (catalogue/justification/), as the rule set in force lists them: at
+ * their default severity, which is the severity their findings take.
  */
-export const JUSTIFICATION_RULES = [
-  {
-    id: DUPLICATE_JUSTIFICATION,
-    title: 'Finding accepted more than once',
-    severity: 'note',
-    defaultSeverity: 'note',
-    source: COMMON_PRACTICE,
-    rationale:
-      'Two acceptances of one finding may disagree; the report shows the most recent one and lists this so a reviewer can remove the other.',
-  },
-  {
-    id: STALE_JUSTIFICATION,
-    title: 'Justification matches no finding',
-    severity: 'needs-justification',
-    defaultSeverity: 'needs-justification',
-    source: COMMON_PRACTICE,
-    rationale:
-      'An acceptance is evidence only while it refers to a finding that exists. A justification left behind after a change of the model may mean the finding it was written for was fixed, or that it changed its key and now stands unaccepted: a reviewer must decide which and remove or rewrite the justification.',
-  },
-] as const satisfies readonly (RuleInForce & { rationale: string })[];
+export const JUSTIFICATION_RULES: readonly (RuleInForce & { rationale: string })[] = JUSTIFICATION_ENTRIES.map((e) => ({
+  id: e.id,
+  title: e.title,
+  severity: e.defaultSeverity,
+  defaultSeverity: e.defaultSeverity,
+  source: e.source,
+  rationale: e.rationale,
+}));
 
 export interface JustifiedFindings {
   /** The input findings, in their order, each with `accepted` set when a justification names its key. */
@@ -50,7 +34,7 @@ export interface JustifiedFindings {
 }
 
 /** The key a stale or duplicate finding is about: the justification's own `finding` text. */
-export function justifiedKeyOf(finding: Finding): string | undefined {
+export function justifiedKeyOf(finding: Pick<Finding, 'rule' | 'key'>): string | undefined {
   for (const rule of [STALE_JUSTIFICATION, DUPLICATE_JUSTIFICATION]) {
     if (finding.rule === rule && finding.key.startsWith(`${rule}:`)) return finding.key.slice(rule.length + 1);
   }
@@ -70,15 +54,19 @@ function preferred(a: Justification, b: Justification): Justification {
   return order <= 0 ? a : b;
 }
 
-function metaFinding(rule: (typeof JUSTIFICATION_RULES)[number], key: string, message: string): Finding {
+type JustificationMessage = Extract<FindingMessage, { messageId: `${JustificationRuleId}/${string}` }>;
+
+function metaFinding(key: string, says: JustificationMessage): Finding {
+  const rule = catalogueEntry(ruleIdOf(says))!;
   return {
     key: `${rule.id}:${key}`,
     rule: rule.id,
     title: rule.title,
-    severity: rule.severity,
+    severity: rule.defaultSeverity,
     parties: [],
     paths: [],
-    message,
+    ...says,
+    message: renderMessage(says),
     rationale: rule.rationale,
     source: rule.source,
   };
@@ -138,19 +126,14 @@ export function applyJustifications(
   const known = new Set([...findings.map((f) => f.key), ...mirrored.values()]);
   const stale: Finding[] = [];
   const locations: Record<string, Span> = Object.create(null) as Record<string, Span>; // keyed by finding keys
-  const [duplicateRule, staleRule] = JUSTIFICATION_RULES;
   for (const key of [...byKey.keys()].sort(compareText)) {
     const j = byKey.get(key)!;
     const raised: Finding[] = [];
     if (!known.has(key)) {
-      raised.push(
-        metaFinding(staleRule, key, `the justification for \`${key}\` (by ${j.chosen.by}, ${j.chosen.date}) matches no finding`),
-      );
+      raised.push(metaFinding(key, say('stale-justification/matches-nothing', { key, by: j.chosen.by, date: j.chosen.date })));
     }
     if (j.count > 1) {
-      raised.push(
-        metaFinding(duplicateRule, key, `\`${key}\` is accepted by ${j.count} justifications; the one by ${j.chosen.by} on ${j.chosen.date} is shown`),
-      );
+      raised.push(metaFinding(key, say('duplicate-justification/accepted-again', { key, count: j.count, by: j.chosen.by, date: j.chosen.date })));
     }
     for (const f of raised) {
       stale.push(f);

@@ -8,7 +8,7 @@ import { didYouMean, Suggester } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
 import { spanAt } from './schema-issues.ts';
 import { findCycles, longestChain, MAX_DEPENDENCY_DEPTH } from './cycles.ts';
-import { ALL_RULE_IDS } from '../vocabulary/rule-ids.ts';
+import { ALL_RULE_IDS } from '../catalogue/catalogue.ts';
 import { checkFailureData } from './failure-data.ts';
 
 const KNOWN_RULE_IDS = ALL_RULE_IDS;

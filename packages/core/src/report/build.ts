@@ -7,8 +7,7 @@ import type { Model } from '../model/schema.ts';
 import { scenarioById } from '../model/lookup.ts';
 import { meetsCriterion } from '../assess/numbers.ts';
 import { POLICY_DEFAULTS } from '../vocabulary/policy.ts';
-import { ASSESS_RULES } from '../assess/limits.ts';
-import { RULES } from '../rules/registry.ts';
+import { CATALOGUE } from '../catalogue/catalogue.ts';
 import { DEFAULT_CUT_SET_ORDER, modelCutSets } from '../cutsets/index.ts';
 import { RANKING_ORDER, rankCommonCauses } from '../ranking/index.ts';
 import { CUT_SET_METHOD } from './site-wide.ts';
@@ -62,9 +61,9 @@ function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], 
 }
 
 function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
-  // RuleInForce carries no rationale: take it from the rule tables, so a rule with no finding in this run
+  // RuleInForce carries no rationale: take it from the rule catalogue, so a rule with no finding in this run
   // still shows why it exists; a rule from elsewhere takes it from its first finding.
-  const rationaleOf = new Map<string, string>([...RULES, ...ASSESS_RULES, ...JUSTIFICATION_RULES].map((r) => [r.id, r.rationale]));
+  const rationaleOf = new Map<string, string>(CATALOGUE.map((r) => [r.id, r.rationale]));
   for (const f of [...analysis.findings].sort(compareFindings)) if (!rationaleOf.has(f.rule)) rationaleOf.set(f.rule, f.rationale);
   const rules = new Map<string, RuleInForce & { rationale?: string }>();
   for (const r of analysis.rules) rules.set(r.id, r);

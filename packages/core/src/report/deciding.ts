@@ -7,9 +7,9 @@ interface Reason {
   rule: string;
   severity: 'voids-credit' | 'needs-justification' | 'note';
   effect: 'voids' | 'caps' | 'unverified' | 'conflict' | 'note';
-  accepted?: boolean;
-  element?: string;
-  cap?: number;
+  accepted?: boolean | undefined;
+  element?: string | undefined;
+  cap?: number | undefined;
 }
 
 export interface Deciding {

@@ -4,7 +4,7 @@
 import type { Finding } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
-import { FACTOR_RULES, type ModelLocator } from './locate.ts';
+import { FACTOR_RULES, type ModelLocator } from '../loader/locate.ts';
 import { alikeDevices } from './alike.ts';
 
 const KINDS: Record<Finding['severity'], string> = {
@@ -13,7 +13,7 @@ const KINDS: Record<Finding['severity'], string> = {
   note: 'Note',
 };
 
-function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span; role?: string } {
+function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span | undefined; role?: string } {
   const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
   if (layer?.tag) return { span: locate.layer(finding.scenario, layer.tag), role: `the claim of layer ${layer.tag}` };
   const factor = finding.scenario && FACTOR_RULES.has(finding.rule) ? locate.factor(finding.scenario, finding.key) : undefined;

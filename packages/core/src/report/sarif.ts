@@ -6,7 +6,7 @@ import { justifiedKeyOf } from '../justify/apply.ts';
 import type { SeverityLevel } from '../model/schema.ts';
 import type { ReportInput } from './build.ts';
 import type { ReportDocument, ReportFinding } from './document.ts';
-import { FACTOR_RULES, ModelLocator } from './locate.ts';
+import { FACTOR_RULES, ModelLocator } from '../loader/locate.ts';
 import { alikeDevices } from './alike.ts';
 import { policyText } from './text.ts';
 

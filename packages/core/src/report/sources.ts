@@ -37,7 +37,7 @@ const ALIASES: Record<string, string> = { 'CCPS LOPA': 'CCPS, Layer of Protectio
 
 interface Citation {
   work: string;
-  edition?: string;
+  edition?: string | undefined;
   clause: string;
   memory: boolean;
   noSource: boolean;

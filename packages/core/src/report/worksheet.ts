@@ -60,7 +60,7 @@ function basisOf(value: ScenarioReport['cause']['frequency']): string {
   return `${value.origin === 'default' ? 'default' : 'SIL band'}${value.basis ? `: ${value.basis}` : ''}`;
 }
 
-function factors(list: readonly { title?: string; kind?: string; probability: number; allowed: boolean }[]): string {
+function factors(list: readonly { title?: string | undefined; kind?: string | undefined; probability: number; allowed: boolean }[]): string {
   return list
     .map((f) => `${f.title ?? f.kind} ${formatProbability(f.probability)}${f.allowed ? '' : ' (not applied)'}`)
     .join('; ');

@@ -1,7 +1,11 @@
-// What an independence rule is: data (id, title, rationale, source, default severity, messages) plus
-// a check. Shared-element rules claim the elements two sides have in common; scenario rules look at
-// a scenario as a whole. Rules never write free text into findings except through their messages.
+// What an independence rule is: its catalogue entry (id, title, rationale, source, default severity,
+// messages; catalogue/independence/<id>.ts) plus a check. Shared-element rules claim the elements two
+// sides have in common; scenario rules look at a scenario as a whole. A rule never writes free text into
+// a finding: it names one of its messages and gives that message's data.
 import type { Finding, Party, TracedElement } from '../vocabulary/types.ts';
+import type { FindingMessage, IndependenceRuleId } from '../catalogue/catalogue.ts';
+import type { RuleEntry } from '../catalogue/define.ts';
+import type { SharedVerdictData, SideRef } from '../catalogue/words.ts';
 import type { ElementGroup } from '../model/kinds.ts';
 import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
 import type { ResolvedPolicy } from '../vocabulary/policy.ts';
@@ -41,19 +45,13 @@ export interface FindingDraft {
   parties: Party[];
   element?: string;
   paths: string[][];
-  message: string;
+  says: FindingMessage;
   severity?: SeverityLevel;
   /** Extra words for the stable key when element alone does not make it unique. */
   keyDetail?: string;
 }
 
-interface RuleMeta {
-  id: string;
-  title: string;
-  rationale: string;
-  source: string;
-  defaultSeverity: SeverityLevel;
-}
+type RuleMeta = Omit<RuleEntry<IndependenceRuleId>, 'messages' | 'kind'>;
 
 export interface SharedElementRule extends RuleMeta {
   type: 'shared';
@@ -68,7 +66,8 @@ export interface SharedElementRule extends RuleMeta {
   coversDependencies?(element: Element): boolean;
   /** Severity for this occurrence (e.g. a support that fails safe is a note); default: the rule's in force. */
   judge?(element: Element, pair: PairContext, inForce: SeverityLevel): SeverityLevel;
-  message(element: Element, pair: PairContext, severity: SeverityLevel): string;
+  /** What the finding says; `beneath` are the shared elements under this one that it speaks for. */
+  message(element: Element, pair: PairContext, severity: SeverityLevel, beneath: string[]): FindingMessage;
 }
 
 export interface ScenarioRule extends RuleMeta {
@@ -78,12 +77,18 @@ export interface ScenarioRule extends RuleMeta {
 
 export type Rule = SharedElementRule | ScenarioRule;
 
-export function defineSharedRule(rule: Omit<SharedElementRule, 'type'>): SharedElementRule {
-  return { type: 'shared', ...rule };
+type Check<R> = Omit<R, 'type' | keyof RuleMeta>;
+
+function metaOf(entry: RuleEntry<IndependenceRuleId>): RuleMeta {
+  return { id: entry.id, title: entry.title, rationale: entry.rationale, source: entry.source, defaultSeverity: entry.defaultSeverity };
 }
 
-export function defineScenarioRule(rule: Omit<ScenarioRule, 'type'>): ScenarioRule {
-  return { type: 'scenario', ...rule };
+export function defineSharedRule(entry: RuleEntry<IndependenceRuleId>, check: Check<SharedElementRule>): SharedElementRule {
+  return { type: 'shared', ...metaOf(entry), ...check };
+}
+
+export function defineScenarioRule(entry: RuleEntry<IndependenceRuleId>, check: Check<ScenarioRule>): ScenarioRule {
+  return { type: 'scenario', ...metaOf(entry), ...check };
 }
 
 export const SEVERITY_RANK: Record<SeverityLevel, number> = { 'voids-credit': 3, 'needs-justification': 2, note: 1 };
@@ -92,10 +97,12 @@ export function partyKey(party: Party): string {
   return party.tag ?? 'external';
 }
 
-export function describeSide(side: Side): string {
-  if (side.party.role === 'layer') return `layer \`${side.party.tag}\``;
-  if (side.fn) return `the failing ${side.fn.kind === 'loop' ? 'loop' : side.fn.kind} \`${side.party.tag}\``;
-  return side.party.tag ? `the failing element \`${side.party.tag}\`` : 'the external cause';
+/** A side as a message names it (catalogue/words.ts sideWords). */
+export function sideRef(side: Side): SideRef {
+  const ref: SideRef = { role: side.party.role };
+  if (side.party.tag !== undefined) ref.tag = side.party.tag;
+  if (side.party.role === 'cause' && side.fn) ref.functionKind = side.fn.kind;
+  return ref;
 }
 
 export function findingKey(rule: string, scenario: string | undefined, parties: Party[], element?: string, detail?: string): string {
@@ -136,3 +143,8 @@ export function mirroredKeyOf(finding: Pick<Finding, 'key' | 'rule' | 'scenario'
 }
 
 export type { Finding };
+
+/** The data every shared-element message starts from (catalogue/words.ts SharedVerdictData). */
+export function sharedData(element: Element, pair: PairContext, severity: SeverityLevel, beneath: string[]): SharedVerdictData {
+  return { a: sideRef(pair.a), b: sideRef(pair.b), element: element.tag, kind: element.kind, severity, beneath };
+}

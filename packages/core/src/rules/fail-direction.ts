@@ -7,6 +7,7 @@
 import type { CauseDirection, Element } from '../model/schema.ts';
 import { groupOf } from '../model/kinds.ts';
 import type { ScenarioContext, Side } from './define.ts';
+import type { CauseJudgementData } from '../catalogue/words.ts';
 
 const POSITION_FOR_TRIP = { close: 'closed', open: 'open', stop: 'off', start: 'on' } as const;
 const POWER_KINDS = new Set(['power-supply', 'ups', 'circuit']);
@@ -65,13 +66,8 @@ export function failsSafeOnLoss(layer: Side, support: Element, ctx: ScenarioCont
   return failsSafeWhenLost(layer, support.tag, isPowerSupport(support), ctx);
 }
 
-/** How the cause side was judged for one lost support: whether it can start the scenario, and why. */
-export interface CauseJudgement {
-  dangerous: boolean;
-  why: string;
-}
-
-const list = (tags: Iterable<string>) => [...tags].map((t) => `\`${t}\``).join(', ');
+/** How the cause side was judged for one lost support: whether it can start the scenario, and why (as data). */
+export type CauseJudgement = CauseJudgementData;
 
 /**
  * Whether the loss of `lost` can drive the cause the dangerous way. Safe only when the cause states its
@@ -82,18 +78,16 @@ const list = (tags: Iterable<string>) => [...tags].map((t) => `\`${t}\``).join('
  */
 export function judgeCauseSide(cause: Side, lost: string, power: boolean, ctx: ScenarioContext): CauseJudgement {
   const direction: CauseDirection | undefined = ctx.scenario.cause.drivesTo;
-  const who = cause.party.tag !== undefined ? `\`${cause.party.tag}\`` : 'the cause';
-  if (direction === undefined) return { dangerous: true, why: 'no dangerous direction stated (drives-to), taken as dangerous' };
-  if (direction === 'high' || direction === 'low') {
-    return { dangerous: true, why: `a ${direction} output cannot be judged from fail positions, so any loss counts` };
-  }
+  const who = cause.party.tag !== undefined ? { cause: cause.party.tag } : {};
+  if (direction === undefined) return { dangerous: true, why: { reason: 'no-direction' } };
+  if (direction === 'high' || direction === 'low') return { dangerous: true, why: { reason: 'output-direction', direction } };
   const start = cause.elements.values().next().value?.path[0];
   const fn = start !== undefined && start === cause.fn?.tag ? cause.fn : undefined;
   let channels: { head: string; members: ReadonlySet<string> }[];
   if (fn && (fn.kind === 'loop' || fn.kind === 'sif' || fn.kind === 'trip')) {
     const everyOutput = power && ctx.tracer.closure(fn.solver).has(lost);
     if (!everyOutput && fn.sensors.some((s) => ctx.tracer.closure(s).has(lost))) {
-      return { dangerous: true, why: `${who}'s sensor relies on it and may read wrong, driving the loop either way` };
+      return { dangerous: true, why: { reason: 'sensor-relies', ...who } };
     }
     channels = fn.finals.map((head) => ({ head, members: ctx.tracer.closure(head) })).filter((c) => everyOutput || c.members.has(lost));
   } else if (start !== undefined && !fn) {
@@ -101,23 +95,19 @@ export function judgeCauseSide(cause: Side, lost: string, power: boolean, ctx: S
     channels = members.has(lost) ? [{ head: start, members }] : [];
     const group = groupOf(ctx.element(start).kind);
     if (group !== 'final' && group !== 'actuation') {
-      return { dangerous: true, why: `${who} states no fail position on loss of supply, so it may fail ${direction}` };
+      return { dangerous: true, why: { reason: 'no-fail-position', ...who, direction } };
     }
   } else {
-    return { dangerous: true, why: `${who} cannot be judged by direction` };
+    return { dangerous: true, why: { reason: 'not-judged', ...who } };
   }
-  if (channels.length === 0) return { dangerous: true, why: `it reaches ${who} other than through its final elements` };
+  if (channels.length === 0) return { dangerous: true, why: { reason: 'other-route', ...who } };
   const positions = new Set<string>();
   for (const c of channels) {
     const p = channelPositions(c.members, ctx);
-    if (!p) return { dangerous: true, why: `a final element or actuator of ${list([c.head])} states no fail position` };
+    if (!p) return { dangerous: true, why: { reason: 'final-unstated', head: c.head } };
     for (const x of p) positions.add(x);
   }
-  if (positions.has(direction) || positions.has('in-place')) {
-    return { dangerous: true, why: `its loss leaves ${list(channels.map((c) => c.head))} ${[...positions].sort().join('/')}, and ${who} is dangerous ${direction}` };
-  }
-  return {
-    dangerous: false,
-    why: `its loss drives ${list(channels.map((c) => c.head))} ${[...positions].sort().join('/')}, away from the dangerous ${direction} of ${who}: it cannot start the scenario`,
-  };
+  const moved = { heads: channels.map((c) => c.head), positions: [...positions].sort(), ...who, direction };
+  if (positions.has(direction) || positions.has('in-place')) return { dangerous: true, why: { reason: 'moves-dangerous', ...moved } };
+  return { dangerous: false, why: { reason: 'moves-away', ...moved } };
 }

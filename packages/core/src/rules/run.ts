@@ -6,6 +6,7 @@ import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../
 import type { Tracer } from '../trace/trace.ts';
 import { findingKey, SEVERITY_RANK, sidesInKeyOrder, type FindingDraft, type PairContext, type ResolvedPolicy, type Rule, type ScenarioContext, type SharedElementRule, type Side } from './define.ts';
 import { RULES } from './registry.ts';
+import { renderMessage } from '../catalogue/catalogue.ts';
 
 export interface RuleEnvironment {
   model: Model;
@@ -123,13 +124,12 @@ function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): 
   return kept.map((c) => {
     const element = pair.element(c.tag);
     const beneath = claimed.filter((o) => o.tag !== c.tag && !kept.includes(o) && pair.tracer.closure(c.tag).has(o.tag)).map((o) => o.tag).sort();
-    const also = beneath.length ? ` (and through it ${beneath.map((t) => `\`${t}\``).join(', ')})` : '';
     return {
       rule: c.rule,
       parties: [pair.a.party, pair.b.party],
       element: c.tag,
       paths: [pathFor(pair.a, c), pathFor(pair.b, c)],
-      message: c.rule.message(element, pair, c.severity) + also,
+      says: c.rule.message(element, pair, c.severity, beneath),
       severity: c.severity,
     };
   });
@@ -147,7 +147,7 @@ export function runRules(env: RuleEnvironment, scenario: Scenario, rules: readon
     }
   }
   for (const rule of rules) if (rule.type === 'scenario') drafts.push(...rule.check(ctx).map((d) => ({ ...d, rule })));
-  const order = new Map(rules.map((r, i) => [r.id, i]));
+  const order = new Map<string, number>(rules.map((r, i) => [r.id, i]));
   return drafts
     .map((d): Finding => ({
       key: findingKey(d.rule.id, scenario.id, d.parties, d.element, d.keyDetail),
@@ -158,7 +158,8 @@ export function runRules(env: RuleEnvironment, scenario: Scenario, rules: readon
       parties: d.parties,
       ...(d.element ? { element: d.element } : {}),
       paths: d.paths,
-      message: d.message,
+      ...d.says,
+      message: renderMessage(d.says),
       rationale: d.rule.rationale,
       source: d.rule.source,
     }))

@@ -2,7 +2,8 @@
 // drive the layer to its trip position?) and the cause side (can its loss drive the cause the dangerous
 // way?). Shared by the rules shared-support and utility-loss-cause, so both read and word it alike.
 import type { Element, SeverityLevel } from '../model/schema.ts';
-import { describeSide, type PairContext } from './define.ts';
+import type { SupportData } from '../catalogue/words.ts';
+import { sideRef, type PairContext } from './define.ts';
 import { failsSafeOnLoss, isPowerSupport, judgeCauseSide, type CauseJudgement } from './fail-direction.ts';
 
 export interface SupportJudgement {
@@ -27,12 +28,7 @@ export function severityOf(j: SupportJudgement, inForce: SeverityLevel): Severit
   return j.safeLayer !== undefined || j.cause?.dangerous === false ? 'note' : inForce;
 }
 
-export function supportMessage(element: Element, pair: PairContext, j: SupportJudgement): string {
-  const both = `${describeSide(pair.b)} and ${describeSide(pair.a)} both rely on ${element.kind} \`${element.tag}\``;
-  const causeSide = j.cause ? `; cause side: ${j.cause.why}` : '';
-  if (j.safeLayer !== undefined) return `${both}: shared, fails safe for \`${j.safeLayer}\` (layer side: its loss drives it to the trip position${causeSide})`;
-  if (j.cause?.dangerous === false) {
-    return `${both}: shared, not a dangerous common cause (cause side: ${j.cause.why}; layer side: its loss does not drive \`${pair.b.party.tag}\` to a safe state)`;
-  }
-  return `${both}: not independent (layer side: its loss does not drive the layer to a safe state${causeSide})`;
+/** The data of a shared-support message (catalogue/words.ts supportWords). */
+export function supportData(element: Element, pair: PairContext, j: SupportJudgement, beneath: string[]): SupportData {
+  return { a: sideRef(pair.a), b: sideRef(pair.b), element: element.tag, kind: element.kind, beneath, ...j };
 }

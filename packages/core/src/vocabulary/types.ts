@@ -2,6 +2,11 @@
 // viewer read only these shapes, so they are plain data (no classes, no Maps) and JSON-serialisable.
 import type { ElementGroup, ElementKind, FunctionKind, LinkField } from '../model/kinds.ts';
 import type { SeverityLevel } from '../model/schema.ts';
+import type { Span } from '../diagnostics/diagnostic.ts';
+import type { FindingMessage } from '../catalogue/catalogue.ts';
+import type { MissingPart } from '../catalogue/independence/incomplete-trace.ts';
+
+export type { MissingPart };
 
 /** How a function reaches an element: through one of its roles, or through an element's link. */
 export type EdgeRole = 'sensor' | 'solver' | 'final' | 'raisedIn' | 'console' | 'operator' | 'device' | LinkField;
@@ -23,8 +28,6 @@ export interface ChannelTrace {
   /** Every element the channel relies on, the head included, sorted by tag. */
   elements: string[];
 }
-
-export type MissingPart = 'sensor' | 'process-connection' | 'solver' | 'final-element' | 'operator';
 
 export interface FunctionTrace {
   function: string;
@@ -49,7 +52,22 @@ export interface Acceptance {
   reason: string;
 }
 
-export interface Finding {
+/** A place in the model file that a finding also concerns, and what it is there. */
+export interface RelatedSpan {
+  /** What the place is: `layer`, `element`, `cause`, `factor`, `accept`. */
+  role: 'layer' | 'element' | 'cause' | 'factor' | 'accept';
+  /** The tag, key or factor named there. */
+  name: string;
+  span: Span;
+}
+
+/**
+ * A finding. What it says is data (`messageId` and `data`, typed by the rule catalogue); `message` is those
+ * words rendered once, kept so every consumer reads the same text.
+ */
+export type Finding = FindingFacts & FindingMessage;
+
+export interface FindingFacts {
   /** Stable key: justifications and report diffs refer to it. */
   key: string;
   rule: string;
@@ -62,11 +80,16 @@ export interface Finding {
   element?: string;
   /** For each party, the path of tags from it to the shared element. */
   paths: string[][];
+  /** The words of `messageId` with `data`, as catalogue.ts renders them. */
   message: string;
   rationale: string;
   source: string;
   /** Present when a justification in the model accepts the finding. */
   accepted?: Acceptance;
+  /** Where the finding points in the model file (the claim it concerns), when the loader gave spans. */
+  span?: Span;
+  /** The other places it concerns: the shared element's definition, the cause, the other layer. */
+  related?: RelatedSpan[];
 }
 
 export type LayerVerdict = 'independent' | 'voided' | 'unverified' | 'open' | 'accepted' | 'not-selected';
