@@ -1,7 +1,6 @@
 // The analysis, one straight line: model -> graph -> traces -> independence findings -> justifications
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
 import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy } from '../assess/index.ts';
-import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
@@ -47,8 +46,7 @@ export function ruleEnvironment(model: Model, tracer: Tracer, independence = ind
 }
 
 export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
-  const graph = buildPlantGraph(model);
-  const tracer = new Tracer(graph);
+  const tracer = Tracer.ofModel(model);
   const traces = model.functions.map((f) => tracer.traceFunction(f.tag));
   const independence = independenceRulesInForce(model);
   const env = ruleEnvironment(model, tracer, independence);
