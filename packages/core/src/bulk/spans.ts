@@ -49,8 +49,12 @@ export class StatementSpans implements SpanMap {
   /** The statement open for attributes, and where its attribute count stands. */
   private openCount = -1;
 
-  /** `root` is where a problem with the model as a whole points: its first statement. */
-  constructor(private readonly root: Span) {}
+  /** Where a problem with the model as a whole points: its first statement (set by pointRootAt). */
+  private root: Span = { line: 1, column: 1, length: 1 };
+
+  pointRootAt(span: Span): void {
+    this.root = span;
+  }
 
   private push(value: number): void {
     if (this.size === this.data.length) {

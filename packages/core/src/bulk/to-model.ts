@@ -159,61 +159,83 @@ class StatementReader {
 
 /** Builds the raw model object (not yet validated) and its span map from parsed statements. */
 export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): RawModel {
-  // Problems with the model as a whole (no `site`) point at the first statement.
-  const first = parsed.statements[0];
-  const spans = new StatementSpans(first ? tokenSpan(first.keyword) : { line: 1, column: 1, length: 1 });
-  const reportedPaths = new Set<string>();
-  const unknownNames = new Set<string>();
-  const incompletePaths = new Set<string>();
-  const reader = new StatementReader(diagnostics, spans, reportedPaths, incompletePaths);
-  const raw: Raw = { categories: [], elements: [], functions: [], scenarios: [] };
-  const firstSeen = new Map<string, Token>();
-  const push = (collection: string, item: Raw): number => {
-    const list = (raw[collection] ??= []) as Raw[];
+  const builder = new RawModelBuilder(diagnostics);
+  for (const statement of parsed.statements) builder.add(statement);
+  return builder.finish(parsed.endComments);
+}
+
+/**
+ * The raw model built a statement at a time, in file order: the loader feeds it each statement as the
+ * parser completes it, so the statements' tokens are dropped as it goes rather than held for the whole file.
+ */
+export class RawModelBuilder {
+  private readonly spans = new StatementSpans();
+  private readonly reportedPaths = new Set<string>();
+  private readonly unknownNames = new Set<string>();
+  private readonly incompletePaths = new Set<string>();
+  private readonly reader: StatementReader;
+  private readonly raw: Raw = { categories: [], elements: [], functions: [], scenarios: [] };
+  private readonly firstSeen = new Map<string, Token>();
+  private first = true;
+
+  constructor(private readonly diagnostics: Diagnostic[]) {
+    this.reader = new StatementReader(diagnostics, this.spans, this.reportedPaths, this.incompletePaths);
+  }
+
+  private push(collection: string, item: Raw): number {
+    const list = (this.raw[collection] ??= []) as Raw[];
     list.push(item);
     return list.length - 1;
-  };
-  for (const statement of parsed.statements) {
+  }
+
+  add(statement: Statement): void {
+    const { diagnostics, reader, raw } = this;
+    // Problems with the model as a whole (no `site`) point at the first statement.
+    if (this.first) this.spans.pointRootAt(tokenSpan(statement.keyword));
+    this.first = false;
     const keyword = statement.keyword.value;
     const item: Raw = {};
     const single = SINGLE_SPEC_BY_KEYWORD.get(keyword);
     const listed = LIST_SPEC_BY_KEYWORD.get(keyword);
     if (single) {
-      const earlier = firstSeen.get(keyword);
+      const earlier = this.firstSeen.get(keyword);
       if (earlier) {
         diagnostics.push(error('BH120', `\`${keyword}\` given twice`, tokenSpan(statement.keyword), {
           related: [{ message: 'first given here', span: tokenSpan(earlier) }],
           help: `a model has one \`${keyword}\` statement; continue it on indented lines instead`,
         }));
-        continue;
+        return;
       }
-      firstSeen.set(keyword, statement.keyword);
+      this.firstSeen.set(keyword, statement.keyword);
       reader.read(statement, single, keyword, item, { collection: keyword });
       raw[keyword] = item;
     } else if (listed) {
       const spec = listed;
-      const index = push(spec.collection, item);
+      const index = this.push(spec.collection, item);
       const id = reader.read(statement, spec, `${spec.collection}.${index}`, item, { collection: spec.collection, index });
       if (keyword === 'scenario') readScenarioLines(statement, `${spec.collection}.${index}`, id, item, reader, diagnostics);
     } else if (ELEMENT_SPECS.has(keyword)) {
       item.kind = keyword;
-      const index = push('elements', item);
+      const index = this.push('elements', item);
       reader.read(statement, ELEMENT_SPECS.get(keyword)!, `elements.${index}`, item, { collection: 'elements', index });
     } else if (FUNCTION_SPECS.has(keyword)) {
       item.kind = keyword;
-      const index = push('functions', item);
+      const index = this.push('functions', item);
       reader.read(statement, FUNCTION_SPECS.get(keyword)!, `functions.${index}`, item, { collection: 'functions', index });
     } else {
       diagnostics.push(error('BH115', `unknown statement \`${keyword}\``, tokenSpan(statement.keyword), {
         help: didYouMean(keyword, TOP_KEYWORDS) ?? 'see `bulkhead --help` and the README for the statements of the language',
       }));
-      if (statement.name) unknownNames.add(statement.name.value);
-      continue;
+      if (statement.name) this.unknownNames.add(statement.name.value);
+      return;
     }
     if (keyword !== 'scenario') rejectChildren(statement, diagnostics);
   }
-  if (parsed.endComments.length) raw.endComments = parsed.endComments;
-  return { raw, spans, reportedPaths, unknownNames, incompletePaths };
+
+  finish(endComments: string[]): RawModel {
+    if (endComments.length) this.raw.endComments = endComments;
+    return { raw: this.raw, spans: this.spans, reportedPaths: this.reportedPaths, unknownNames: this.unknownNames, incompletePaths: this.incompletePaths };
+  }
 }
 
 function rejectChildren(statement: Statement, diagnostics: Diagnostic[]): void {
