@@ -13,6 +13,7 @@ export interface StageTimes {
   loadJson: number;
   /** A bare JSON.parse of the JSON twin's text: the floor that check is measured against. */
   jsonParse: number;
+  /** Building the plant index the tracer walks (the graphology graph is no longer built by analyze()). */
   graph: number;
   trace: number;
   rules: number;
