@@ -41,8 +41,16 @@ function run(argv: string[]): number {
   return spec.run(parsed.values as Record<string, string | boolean | undefined>, parsed.positionals);
 }
 
+/** Commands that go on running after `run` returns (a server), so must not be ended when it does. */
+const KEEPS_RUNNING: ReadonlySet<string> = new Set(['view']);
+
 try {
   process.exitCode = run(process.argv.slice(2));
+  // Done and every byte written (pipes and files take writes at once on Linux): end now. Left to end on
+  // its own, the process first lets V8 finish collecting the analysed model's heap, which can take
+  // longer than a small check itself.
+  const idle = process.stdout.writableLength === 0 && process.stderr.writableLength === 0;
+  if (idle && !KEEPS_RUNNING.has(process.argv[2] ?? '')) process.exit();
 } catch (e) {
   if (e instanceof UsageError || (e as { code?: string }).code?.startsWith('ERR_PARSE_ARGS')) {
     process.stderr.write(`bulkhead: ${(e as Error).message}\nrun \`bulkhead --help\` for the commands and options\n`);

@@ -34,6 +34,7 @@ export type { RuleEntry, RuleKind } from './catalogue/define.ts';
 export type { SideRef } from './catalogue/words.ts';
 export { analyze, independenceRulesInForce, ruleEnvironment, type AnalyzeOptions } from './analysis/analyze.ts';
 export { buildPlantGraph, roleTargets, type PlantGraph, type NodeAttributes, type EdgeAttributes } from './graph/plant-graph.ts';
+export { PlantIndex } from './graph/plant-index.ts';
 export { Tracer } from './trace/trace.ts';
 export { RULES, RULE_IDS, ruleById } from './rules/registry.ts';
 export { runRules, scenarioContext, type RuleEnvironment } from './rules/run.ts';

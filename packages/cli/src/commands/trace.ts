@@ -1,6 +1,6 @@
 // `bulkhead trace FILE TAG`: what one function (or element) relies on, as a tree in which each element
 // hangs under the element that first brings it in, so every line reads as a path from the top.
-import { buildPlantGraph, kebab, Tracer, type EdgeRole, type FunctionTrace, type Model, type TracedElement } from '@bulkhead/core';
+import { kebab, Tracer, type EdgeRole, type FunctionTrace, type Model, type TracedElement } from '@bulkhead/core';
 import { didYouMeanTag } from './suggest.ts';
 import { printDiagnostics, readModel, UsageError } from '../io.ts';
 
@@ -48,7 +48,7 @@ export function traceCommand(file: string, tag: string | undefined): number {
     return 2;
   }
   const model = result.model;
-  const tracer = new Tracer(buildPlantGraph(model));
+  const tracer = Tracer.ofModel(model);
   const fn = model.functions.find((f) => f.tag === tag);
   const element = model.elements.find((e) => e.tag === tag);
   if (!fn && !element) {

@@ -2,7 +2,6 @@
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
 import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy, rulesInForce } from '../assess/index.ts';
 import { INDEPENDENCE_ENTRIES } from '../catalogue/catalogue.ts';
-import { buildPlantGraph } from '../graph/plant-graph.ts';
 import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { findingSpans, ModelLocator } from '../loader/locate.ts';
@@ -37,8 +36,7 @@ export function ruleEnvironment(model: Model, tracer: Tracer, independence = ind
 }
 
 export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
-  const graph = buildPlantGraph(model);
-  const tracer = new Tracer(graph);
+  const tracer = Tracer.ofModel(model);
   const traces = model.functions.map((f) => tracer.traceFunction(f.tag));
   const independence = independenceRulesInForce(model);
   const env = ruleEnvironment(model, tracer, independence);

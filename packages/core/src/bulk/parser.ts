@@ -98,7 +98,12 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): LineParse
 /** Far longer than any statement needs (a long description is a few hundred characters). Comment lines are exempt: they are kept whole, at no cost per character. */
 export const MAX_LINE_LENGTH = 10_000;
 
-export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
+/**
+ * Parses a .bulk text. Given `onStatement`, hands over each top-level statement as soon as it is complete
+ * (the next one starts, or the file ends) and keeps none, so a large file's tokens need not all be held at
+ * once; the result's `statements` is then empty.
+ */
+export function parseBulk(text: string, diagnostics: Diagnostic[], onStatement?: (statement: Statement) => void): ParsedFile {
   const lines = splitLines(text);
   const statements: Statement[] = [];
   let pending: string[] = [];
@@ -168,11 +173,13 @@ export function parseBulk(text: string, diagnostics: Diagnostic[]): ParsedFile {
     if (indented) {
       current!.children.push(statement);
     } else {
-      statements.push(statement);
+      if (!onStatement) statements.push(statement);
+      else if (current) onStatement(current);
       current = statement;
     }
     last = statement;
   });
+  if (onStatement && current) onStatement(current);
   return { statements, endComments: pending };
 }
 

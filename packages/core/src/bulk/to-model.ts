@@ -1,6 +1,6 @@
 // Turns parsed .bulk statements into the model's JSON shape, typing each value by its schema field
-// and recording the source span of every value, so later checks can point at the exact text.
-import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
+// and keeping the token positions of every statement, so later checks can point at the exact text.
+import { error, type Diagnostic } from '../diagnostics/diagnostic.ts';
 import {
   camel,
   COMMENT_FIELDS,
@@ -19,8 +19,9 @@ import { heldExactly, tooPrecise } from '../util/decimal.ts';
 import { didYouMean } from '../util/suggest.ts';
 import type { Token } from './lexer.ts';
 import { tokenSpan, type ParsedFile, type Statement } from './parser.ts';
+import { StatementSpans, type FieldTable, type SpanMap, type StatementPlace } from './spans.ts';
 
-export type SpanMap = Map<string, Span>;
+export type { SpanMap } from './spans.ts';
 type Raw = Record<string, unknown>;
 
 /** What reading the statements produced besides the raw model, so the loader does not report twice. */
@@ -37,15 +38,11 @@ export interface RawModel {
 
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
-function joinSpans(first: Token, last: Token): Span {
-  if (first.line !== last.line) return tokenSpan(first);
-  return { line: first.line, column: first.column, length: last.column + last.length - first.column };
-}
-
 interface StatementLayout {
   fields: Map<string, FieldType>;
-  /** The attributes a statement takes, by their kebab-case key. */
-  allowedKeys: Map<string, { name: string; f: FieldType }>;
+  /** The attributes a statement takes, by their kebab-case key, with the number the spans know them by. */
+  allowedKeys: Map<string, { name: string; f: FieldType; number: number }>;
+  table: FieldTable;
 }
 
 /** Worked out once per statement kind, not once per statement: a large site has 100k of them. */
@@ -60,7 +57,12 @@ function layoutOf(spec: StatementSpec): StatementLayout {
       ([name, f]) =>
         name !== spec.positional && name !== 'kind' && !COMMENT_FIELDS.has(name) && f.type !== 'literal' && f.type !== 'nested' && name !== '$schema',
     );
-    layout = { fields, allowedKeys: new Map(allowed.map(([name, f]) => [kebab(name), { name, f }])) };
+    const table: FieldTable = {
+      number: new Map(allowed.map(([name], number) => [name, number])),
+      isList: allowed.map(([, f]) => f.type === 'list'),
+      ...(spec.positional !== undefined ? { positional: spec.positional } : {}),
+    };
+    layout = { fields, allowedKeys: new Map(allowed.map(([name, f], number) => [kebab(name), { name, f, number }])), table };
     layouts.set(spec, layout);
   }
   return layout;
@@ -69,7 +71,7 @@ function layoutOf(spec: StatementSpec): StatementLayout {
 class StatementReader {
   constructor(
     private readonly diagnostics: Diagnostic[],
-    private readonly spans: SpanMap,
+    private readonly spans: StatementSpans,
     private readonly reportedPaths: Set<string>,
     private readonly incompletePaths: Set<string>,
   ) {}
@@ -94,10 +96,14 @@ class StatementReader {
     return undefined;
   }
 
-  /** Reads one statement into `target`, recording spans under `path`. */
-  read(statement: Statement, spec: StatementSpec, path: string, target: Raw): void {
-    const { fields, allowedKeys } = layoutOf(spec);
-    this.spans.set(path, tokenSpan(statement.name ?? statement.keyword));
+  /**
+   * Reads one statement into `target`, keeping its token positions for the spans of `path` (filed at
+   * `place`); the item itself points at `itemToken`, by default its name or else its keyword. Returns the
+   * statement's number in the spans, under which its own indented lines are filed.
+   */
+  read(statement: Statement, spec: StatementSpec, path: string, target: Raw, place: StatementPlace, itemToken?: Token): number {
+    const { fields, allowedKeys, table } = layoutOf(spec);
+    const id = this.spans.open(table, itemToken ?? statement.name ?? statement.keyword, statement.name, place);
     if (statement.incomplete) this.incompletePaths.add(path);
     if (statement.comments.length) target.comments = statement.comments;
     if (statement.trailingComment !== undefined) target.trailingComment = statement.trailingComment;
@@ -108,7 +114,6 @@ class StatementReader {
         const field = fields.get(spec.positional)!;
         const value = this.convert(statement.name, field, spec.positional, `${path}.${spec.positional}`);
         if (value !== undefined) target[spec.positional] = value;
-        this.spans.set(`${path}.${spec.positional}`, tokenSpan(statement.name));
       }
     }
     const seen = new Map<string, Token>();
@@ -135,84 +140,102 @@ class StatementReader {
         continue;
       }
       seen.set(key, attribute.key);
-      const fieldPath = `${path}.${entry.name}`;
-      this.spans.set(fieldPath, joinSpans(attribute.values[0]!, attribute.values[attribute.values.length - 1]!));
+      this.spans.attribute(entry.number, attribute.values);
       if (entry.f.type === 'list') {
-        target[entry.name] = attribute.values.map((token, i) => {
-          this.spans.set(`${fieldPath}.${i}`, tokenSpan(token));
-          return token.value;
-        });
+        target[entry.name] = attribute.values.map((token) => token.value);
       } else if (attribute.values.length > 1) {
-        this.reportedPaths.add(fieldPath);
+        this.reportedPaths.add(`${path}.${entry.name}`);
         this.diagnostics.push(error('BH201', `\`${key}\` takes one value, found a list`, tokenSpan(attribute.values[1]!), {
           help: 'quote text that contains a comma: key="a, b"',
         }));
       } else {
-        const value = this.convert(attribute.values[0]!, entry.f, key, fieldPath);
+        const value = this.convert(attribute.values[0]!, entry.f, key, `${path}.${entry.name}`);
         if (value !== undefined) target[entry.name] = value;
       }
     }
+    return id;
   }
 }
 
 /** Builds the raw model object (not yet validated) and its span map from parsed statements. */
 export function statementsToRaw(parsed: ParsedFile, diagnostics: Diagnostic[]): RawModel {
-  const spans: SpanMap = new Map();
-  const reportedPaths = new Set<string>();
-  const unknownNames = new Set<string>();
-  const incompletePaths = new Set<string>();
-  const reader = new StatementReader(diagnostics, spans, reportedPaths, incompletePaths);
-  // Problems with the model as a whole (no `site`) point at the first statement.
-  const first = parsed.statements[0];
-  spans.set('', first ? tokenSpan(first.keyword) : { line: 1, column: 1, length: 1 });
-  const raw: Raw = { categories: [], elements: [], functions: [], scenarios: [] };
-  const firstSeen = new Map<string, Token>();
-  const push = (collection: string, item: Raw): number => {
-    const list = (raw[collection] ??= []) as Raw[];
+  const builder = new RawModelBuilder(diagnostics);
+  for (const statement of parsed.statements) builder.add(statement);
+  return builder.finish(parsed.endComments);
+}
+
+/**
+ * The raw model built a statement at a time, in file order: the loader feeds it each statement as the
+ * parser completes it, so the statements' tokens are dropped as it goes rather than held for the whole file.
+ */
+export class RawModelBuilder {
+  private readonly spans = new StatementSpans();
+  private readonly reportedPaths = new Set<string>();
+  private readonly unknownNames = new Set<string>();
+  private readonly incompletePaths = new Set<string>();
+  private readonly reader: StatementReader;
+  private readonly raw: Raw = { categories: [], elements: [], functions: [], scenarios: [] };
+  private readonly firstSeen = new Map<string, Token>();
+  private first = true;
+
+  constructor(private readonly diagnostics: Diagnostic[]) {
+    this.reader = new StatementReader(diagnostics, this.spans, this.reportedPaths, this.incompletePaths);
+  }
+
+  private push(collection: string, item: Raw): number {
+    const list = (this.raw[collection] ??= []) as Raw[];
     list.push(item);
     return list.length - 1;
-  };
-  for (const statement of parsed.statements) {
+  }
+
+  add(statement: Statement): void {
+    const { diagnostics, reader, raw } = this;
+    // Problems with the model as a whole (no `site`) point at the first statement.
+    if (this.first) this.spans.pointRootAt(tokenSpan(statement.keyword));
+    this.first = false;
     const keyword = statement.keyword.value;
     const item: Raw = {};
     const single = SINGLE_SPEC_BY_KEYWORD.get(keyword);
     const listed = LIST_SPEC_BY_KEYWORD.get(keyword);
     if (single) {
-      const earlier = firstSeen.get(keyword);
+      const earlier = this.firstSeen.get(keyword);
       if (earlier) {
         diagnostics.push(error('BH120', `\`${keyword}\` given twice`, tokenSpan(statement.keyword), {
           related: [{ message: 'first given here', span: tokenSpan(earlier) }],
           help: `a model has one \`${keyword}\` statement; continue it on indented lines instead`,
         }));
-        continue;
+        return;
       }
-      firstSeen.set(keyword, statement.keyword);
-      reader.read(statement, single, keyword, item);
+      this.firstSeen.set(keyword, statement.keyword);
+      reader.read(statement, single, keyword, item, { collection: keyword });
       raw[keyword] = item;
     } else if (listed) {
       const spec = listed;
-      const index = push(spec.collection, item);
-      reader.read(statement, spec, `${spec.collection}.${index}`, item);
-      if (keyword === 'scenario') readScenarioLines(statement, `${spec.collection}.${index}`, item, reader, diagnostics, spans);
+      const index = this.push(spec.collection, item);
+      const id = reader.read(statement, spec, `${spec.collection}.${index}`, item, { collection: spec.collection, index });
+      if (keyword === 'scenario') readScenarioLines(statement, `${spec.collection}.${index}`, id, item, reader, diagnostics);
     } else if (ELEMENT_SPECS.has(keyword)) {
       item.kind = keyword;
-      const index = push('elements', item);
-      reader.read(statement, ELEMENT_SPECS.get(keyword)!, `elements.${index}`, item);
+      const index = this.push('elements', item);
+      reader.read(statement, ELEMENT_SPECS.get(keyword)!, `elements.${index}`, item, { collection: 'elements', index });
     } else if (FUNCTION_SPECS.has(keyword)) {
       item.kind = keyword;
-      const index = push('functions', item);
-      reader.read(statement, FUNCTION_SPECS.get(keyword)!, `functions.${index}`, item);
+      const index = this.push('functions', item);
+      reader.read(statement, FUNCTION_SPECS.get(keyword)!, `functions.${index}`, item, { collection: 'functions', index });
     } else {
       diagnostics.push(error('BH115', `unknown statement \`${keyword}\``, tokenSpan(statement.keyword), {
         help: didYouMean(keyword, TOP_KEYWORDS) ?? 'see `bulkhead --help` and the README for the statements of the language',
       }));
-      if (statement.name) unknownNames.add(statement.name.value);
-      continue;
+      if (statement.name) this.unknownNames.add(statement.name.value);
+      return;
     }
     if (keyword !== 'scenario') rejectChildren(statement, diagnostics);
   }
-  if (parsed.endComments.length) raw.endComments = parsed.endComments;
-  return { raw, spans, reportedPaths, unknownNames, incompletePaths };
+
+  finish(endComments: string[]): RawModel {
+    if (endComments.length) this.raw.endComments = endComments;
+    return { raw: this.raw, spans: this.spans, reportedPaths: this.reportedPaths, unknownNames: this.unknownNames, incompletePaths: this.incompletePaths };
+  }
 }
 
 function rejectChildren(statement: Statement, diagnostics: Diagnostic[]): void {
@@ -223,7 +246,8 @@ function rejectChildren(statement: Statement, diagnostics: Diagnostic[]): void {
   }
 }
 
-function readScenarioLines(statement: Statement, path: string, scenario: Raw, reader: StatementReader, diagnostics: Diagnostic[], spans: SpanMap): void {
+/** A scenario's indented lines, filed in the spans under the scenario's statement (`parent`). */
+function readScenarioLines(statement: Statement, path: string, parent: number, scenario: Raw, reader: StatementReader, diagnostics: Diagnostic[]): void {
   let causeToken: Token | undefined;
   for (const child of statement.children) {
     const keyword = child.keyword.value;
@@ -245,12 +269,12 @@ function readScenarioLines(statement: Statement, path: string, scenario: Raw, re
       }
       causeToken = child.keyword;
       scenario[spec.collection] = item;
-      reader.read(child, spec, `${path}.${spec.collection}`, item);
-      spans.set(`${path}.${spec.collection}`, tokenSpan(child.keyword));
+      // The line itself points at its keyword: a cause has no name.
+      reader.read(child, spec, `${path}.${spec.collection}`, item, { collection: spec.collection, parent }, child.keyword);
     } else {
       const list = (scenario[spec.collection] ??= []) as Raw[];
       list.push(item);
-      reader.read(child, spec, `${path}.${spec.collection}.${list.length - 1}`, item);
+      reader.read(child, spec, `${path}.${spec.collection}.${list.length - 1}`, item, { collection: spec.collection, index: list.length - 1, parent });
     }
   }
 }

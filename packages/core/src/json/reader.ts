@@ -2,7 +2,6 @@
 // diagnostics as .bulk users. Strict JSON: no comments, no trailing commas.
 import { parseTree, printParseErrorCode, type Node, type ParseError } from 'jsonc-parser';
 import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
-import type { SpanMap } from '../bulk/to-model.ts';
 import { heldExactly, tooPrecise } from '../util/decimal.ts';
 
 /** Deeper than any model needs (about 5 levels), shallow enough that no reader runs out of stack. */
@@ -86,7 +85,7 @@ function tooDeepAt(text: string, limit: number): number {
   return -1;
 }
 
-function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, diagnostics: Diagnostic[], text: string): unknown {
+function toValue(node: Node, path: string, spans: Map<string, Span>, index: LineIndex, diagnostics: Diagnostic[], text: string): unknown {
   spans.set(path, index.span(node.offset, node.type === 'object' || node.type === 'array' ? 1 : node.length));
   switch (node.type) {
     case 'object': {
@@ -127,7 +126,7 @@ function toValue(node: Node, path: string, spans: SpanMap, index: LineIndex, dia
   }
 }
 
-export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknown; spans: SpanMap } | undefined {
+export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknown; spans: Map<string, Span> } | undefined {
   const index = new LineIndex(text);
   // The parser and the reader below recurse per level: refuse deep nesting before either sees it.
   const deep = tooDeepAt(text, MAX_JSON_DEPTH);
@@ -162,6 +161,6 @@ export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknow
     return undefined;
   }
   if (!tree) return undefined;
-  const spans: SpanMap = new Map();
+  const spans = new Map<string, Span>();
   return { raw: toValue(tree, '', spans, index, diagnostics, text), spans };
 }

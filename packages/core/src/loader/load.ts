@@ -3,7 +3,7 @@
 import { capDiagnostics, error, hasErrors, sortDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.ts';
 import { splitLines, type SourceText } from '../diagnostics/render.ts';
 import { parseBulk } from '../bulk/parser.ts';
-import { statementsToRaw, type SpanMap } from '../bulk/to-model.ts';
+import { RawModelBuilder, type SpanMap } from '../bulk/to-model.ts';
 import { firstInvalidUtf8, positionOfByte } from '../util/utf8.ts';
 import type { z } from 'zod';
 import { readJson } from '../json/reader.ts';
@@ -137,8 +137,9 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     raw = read.raw;
     spans = read.spans;
   } else {
-    const parsed = parseBulk(text, diagnostics);
-    const built = statementsToRaw(parsed, diagnostics);
+    // Each statement is read into the raw model as soon as it is parsed, so its tokens can be dropped.
+    const builder = new RawModelBuilder(diagnostics);
+    const built = builder.finish(parseBulk(text, diagnostics, (statement) => builder.add(statement)).endComments);
     raw = built.raw;
     reportedPaths = built.reportedPaths;
     incompletePaths = built.incompletePaths;

@@ -77,7 +77,7 @@ function reachedAvoiding(tracer: Tracer, side: Side, rank: ReadonlyMap<string, n
   const queue = [start];
   for (let i = 0; i < queue.length; i++) {
     const from = queue[i]!;
-    tracer.graph.forEachOutNeighbor(from, (next) => {
+    tracer.forEachOutNeighbor(from, (next) => {
       // Only what the side relies on (a function follows only the signal links of its own role).
       if (reached.has(next) || !side.elements.has(next)) return;
       reached.set(next, from);

@@ -2,9 +2,12 @@
 // one is there. Element closures, paths and traces are memoised, so cost grows with the site, not with
 // functions times elements, and a function traced again for each scenario that claims it costs nothing.
 // Memoised results are shared: callers must treat them as read-only.
+// The walks run over the plant index (numbered nodes, flat edge arrays), never over the graphology graph.
 import type { ChannelTrace, EdgeRole, FunctionTrace, MissingPart, TracedElement } from '../vocabulary/types.ts';
 import type { PlantGraph } from '../graph/plant-graph.ts';
-import { ACTIVE_KINDS, SUPPLY_LINKS, type ElementGroup, type LinkField } from '../model/kinds.ts';
+import { PlantIndex } from '../graph/plant-index.ts';
+import { ACTIVE_KINDS, SUPPLY_LINKS, type ElementGroup, type ElementKind, type LinkField } from '../model/kinds.ts';
+import type { Model } from '../model/schema.ts';
 
 const PROCESS_SIDE: ReadonlySet<ElementGroup> = new Set(['connection', 'impulse', 'equipment']);
 
@@ -15,15 +18,53 @@ function some<T>(items: Iterable<T>, test: (item: T) => boolean): boolean {
 }
 
 export class Tracer {
-  private readonly closures = new Map<string, ReadonlySet<string>>();
-  private readonly pathsFrom = new Map<string, TracedElement[]>();
-  private readonly traces = new Map<string, FunctionTrace>();
+  readonly index: PlantIndex;
+  private readonly closures = new Map<number, ReadonlySet<string>>();
+  private readonly pathsFrom = new Map<number, TracedElement[]>();
+  private readonly traces = new Map<number, FunctionTrace>();
+  /** Scratch of the breadth-first walk: a node is reached in this walk when its stamp is the walk's number. */
+  private readonly stamp: Int32Array;
+  private readonly parentNode: Int32Array;
+  private readonly parentEdge: Int32Array;
+  private walk = 0;
 
-  constructor(readonly graph: PlantGraph) {}
+  /** Traces a plant index, or a graph as given (one built by hand, in tests). */
+  constructor(plant: PlantGraph | PlantIndex) {
+    this.index = plant instanceof PlantIndex ? plant : PlantIndex.ofGraph(plant);
+    this.stamp = new Int32Array(this.index.size);
+    this.parentNode = new Int32Array(this.index.size);
+    this.parentEdge = new Int32Array(this.index.size);
+  }
+
+  /** The tracer of a model's plant. */
+  static ofModel(model: Model): Tracer {
+    return new Tracer(PlantIndex.ofModel(model));
+  }
+
+  /** The plant as a graphology graph, for graph algorithms and drawing; built when first asked for. */
+  get graph(): PlantGraph {
+    return this.index.graph();
+  }
+
+  private node(tag: string): number {
+    const id = this.index.ids.get(tag);
+    if (id === undefined) throw new Error(`${tag} is not in the plant graph`);
+    return id;
+  }
 
   group(tag: string): ElementGroup | undefined {
-    const a = this.graph.getNodeAttributes(tag);
-    return a.type === 'element' ? a.group : undefined;
+    return this.index.groups[this.node(tag)];
+  }
+
+  /** Calls `visit` with each node that `tag` links to, once each, in the graph's order. */
+  forEachOutNeighbor(tag: string, visit: (neighbor: string) => void): void {
+    const { edgeStart, edgeTarget, tags } = this.index;
+    const n = this.node(tag);
+    for (let e = edgeStart[n]!; e < edgeStart[n + 1]!; e++) {
+      // The edges to one node stand together: a node linked twice is visited once.
+      if (e > edgeStart[n]! && edgeTarget[e] === edgeTarget[e - 1]) continue;
+      visit(tags[edgeTarget[e]!]!);
+    }
   }
 
   /**
@@ -31,51 +72,70 @@ export class Tracer {
    * `supply=` saying why it needs none (`from-signal` counts only with a signal link to draw on).
    */
   lacksSupplyRoute(tag: string): boolean {
-    const a = this.graph.getNodeAttributes(tag);
-    if (a.type !== 'element' || !ACTIVE_KINDS.has(a.kind)) return false;
+    const n = this.node(tag);
+    const { edgeStart, edgeRole } = this.index;
+    if (this.index.isFunction(n) || !ACTIVE_KINDS.has(this.index.kinds[n] as ElementKind)) return false;
     let supplied = false;
     let signal = false;
-    this.graph.forEachOutEdge(tag, (_edge, attributes) => {
-      if (SUPPLY_LINKS.has(attributes.role as LinkField)) supplied = true;
-      if (attributes.role === 'signalVia') signal = true;
-    });
+    for (let e = edgeStart[n]!; e < edgeStart[n + 1]!; e++) {
+      if (SUPPLY_LINKS.has(edgeRole[e] as LinkField)) supplied = true;
+      if (edgeRole[e] === 'signalVia') signal = true;
+    }
     if (supplied) return false;
-    if (a.supply === 'mechanical' || a.supply === 'self-contained') return false;
-    return !(a.supply === 'from-signal' && signal);
+    const supply = this.index.supplies[n];
+    if (supply === 'mechanical' || supply === 'self-contained') return false;
+    return !(supply === 'from-signal' && signal);
   }
 
   /** Every element `tag` relies on, itself included. Process equipment is included but not expanded. */
   closure(tag: string): ReadonlySet<string> {
-    const known = this.closures.get(tag);
+    return this.closureOf(this.node(tag));
+  }
+
+  /** The nodes `n` links to, once each, in the graph's order; none beyond process equipment. */
+  private children(n: number): number[] {
+    const { edgeStart, edgeTarget, groups } = this.index;
+    const out: number[] = [];
+    if (groups[n] === 'equipment') return out;
+    for (let e = edgeStart[n]!; e < edgeStart[n + 1]!; e++) {
+      if (e === edgeStart[n]! || edgeTarget[e] !== edgeTarget[e - 1]) out.push(edgeTarget[e]!);
+    }
+    return out;
+  }
+
+  private closureOf(start: number): ReadonlySet<string> {
+    const known = this.closures.get(start);
     if (known) return known;
+    const { tags } = this.index;
     // Iterative post-order walk: children's closures are built before their parent's.
-    const stack: { tag: string; expanded: boolean }[] = [{ tag, expanded: false }];
+    const stack: { n: number; expanded: boolean }[] = [{ n: start, expanded: false }];
     while (stack.length) {
       const top = stack[stack.length - 1]!;
-      if (this.closures.has(top.tag)) {
+      if (this.closures.has(top.n)) {
         stack.pop();
         continue;
       }
-      const children = this.group(top.tag) === 'equipment' ? [] : this.graph.outNeighbors(top.tag);
+      const children = this.children(top.n);
       if (!top.expanded) {
         top.expanded = true;
-        for (const child of children) if (!this.closures.has(child)) stack.push({ tag: child, expanded: false });
+        for (const child of children) if (!this.closures.has(child)) stack.push({ n: child, expanded: false });
         continue;
       }
       stack.pop();
-      const set = new Set<string>([top.tag]);
-      for (const child of children) for (const t of this.closures.get(child) ?? [child]) set.add(t);
-      this.closures.set(top.tag, set);
+      const set = new Set<string>([tags[top.n]!]);
+      for (const child of children) for (const t of this.closures.get(child) ?? [tags[child]!]) set.add(t);
+      this.closures.set(top.n, set);
     }
-    return this.closures.get(tag)!;
+    return this.closures.get(start)!;
   }
 
-  /** The controller or logic solver a function acts through, if the model gives one. */
-  private solverOf(fnTag: string): string | undefined {
+  /** The controller or logic solver a function acts through, if the model gives one (the last so linked). */
+  private solverOf(fn: number): string | undefined {
+    const { edgeStart, edgeTarget, edgeRole, tags } = this.index;
     let solver: string | undefined;
-    this.graph.forEachOutEdge(fnTag, (_edge, attributes, _source, target) => {
-      if (attributes.role === 'solver' || attributes.role === 'raisedIn') solver = target;
-    });
+    for (let e = edgeStart[fn]!; e < edgeStart[fn + 1]!; e++) {
+      if (edgeRole[e] === 'solver' || edgeRole[e] === 'raisedIn') solver = tags[edgeTarget[e]!];
+    }
     return solver;
   }
 
@@ -85,15 +145,14 @@ export class Tracer {
    * signal link that serves only other solvers, provided another link leads to its own solver. Links in
    * series with no solver behind them (a network) are followed; nothing is dropped on a guess.
    */
-  private followsSignal(solver: string | undefined, node: string, target: string): boolean {
+  private followsSignal(solver: string | undefined, node: number, target: number): boolean {
     if (solver === undefined) return true;
-    const branches: string[] = [];
-    this.graph.forEachOutEdge(node, (_edge, attributes, _source, to) => {
-      if (attributes.role === 'signalVia') branches.push(to);
-    });
-    if (branches.length < 2 || this.closure(target).has(solver)) return true;
-    const servesOthersOnly = some(this.closure(target), (t) => this.group(t) === 'solver');
-    return !(servesOthersOnly && branches.some((b) => this.closure(b).has(solver)));
+    const { edgeStart, edgeTarget, edgeRole, groups } = this.index;
+    const branches: number[] = [];
+    for (let e = edgeStart[node]!; e < edgeStart[node + 1]!; e++) if (edgeRole[e] === 'signalVia') branches.push(edgeTarget[e]!);
+    if (branches.length < 2 || this.closureOf(target).has(solver)) return true;
+    const servesOthersOnly = some(this.closureOf(target), (t) => groups[this.index.ids.get(t)!] === 'solver');
+    return !(servesOthersOnly && branches.some((b) => this.closureOf(b).has(solver)));
   }
 
   /**
@@ -101,80 +160,89 @@ export class Tracer {
    * a function, signal links that serve another function's solver are not followed (see followsSignal).
    */
   paths(start: string): TracedElement[] {
-    const known = this.pathsFrom.get(start);
+    const s = this.node(start);
+    const known = this.pathsFrom.get(s);
     if (known) return known;
-    const { parent, order } = this.reach(start);
+    const order = this.reach(s);
+    const { tags, kinds, groups, edgeRole } = this.index;
     const out: TracedElement[] = [];
-    for (const tag of order) {
-      const a = this.graph.getNodeAttributes(tag);
-      if (a.type !== 'element') continue;
-      const path = [tag];
+    for (const n of order) {
+      const group = groups[n];
+      if (group === undefined) continue;
+      const path = [tags[n]!];
       const links: EdgeRole[] = [];
-      for (let step = parent.get(tag); step; step = parent.get(step.from)) {
-        path.unshift(step.from);
-        links.unshift(step.role);
+      for (let at = n; at !== s; at = this.parentNode[at]!) {
+        path.unshift(tags[this.parentNode[at]!]!);
+        links.unshift(edgeRole[this.parentEdge[at]!]!);
       }
-      out.push({ tag, kind: a.kind, group: a.group, path, links });
+      out.push({ tag: tags[n]!, kind: kinds[n] as ElementKind, group, path, links });
     }
     out.sort((x, y) => (x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : 0));
-    this.pathsFrom.set(start, out);
+    this.pathsFrom.set(s, out);
     return out;
   }
 
-  /** Breadth-first reach from `start`, stopping at process equipment; from a function, by role. */
-  private reach(start: string, fnTag?: string): { parent: Map<string, { from: string; role: EdgeRole }>; order: string[] } {
-    const a = this.graph.getNodeAttributes(start);
-    const solver = a.type === 'function' ? this.solverOf(start) : fnTag !== undefined ? this.solverOf(fnTag) : undefined;
-    const parent = new Map<string, { from: string; role: EdgeRole }>();
+  /**
+   * Breadth-first reach from `start`, stopping at process equipment; from a function, by role. Returns the
+   * nodes in the order reached; each one's parent stays in the scratch arrays until the next walk.
+   */
+  private reach(start: number, fn?: number): number[] {
+    const { edgeStart, edgeTarget, edgeRole, groups } = this.index;
+    const solver = this.index.isFunction(start) ? this.solverOf(start) : fn !== undefined ? this.solverOf(fn) : undefined;
+    const walk = ++this.walk;
     const order = [start];
-    const seen = new Set([start]);
+    this.stamp[start] = walk;
     for (let i = 0; i < order.length; i++) {
       const node = order[i]!;
-      if (node !== start && this.group(node) === 'equipment') continue;
-      this.graph.forEachOutEdge(node, (_edge, attributes, _source, target) => {
-        if (seen.has(target)) return;
-        if (attributes.role === 'signalVia' && !this.followsSignal(solver, node, target)) return;
-        seen.add(target);
-        parent.set(target, { from: node, role: attributes.role });
+      if (node !== start && groups[node] === 'equipment') continue;
+      for (let e = edgeStart[node]!; e < edgeStart[node + 1]!; e++) {
+        const target = edgeTarget[e]!;
+        if (this.stamp[target] === walk) continue;
+        if (edgeRole[e] === 'signalVia' && !this.followsSignal(solver, node, target)) continue;
+        this.stamp[target] = walk;
+        this.parentNode[target] = node;
+        this.parentEdge[target] = e;
         order.push(target);
-      });
+      }
     }
-    return { parent, order };
+    return order;
   }
 
   /** What one channel of a function relies on: its head and everything reached from it by that role. */
-  private channelElements(fnTag: string, head: string): string[] {
-    return this.reach(head, fnTag).order.sort();
+  private channelElements(fn: number, head: number): string[] {
+    const { tags } = this.index;
+    return this.reach(head, fn).map((n) => tags[n]!).sort();
   }
 
   traceFunction(tag: string): FunctionTrace {
-    const known = this.traces.get(tag);
+    const f = this.node(tag);
+    const known = this.traces.get(f);
     if (known) return known;
-    const a = this.graph.getNodeAttributes(tag);
-    if (a.type !== 'function') throw new Error(`${tag} is not a function`);
+    if (!this.index.isFunction(f)) throw new Error(`${tag} is not a function`);
+    const { edgeStart, edgeTarget, edgeRole, tags, groups } = this.index;
     const channels: ChannelTrace[] = [];
     let solver = false;
-    this.graph.forEachOutEdge(tag, (_edge, attributes, _source, target) => {
-      if (attributes.role === 'sensor' || attributes.role === 'final') {
-        channels.push({ role: attributes.role, head: target, elements: this.channelElements(tag, target) });
-      }
-      if (attributes.role === 'solver' || attributes.role === 'raisedIn') solver = true;
-    });
+    for (let e = edgeStart[f]!; e < edgeStart[f + 1]!; e++) {
+      const role = edgeRole[e];
+      if (role === 'sensor' || role === 'final') channels.push({ role, head: tags[edgeTarget[e]!]!, elements: this.channelElements(f, edgeTarget[e]!) });
+      if (role === 'solver' || role === 'raisedIn') solver = true;
+    }
     const missing: MissingPart[] = [];
     const sensors = channels.filter((c) => c.role === 'sensor');
     const finals = channels.filter((c) => c.role === 'final');
-    const reachesProcess = (elements: Iterable<string>) => some(elements, (t) => PROCESS_SIDE.has(this.group(t)!));
-    if (a.kind === 'device') {
-      const device = this.graph.outNeighbors(tag)[0];
-      if (device === undefined || !reachesProcess(this.closure(device))) missing.push('process-connection');
+    const reachesProcess = (elements: Iterable<string>) => some(elements, (t) => PROCESS_SIDE.has(groups[this.index.ids.get(t)!]!));
+    const kind = this.index.kinds[f]!;
+    if (kind === 'device') {
+      const device = edgeStart[f]! < edgeStart[f + 1]! ? edgeTarget[edgeStart[f]!]! : undefined;
+      if (device === undefined || !reachesProcess(this.closureOf(device))) missing.push('process-connection');
     } else {
       if (sensors.length === 0) missing.push('sensor');
       else if (sensors.some((c) => !reachesProcess(c.elements))) missing.push('process-connection');
       if (!solver) missing.push('solver');
       if (finals.length === 0) missing.push('final-element');
     }
-    const trace: FunctionTrace = { function: tag, kind: a.kind, elements: this.paths(tag), channels, missing };
-    this.traces.set(tag, trace);
+    const trace = { function: tag, kind, elements: this.paths(tag), channels, missing } as FunctionTrace;
+    this.traces.set(f, trace);
     return trace;
   }
 }
