@@ -31,7 +31,9 @@ export interface ParsedFile {
 }
 
 export function tokenSpan(token: Token): Span {
-  return { line: token.line, column: token.column, length: token.length };
+  return token.file === undefined
+    ? { line: token.line, column: token.column, length: token.length }
+    : { line: token.line, column: token.column, length: token.length, file: token.file };
 }
 
 type LineParse = Omit<Statement, 'comments' | 'children' | 'indented'>;

@@ -39,7 +39,7 @@ const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 
 function joinSpans(first: Token, last: Token): Span {
   if (first.line !== last.line) return tokenSpan(first);
-  return { line: first.line, column: first.column, length: last.column + last.length - first.column };
+  return { ...tokenSpan(first), length: last.column + last.length - first.column };
 }
 
 interface StatementLayout {

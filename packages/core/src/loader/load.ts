@@ -11,6 +11,7 @@ import { kebab } from '../model/fields.ts';
 import { Category, Element, Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { issueToDiagnostics, type FieldNamer } from './schema-issues.ts';
 import { validateModel, type Origins } from './validate.ts';
+import { PART_KEYWORD, readParts, type PartReader } from './parts.ts';
 
 export const MAX_FILE_BYTES = 50 * 1024 * 1024;
 
@@ -23,6 +24,13 @@ export interface LoadResult {
   diagnostics: Diagnostic[];
   spans: SpanMap;
   source: SourceText;
+  /** The part files the model names, in the order first named (empty for a model in one file). */
+  parts?: string[];
+}
+
+export interface LoadOptions {
+  /** Reads the part files a .bulk model names; without it a `part` statement is an error. */
+  readPart?: PartReader;
 }
 
 export function detectFormat(file: string, text: string): ModelFormat {
@@ -32,7 +40,7 @@ export function detectFormat(file: string, text: string): ModelFormat {
 }
 
 /** Decodes bytes as UTF-8, refusing what is not text. */
-function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefined {
+export function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefined {
   if (bytes.length > MAX_FILE_BYTES) {
     diagnostics.push(error('BH103', `the file is ${(bytes.length / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, {
       help: 'split the site into units, one model file each',
@@ -103,18 +111,20 @@ function isMissing(issue: z.core.$ZodIssue): boolean {
   return issue.code === 'invalid_union' && !!(issue as { discriminator?: string }).discriminator;
 }
 
-export function loadModelText(file: string, bytes: Uint8Array | string): LoadResult {
+export function loadModelText(file: string, bytes: Uint8Array | string, options: LoadOptions = {}): LoadResult {
   const diagnostics: Diagnostic[] = [];
   const text = typeof bytes === 'string' ? bytes : decode(bytes, diagnostics);
-  const source: SourceText = { file, lines: text === undefined ? [] : splitLines(text) };
+  let source: SourceText = { file, lines: text === undefined ? [] : splitLines(text) };
   const format = detectFormat(file, text ?? '');
   let spans: SpanMap = new Map();
+  let parts: string[] = [];
   const done = (model?: Model): LoadResult => ({
     ...(model && !hasErrors(diagnostics) ? { model } : {}),
     format,
     diagnostics: capDiagnostics(sortDiagnostics(diagnostics)),
     spans,
     source,
+    ...(parts.length ? { parts } : {}),
   });
   if (text === undefined) return done();
   if (typeof bytes === 'string' && text.charCodeAt(0) === 0xfeff) {
@@ -137,7 +147,13 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     raw = read.raw;
     spans = read.spans;
   } else {
-    const parsed = parseBulk(text, diagnostics);
+    let parsed = parseBulk(text, diagnostics);
+    if (parsed.statements.some((s) => s.keyword.value === PART_KEYWORD)) {
+      const parted = readParts(file, parsed, options.readPart, decode, diagnostics);
+      parsed = parted.parsed;
+      parts = parted.files;
+      source = { ...source, parts: parted.parts };
+    }
     const built = statementsToRaw(parsed, diagnostics);
     raw = built.raw;
     reportedPaths = built.reportedPaths;
