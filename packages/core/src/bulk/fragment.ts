@@ -2,9 +2,8 @@
 // no `site`, and names tags defined in other files), so it is formatted statement by statement, and the
 // result is checked to read back as the same statements before anyone writes it.
 import type { Diagnostic } from '../diagnostics/diagnostic.ts';
-import { PART_KEYWORD } from '../loader/parts.ts';
 import type { Model } from '../model/schema.ts';
-import { parseBulk } from './parser.ts';
+import { parseBulk, PART_KEYWORD } from './parser.ts';
 import { printBulk, type PartLine } from './printer.ts';
 import { statementsToRaw } from './to-model.ts';
 

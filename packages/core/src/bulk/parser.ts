@@ -4,6 +4,9 @@ import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts'
 import { splitLines } from '../diagnostics/render.ts';
 import { lexLine, type LexedLine, type Token } from './lexer.ts';
 
+/** The statement naming another .bulk file of the same model (read by loader/parts.ts). */
+export const PART_KEYWORD = 'part';
+
 export interface Attribute {
   key: Token;
   values: Token[];

@@ -5,9 +5,9 @@
 import { error, type Diagnostic, type Related, type Span } from '../diagnostics/diagnostic.ts';
 import { splitLines } from '../diagnostics/render.ts';
 import type { Token } from '../bulk/lexer.ts';
-import { parseBulk, tokenSpan, type ParsedFile, type Statement } from '../bulk/parser.ts';
+import { parseBulk, PART_KEYWORD, tokenSpan, type ParsedFile, type Statement } from '../bulk/parser.ts';
 
-export const PART_KEYWORD = 'part';
+export { PART_KEYWORD };
 
 /** What reading a part file gave: its bytes, or why it could not be read (said in the user's words). */
 export type PartBytes = Uint8Array | { problem: string };
