@@ -12,7 +12,7 @@ process.stdout.on('error', (e: NodeJS.ErrnoException) => {
   throw e;
 });
 
-function run(argv: string[]): number {
+function run(argv: string[]): number | Promise<number> {
   const [command, ...rest] = argv;
   if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
     process.stdout.write(HELP);
@@ -42,7 +42,7 @@ function run(argv: string[]): number {
 }
 
 try {
-  process.exitCode = run(process.argv.slice(2));
+  process.exitCode = await run(process.argv.slice(2));
 } catch (e) {
   if (e instanceof UsageError || (e as { code?: string }).code?.startsWith('ERR_PARSE_ARGS')) {
     process.stderr.write(`bulkhead: ${(e as Error).message}\nrun \`bulkhead --help\` for the commands and options\n`);

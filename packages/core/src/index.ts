@@ -2,7 +2,7 @@
 // Pure TypeScript with no Node APIs, so the same code runs in the CLI and in the viewer.
 export * from './model/schema.ts';
 export * from './model/kinds.ts';
-export { kebab, camel } from './model/fields.ts';
+export { kebab, camel, fieldsOf, ELEMENT_SPECS, FUNCTION_SPECS, LIST_SPECS, SCENARIO_LINE_SPECS, TEXT_FIELDS, type FieldType, type StatementSpec } from './model/fields.ts';
 export * from './diagnostics/diagnostic.ts';
 export { renderDiagnostic, renderDiagnostics, diagnosticNotice, splitLines } from './diagnostics/render.ts';
 export { renderNotice, position, place, type Notice, type NoticeFact, type SourceText } from './diagnostics/notice.ts';

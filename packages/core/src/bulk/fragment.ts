@@ -30,12 +30,19 @@ function read(text: string): FileContent {
   return { raw, parts, diagnostics };
 }
 
+function sortedJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
+    v && typeof v === 'object' && !Array.isArray(v) ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))) : v,
+  );
+}
+
 /** The canonical text of one model file, or undefined when it has syntax errors or would not read back the same. */
 export function formatModelFile(text: string): string | undefined {
   const content = read(text);
   if (content.diagnostics.some((d) => d.severity === 'error')) return undefined;
   const printed = printBulk(content.raw as Model, content.parts);
   const back = read(printed);
-  const same = JSON.stringify([back.raw, back.parts]) === JSON.stringify([content.raw, content.parts]);
+  // Attributes print in schema order, so the comparison does not depend on the order they were written in.
+  const same = sortedJson([back.raw, back.parts]) === sortedJson([content.raw, content.parts]);
   return same && back.diagnostics.length === 0 ? printed : undefined;
 }
