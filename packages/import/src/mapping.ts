@@ -87,7 +87,7 @@ export function readMapping(file: string, text: string, issues: ImportIssue[]): 
       return;
     }
     if (!KNOWN_FIELDS.has(field)) {
-      issues.push(issue('BH508', `\`${field}\` is not a field a column can hold`, { file, line: i + 1, lineColumn: equals + 2 }, {
+      issues.push(issue('BH508', `\`${field}\` is not a field a column can hold`, { file, line: i + 1, lineColumn: line.indexOf(field, equals) + 1 }, {
         help: `fields: ${[...KNOWN_FIELDS].sort().join(', ')}`,
       }));
       return;

@@ -2,8 +2,8 @@
 // plant data from CSV and XLSX tables into a generated .bulk part file. Bad rows are reported at
 // file, sheet, row and column, and nothing is written (exit 2) unless --partial asks for the rest.
 // Writing over an earlier generated file is a revision: what was added, removed or changed is listed.
-import { existsSync, readFileSync } from 'node:fs';
-import { extname } from 'node:path';
+import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { dirname, extname } from 'node:path';
 import { loadModelText, normalPath } from '@bulkhead/core';
 import {
   defaultHeaderMap,
@@ -93,6 +93,7 @@ export async function importCommand(files: string[], options: ImportCommandOptio
     return 2;
   }
   if (!model) process.stderr.write('note: references between tables and to hand-written statements are checked only with --model MAIN.bulk\n');
+  mkdirSync(dirname(out), { recursive: true });
   writeFileAtomic(out, result.text);
   process.stdout.write(`${out}: ${result.statements} statements from ${tables.length} table${tables.length === 1 ? '' : 's'}\n`);
   if (result.leftOut.length) process.stdout.write(`left out for errors (--partial): ${result.leftOut.join(', ')}\n`);
