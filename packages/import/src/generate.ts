@@ -34,9 +34,15 @@ function quoted(text: string): string {
 
 const word = (text: string) => (BARE.test(text) ? text : quoted(text));
 
+/** Worked out once per kind, not once per row. */
+const typesByKind = new Map<string, Map<string, FieldType> | undefined>();
+
 function fieldTypes(keyword: string): Map<string, FieldType> | undefined {
-  const spec = ELEMENT_SPECS.get(keyword) ?? FUNCTION_SPECS.get(keyword);
-  return spec ? fieldsOf(spec.schema) : undefined;
+  if (!typesByKind.has(keyword)) {
+    const spec = ELEMENT_SPECS.get(keyword) ?? FUNCTION_SPECS.get(keyword);
+    typesByKind.set(keyword, spec ? fieldsOf(spec.schema) : undefined);
+  }
+  return typesByKind.get(keyword);
 }
 
 class LineBuilder {
@@ -60,9 +66,10 @@ function provenance(sources: string[], extra: string[]): string {
   return ` # from ${[...sources, ...extra].join('; ').replace(/[\r\n]+/g, ' ')}`;
 }
 
-export function generate(records: Iterable<TagRecord>, scenarios: LopaScenario[], leaveOut: ReadonlySet<string> = new Set()): Generated {
-  const out: string[] = [];
-  const lines: GeneratedLine[] = [];
+/** The statements, under `preamble` (comment lines, which the first statement keeps above it). */
+export function generate(records: Iterable<TagRecord>, scenarios: LopaScenario[], leaveOut: ReadonlySet<string> = new Set(), preamble: string[] = []): Generated {
+  const out: string[] = [...preamble];
+  const lines: GeneratedLine[] = preamble.map(() => ({ owner: '', place: { file: '(generated)' }, segments: [] }));
   const push = (builder: LineBuilder, owner: string, place: Place, comment: string) => {
     out.push(builder.text + comment);
     lines.push({ owner, place, segments: builder.segments });

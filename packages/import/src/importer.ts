@@ -1,7 +1,7 @@
 // The import itself: tables in, the generated .bulk part file out, or the reasons it cannot be written.
 // The generated statements are read by the same loader as any model (inside the user's main model
 // when one is given, so references are checked too); whatever it finds is reported at the table cell.
-import { formatModelFile, loadModelText, renderDiagnostic, type Diagnostic, type PartReader } from '@bulkhead/core';
+import { formatModelFile, loadModelText, printBulk, renderDiagnostic, type Diagnostic, type LoadResult, type Model, type PartReader } from '@bulkhead/core';
 import { generate, type Generated } from './generate.ts';
 import { issue, type ImportIssue, type Place } from './issues.ts';
 import { readLopa, type LopaScenario } from './lopa.ts';
@@ -18,8 +18,8 @@ export interface ImportOptions {
   model?: { file: string; text: string; readPart: PartReader };
   /** Write what imported cleanly, leaving out the records and scenarios with errors. */
   partial?: boolean;
-  /** Called now and then with the rows handled so far. */
-  progress?: (rows: number) => void;
+  /** Called at each stage with what it is doing and the rows read so far. */
+  progress?: (stage: string, rows: number) => void;
 }
 
 export interface ImportResult {
@@ -46,7 +46,30 @@ function placeOf(d: Diagnostic, generated: Generated): { place: Place; owner?: s
   return { place: segment?.place ?? line.place, owner: line.owner };
 }
 
-function check(generated: Generated, options: ImportOptions): { issues: ImportIssue[]; owners: Set<string>; modelProblems: string[] } {
+/**
+ * The generated file in canonical form, printed from the model just loaded (the statements whose spans
+ * lie in the generated file), which saves reading the text twice more as formatting it would.
+ */
+function printedPart(result: LoadResult, names: readonly string[]): string | undefined {
+  const model = result.model;
+  if (!model) return undefined;
+  const own = (collection: string) => (_: unknown, i: number) => names.includes(result.spans.get(`${collection}.${i}`)?.file ?? '');
+  const part = {
+    ...model,
+    site: undefined,
+    policy: undefined,
+    categories: [],
+    rules: undefined,
+    justifications: undefined,
+    endComments: undefined,
+    elements: model.elements.filter(own('elements')),
+    functions: model.functions.filter(own('functions')),
+    scenarios: model.scenarios.filter(own('scenarios')),
+  } as unknown as Model;
+  return printBulk(part);
+}
+
+function check(generated: Generated, options: ImportOptions): { issues: ImportIssue[]; owners: Set<string>; modelProblems: string[]; printed?: string } {
   const bytes = new TextEncoder().encode(generated.text);
   const path = options.generatedPath;
   const main = options.model ?? { file: '(tables).bulk', text: `site "tables"\npart "${path.replace(/^.*[\\/]/, '')}"\n`, readPart: () => ({ problem: 'not read' }) };
@@ -72,7 +95,8 @@ function check(generated: Generated, options: ImportOptions): { issues: ImportIs
       modelProblems.push(renderDiagnostic(d, result.source));
     }
   }
-  return { issues, owners, modelProblems };
+  const printed = printedPart(result, [generatedName, path]);
+  return { issues, owners, modelProblems, ...(printed !== undefined ? { printed } : {}) };
 }
 
 export function importTables(tables: Table[], map: HeaderMap, options: ImportOptions, readIssues: ImportIssue[] = []): ImportResult {
@@ -88,11 +112,17 @@ export function importTables(tables: Table[], map: HeaderMap, options: ImportOpt
     if (fields.includes('scenario')) scenarios.push(...readLopa(table, fields, tally, issues, tableName(table)));
     else tagTables.push({ table, fields, tally });
     rowsDone += table.rows.length;
-    options.progress?.(rowsDone);
+    options.progress?.('reading tables', rowsDone);
   }
+  options.progress?.('merging rows by tag', rowsDone);
   const records = mergeTagTables(tagTables, issues);
-  let generated = generate(records.values(), scenarios);
-  const checked = check(generated, options);
+  const header = [
+    `${GENERATED_MARK} from ${tables.map(tableName).filter((t, i, all) => all.indexOf(t) === i).join(', ')}.`,
+    '# Rewritten on every import: write scenarios, policy, justifications and additions in other files.',
+  ];
+  let generated = generate(records.values(), scenarios, new Set(), header);
+  options.progress?.('checking the model', rowsDone);
+  let checked = check(generated, options);
   issues.push(...checked.issues);
   const errors = issues.filter((i) => i.severity === 'error');
   const leftOut: string[] = [];
@@ -104,14 +134,11 @@ export function importTables(tables: Table[], map: HeaderMap, options: ImportOpt
     const bad = new Set(checked.owners);
     for (const r of records.values()) if (!r.kind || errors.some((e) => samePlaceRow(e.place, r.tag.place))) bad.add(r.tag.value);
     leftOut.push(...bad);
-    generated = generate(records.values(), scenarios, bad);
-    if (check(generated, options).issues.some((i) => i.severity === 'error')) return { ...base, statements: 0 };
+    generated = generate(records.values(), scenarios, bad, header);
+    checked = check(generated, options);
+    if (checked.issues.some((i) => i.severity === 'error')) return { ...base, statements: 0 };
   }
-  const header = [
-    `${GENERATED_MARK} from ${tables.map(tableName).filter((t, i, all) => all.indexOf(t) === i).join(', ')}.`,
-    '# Rewritten on every import: write scenarios, policy, justifications and additions in other files.',
-  ].join('\n');
-  const text = formatModelFile(`${header}\n${generated.text}`);
+  const text = checked.printed ?? formatModelFile(generated.text);
   if (text === undefined) return { ...base, statements: 0 };
   return { ...base, text, statements: records.size + scenarios.length - leftOut.length };
 }

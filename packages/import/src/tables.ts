@@ -32,9 +32,9 @@ function toTable(file: string, sheet: string | undefined, rows: TableRow[], issu
 }
 
 export function readCsvTable(file: string, text: string, issues: ImportIssue[]): Table | undefined {
-  let records: { record: string[]; info: { lines: number } }[];
+  let records: string[][];
   try {
-    records = parse(text, { bom: true, info: true, relax_column_count: true, skip_empty_lines: false }) as unknown as typeof records;
+    records = parse(text, { bom: true, relax_column_count: true, skip_empty_lines: false });
   } catch (e) {
     const err = e as { message: string; lines?: number; code?: string };
     issues.push(issue('BH501', `the CSV text is malformed: ${err.message.replace(/^Invalid [^:]*: /, '')}`, { file, line: err.lines ?? 1, lineColumn: 1 }, {
@@ -43,7 +43,7 @@ export function readCsvTable(file: string, text: string, issues: ImportIssue[]):
     return undefined;
   }
   // A record's row is its number among records (a quoted line break does not start a new row).
-  const rows = records.map((r, i) => ({ row: i + 1, cells: r.record }));
+  const rows = records.map((cells, i) => ({ row: i + 1, cells }));
   return toTable(file, undefined, rows, issues);
 }
 

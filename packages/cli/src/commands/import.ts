@@ -53,15 +53,15 @@ async function readTables(files: string[], issues: ImportIssue[]): Promise<Table
 }
 
 /** A progress line on a terminal once the import has run for a second; nothing when piped. */
-function progressLine(): { tick: (rows: number) => void; done: () => void } {
+function progressLine(): { tick: (stage: string, rows: number) => void; done: () => void } {
   const start = Date.now();
   let shown = false;
   const tty = process.stderr.isTTY === true;
   return {
-    tick: (rows) => {
+    tick: (stage, rows) => {
       if (!tty || Date.now() - start < 1000) return;
       shown = true;
-      process.stderr.write(`\rimporting: ${rows} rows read`);
+      process.stderr.write(`\r\x1b[Kimporting: ${rows} rows read; ${stage}...`);
     },
     done: () => {
       if (shown) process.stderr.write('\r\x1b[K');
