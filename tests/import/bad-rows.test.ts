@@ -4,7 +4,7 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { defaultHeaderMap, describePlace, importTables, readCsvTable, readMapping, suggestKind, type ImportIssue } from '@bulkhead/import';
+import { defaultHeaderMap, describePlace, importTables, readCsvTable, readMapping, revisionChanges, staleJustifications, suggestKind, type ImportIssue } from '@bulkhead/import';
 import { runCli } from '../helpers/cli.ts';
 
 function run(csv: string, name = 'index.csv') {
@@ -102,6 +102,7 @@ describe('bulkhead import on the command line', () => {
     expect(bad.stderr).toContain('row 3, column B (Type)');
     expect(bad.stderr).toContain('BH507');
     expect(existsSync(out)).toBe(false);
+    expect(bad.stderr).not.toContain('importing:'); // no progress line when piped
     const partial = await runCli(['import', join(dir, 'index.csv'), '-o', out, '--partial']);
     expect(partial.code).toBe(2);
     expect(partial.stdout).toContain('left out for errors (--partial): N-1');
@@ -123,5 +124,20 @@ describe('bulkhead import on the command line', () => {
     const refused = await runCli(['import', join(dir, 'index.csv'), '-o', out]);
     expect(refused.code).toBe(2);
     expect(readFileSync(out, 'utf8')).toBe('vessel V-9\n');
+  });
+});
+
+describe('re-import as a revision', () => {
+  // Finding keys as rules/define.ts findingKey writes them: rule:scenario:party+party:element.
+  it('compares statements by tag, comments aside, and lists accepts whose finding names a changed or removed tag', () => {
+    const before = 'vessel V-1 title="Drum" # from a.csv row 2\nvessel V-2\ntransmitter LT-1 variable=level mounted-on=V-1\n';
+    const after = 'vessel V-1 title="Drum" # from a.csv row 9\nvessel V-3\ntransmitter LT-1 variable=level mounted-on=V-3\n';
+    const changes = revisionChanges(before, after);
+    expect(changes).toEqual({ added: ['V-3'], removed: ['V-2'], changed: ['LT-1'] });
+    const accepts = [
+      { finding: 'shared-bridle:S-1:LIC-1+SIF-1:LT-1', by: 'A', date: '2026-01-01', reason: 'r' },
+      { finding: 'shared-bridle:S-1:LIC-1+SIF-1:BR-9', by: 'A', date: '2026-01-01', reason: 'r' },
+    ];
+    expect(staleJustifications(accepts, changes).map((j) => j.finding)).toEqual([accepts[0]!.finding]);
   });
 });

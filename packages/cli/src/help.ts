@@ -15,6 +15,10 @@ commands:
   report FILE --format md|html|csv|json|sarif [-o OUT [--force]] [--date YYYY-MM-DD] [--fail-on LEVEL]
                         write the evidence list (report --json-schema: the JSON report's schema)
   view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
+  import TABLE... -o PART.bulk [--model MAIN] [--mapping FILE] [--report] [--partial] [--force]
+                        plant data from CSV/XLSX tables into a generated .bulk part file
+  export FILE --tables DIR [--force]
+                        a model's elements, functions and scenarios as CSV tables
 
 exit codes: 0 clean, 1 findings at or above --fail-on (or fmt --check found changes),
             2 bad input or usage, 3 internal error
@@ -66,6 +70,22 @@ with errors shows them and keeps the last good view. Serves only the viewer's ow
 Needs the built viewer: run \`npm run build -w @bulkhead/viewer\` once (exit 2 says so if it is missing).
 exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwise runs until Ctrl+C (0)
 `,
+  import: `usage: bulkhead import TABLE... -o PART.bulk [--model MAIN.bulk] [--mapping FILE] [--report] [--partial] [--force]
+
+Reads CSV and XLSX tables (instrument index, I/O list, schedules, loop list, LOPA worksheet), merges rows
+by tag and writes them as the .bulk part file PART, which the main model names with \`part "PART"\`.
+Every problem is reported at file, sheet, row and column; with any error nothing is written.
+
+  -o, --out    the generated file; an existing one is replaced only if import wrote it (or --force),
+               and the summary lists what was added, removed or changed since
+  --model      the main model: references are checked against it, and stale \`accept\` statements listed
+  --mapping    a file of \`Header text = field\` lines for headers the built-in words do not know
+  --report     print rows read, imported and skipped by reason, per table
+  --partial    write the rows without errors, listing those left out (exit 2 all the same)
+
+exit codes: 0 written, 2 bad input or usage (nothing written unless --partial)
+`,
+  export: 'usage: bulkhead export FILE --tables DIR [--force]\n\nWrites the model\'s elements, functions and scenarios as CSV tables in DIR, in the column words `bulkhead import` reads.\nSite, policy, categories, rules and accept statements stay in the model file. Existing tables are replaced only with --force.\n',
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',
   convert: 'usage: bulkhead convert FILE --to json|bulk [-o OUT [--force]]\n\nConverts a model between .bulk and JSON without loss (comments included).\n-o never writes over FILE itself; an existing OUT is replaced only with --force (or when it already holds the same text).\n',

@@ -33,5 +33,5 @@ export function revisionChanges(before: string, after: string): RevisionChanges 
 /** Justifications whose finding key names a tag among the changed or removed ones. */
 export function staleJustifications(justifications: readonly Justification[], changes: RevisionChanges): Justification[] {
   const touched = new Set([...changes.changed, ...changes.removed]);
-  return justifications.filter((j) => j.finding.split(/[:+=]/).some((part) => touched.has(part)));
+  return justifications.filter((j) => j.finding.split(/[:+]/).some((part) => touched.has(part)));
 }
