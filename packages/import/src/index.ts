@@ -9,3 +9,5 @@ export { revisionChanges, staleJustifications, type RevisionChanges } from './re
 export { renderReport } from './report.ts';
 export { IMPORT_CODES, renderIssue, describePlace, columnLetters, type ImportIssue, type ImportCode, type Place } from './issues.ts';
 export type { TableTally } from './records.ts';
+export { readDexpi, type DexpiResult, type DexpiCounts } from './dexpi.ts';
+export { readXml, descendants, type XmlElement } from './xml.ts';

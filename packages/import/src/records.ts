@@ -142,6 +142,14 @@ export function mergeTagTables(tables: { table: Table; fields: (string | undefin
       });
     }
   }
+  return records;
+}
+
+/**
+ * Gives each record without a kind one from its ISA-5.1 letters, marked as suggested; run after every
+ * source is merged, as a P&ID may give the kind an I/O list row lacks.
+ */
+export function resolveKinds(records: Map<string, TagRecord>, issues: ImportIssue[]): void {
   for (const record of records.values()) {
     if (record.kind) continue;
     const suggestion = suggestKind(record.tag.value);
@@ -155,5 +163,39 @@ export function mergeTagTables(tables: { table: Table; fields: (string | undefin
     record.suggested = suggestion.letters;
     if (suggestion.variable && !record.fields.has('variable')) record.fields.set('variable', { value: suggestion.variable, place: record.tag.place });
   }
-  return records;
+}
+
+/**
+ * Merges records from another source (the P&ID) into the table records by tag. A field both give
+ * differently is an error naming both places; the importer does not choose between the sources.
+ * Returns the tags each source alone holds, so the user can see what the other one lacks.
+ */
+export function mergeRecords(into: Map<string, TagRecord>, extra: readonly TagRecord[], issues: ImportIssue[]): { onlyInExtra: string[]; onlyInTables: string[] } {
+  const tableTags = new Set(into.keys());
+  const extraTags = new Set<string>();
+  for (const r of extra) {
+    extraTags.add(r.tag.value);
+    const held = into.get(r.tag.value);
+    if (!held) {
+      into.set(r.tag.value, r);
+      continue;
+    }
+    held.sources.push(...r.sources);
+    held.noted.push(...r.noted);
+    const pairs: [string, CellValue | undefined][] = [['kind', r.kind], ...r.fields];
+    for (const [field, cell] of pairs) {
+      if (!cell) continue;
+      const have = field === 'kind' ? held.kind : held.fields.get(field);
+      if (!have) {
+        if (field === 'kind') held.kind = cell;
+        else held.fields.set(field, cell);
+      } else if (have.value !== cell.value) {
+        issues.push(issue('BH505', `\`${r.tag.value}\` has ${field} \`${have.value}\` in the tables and \`${cell.value}\` in the P&ID`, cell.place, {
+          related: [{ message: `${field} given as \`${have.value}\` here`, place: have.place }],
+          help: 'correct the source that is out of date; the importer does not choose between them',
+        }));
+      }
+    }
+  }
+  return { onlyInExtra: [...extraTags].filter((t) => !tableTags.has(t)), onlyInTables: [...tableTags].filter((t) => !extraTags.has(t)) };
 }

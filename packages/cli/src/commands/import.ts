@@ -10,6 +10,8 @@ import {
   GENERATED_MARK,
   importTables,
   readCsvTable,
+  readDexpi,
+  type DexpiResult,
   readMapping,
   readXlsxTables,
   renderIssue,
@@ -37,17 +39,20 @@ function readBytes(file: string, issues: ImportIssue[]): Uint8Array | undefined 
   return undefined;
 }
 
-async function readTables(files: string[], issues: ImportIssue[]): Promise<Table[]> {
+async function readTables(files: string[], issues: ImportIssue[], pids: { file: string; result: DexpiResult }[]): Promise<Table[]> {
   const tables: Table[] = [];
   for (const file of files) {
     const bytes = readBytes(file, issues);
     if (!bytes) continue;
     const ext = extname(file).toLowerCase();
-    if (ext === '.xlsx') tables.push(...(await readXlsxTables(file, bytes, issues)));
+    if (ext === '.xml') {
+      const result = readDexpi(file, Buffer.from(bytes).toString('utf8'), issues);
+      if (result) pids.push({ file, result });
+    } else if (ext === '.xlsx') tables.push(...(await readXlsxTables(file, bytes, issues)));
     else if (ext === '.csv' || ext === '.txt') {
       const table = readCsvTable(file, Buffer.from(bytes).toString('utf8'), issues);
       if (table) tables.push(table);
-    } else throw new UsageError(`\`${file}\`: import reads .csv and .xlsx tables`);
+    } else throw new UsageError(`\`${file}\`: import reads .csv and .xlsx tables and DEXPI .xml P&IDs`);
   }
   return tables;
 }
@@ -80,13 +85,18 @@ export async function importCommand(files: string[], options: ImportCommandOptio
   const issues: ImportIssue[] = [];
   const progress = progressLine();
   const map = options.mapping ? readMapping(options.mapping, readFileSync(options.mapping, 'utf8'), issues) : defaultHeaderMap();
-  const tables = await readTables(files, issues);
+  const pids: { file: string; result: DexpiResult }[] = [];
+  const tables = await readTables(files, issues, pids);
   const model = options.model ? { file: options.model, text: readFileSync(options.model, 'utf8'), readPart: readPartFile } : undefined;
-  const result = importTables(tables, map, { generatedPath: normalPath(out), ...(model ? { model } : {}), partial: options.partial, progress: progress.tick }, issues);
+  const result = importTables(tables, map, { generatedPath: normalPath(out), ...(model ? { model } : {}), partial: options.partial, progress: progress.tick, pids }, issues);
   progress.done();
   for (const i of result.issues) process.stderr.write(renderIssue(i) + '\n\n');
   for (const p of result.modelProblems) process.stderr.write(p + '\n\n');
   if (options.report) process.stdout.write(renderReport(result.tallies, result.suggestedKinds));
+  if (result.onlyIn) {
+    process.stdout.write(`only in the P&ID (${result.onlyIn.pid.length}): ${result.onlyIn.pid.join(', ') || '-'}\n`);
+    process.stdout.write(`only in the tables, of what a P&ID shows (${result.onlyIn.tables.length}): ${result.onlyIn.tables.join(', ') || '-'}\n`);
+  }
   const errors = result.issues.filter((i) => i.severity === 'error').length + result.modelProblems.length;
   if (result.text === undefined) {
     process.stderr.write(`${errors} error${errors === 1 ? '' : 's'}; nothing was written (--partial writes the rows without errors)\n`);
@@ -95,7 +105,8 @@ export async function importCommand(files: string[], options: ImportCommandOptio
   if (!model) process.stderr.write('note: references between tables and to hand-written statements are checked only with --model MAIN.bulk\n');
   mkdirSync(dirname(out), { recursive: true });
   writeFileAtomic(out, result.text);
-  process.stdout.write(`${out}: ${result.statements} statements from ${tables.length} table${tables.length === 1 ? '' : 's'}\n`);
+  const sources = [`${tables.length} table${tables.length === 1 ? '' : 's'}`, ...(pids.length ? [`${pids.length} P&ID${pids.length === 1 ? '' : 's'}`] : [])];
+  process.stdout.write(`${out}: ${result.statements} statements from ${sources.join(' and ')}\n`);
   if (result.leftOut.length) process.stdout.write(`left out for errors (--partial): ${result.leftOut.join(', ')}\n`);
   if (before !== undefined) {
     const changes = revisionChanges(before, result.text);
