@@ -4,7 +4,7 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { defaultHeaderMap, describePlace, importTables, readCsvTable, readMapping, revisionChanges, staleJustifications, suggestKind, type ImportIssue } from '@bulkhead/import';
+import { defaultHeaderMap, describePlace, importTables, readCsvTable, readMapping, renderReport, revisionChanges, staleJustifications, suggestKind, type ImportIssue } from '@bulkhead/import';
 import { runCli } from '../helpers/cli.ts';
 
 function run(csv: string, name = 'index.csv') {
@@ -56,7 +56,8 @@ describe('bad rows', () => {
   it('counts blank and spare rows as skipped, with their reason', () => {
     const result = run('Tag,Type\nV-1,vessel\n,\nSPARE,io-card\n');
     expect([...result.tallies[0]!.skipped]).toEqual([['blank row', 1], ['spare', 1]]);
-    expect(result.tallies[0]).toMatchObject({ read: 2, imported: 1 });
+    expect(result.tallies[0]).toMatchObject({ read: 2, imported: 1, skippedRows: ['row 4: spare'] });
+    expect(renderReport(result.tallies, 0)).toContain('index.csv: skipped\n  row 4: spare');
   });
 });
 

@@ -78,6 +78,8 @@ describe('the DEXPI reference P&ID', () => {
     const reasons = result.skipped.map((s) => s.reason);
     expect(reasons.filter((r) => r === 'a part of the equipment around it')).toHaveLength(11);
     expect(result.skipped.find((s) => s.what === 'instrument function PI4712.01')?.reason).toMatch(/indication only/);
+    // Read = imported + skipped: every object the importer looked at is accounted for.
+    expect(result.records.length + result.skipped.length).toBe(59);
   });
 
   it('loads clean with the control-system tables, lists tags found in one source only, and check runs', () => {

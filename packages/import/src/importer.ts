@@ -6,7 +6,7 @@ import { generate, type Generated } from './generate.ts';
 import { issue, type ImportIssue, type Place } from './issues.ts';
 import { readLopa, type LopaScenario } from './lopa.ts';
 import type { HeaderMap } from './mapping.ts';
-import { mapColumns, mergeRecords, mergeTagTables, resolveKinds, tableName, type TableTally } from './records.ts';
+import { mapColumns, mergeRecords, mergeTagTables, resolveKinds, skip, tableName, type TableTally } from './records.ts';
 import type { DexpiResult } from './dexpi.ts';
 import type { Table } from './tables.ts';
 
@@ -115,7 +115,7 @@ export function importTables(tables: Table[], map: HeaderMap, options: ImportOpt
   const scenarios: LopaScenario[] = [];
   let rowsDone = 0;
   for (const table of tables) {
-    const tally: TableTally = { table: tableName(table), read: 0, imported: 0, skipped: new Map(), unknownColumns: [] };
+    const tally: TableTally = { table: tableName(table), read: 0, imported: 0, skipped: new Map(), skippedRows: [], unknownColumns: [] };
     tallies.push(tally);
     const fields = mapColumns(table, map, tally, issues);
     if (fields.includes('scenario')) scenarios.push(...readLopa(table, fields, tally, issues, tableName(table)));
@@ -127,8 +127,8 @@ export function importTables(tables: Table[], map: HeaderMap, options: ImportOpt
   const records = mergeTagTables(tagTables, issues);
   let onlyIn: ImportResult['onlyIn'];
   for (const pid of options.pids ?? []) {
-    const tally: TableTally = { table: pid.file, read: pid.result.records.length + pid.result.skipped.length, imported: pid.result.records.length, skipped: new Map(), unknownColumns: [] };
-    for (const s of pid.result.skipped) tally.skipped.set(s.reason, (tally.skipped.get(s.reason) ?? 0) + 1);
+    const tally: TableTally = { table: pid.file, read: pid.result.records.length + pid.result.skipped.length, imported: pid.result.records.length, skipped: new Map(), skippedRows: [], unknownColumns: [] };
+    for (const s of pid.result.skipped) skip(tally, s.reason, `line ${s.place.line} (${s.what})`);
     tallies.push(tally);
     const hadTables = records.size > 0;
     const only = mergeRecords(records, pid.result.records, issues);

@@ -2,7 +2,7 @@
 // fields (id, title, category) may be on every row or on its first only; a row with a blank scenario
 // cell continues the scenario above, as worksheets are usually drawn.
 import { issue, type ImportIssue } from './issues.ts';
-import { cellPlace, isBlankRow, type CellValue, type TableTally } from './records.ts';
+import { cellPlace, isBlankRow, skip, type CellValue, type TableTally } from './records.ts';
 import type { Table } from './tables.ts';
 
 export interface LopaLine {
@@ -41,7 +41,7 @@ export function readLopa(table: Table, fields: (string | undefined)[], tally: Ta
   const column = (field: string) => fields.indexOf(field);
   for (const row of table.rows) {
     if (isBlankRow(row)) {
-      tally.skipped.set('blank row', (tally.skipped.get('blank row') ?? 0) + 1);
+      skip(tally, 'blank row', `row ${row.row}`);
       continue;
     }
     tally.read++;
@@ -56,7 +56,7 @@ export function readLopa(table: Table, fields: (string | undefined)[], tally: Ta
       }
     }
     if (!current) {
-      tally.skipped.set('no scenario (error)', (tally.skipped.get('no scenario (error)') ?? 0) + 1);
+      skip(tally, 'no scenario (error)', `row ${row.row}`);
       issues.push(issue('BH509', 'the row belongs to no scenario', cellPlace(table, row.row, Math.max(column('scenario'), 0)), {
         help: 'give the scenario id on the first row of each scenario',
       }));
@@ -83,7 +83,7 @@ export function readLopa(table: Table, fields: (string | undefined)[], tally: Ta
     }
     const keyword = LINE_WORDS[lineWord.replace(/[^a-z]+/g, ' ').trim()];
     if (!keyword) {
-      tally.skipped.set('unknown line (error)', (tally.skipped.get('unknown line (error)') ?? 0) + 1);
+      skip(tally, 'unknown line (error)', `row ${row.row}`);
       issues.push(issue('BH509', lineWord === '' ? 'the row has line values but does not say which line it is' : `\`${lineWord}\` is not a scenario line`, linePlace, {
         help: 'the Line column holds cause, layer, modifier or enabler',
       }));

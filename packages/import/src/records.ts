@@ -29,6 +29,8 @@ export interface TableTally {
   read: number;
   imported: number;
   skipped: Map<string, number>;
+  /** Each row or object skipped for a reason other than being blank: "row 7: spare". */
+  skippedRows: string[];
   unknownColumns: string[];
 }
 
@@ -70,8 +72,9 @@ export function mapColumns(table: Table, map: HeaderMap, tally: TableTally, issu
 export const isBlankRow = (row: TableRow) => row.cells.every((c) => c.trim() === '');
 const SPARE = /^spare\b/i;
 
-function skip(tally: TableTally, reason: string): void {
+export function skip(tally: TableTally, reason: string, where: string): void {
   tally.skipped.set(reason, (tally.skipped.get(reason) ?? 0) + 1);
+  if (reason !== 'blank row') tally.skippedRows.push(`${where}: ${reason}`);
 }
 
 /** Normalises a kind as written in a sheet: "Control Valve" -> control-valve. */
@@ -87,25 +90,25 @@ export function mergeTagTables(tables: { table: Table; fields: (string | undefin
     const seenHere = new Map<string, number>();
     for (const row of table.rows) {
       if (isBlankRow(row)) {
-        skip(tally, 'blank row');
+        skip(tally, 'blank row', `row ${row.row}`);
         continue;
       }
       tally.read++;
       const tagText = tagColumn === -1 ? '' : (row.cells[tagColumn] ?? '').trim();
       if (tagText === '') {
-        skip(tally, 'no tag (error)');
+        skip(tally, 'no tag (error)', `row ${row.row}`);
         issues.push(issue('BH503', 'the row has values but no tag', { ...cellPlace(table, row.row, Math.max(tagColumn, 0)) }, {
           help: tagColumn === -1 ? 'the table needs a tag column (Tag, Tag No., ...); name it in the mapping file' : 'give the row its tag, or clear the row',
         }));
         continue;
       }
       if (SPARE.test(tagText)) {
-        skip(tally, 'spare');
+        skip(tally, 'spare', `row ${row.row}`);
         continue;
       }
       const earlier = seenHere.get(tagText);
       if (earlier !== undefined) {
-        skip(tally, 'tag given twice (error)');
+        skip(tally, 'tag given twice (error)', `row ${row.row}`);
         issues.push(issue('BH504', `the tag \`${tagText}\` is given twice in this table`, cellPlace(table, row.row, tagColumn), {
           related: [{ message: 'first given here', place: cellPlace(table, earlier, tagColumn) }],
           help: 'a table lists each tag once; merge the two rows',
