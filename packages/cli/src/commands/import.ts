@@ -94,8 +94,8 @@ export async function importCommand(files: string[], options: ImportCommandOptio
   for (const p of result.modelProblems) process.stderr.write(p + '\n\n');
   if (options.report) process.stdout.write(renderReport(result.tallies, result.suggestedKinds));
   if (result.onlyIn) {
-    process.stdout.write(`only in the P&ID (${result.onlyIn.pid.length}): ${result.onlyIn.pid.join(', ') || '-'}\n`);
-    process.stdout.write(`only in the tables, of what a P&ID shows (${result.onlyIn.tables.length}): ${result.onlyIn.tables.join(', ') || '-'}\n`);
+    process.stdout.write(`instruments, valves and loops only in the P&ID (${result.onlyIn.pid.length}): ${result.onlyIn.pid.join(', ') || '-'}\n`);
+    process.stdout.write(`instruments, valves and loops only in the tables (${result.onlyIn.tables.length}): ${result.onlyIn.tables.join(', ') || '-'}\n`);
   }
   const errors = result.issues.filter((i) => i.severity === 'error').length + result.modelProblems.length;
   if (result.text === undefined) {
