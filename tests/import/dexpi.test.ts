@@ -96,6 +96,14 @@ describe('the DEXPI reference P&ID', () => {
     expect(analysis.traces.map((t) => t.function).sort()).toEqual(['PICSA4712.02', 'TICSA4750.03']);
   });
 
+  it('lists an instrument the tables hold and the P&ID does not', () => {
+    const tableIssues: ImportIssue[] = [];
+    const csv = `${readFileSync('fixtures/external/dexpi/tables/control-system.csv', 'utf8')}LT4750.09,transmitter,,,,,AI-A1,,from-signal\n`;
+    const table = readCsvTable('control-system.csv', csv, tableIssues)!;
+    const imported = importTables([table], defaultHeaderMap(), { generatedPath: 'pid.bulk', pids: [{ file: FILE, result }] }, tableIssues);
+    expect(imported.onlyIn?.tables).toEqual(['LT4750.09']);
+  });
+
   it('reports malformed XML at its line and column', () => {
     const bad: ImportIssue[] = [];
     expect(readDexpi('broken.xml', '<PlantModel>\n  <Equipment ID="a">\n</PlantModel>\n', bad)).toBeUndefined();
