@@ -2,7 +2,7 @@
 // Builds what runs outside the repository's dev tools (run by `npm ci` through the root `prepare`):
 //   bin   the `bulkhead` command as one plain-JavaScript file, packages/cli/dist/bulkhead.js (esbuild),
 //         so it starts on bare node: one file to read and compile instead of a few hundred modules;
-//   lib   @bulkhead/core and @bulkhead/layout as JavaScript with type declarations in their dist/ (tsc,
+//   lib   @bulkhead/core, @bulkhead/layout and @bulkhead/import as JavaScript with type declarations in their dist/ (tsc,
 //         incremental: an unchanged package is not rebuilt), which their `exports` point at.
 // `node scripts/build.mjs [bin] [lib]` builds the parts named, or both. Sources stay the truth: tests,
 // the type check and the viewer read them through the `bulkhead-source` export condition.
@@ -27,6 +27,9 @@ export async function buildBin() {
     conditions: ['bulkhead-source'],
     mainFields: ['module', 'main'],
     legalComments: 'linked',
+    // The XLSX reader is large and only `import` of a workbook needs it: loaded from node_modules on
+    // demand, so it costs the other commands nothing at start-up.
+    external: ['exceljs'],
     logLevel: 'warning',
   });
 }
@@ -34,7 +37,7 @@ export async function buildBin() {
 export function buildLibraries() {
   const tsc = spawnSync(process.execPath, [
     fileURLToPath(new URL('../node_modules/typescript/bin/tsc', import.meta.url)),
-    '-b', 'packages/core/tsconfig.build.json', 'packages/layout/tsconfig.build.json',
+    '-b', 'packages/core/tsconfig.build.json', 'packages/layout/tsconfig.build.json', 'packages/import/tsconfig.build.json',
   ], { cwd: root, stdio: 'inherit' });
   if (tsc.status !== 0) throw new Error(`tsc -b exited ${tsc.status}`);
 }

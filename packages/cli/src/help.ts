@@ -25,6 +25,10 @@ commands:
                         the elements behind findings, ranked by what they cost across the site
   diff OLD NEW | diff FILE --git REV [--format text|md|json|sarif] [--fail-on worse]
                         what a revision did to independence: changes, findings, verdicts, stale justifications
+  import TABLE... -o PART.bulk [--model MAIN] [--mapping FILE] [--report] [--partial] [--force]
+                        plant data from CSV/XLSX tables into a generated .bulk part file
+  export FILE --tables DIR [--force]
+                        a model's elements, functions and scenarios as CSV tables
 
 exit codes (check and report alike): 0 no unaccepted finding at or above --fail-on, 1 there is one
             (default level voids-credit; --fail-on none never fails on findings; fmt --check: changes),
@@ -144,6 +148,22 @@ affected scenario is assessed again without the element's findings; the order is
 
   --format     text (default), json or csv
 `,
+  import: `usage: bulkhead import TABLE... -o PART.bulk [--model MAIN.bulk] [--mapping FILE] [--report] [--partial] [--force]
+
+Reads CSV and XLSX tables (instrument index, I/O list, schedules, loop list, LOPA worksheet), merges rows
+by tag and writes them as the .bulk part file PART, which the main model names with \`part "PART"\`.
+Every problem is reported at file, sheet, row and column; with any error nothing is written.
+
+  -o, --out    the generated file; an existing one is replaced only if import wrote it (or --force),
+               and the summary lists what was added, removed or changed since
+  --model      the main model: references are checked against it, and stale \`accept\` statements listed
+  --mapping    a file of \`Header text = field\` lines for headers the built-in words do not know
+  --report     print rows read, imported and skipped by reason, per table
+  --partial    write the rows without errors, listing those left out (exit 2 all the same)
+
+exit codes: 0 written, 2 bad input or usage (nothing written unless --partial)
+`,
+  export: 'usage: bulkhead export FILE --tables DIR [--force]\n\nWrites the model\'s elements, functions and scenarios as CSV tables in DIR, in the column words `bulkhead import` reads.\nSite, policy, categories, rules and accept statements stay in the model file. Existing tables are replaced only with --force.\n',
   schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',
   convert: 'usage: bulkhead convert FILE --to json|bulk [-o OUT [--force]]\n\nConverts a model between .bulk and JSON without loss (comments included).\n-o never writes over FILE itself; an existing OUT is replaced only with --force (or when it already holds the same text).\n',

@@ -2,7 +2,7 @@
 // any bytes are decoded, prints diagnostics to stderr, and writes files so a crash never leaves half of one.
 import { chmodSync, existsSync, readFileSync, realpathSync, renameSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
 import { basename, dirname, join } from 'node:path';
-import { error, loadModelText, MAX_FILE_BYTES, printBulk, printJson, renderDiagnostics, type LoadResult, type Model, type ModelFormat } from '@bulkhead/core';
+import { error, loadModelText, MAX_FILE_BYTES, printBulk, printJson, renderDiagnostics, type LoadResult, type Model, type ModelFormat, type PartBytes } from '@bulkhead/core';
 
 export class UsageError extends Error {}
 
@@ -49,7 +49,19 @@ export function readModel(file: string): ReadResult {
   } catch (e) {
     return failed(file, `cannot read \`${file}\`: ${reason(e)}`);
   }
-  return { ...loadModelText(file, bytes), bytes };
+  return { ...loadModelText(file, bytes, { readPart: readPartFile }), bytes };
+}
+
+/** Reads a part file a model names, with the same existence and size checks as the model file itself. */
+export function readPartFile(path: string): PartBytes {
+  try {
+    const stat = statSync(path);
+    if (stat.isDirectory()) return { problem: 'it is a directory' };
+    if (stat.size > MAX_FILE_BYTES) return { problem: `it is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
+    return readFileSync(path);
+  } catch (e) {
+    return { problem: reason(e) };
+  }
 }
 
 function failed(file: string, message: string): LoadResult {

@@ -12,7 +12,7 @@ process.stdout.on('error', (e: NodeJS.ErrnoException) => {
   throw e;
 });
 
-function run(argv: string[]): number {
+function run(argv: string[]): number | Promise<number> {
   const [command, ...rest] = argv;
   if (command === undefined || command === '--help' || command === '-h' || command === 'help') {
     process.stdout.write(HELP);
@@ -45,7 +45,7 @@ function run(argv: string[]): number {
 const KEEPS_RUNNING: ReadonlySet<string> = new Set(['view']);
 
 try {
-  process.exitCode = run(process.argv.slice(2));
+  process.exitCode = await run(process.argv.slice(2));
   // Done and every byte written (pipes and files take writes at once on Linux): end now. Left to end on
   // its own, the process first lets V8 finish collecting the analysed model's heap, which can take
   // longer than a small check itself.

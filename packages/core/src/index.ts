@@ -2,14 +2,16 @@
 // Pure TypeScript with no Node APIs, so the same code runs in the CLI and in the viewer.
 export * from './model/schema.ts';
 export * from './model/kinds.ts';
-export { kebab, camel } from './model/fields.ts';
+export { kebab, camel, fieldsOf, ELEMENT_SPECS, FUNCTION_SPECS, LIST_SPECS, SCENARIO_LINE_SPECS, TEXT_FIELDS, type FieldType, type StatementSpec } from './model/fields.ts';
 export * from './diagnostics/diagnostic.ts';
 export { renderDiagnostic, renderDiagnostics, diagnosticNotice, splitLines } from './diagnostics/render.ts';
 export { renderNotice, position, place, type Notice, type NoticeFact, type SourceText } from './diagnostics/notice.ts';
 export { parseBulk, type ParsedFile, type Statement } from './bulk/parser.ts';
-export { printBulk, formatNumber } from './bulk/printer.ts';
+export { printBulk, formatNumber, type PartLine } from './bulk/printer.ts';
+export { formatModelFile } from './bulk/fragment.ts';
 export type { SpanMap } from './bulk/to-model.ts';
-export { loadModelText, detectFormat, MAX_FILE_BYTES, type LoadResult, type ModelFormat } from './loader/load.ts';
+export { loadModelText, detectFormat, MAX_FILE_BYTES, type LoadResult, type LoadOptions, type ModelFormat } from './loader/load.ts';
+export { joinRelative, normalPath, PART_KEYWORD, type PartReader, type PartBytes } from './loader/parts.ts';
 export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';
 export { summarize, type ModelSummary } from './model/summary.ts';

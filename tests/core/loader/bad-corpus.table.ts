@@ -60,6 +60,8 @@ export const CORPUS: readonly CorpusRow[] = [
   { file: 'nesting-too-deep.json', code: 'BH106', line: 3, column: 80, says: 'nested more than 64 levels' },
   { file: 'not-utf8.bulk', code: 'BH102', line: 18, column: 33, says: 'not UTF-8 text (byte 0xE9' },
   { file: 'number-too-precise.bulk', code: 'BH121', line: 20, column: 19, says: 'it would be read as 0.05' },
+  { file: 'part-missing.bulk', code: 'BH123', line: 3, column: 6, says: 'the part file `units/no-such-part.bulk` cannot be read' },
+  { file: 'part-not-bulk.bulk', code: 'BH124', line: 3, column: 6, says: 'is not a relative path to a .bulk file' },
   { file: 'pipe-length-not-piping.bulk', code: 'BH331', line: 10, column: 76, says: 'scales only the per-100 m piping rows' },
   { file: 'piping-no-length.bulk', code: 'BH330', line: 10, column: 56, says: 'per 100 m of pipe; the cause gives no length' },
   { file: 'probability-above-one.bulk', code: 'BH304', line: 20, column: 19, says: 'PFD 1.5 is outside (0, 1]' },
@@ -101,6 +103,7 @@ export const CORPUS: readonly CorpusRow[] = [
 export const NOT_IN_CORPUS: Partial<Record<DiagnosticCode, string>> = {
   BH103: 'over 50 MB: generated in this file and in tests/cli/foundation-bad-corpus.test.ts',
   BH104: 'unreadable: a missing path in tests/cli/foundation-bad-corpus.test.ts',
+  BH122: 'a cycle needs two files: tests/core/loader/parts.test.ts',
   BH318: 'not emitted by the loader: a narrowed cause needs the traced loop (analysis stage)',
 };
 

@@ -5,6 +5,8 @@ import { UsageError } from '../io.ts';
 import { checkCommand } from './check.ts';
 import { convertCommand } from './convert.ts';
 import { diffCommand } from './diff.ts';
+import { exportCommand } from './export.ts';
+import { importCommand } from './import.ts';
 import { fmtCommand } from './fmt.ts';
 import { reportCommand } from './report.ts';
 import { schemaCommand } from './schema.ts';
@@ -20,7 +22,7 @@ export interface CommandSpec {
   options: Options;
   /** Least and most positional arguments, and what they are called in a usage error. */
   positionals: { min: number; max: number; what: string };
-  run(values: Values, positionals: string[]): number;
+  run(values: Values, positionals: string[]): number | Promise<number>;
 }
 
 const failOn = { 'fail-on': { type: 'string' } } as const satisfies Options;
@@ -108,6 +110,30 @@ export const COMMANDS = new Map<string, CommandSpec>([
       options: { format: { type: 'string' } },
       positionals: { min: 1, max: 2, what: 'a model file and optionally a SIF tag' },
       run: (v, [file, sif]) => verifyCommand(file!, sif, str(v.format)),
+    },
+  ],
+  [
+    'import',
+    {
+      options: {
+        out: { type: 'string', short: 'o' },
+        model: { type: 'string' },
+        mapping: { type: 'string' },
+        report: { type: 'boolean' },
+        partial: { type: 'boolean' },
+        force: { type: 'boolean' },
+      },
+      positionals: { min: 1, max: Infinity, what: 'at least one table (.csv or .xlsx)' },
+      run: (v, files) =>
+        importCommand(files, { out: str(v.out), model: str(v.model), mapping: str(v.mapping), report: v.report === true, partial: v.partial === true, force: v.force === true }),
+    },
+  ],
+  [
+    'export',
+    {
+      options: { tables: { type: 'string' }, force: { type: 'boolean' } },
+      positionals: { min: 1, max: 1, what: 'a model file' },
+      run: (v, [file]) => exportCommand(file!, str(v.tables), v.force === true),
     },
   ],
   ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],

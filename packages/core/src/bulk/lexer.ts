@@ -11,6 +11,8 @@ export interface Token {
   line: number;
   column: number;
   length: number;
+  /** The part file the token was read from, when it is not the file that was loaded. */
+  file?: string;
 }
 
 export interface LexedLine {

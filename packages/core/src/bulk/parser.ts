@@ -4,6 +4,9 @@ import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts'
 import { splitLines } from '../diagnostics/render.ts';
 import { lexLine, type LexedLine, type Token } from './lexer.ts';
 
+/** The statement naming another .bulk file of the same model (read by loader/parts.ts). */
+export const PART_KEYWORD = 'part';
+
 export interface Attribute {
   key: Token;
   values: Token[];
@@ -31,7 +34,9 @@ export interface ParsedFile {
 }
 
 export function tokenSpan(token: Token): Span {
-  return { line: token.line, column: token.column, length: token.length };
+  return token.file === undefined
+    ? { line: token.line, column: token.column, length: token.length }
+    : { line: token.line, column: token.column, length: token.length, file: token.file };
 }
 
 type LineParse = Omit<Statement, 'comments' | 'children' | 'indented'>;

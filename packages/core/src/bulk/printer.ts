@@ -75,11 +75,26 @@ function block(section: string, item: Item, lines: string[]): Block {
   return { section, lines, commented: ((item.comments as string[] | undefined) ?? []).length > 0 };
 }
 
-export function printBulk(model: Model): string {
+/** A `part` statement of a multi-file model, as the printer keeps it (see loader/parts.ts). */
+export interface PartLine {
+  path: string;
+  comments?: string[];
+  trailingComment?: string;
+}
+
+/**
+ * Prints a model, or one file of a multi-file model: such a file may lack `site` and may name parts,
+ * which print after the head statements in the order written.
+ */
+export function printBulk(model: Model, parts: readonly PartLine[] = []): string {
   const blocks: Block[] = [];
   const m = model as unknown as Record<string, unknown>;
-  blocks.push(block('head', m.site as Item, printLine('site', SINGLE_SPECS.site, m.site as Item, '')));
+  if (m.site) blocks.push(block('head', m.site as Item, printLine('site', SINGLE_SPECS.site, m.site as Item, '')));
   if (m.policy) blocks.push(block('head', m.policy as Item, printLine('policy', SINGLE_SPECS.policy, m.policy as Item, '')));
+  for (const p of parts) {
+    const trailing = p.trailingComment === undefined ? '' : ` #${p.trailingComment}`;
+    blocks.push(block('part', p as unknown as Item, [...commentLines(p as unknown as Item, ''), `part ${quote(p.path)}${trailing}`]));
+  }
   for (const c of model.categories) blocks.push(block('head', c, printLine('category', LIST_SPECS.category, c, '')));
   for (const r of model.rules ?? []) blocks.push(block('head', r, printLine('rule', LIST_SPECS.rule, r, '')));
   for (const e of model.elements) blocks.push(block('elements', e, printLine(e.kind, ELEMENT_SPECS.get(e.kind)!, e, '')));

@@ -24,6 +24,8 @@ interface TokenPosition {
   line: number;
   column: number;
   length: number;
+  /** The part file the token lies in, when it is not the file that was loaded. */
+  file?: string | undefined;
 }
 
 /** A statement's own collections of indented lines: one line (a scenario's `cause`) or a list (its `layer`s). */
@@ -46,6 +48,8 @@ export class StatementSpans implements SpanMap {
   private readonly singles = new Map<string, number>();
   private readonly lists = new Map<string, number[]>();
   private readonly children = new Map<number, Children>();
+  /** The part file of each statement read from one (most models are one file: this stays empty). */
+  private readonly partFiles = new Map<number, string>();
   /** The statement open for attributes, and where its attribute count stands. */
   private openCount = -1;
 
@@ -80,6 +84,7 @@ export class StatementSpans implements SpanMap {
     const id = this.starts.length;
     this.starts.push(this.size);
     this.tables.push(table);
+    if (item.file !== undefined) this.partFiles.set(id, item.file);
     this.pushSpan(item);
     this.pushSpan(table.positional === undefined ? undefined : positional);
     this.openCount = this.size;
@@ -123,7 +128,7 @@ export class StatementSpans implements SpanMap {
     }
     for (;;) {
       if (at === undefined) return undefined;
-      if (i === parts.length) return this.spanAt(this.starts[at]! + ITEM);
+      if (i === parts.length) return this.spanAt(this.starts[at]! + ITEM, at);
       const own = this.children.get(at)?.get(parts[i]!);
       if (own === undefined) return this.fieldSpan(at, parts[i]!, parts.length - i === 2 ? parts[i + 1] : undefined, parts.length - i);
       if (typeof own === 'number') {
@@ -141,7 +146,7 @@ export class StatementSpans implements SpanMap {
     if (depth > 2) return undefined;
     const start = this.starts[at]!;
     const table = this.tables[at]!;
-    if (depth === 1 && field === table.positional) return this.data[start + POSITIONAL] ? this.spanAt(start + POSITIONAL) : undefined;
+    if (depth === 1 && field === table.positional) return this.data[start + POSITIONAL] ? this.spanAt(start + POSITIONAL, at) : undefined;
     const number = table.number.get(field);
     if (number === undefined) return undefined;
     let p = start + FIRST_ATTRIBUTE;
@@ -149,25 +154,28 @@ export class StatementSpans implements SpanMap {
       const values = this.data[p + 1]!;
       if (this.data[p] === number) {
         const first = p + 2;
-        if (depth === 1) return this.joined(first, first + 3 * (values - 1));
+        if (depth === 1) return this.joined(first, first + 3 * (values - 1), at);
         if (!table.isList[number]) return undefined;
         const index = indexOf(item);
-        return index === undefined || index >= values ? undefined : this.spanAt(first + 3 * index);
+        return index === undefined || index >= values ? undefined : this.spanAt(first + 3 * index, at);
       }
       p += 2 + 3 * values;
     }
     return undefined;
   }
 
-  private spanAt(p: number): Span {
-    return { line: this.data[p]!, column: this.data[p + 1]!, length: this.data[p + 2]! };
+  /** The span stored at `p` in statement `at`'s record. */
+  private spanAt(p: number, at: number): Span {
+    const span: Span = { line: this.data[p]!, column: this.data[p + 1]!, length: this.data[p + 2]! };
+    const file = this.partFiles.get(at);
+    return file === undefined ? span : { ...span, file };
   }
 
   /** From the first value to the end of the last, when both stand on one line; else the first value alone. */
-  private joined(first: number, last: number): Span {
-    const a = this.spanAt(first);
+  private joined(first: number, last: number, at: number): Span {
+    const a = this.spanAt(first, at);
     if (this.data[last] !== a.line) return a;
-    return { line: a.line, column: a.column, length: this.data[last + 1]! + this.data[last + 2]! - a.column };
+    return { ...a, length: this.data[last + 1]! + this.data[last + 2]! - a.column };
   }
 }
 

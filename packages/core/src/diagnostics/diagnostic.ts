@@ -8,6 +8,8 @@ export interface Span {
   column: number;
   /** Length of the marked text on that line (at least 1 when rendered). */
   length: number;
+  /** The part file the span lies in, when it is not the file that was loaded (see loader/parts.ts). */
+  file?: string;
 }
 
 export interface Related {
@@ -50,6 +52,9 @@ export const CODES = {
   BH119: 'JSON syntax error',
   BH120: 'statement given twice',
   BH121: 'number with more digits than can be held exactly',
+  BH122: 'part files name one another in a cycle',
+  BH123: 'part file cannot be read',
+  BH124: 'part statement malformed',
   BH200: 'required field missing',
   BH201: 'value of the wrong type',
   BH202: 'value not among the allowed words',
@@ -101,6 +106,8 @@ const byCodeUnits = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 export function sortDiagnostics(diagnostics: Diagnostic[]): Diagnostic[] {
   return [...diagnostics].sort(
     (a, b) =>
+      // The loaded file first, then its part files by name; within a file, by position.
+      byCodeUnits(a.span?.file ?? '', b.span?.file ?? '') ||
       (a.span?.line ?? 0) - (b.span?.line ?? 0) ||
       (a.span?.column ?? 0) - (b.span?.column ?? 0) ||
       byCodeUnits(a.code, b.code) ||

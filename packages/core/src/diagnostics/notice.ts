@@ -7,6 +7,8 @@ import type { Span } from './diagnostic.ts';
 export interface SourceText {
   file: string;
   lines: readonly string[];
+  /** The lines of each part file the model names (see loader/parts.ts), by the path spans carry. */
+  parts?: ReadonlyMap<string, readonly string[]>;
 }
 
 /** A labelled fact under the headline: a path, a definition, a reason, an action. */
@@ -43,7 +45,8 @@ const RAIL = '┆';
 
 /** The line of source under a span, shortened around it on a long line, and a mark under the span. */
 export function markedExcerpt(source: SourceText, span: Span): [string, string] | undefined {
-  const raw = source.lines[span.line - 1];
+  const lines = span.file === undefined ? source.lines : source.parts?.get(span.file);
+  const raw = lines?.[span.line - 1];
   if (raw === undefined) return undefined;
   let text = raw;
   let column = span.column;
@@ -60,12 +63,13 @@ export function markedExcerpt(source: SourceText, span: Span): [string, string] 
 }
 
 export function position(file: string, span?: Span): string {
-  return span ? `${file}:${span.line}:${span.column}` : file;
+  return span ? `${span.file ?? file}:${span.line}:${span.column}` : file;
 }
 
 /** "line 12, column 4", or the whole file when there is no span. */
 export function place(span: Span | undefined): string {
-  return span ? `line ${span.line}, column ${span.column}` : 'the file as a whole';
+  if (!span) return 'the file as a whole';
+  return `${span.file === undefined ? '' : `${span.file} `}line ${span.line}, column ${span.column}`;
 }
 
 function labelled(label: string, text: string): string {

@@ -3,7 +3,7 @@
 import { capDiagnostics, error, hasErrors, sortDiagnostics, type Diagnostic } from '../diagnostics/diagnostic.ts';
 import { splitLines, type SourceText } from '../diagnostics/render.ts';
 import { parseBulk } from '../bulk/parser.ts';
-import { RawModelBuilder, type SpanMap } from '../bulk/to-model.ts';
+import { RawModelBuilder, statementsToRaw, type RawModel, type SpanMap } from '../bulk/to-model.ts';
 import { firstInvalidUtf8, positionOfByte } from '../util/utf8.ts';
 import type { z } from 'zod';
 import { readJson } from '../json/reader.ts';
@@ -11,6 +11,10 @@ import { kebab } from '../model/fields.ts';
 import { Category, Element, Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { issueToDiagnostics, type FieldNamer } from './schema-issues.ts';
 import { validateModel, type Origins } from './validate.ts';
+import { PART_KEYWORD, readParts, type PartReader } from './parts.ts';
+
+/** A top-level `part` statement somewhere in the text (a cheap test; the parser decides). */
+const NAMES_A_PART = new RegExp(`^${PART_KEYWORD}\\b`, 'm');
 
 export const MAX_FILE_BYTES = 50 * 1024 * 1024;
 
@@ -23,6 +27,13 @@ export interface LoadResult {
   diagnostics: Diagnostic[];
   spans: SpanMap;
   source: SourceText;
+  /** The part files the model names, in the order first named (empty for a model in one file). */
+  parts?: string[];
+}
+
+export interface LoadOptions {
+  /** Reads the part files a .bulk model names; without it a `part` statement is an error. */
+  readPart?: PartReader;
 }
 
 export function detectFormat(file: string, text: string): ModelFormat {
@@ -32,7 +43,7 @@ export function detectFormat(file: string, text: string): ModelFormat {
 }
 
 /** Decodes bytes as UTF-8, refusing what is not text. */
-function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefined {
+export function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefined {
   if (bytes.length > MAX_FILE_BYTES) {
     diagnostics.push(error('BH103', `the file is ${(bytes.length / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, {
       help: 'split the site into units, one model file each',
@@ -103,18 +114,20 @@ function isMissing(issue: z.core.$ZodIssue): boolean {
   return issue.code === 'invalid_union' && !!(issue as { discriminator?: string }).discriminator;
 }
 
-export function loadModelText(file: string, bytes: Uint8Array | string): LoadResult {
+export function loadModelText(file: string, bytes: Uint8Array | string, options: LoadOptions = {}): LoadResult {
   const diagnostics: Diagnostic[] = [];
   const text = typeof bytes === 'string' ? bytes : decode(bytes, diagnostics);
-  const source: SourceText = { file, lines: text === undefined ? [] : splitLines(text) };
+  let source: SourceText = { file, lines: text === undefined ? [] : splitLines(text) };
   const format = detectFormat(file, text ?? '');
   let spans: SpanMap = new Map();
+  let parts: string[] = [];
   const done = (model?: Model): LoadResult => ({
     ...(model && !hasErrors(diagnostics) ? { model } : {}),
     format,
     diagnostics: capDiagnostics(sortDiagnostics(diagnostics)),
     spans,
     source,
+    ...(parts.length ? { parts } : {}),
   });
   if (text === undefined) return done();
   if (typeof bytes === 'string' && text.charCodeAt(0) === 0xfeff) {
@@ -137,9 +150,22 @@ export function loadModelText(file: string, bytes: Uint8Array | string): LoadRes
     raw = read.raw;
     spans = read.spans;
   } else {
-    // Each statement is read into the raw model as soon as it is parsed, so its tokens can be dropped.
-    const builder = new RawModelBuilder(diagnostics);
-    const built = builder.finish(parseBulk(text, diagnostics, (statement) => builder.add(statement)).endComments);
+    // A model in one file is read a statement at a time as the parser completes each, so its tokens can be
+    // dropped as it goes; one that names part files is parsed whole first, to splice the parts in.
+    let built: RawModel;
+    if (NAMES_A_PART.test(text)) {
+      let parsed = parseBulk(text, diagnostics);
+      if (parsed.statements.some((s) => s.keyword.value === PART_KEYWORD)) {
+        const parted = readParts(file, parsed, options.readPart, decode, diagnostics);
+        parsed = parted.parsed;
+        parts = parted.files;
+        source = { ...source, parts: parted.parts };
+      }
+      built = statementsToRaw(parsed, diagnostics);
+    } else {
+      const builder = new RawModelBuilder(diagnostics);
+      built = builder.finish(parseBulk(text, diagnostics, (statement) => builder.add(statement)).endComments);
+    }
     raw = built.raw;
     reportedPaths = built.reportedPaths;
     incompletePaths = built.incompletePaths;

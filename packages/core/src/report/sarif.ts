@@ -68,7 +68,12 @@ class ResultBuilder {
   location(span: Span | undefined, message?: string, id?: number): Sarif.Location {
     return {
       ...(id !== undefined ? { id } : {}),
-      physicalLocation: { artifactLocation: { uri: this.uri, index: 0 }, ...(span ? { region: region(span) } : {}) },
+      // A span in a part file of a multi-file model points at that file (not listed among the artifacts,
+      // whose one entry is the main file the report hashes).
+      physicalLocation: {
+        artifactLocation: span?.file === undefined ? { uri: this.uri, index: 0 } : { uri: artifactUri(span.file) },
+        ...(span ? { region: region(span) } : {}),
+      },
       ...(message ? { message: { text: message } } : {}),
     };
   }
