@@ -2,7 +2,7 @@
 // own stylesheet, a legend of the sides and the caution, and every piece of model text escaped.
 import type { Drawing } from './drawing.ts';
 import { renderPlan, type ViewState } from './render-plan.ts';
-import { DRAWING_CSS } from './style.ts';
+import { ARROW_MARKER, DRAWING_CSS } from './style.ts';
 
 export const CAUTION =
   'Decision support only: it does not replace a competent LOPA team, IEC 61511, local codes or licensed practice.';
@@ -18,6 +18,12 @@ export function cornerRadius(role: string): number {
 
 const LEGEND_ROW = 20;
 
+/** The arrowhead marker the stylesheet's lanes refer to, as SVG text. */
+export function arrowDefs(): string {
+  const m = ARROW_MARKER;
+  return `<defs><marker id="${m.id}" viewBox="0 0 ${m.width} ${m.height}" refX="${m.refX}" refY="${m.refY}" markerWidth="${m.width}" markerHeight="${m.height}" markerUnits="userSpaceOnUse" orient="auto"><path class="arrowhead" d="${m.path}"/></marker></defs>`;
+}
+
 export function toSvg(drawing: Drawing, view: ViewState = {}): string {
   const plan = renderPlan(drawing, view);
   const header = 40 + drawing.sides.length * LEGEND_ROW + (drawing.notes.length > 0 ? drawing.notes.length * 16 + 6 : 0);
@@ -28,6 +34,7 @@ export function toSvg(drawing: Drawing, view: ViewState = {}): string {
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" class="${plan.className}" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img">`);
   out.push(`<title>${escapeXml(drawing.title)}</title>`);
   out.push(`<style>${DRAWING_CSS}</style>`);
+  out.push(arrowDefs());
   out.push(`<rect class="paper" x="0" y="0" width="${width}" height="${height}"/>`);
   out.push(`<text class="tag" x="24" y="26">${escapeXml(drawing.title)}</text>`);
   drawing.sides.forEach((side, i) => {

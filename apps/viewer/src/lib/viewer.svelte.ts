@@ -58,6 +58,8 @@ export class Viewer {
   current: FocusView | undefined = $derived(this.view && this.view.focus === this.focus ? this.view : undefined);
   assessment = $derived(this.current?.assessment);
   findings: Finding[] = $derived(this.current?.findings ?? []);
+  /** The finding whose proof is shown, once the view that holds it is in. */
+  focusedFinding: Finding | undefined = $derived(this.finding === undefined ? undefined : this.findings.find((f) => f.key === this.finding));
   /** A large site's overview: too many areas to draw, so the page shows them as a table. */
   overviewTable = $derived(this.current !== undefined && this.current.focus === undefined && this.current.scene.nodes.length > OVERVIEW_GRAPH_LIMIT);
 
@@ -155,7 +157,8 @@ export class Viewer {
     if (!finding) return;
     if (finding.scenario && finding.scenario !== this.focus) this.focusScenario(finding.scenario);
     this.finding = key;
-    this.selected = finding.element;
+    // The proof shows the finding; the element card stays closed so it covers none of the graph.
+    this.selected = undefined;
     this.centreRequest++;
   }
 
