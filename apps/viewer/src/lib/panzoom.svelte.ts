@@ -83,6 +83,27 @@ export class PanZoom {
     else if (bottom > this.height - margin) this.y -= Math.min(bottom - (this.height - margin), top - margin);
   }
 
+  /**
+   * After a new layout of the same scene: shifts the view so the box that was nearest the middle of
+   * the view is at the same place on screen as before. Boxes are matched by id.
+   */
+  keepAnchored(before: readonly (Bounds & { id: string })[], after: readonly (Bounds & { id: string })[]): void {
+    const cx = (this.width / 2 - this.x) / this.k;
+    const cy = (this.height / 2 - this.y) / this.k;
+    // eslint-disable-next-line svelte/prefer-svelte-reactivity -- a lookup local to this call, never read reactively
+    const now = new Map(after.map((b) => [b.id, b]));
+    let anchor: { was: Bounds; is: Bounds; distance: number } | undefined;
+    for (const was of before) {
+      const is = now.get(was.id);
+      if (!is) continue;
+      const distance = Math.hypot(was.x + was.width / 2 - cx, was.y + was.height / 2 - cy);
+      if (!anchor || distance < anchor.distance) anchor = { was, is, distance };
+    }
+    if (!anchor) return;
+    this.x += (anchor.was.x - anchor.is.x) * this.k;
+    this.y += (anchor.was.y - anchor.is.y) * this.k;
+  }
+
   zoomAt(factor: number, px = this.width / 2, py = this.height / 2): void {
     const k = clamp(this.k * factor);
     this.x = px - ((px - this.x) * k) / this.k;

@@ -96,6 +96,7 @@ export class Viewer {
       return;
     }
     this.analysisError = undefined;
+    performance.mark('bulkhead:analysed');
     const summary = outcome.summary;
     const sameFile = this.good?.fileName === fileName;
     this.good = { summary, fileName, revision: ++this.revision };
@@ -112,6 +113,7 @@ export class Viewer {
   async fetchView(client: AnalysisClient, focus: string | undefined): Promise<void> {
     try {
       const view = await client.focus(focus);
+      performance.mark('bulkhead:view');
       this.view = view;
       if (this.finding !== undefined && !view.findings.some((f) => f.key === this.finding)) this.finding = undefined;
     } catch (e) {
@@ -171,6 +173,7 @@ export class Viewer {
     this.laying = true;
     try {
       const answer = await client.layout(scene);
+      performance.mark('bulkhead:drawn');
       this.drawing = answer.drawing;
       this.layoutMs = answer.ms;
       this.layoutError = undefined;
