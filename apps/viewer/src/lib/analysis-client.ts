@@ -2,7 +2,7 @@
 // focus and the details only the newest request matters, so an answer to an older one is dropped.
 import type { Details } from './details.ts';
 import type { AnalysisReply, LoadOutcome } from './analysis-protocol.ts';
-import type { FocusView } from './site-view.ts';
+import type { FocusView, TagMatch } from './site-view.ts';
 import { WorkerRequests } from './worker-requests.ts';
 
 export class AnalysisClient {
@@ -20,6 +20,11 @@ export class AnalysisClient {
 
   details(tag: string): Promise<Details | undefined> {
     return this.requests.send({ details: tag }, (r) => ('details' in r ? { value: r.details } : undefined), { channel: 'details' });
+  }
+
+  /** Tags across the site containing `query`, with the scenarios that rely on each. */
+  search(query: string): Promise<TagMatch[]> {
+    return this.requests.send({ search: query }, (r) => ('matches' in r ? { value: r.matches } : undefined), { channel: 'search' });
   }
 
   terminate(): void {

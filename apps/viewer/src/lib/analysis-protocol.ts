@@ -2,13 +2,14 @@
 // data, so it crosses postMessage as it is.
 import type { Diagnostic, LoadResult } from '@bulkhead/core';
 import type { Details } from './details.ts';
-import type { FocusView, SiteSummary } from './site-view.ts';
+import type { FocusView, SiteSummary, TagMatch } from './site-view.ts';
 
 export type AnalysisRequest =
   | { id: number; load: { fileName: string; bytes: Uint8Array } }
   /** null: the site overview. */
   | { id: number; focus: string | null }
-  | { id: number; details: string };
+  | { id: number; details: string }
+  | { id: number; search: string };
 
 /** A load attempt: its diagnostics, and when the model loaded and analysed, the site's summary. */
 export interface LoadOutcome {
@@ -25,4 +26,5 @@ export type AnalysisReply =
   | { id: number; loaded: LoadOutcome }
   | { id: number; view: FocusView }
   | { id: number; details: Details | undefined }
+  | { id: number; matches: TagMatch[] }
   | { id: number; error: string };

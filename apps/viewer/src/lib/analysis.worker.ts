@@ -3,7 +3,7 @@
 // assessment, findings) and for the details of one tag; it reports its progress stage by stage.
 import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
 import { detailsOf } from './details.ts';
-import { focusView, summariseSite } from './site-view.ts';
+import { focusView, searchTags, summariseSite } from './site-view.ts';
 import type { AnalysisReply, AnalysisRequest, LoadOutcome } from './analysis-protocol.ts';
 
 /** The last model that loaded and analysed; a later load with errors leaves it in place. */
@@ -37,6 +37,9 @@ self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
     } else if ('focus' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, view: focusView(current.model, current.analysis, request.focus ?? undefined) });
+    } else if ('search' in request) {
+      if (!current) throw new Error('no model is loaded');
+      reply({ id: request.id, matches: searchTags(current.model, current.analysis, request.search) });
     } else if ('details' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, details: detailsOf(current.model, current.analysis, request.details) });

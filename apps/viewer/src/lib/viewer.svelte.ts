@@ -9,6 +9,7 @@ import { SupersededError } from './worker-requests.ts';
 import type { AnalysisClient } from './analysis-client.ts';
 import type { LoadOutcome } from './analysis-protocol.ts';
 import type { FocusView, SiteSummary } from './site-view.ts';
+import type { ViewLink } from './link.ts';
 
 export type Origin = 'served' | 'opened';
 
@@ -42,6 +43,8 @@ export class Viewer {
   layoutMs = $state<number | undefined>();
   layoutError = $state<string | undefined>();
   laying = $state(false);
+  /** The centre shows the all-scenarios matrix instead of the graph. */
+  matrix = $state(false);
   /** Bumped whenever a finding is clicked, so the graph re-centres even on the same finding. */
   centreRequest = $state(0);
   private revision = 0;
@@ -144,6 +147,7 @@ export class Viewer {
   }
 
   focusScenario(id: string | undefined): void {
+    this.matrix = false;
     if (this.focus === id) return;
     this.focus = id;
     this.finding = undefined;
@@ -166,6 +170,33 @@ export class Viewer {
 
   clearFinding(): void {
     this.finding = undefined;
+  }
+
+  /** What is in view, as a link (lib/link.ts). */
+  get link(): ViewLink {
+    if (this.matrix) return { matrix: true };
+    return {
+      ...(this.focus ? { scenario: this.focus } : {}),
+      ...(this.finding ? { finding: this.finding } : {}),
+      ...(this.selected ? { element: this.selected } : {}),
+    };
+  }
+
+  /**
+   * Shows what a link names, once a site is loaded. A finding opens its proof as soon as the scenario's
+   * findings are in (fetchView keeps it only if the scenario has it); an unknown scenario is ignored.
+   */
+  followLink(link: ViewLink): void {
+    const summary = this.good?.summary;
+    if (!summary) return;
+    if (link.scenario && summary.scenarios.some((s) => s.id === link.scenario)) this.focusScenario(link.scenario);
+    this.matrix = link.matrix === true;
+    const tag = link.element ?? link.layer;
+    this.selected = tag;
+    if (link.finding) {
+      this.finding = link.finding;
+      this.centreRequest++;
+    }
   }
 
   /** Lays out a scene in the worker; an answer for an older scene is dropped. */
