@@ -52,6 +52,9 @@ export const DRAWING_CSS = `
 .bh-drawing .mark text{font-size:10px;font-weight:700;text-anchor:middle}
 .bh-drawing .lane{fill:none;stroke:#8a8f96;stroke-width:1.5;opacity:.5;marker-end:url(#bh-arrow)}
 .bh-drawing .arrowhead{fill:#3b3f45}
+.bh-drawing .title-frame{fill:#fff;stroke:#111;stroke-width:1.4}
+.bh-drawing .title-rule{stroke:#8a8f96;stroke-width:.8}
+.bh-drawing .title-value{font-family:ui-monospace,"DejaVu Sans Mono","Liberation Mono",monospace;font-size:11px;fill:#111}
 .bh-drawing .through .body{stroke:#111;stroke-width:2.4;stroke-dasharray:5 2}
 .bh-drawing .lane.on-path{stroke-width:3.2;opacity:1}
 .bh-drawing .cluster{fill:none;stroke:#8a8f96;stroke-width:1.2;stroke-dasharray:6 3}

@@ -10,6 +10,7 @@ import type { AnalysisClient } from './analysis-client.ts';
 import type { LoadOutcome } from './analysis-protocol.ts';
 import type { FocusView, SiteSummary } from './site-view.ts';
 import type { ViewLink } from './link.ts';
+import { sha256Hex } from './sheet.ts';
 
 export type Origin = 'served' | 'opened';
 
@@ -17,6 +18,8 @@ export interface GoodSite {
   summary: SiteSummary;
   fileName: string;
   revision: number;
+  /** SHA-256 of the file's bytes as loaded, for the sheet's title block and export names. */
+  sha256: string;
 }
 
 /** An overview with more areas than this is shown as a table, not laid out as a graph. */
@@ -77,8 +80,9 @@ export class Viewer {
   async load(client: AnalysisClient, fileName: string, bytes: Uint8Array, origin: Origin): Promise<void> {
     this.progress = `reading ${fileName}`;
     let outcome: LoadOutcome;
+    let sha256: string;
     try {
-      outcome = await client.load(fileName, bytes, (stage) => (this.progress = stage));
+      [outcome, sha256] = await Promise.all([client.load(fileName, bytes, (stage) => (this.progress = stage)), sha256Hex(bytes)]);
     } catch (e) {
       this.analysisError = e instanceof Error ? e.message : String(e);
       this.progress = undefined;
@@ -102,7 +106,7 @@ export class Viewer {
     performance.mark('bulkhead:analysed');
     const summary = outcome.summary;
     const sameFile = this.good?.fileName === fileName;
-    this.good = { summary, fileName, revision: ++this.revision };
+    this.good = { summary, fileName, revision: ++this.revision, sha256 };
     if (!sameFile) {
       this.focus = summary.scenarios[0]?.id;
       this.selected = undefined;
