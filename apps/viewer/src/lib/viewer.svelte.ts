@@ -11,6 +11,7 @@ import type { LoadOutcome } from './analysis-protocol.ts';
 import type { FocusView, SiteSummary } from './site-view.ts';
 import type { ViewLink } from './link.ts';
 import { sha256Hex } from './sheet.ts';
+import { isWhatIf, NO_WHAT_IF, type WhatIf } from './what-if.ts';
 
 export type Origin = 'served' | 'opened';
 
@@ -46,6 +47,10 @@ export class Viewer {
   layoutMs = $state<number | undefined>();
   layoutError = $state<string | undefined>();
   laying = $state(false);
+  /** The what-if in force (none: the file's own model), and the statements that would make it real. */
+  whatIf = $state.raw<WhatIf>(NO_WHAT_IF);
+  whatIfStatements = $state.raw<{ add: string[]; remove: string[] }>({ add: [], remove: [] });
+  whatIfActive = $derived(isWhatIf(this.whatIf));
   /** The centre shows the all-scenarios matrix instead of the graph. */
   matrix = $state(false);
   /** Bumped whenever a finding is clicked, so the graph re-centres even on the same finding. */
@@ -91,6 +96,8 @@ export class Viewer {
     this.progress = undefined;
     this.missing = undefined;
     this.result = outcome;
+    // A new load replaces the model a what-if was made from (the worker has dropped it).
+    if (outcome.summary) this.clearWhatIfState();
     this.fileName = fileName;
     this.origin = origin;
     if (outcome.analysisError) {
@@ -174,6 +181,25 @@ export class Viewer {
 
   clearFinding(): void {
     this.finding = undefined;
+  }
+
+  private clearWhatIfState(): void {
+    this.whatIf = NO_WHAT_IF;
+    this.whatIfStatements = { add: [], remove: [] };
+  }
+
+  /** Asks the worker to analyse the model as `question` changes it, and shows that; never writes the file. */
+  async askWhatIf(client: AnalysisClient, question: WhatIf): Promise<void> {
+    const good = this.good;
+    if (!good) return;
+    try {
+      const outcome = await client.whatIf(question);
+      this.whatIf = question;
+      this.whatIfStatements = { add: outcome.add, remove: outcome.remove };
+      this.good = { ...good, summary: outcome.summary, revision: ++this.revision };
+    } catch (e) {
+      if (!(e instanceof SupersededError)) this.analysisError = e instanceof Error ? e.message : String(e);
+    }
   }
 
   /** What is in view, as a link (lib/link.ts). */
