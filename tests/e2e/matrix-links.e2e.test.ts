@@ -5,7 +5,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { seriousViolations } from './axe.ts';
-import { DEMO, type DemoTruth, focusScenario, launch, startView, truthFor, viewerForTests, type ViewProcess } from './harness.ts';
+import { join } from 'node:path';
+import { copyTo, DEMO, type DemoTruth, focusScenario, launch, ROOT, screenshot, startView, truthFor, viewerForTests, type ViewProcess } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 
@@ -31,6 +32,7 @@ describe('the all-scenarios matrix and the tag search', () => {
       }
     }
     expect(await seriousViolations(page)).toEqual([]);
+    copyTo(await screenshot(page, 'matrix'), join(ROOT, 'docs/viewer-matrix.png'));
   });
 
   it('sorts by gap, both ways, and filters by text and by falling short', async () => {

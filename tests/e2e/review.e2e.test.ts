@@ -5,7 +5,8 @@
 // from the CLI's JSON report and the analysis of the same file (harness.truthFor), not from the page.
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { DEMO, type DemoTruth, focusScenario, screenshot, truthFor, viewerForTests } from './harness.ts';
+import { join } from 'node:path';
+import { copyTo, DEMO, type DemoTruth, focusScenario, ROOT, screenshot, truthFor, viewerForTests } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 /** The first view and a finding's view never zoom below this (apps/viewer/src/lib/panzoom.svelte.ts). */
@@ -61,7 +62,9 @@ describe('reviewing a finding in the viewer', () => {
       await expect.poll(() => page.locator(`svg[data-testid=graph] g.box[data-tag="${tag}"]`).getAttribute('class')).toContain('through');
       expect(await page.innerText('[data-testid=proof-through]')).toContain(tag);
     }
-    await screenshot(page, 'review-proof');
+    await page.mouse.move(0, 0);
+    await page.addStyleTag({ content: '[data-testid=layout-status] { visibility: hidden; }' });
+    copyTo(await screenshot(page, 'review-proof'), join(ROOT, 'docs/viewer-proof.png'));
   });
 
   it('closes the proof with Escape', async () => {

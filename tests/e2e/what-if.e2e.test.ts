@@ -6,7 +6,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { DEMO, type DemoTruth, focusScenario, sameFigure, tempDir, truthFor, viewerForTests } from './harness.ts';
+import { copyTo, DEMO, type DemoTruth, focusScenario, ROOT, sameFigure, screenshot, tempDir, truthFor, viewerForTests } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 const before = readFileSync(DEMO);
@@ -66,6 +66,9 @@ describe('what-if in the viewer', () => {
     await expect.poll(async () => (await page.locator('[data-testid=findings] [data-finding]').evaluateAll((els) => els.map((e) => e.getAttribute('data-finding')!))).sort()).toEqual(keys);
     const after = expected.report.scenarios.find((s) => s.id === 'S-101')!.lopa.find((l) => l.figure === 'after-independence')!;
     expect(sameFigure(await figure('mitigatedAfter'), after.mitigated)).toBe(true);
+    await page.mouse.move(0, 0);
+    await page.addStyleTag({ content: '[data-testid=layout-status] { visibility: hidden; }' });
+    copyTo(await screenshot(page, 'what-if'), join(ROOT, 'docs/viewer-what-if.png'));
   });
 
   it('never writes the file', () => {
