@@ -6,6 +6,7 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import { seriousViolations } from './axe.ts';
 import { copyTo, DEMO, type DemoTruth, focusScenario, ROOT, sameFigure, screenshot, tempDir, truthFor, viewerForTests } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
@@ -36,6 +37,7 @@ describe('what-if in the viewer', () => {
     expect(await page.isVisible('[data-testid=figures-what-if]')).toBe(true);
     const paste = await page.inputValue('[data-testid=what-if-add]');
     for (const f of open) expect(paste).toContain(`accept ${f.key} by="WHAT-IF"`);
+    expect(await seriousViolations(page)).toEqual([]);
   });
 
   it('goes back to the file, with its own figures', async () => {
