@@ -1,6 +1,7 @@
 // The demo site in the browser: every scenario's shared elements are marked on the graph, and the LOPA
 // figures on screen equal the CLI's JSON report of the same file. Also the finding click-through, the
 // element details, pan and zoom, SVG export and the site overview. Writes docs/viewer.png.
+import { createHash } from 'node:crypto';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -117,7 +118,13 @@ describe('the demo in the viewer', () => {
     await expect.poll(() => box.getAttribute('class')).toContain('in-focus');
     expect(await page.getAttribute('svg[data-testid=graph]', 'class')).toContain('focusing');
     const pathEdges = finding.paths.reduce((n, p) => n + p.length - 1, 0);
-    expect(await page.locator('svg[data-testid=graph] polyline.in-focus').count()).toBe(pathEdges);
+    // Every step of each side's path is highlighted (and, beyond them, what the shared element relies on).
+    for (const path of finding.paths) {
+      for (let i = 1; i < path.length; i++) {
+        expect(await page.locator(`svg[data-testid=graph] g.edge[data-edge="${path[i - 1]}\u2192${path[i]}"] polyline.in-focus`).count(), `${path[i - 1]} to ${path[i]}`).toBeGreaterThan(0);
+      }
+    }
+    expect(await page.locator('svg[data-testid=graph] polyline.in-focus').count()).toBeGreaterThanOrEqual(pathEdges);
     const graph = (await page.locator('svg[data-testid=graph]').boundingBox())!;
     const target = (await box.boundingBox())!;
     const cx = target.x + target.width / 2;
@@ -168,12 +175,35 @@ describe('the demo in the viewer', () => {
   it('exports the current view as a standalone SVG', async () => {
     await focus('S-101');
     const [download] = await Promise.all([page.waitForEvent('download'), page.click('[data-testid=export]')]);
-    expect(download.suggestedFilename()).toBe('S-101.svg');
+    // The file name carries the model file, the scenario and the revision (the content hash, as the
+    // demo states no revision of its own), so exports of two revisions never overwrite each other.
+    const sha256 = createHash('sha256').update(readFileSync(DEMO)).digest('hex');
+    expect(download.suggestedFilename()).toBe(`marrow-fen_S-101_sha-${sha256.slice(0, 12)}.svg`);
     const text = readFileSync((await download.path())!, 'utf8');
+    expect(text).toContain('<g class="title-block">');
+    for (const row of ['Marrow Fen Chemical Works, Unit 100', 'marrow-fen.bulk', sha256, 'LOPA per year']) expect(text).toContain(`>${row}`);
     expect(text.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
     for (const tag of ['BR-101', 'LIC-101', 'SIF-101', 'LAH-101']) expect(text).toContain(`data-tag="${tag}"`);
     expect(text).toContain('Decision support only');
     expect(text).toContain('SHARED C+1');
+  });
+
+  it('prints a sheet with its title block, without the controls and the scenario list', async () => {
+    await focus('S-101');
+    await page.emulateMedia({ media: 'print' });
+    try {
+      expect(await page.isVisible('[data-testid=print-title]')).toBe(true);
+      const titleBlock = await page.innerText('[data-testid=print-title]');
+      expect(titleBlock).toContain(createHash('sha256').update(readFileSync(DEMO)).digest('hex'));
+      expect(titleBlock).toContain('S-101');
+      expect(await page.isVisible('[data-testid=scenarios]')).toBe(false);
+      expect(await page.isVisible('[data-testid=export]')).toBe(false);
+      expect(await page.isVisible('svg[data-testid=graph]')).toBe(true);
+      expect(await page.isVisible('[data-testid=lopa]')).toBe(true);
+    } finally {
+      await page.emulateMedia({ media: 'screen' });
+    }
+    expect(await page.isVisible('[data-testid=print-title]')).toBe(false);
   });
 
   it('shows the site overview by unit and solver', async () => {

@@ -6,6 +6,7 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
 
 export const ROOT = new URL('../../', import.meta.url).pathname;
@@ -182,4 +183,27 @@ export async function openLiveDemo(prefix: string): Promise<Session & { file: st
   const session = await openViewer(file, GRAPH_BOX);
   await session.page.waitForSelector('[data-testid=live]:has-text("live")');
   return { ...session, file, original };
+}
+
+/** Clicks a scenario in the list and waits until its graph and its LOPA are shown. */
+export async function focusScenario(page: Page, id: string): Promise<void> {
+  await page.click(`[data-testid=scenarios] button[data-scenario="${id}"]`);
+  await page.waitForSelector(`svg[data-testid=graph][data-scenario="${id}"] g.box`);
+  await page.waitForSelector(`[data-testid=lopa][data-scenario="${id}"]`);
+}
+
+/**
+ * For a describe block: `bulkhead view FILE` and a page on it, opened before its tests and closed after.
+ * The returned object's `page` and `session` are set once the page is up.
+ */
+export function viewerForTests(file: string): { page: Page; session: Session } {
+  const held = {} as { page: Page; session: Session };
+  beforeAll(async () => {
+    held.session = await openViewer(file, GRAPH_BOX);
+    held.page = held.session.page;
+  });
+  afterAll(async () => {
+    await held.session?.close();
+  });
+  return held;
 }

@@ -79,7 +79,15 @@ describe('layoutScene on the demo', async () => {
     const plan = renderPlan(d, { finding: finding.key });
     expect(plan.className).toContain('focusing');
     const focused = plan.edges.flatMap((e) => e.planned.filter((l) => l.className.includes('in-focus')));
-    expect(focused.length).toBe(finding.paths.reduce((n, p) => n + p.length - 1, 0));
+    // The path of each side, and what the bridle carries with it: the message names those elements
+    // ("and through it `N-101A`, `N-101B`"), and their edges below the bridle are lit for both sides.
+    const through = d.findings.find((p) => p.key === finding.key)!.through!;
+    expect(through.nodes).toEqual([...finding.message.matchAll(/through it (.*)\)/g)].flatMap((m) => [...m[1]!.matchAll(/`([^`]+)`/g)].map((t) => t[1])));
+    expect(through.nodes).toEqual(['N-101A', 'N-101B']);
+    const throughLanes = d.edges.filter((e) => through.edges.includes(e.id)).reduce((n, e) => n + e.lanes.filter((l) => l.side !== undefined && [0, 1].includes(l.side)).length, 0);
+    expect(throughLanes).toBe(4);
+    expect(focused.length).toBe(finding.paths.reduce((n, p) => n + p.length - 1, 0) + throughLanes);
+    expect(plan.boxes.filter((b) => b.className.split(' ').includes('through')).map((b) => b.id)).toEqual(['N-101A', 'N-101B']);
     const box = d.boxes.find((b) => b.id === 'BR-101')!;
     const f = plan.focusBounds!;
     expect(box.x).toBeGreaterThanOrEqual(f.x);

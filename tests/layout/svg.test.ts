@@ -42,4 +42,22 @@ describe('toSvg', async () => {
     expect(svg).toContain('dashed line');
     expect(svg).toContain('IEC 61511');
   });
+
+  it('should draw an arrowhead marker that every lane refers to', () => {
+    expect(svg).toContain('<marker id="bh-arrow"');
+    expect(svg).toContain('marker-end:url(#bh-arrow)');
+  });
+
+  it('should add a title block with every row given, escaped, and none without rows', () => {
+    const titled = toSvg(drawing, {}, [
+      { label: 'site', value: 'Site <b>&amp;</b>' },
+      { label: 'SHA-256', value: 'ab12' },
+      { label: 'revision', value: 'C' },
+    ]);
+    expect(titled.match(/<g class="title-block">/g)?.length).toBe(1);
+    expect(titled).toContain('>SHA-256</text>');
+    expect(titled).toContain('>revision</text>');
+    expect(titled).toContain('Site &lt;b&gt;&amp;amp;&lt;/b&gt;');
+    expect(svg).not.toContain('title-block');
+  });
 });

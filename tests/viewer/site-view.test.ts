@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { analyze, loadModelText, SEVERITY_RANK } from '@bulkhead/core';
 import { describe, expect, it } from 'vitest';
-import { focusView, OVERVIEW_FINDINGS_SHOWN, summariseSite } from '../../apps/viewer/src/lib/site-view.ts';
+import { focusView, OVERVIEW_FINDINGS_SHOWN, searchTags, SEARCH_LIMIT, summariseSite } from '../../apps/viewer/src/lib/site-view.ts';
 
 const file = new URL('../../fixtures/demo/marrow-fen.bulk', import.meta.url);
 const loaded = loadModelText('marrow-fen.bulk', readFileSync(file));
@@ -47,5 +47,29 @@ describe('focusView', () => {
       expect(ranks).toEqual([...ranks].sort((a, b) => b - a));
       expect(new Set(view.findings.map((f) => f.key))).toEqual(new Set(analysis.findings.map((f) => f.key)));
     }
+  });
+});
+
+describe('searchTags', () => {
+  it('should find tags by any part, case-insensitive, the whole tag first, with the scenarios relying on each', () => {
+    const matches = searchTags(model, analysis, 'lt-10');
+    const tags = matches.map((m) => m.tag);
+    expect(tags).toEqual(expect.arrayContaining(['LT-101', 'LT-102', 'LT-103']));
+    expect(tags.every((t) => t.toLowerCase().includes('lt-10'))).toBe(true);
+    expect(searchTags(model, analysis, 'UPS-1')[0]!.tag).toBe('UPS-1');
+    for (const m of matches) {
+      const relying = new Set([m.tag, ...analysis.traces.filter((t) => t.elements.some((e) => e.tag === m.tag)).map((t) => t.function)]);
+      const expected = model.scenarios.filter((s) => [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some((t) => t && relying.has(t))).map((s) => s.id);
+      expect(m.scenarios, m.tag).toEqual(expected);
+    }
+  });
+
+  it('should find nothing for a blank query or a tag the site does not have', () => {
+    expect(searchTags(model, analysis, '  ')).toEqual([]);
+    expect(searchTags(model, analysis, 'no-such-tag')).toEqual([]);
+  });
+
+  it(`should answer at most ${SEARCH_LIMIT} tags`, () => {
+    expect(searchTags(model, analysis, '-').length).toBe(Math.min(SEARCH_LIMIT, [...model.elements, ...model.functions].filter((x) => x.tag.includes('-')).length));
   });
 });

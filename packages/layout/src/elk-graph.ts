@@ -94,8 +94,14 @@ export function fromElk(scene: Scene, laidOut: ElkNode): Drawing {
   };
   walk(laidOut);
   const routes = new Map<string, Point[]>();
+  const sourceOf = new Map(scene.edges.map((e) => [e.id, e.source]));
+  // toElk may have turned an edge round to set the reading order; its route is turned back here, so
+  // every drawn line runs from the box that relies to the box relied on and its arrowhead points there.
   const collect = (elk: ElkNode) => {
-    for (const e of elk.edges ?? []) routes.set(e.id, endpoints(e));
+    for (const e of elk.edges ?? []) {
+      const points = endpoints(e);
+      routes.set(e.id, e.sources[0] === sourceOf.get(e.id) ? points : points.reverse());
+    }
     for (const child of elk.children ?? []) collect(child);
   };
   collect(laidOut);

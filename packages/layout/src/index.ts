@@ -6,6 +6,6 @@ export { toElk, fromElk } from './elk-graph.ts';
 export { warmUpScene } from './warm-up.ts';
 export { offsetPolyline, boxSize, bannerText, LANE_GAP, type Drawing, type DrawnBox, type DrawnEdge, type DrawnLane, type DrawnCluster, type DrawnText, type DrawnMark, type Point } from './drawing.ts';
 export { renderPlan, pointsAttr, LINK_WORDS, type RenderPlan, type PlannedBox, type PlannedEdge, type PlannedLane, type ViewState } from './render-plan.ts';
-export { toSvg, escapeXml, cornerRadius, CAUTION } from './svg.ts';
-export { DRAWING_CSS } from './style.ts';
+export { toSvg, escapeXml, cornerRadius, arrowDefs, CAUTION, type TitleRow } from './svg.ts';
+export { DRAWING_CSS, ARROW_MARKER } from './style.ts';
 export { SIDE_STYLES, sideStyle, sideLetter, type SideStyle } from './sides.ts';

@@ -57,12 +57,19 @@ export function renderPlan(drawing: Drawing, view: ViewState = {}): RenderPlan {
   const finding = view.finding ? drawing.findings.find((f) => f.key === view.finding) : undefined;
   const focusNodes = new Set<string>();
   const focusLanes = new Set<string>();
+  const throughNodes = new Set<string>();
   if (finding) {
     if (finding.element) focusNodes.add(finding.element);
     for (const step of finding.steps) {
       for (const n of step.nodes) focusNodes.add(n);
       for (const e of step.edges) focusLanes.add(`${e}|${step.side}`);
     }
+    const throughEdges = new Set(finding.through?.edges ?? []);
+    for (const n of finding.through?.nodes ?? []) {
+      focusNodes.add(n);
+      throughNodes.add(n);
+    }
+    for (const e of drawing.edges) if (throughEdges.has(e.id)) for (const l of e.lanes) if (l.side !== undefined && finding.sides.includes(l.side)) focusLanes.add(`${e.id}|${l.side}`);
     // A finding about a layer alone has no path: focus the layer's own node.
     if (finding.steps.length === 0) for (const s of finding.sides) {
       const tag = drawing.sides[s]?.tag;
@@ -71,7 +78,7 @@ export function renderPlan(drawing: Drawing, view: ViewState = {}): RenderPlan {
   }
   const boxes = drawing.boxes.map((b) => ({
     ...b,
-    className: [...b.classes, ...(focusNodes.has(b.id) ? ['in-focus'] : []), ...(view.selected === b.id ? ['selected'] : [])].join(' '),
+    className: [...b.classes, ...(focusNodes.has(b.id) ? ['in-focus'] : []), ...(throughNodes.has(b.id) ? ['through'] : []), ...(view.selected === b.id ? ['selected'] : [])].join(' '),
   }));
   const edges = drawing.edges.map((e) => ({
     ...e,

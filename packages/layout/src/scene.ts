@@ -68,6 +68,11 @@ export interface FindingPath {
   element?: string;
   sides: number[];
   steps: { side: number; edges: string[]; nodes: string[] }[];
+  /**
+   * What the shared element itself relies on that every side reaches through it (a bridle's nozzles,
+   * a card's cabinet): shared by the same token, with the edges from the shared element down to them.
+   */
+  through?: { nodes: string[]; edges: string[] };
 }
 
 /** A compound node drawn round its children: a system of solvers in the overview. */
@@ -214,6 +219,27 @@ function partySide(finding: Finding, index: number, sides: Side[]): number | und
   return side?.index;
 }
 
+/** The elements every one of `sides` reaches through `element`, and the edges below it on those paths. */
+function throughShared(element: string | undefined, sides: number[], sideTraces: Map<number, TracedElement[]>): FindingPath['through'] {
+  if (element === undefined || sides.length < 2) return undefined;
+  const perSide = sides.map((side) => {
+    const reached = new Map<string, string[]>();
+    for (const t of sideTraces.get(side) ?? []) {
+      const at = t.path.indexOf(element);
+      if (at >= 0 && t.tag !== element && t.group !== 'equipment') reached.set(t.tag, t.path.slice(at));
+    }
+    return reached;
+  });
+  const nodes = [...perSide[0]!.keys()].filter((tag) => perSide.every((r) => r.has(tag))).sort();
+  if (nodes.length === 0) return undefined;
+  const edges = new Set<string>();
+  for (const tag of nodes) {
+    const below = perSide[0]!.get(tag)!;
+    for (let i = 1; i < below.length; i++) edges.add(edgeId(below[i - 1]!, below[i]!));
+  }
+  return { nodes, edges: [...edges].sort() };
+}
+
 export function scenarioScene(model: Model, analysis: Analysis, scenarioId: string): Scene {
   const scenario = model.scenarios.find((s) => s.id === scenarioId);
   if (!scenario) throw new Error(`no scenario ${scenarioId} in the model`);
@@ -270,6 +296,10 @@ export function scenarioScene(model: Model, analysis: Analysis, scenarioId: stri
     if (trace && trace.missing.length > 0) notes.push(`${side.tag} is missing: ${trace.missing.join(', ')}.`);
   }
 
+  const sideTraces = new Map<number, TracedElement[]>();
+  if (cause.function && traces.get(cause.function)) sideTraces.set(0, narrowCause(traces.get(cause.function)!, cause.only));
+  for (const side of sides.slice(1)) sideTraces.set(side.index, traces.get(side.tag!)?.elements ?? []);
+
   const findings = analysis.findings.filter((f) => f.scenario === scenarioId);
   const findingPaths: FindingPath[] = [];
   const marks = new Map<string, SharedMark>();
@@ -289,6 +319,8 @@ export function scenarioScene(model: Model, analysis: Analysis, scenarioId: stri
       });
       fp.steps.push(step);
     });
+    const through = throughShared(finding.element, fp.steps.map((st) => st.side), sideTraces);
+    if (through) fp.through = through;
     if (fp.sides.length === 0) for (const p of finding.parties) {
       const side = p.role === 'cause' ? 0 : sides.find((s) => s.tag === p.tag)?.index;
       if (side !== undefined && !fp.sides.includes(side)) fp.sides.push(side);

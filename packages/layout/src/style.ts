@@ -21,6 +21,9 @@ function sideRules(): string {
   return rules.join('\n');
 }
 
+/** The arrowhead every lane ends in, pointing at the box relied on; each renderer puts it in its defs. */
+export const ARROW_MARKER = { id: 'bh-arrow', path: 'M0,0 L8,4 L0,8 z', width: 8, height: 8, refX: 7.5, refY: 4 } as const;
+
 export const DRAWING_CSS = `
 .bh-drawing{font-family:system-ui,-apple-system,"Segoe UI",sans-serif}
 .bh-drawing .paper{fill:#fbfaf6}
@@ -47,7 +50,12 @@ export const DRAWING_CSS = `
 .bh-drawing .severity-note .banner,.bh-drawing .severity-accepted .banner{fill:#d8d6cf}
 .bh-drawing .severity-note .banner-text,.bh-drawing .severity-accepted .banner-text{fill:#111}
 .bh-drawing .mark text{font-size:10px;font-weight:700;text-anchor:middle}
-.bh-drawing .lane{fill:none;stroke:#8a8f96;stroke-width:1.5;opacity:.5}
+.bh-drawing .lane{fill:none;stroke:#8a8f96;stroke-width:1.5;opacity:.5;marker-end:url(#bh-arrow)}
+.bh-drawing .arrowhead{fill:#3b3f45}
+.bh-drawing .title-frame{fill:#fff;stroke:#111;stroke-width:1.4}
+.bh-drawing .title-rule{stroke:#8a8f96;stroke-width:.8}
+.bh-drawing .title-value{font-family:ui-monospace,"DejaVu Sans Mono","Liberation Mono",monospace;font-size:11px;fill:#111}
+.bh-drawing .through .body{stroke:#111;stroke-width:2.4;stroke-dasharray:5 2}
 .bh-drawing .lane.on-path{stroke-width:3.2;opacity:1}
 .bh-drawing .cluster{fill:none;stroke:#8a8f96;stroke-width:1.2;stroke-dasharray:6 3}
 .bh-drawing .cluster-label{font-size:12px;font-weight:700;fill:#3b3f45}

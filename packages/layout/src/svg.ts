@@ -2,7 +2,7 @@
 // own stylesheet, a legend of the sides and the caution, and every piece of model text escaped.
 import type { Drawing } from './drawing.ts';
 import { renderPlan, type ViewState } from './render-plan.ts';
-import { DRAWING_CSS } from './style.ts';
+import { ARROW_MARKER, DRAWING_CSS } from './style.ts';
 
 export const CAUTION =
   'Decision support only: it does not replace a competent LOPA team, IEC 61511, local codes or licensed practice.';
@@ -18,16 +18,52 @@ export function cornerRadius(role: string): number {
 
 const LEGEND_ROW = 20;
 
-export function toSvg(drawing: Drawing, view: ViewState = {}): string {
+/** The arrowhead marker the stylesheet's lanes refer to, as SVG text. */
+export function arrowDefs(): string {
+  const m = ARROW_MARKER;
+  return `<defs><marker id="${m.id}" viewBox="0 0 ${m.width} ${m.height}" refX="${m.refX}" refY="${m.refY}" markerWidth="${m.width}" markerHeight="${m.height}" markerUnits="userSpaceOnUse" orient="auto"><path class="arrowhead" d="${m.path}"/></marker></defs>`;
+}
+
+/** One row of a title block: "file" and "marrow-fen.bulk". */
+export interface TitleRow {
+  label: string;
+  value: string;
+}
+
+const TITLE_ROW = 17;
+const TITLE_LABEL_WIDTH = 110;
+
+/** A drawing's title block: a ruled table of what the sheet shows and where it came from. */
+function titleBlock(rows: readonly TitleRow[], x: number, y: number, width: number): string[] {
+  const out = [`<g class="title-block"><rect class="title-frame" x="${x}" y="${y}" width="${width}" height="${rows.length * TITLE_ROW + 8}"/>`];
+  rows.forEach((row, i) => {
+    const top = y + 4 + i * TITLE_ROW;
+    if (i > 0) out.push(`<line class="title-rule" x1="${x}" y1="${top}" x2="${x + width}" y2="${top}"/>`);
+    out.push(`<text class="kind" x="${x + 8}" y="${top + 13}">${escapeXml(row.label)}</text>`);
+    out.push(`<text class="title-value" x="${x + TITLE_LABEL_WIDTH}" y="${top + 13}">${escapeXml(row.value)}</text>`);
+  });
+  out.push('</g>');
+  return out;
+}
+
+/**
+ * A standalone SVG of the drawing in a view state; with `title`, a title block under the drawing
+ * (site, file, content hash, revision, date, the finding shown, the LOPA figures).
+ */
+export function toSvg(drawing: Drawing, view: ViewState = {}, title: readonly TitleRow[] = []): string {
   const plan = renderPlan(drawing, view);
   const header = 40 + drawing.sides.length * LEGEND_ROW + (drawing.notes.length > 0 ? drawing.notes.length * 16 + 6 : 0);
-  const footer = 34;
-  const width = Math.max(drawing.width, 640);
+  const titleHeight = title.length > 0 ? title.length * TITLE_ROW + 8 + 16 : 0;
+  const footer = 34 + titleHeight;
+  const longest = Math.max(0, ...title.map((r) => r.value.length));
+  const titleWidth = Math.min(Math.max(360, TITLE_LABEL_WIDTH + longest * 6.8 + 16), 1200);
+  const width = Math.max(drawing.width, 640, title.length > 0 ? titleWidth + 48 : 0);
   const height = header + drawing.height + footer;
   const out: string[] = [];
   out.push(`<svg xmlns="http://www.w3.org/2000/svg" class="${plan.className}" width="${width}" height="${height}" viewBox="0 0 ${width} ${height}" role="img">`);
   out.push(`<title>${escapeXml(drawing.title)}</title>`);
   out.push(`<style>${DRAWING_CSS}</style>`);
+  out.push(arrowDefs());
   out.push(`<rect class="paper" x="0" y="0" width="${width}" height="${height}"/>`);
   out.push(`<text class="tag" x="24" y="26">${escapeXml(drawing.title)}</text>`);
   drawing.sides.forEach((side, i) => {
@@ -65,6 +101,7 @@ export function toSvg(drawing: Drawing, view: ViewState = {}): string {
     out.push('</g>');
   }
   out.push('</g>');
+  if (title.length > 0) out.push(...titleBlock(title, width - 24 - titleWidth, header + drawing.height + 12, titleWidth));
   out.push(`<text class="title" x="24" y="${height - 14}">${escapeXml(CAUTION)}</text>`);
   out.push('</svg>');
   return out.join('\n') + '\n';

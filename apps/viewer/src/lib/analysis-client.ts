@@ -1,8 +1,9 @@
 // The page's side of the analysis worker (analysis.worker.ts). Loads are answered in order; for the
 // focus and the details only the newest request matters, so an answer to an older one is dropped.
 import type { Details } from './details.ts';
-import type { AnalysisReply, LoadOutcome } from './analysis-protocol.ts';
-import type { FocusView } from './site-view.ts';
+import type { AnalysisReply, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
+import type { WhatIf } from './what-if.ts';
+import type { FocusView, TagMatch } from './site-view.ts';
 import { WorkerRequests } from './worker-requests.ts';
 
 export class AnalysisClient {
@@ -20,6 +21,16 @@ export class AnalysisClient {
 
   details(tag: string): Promise<Details | undefined> {
     return this.requests.send({ details: tag }, (r) => ('details' in r ? { value: r.details } : undefined), { channel: 'details' });
+  }
+
+  /** Tags across the site containing `query`, with the scenarios that rely on each. */
+  search(query: string): Promise<TagMatch[]> {
+    return this.requests.send({ search: query }, (r) => ('matches' in r ? { value: r.matches } : undefined), { channel: 'search' });
+  }
+
+  /** Analyses the file's model as the what-if changes it (none: back to the file's own). */
+  whatIf(question: WhatIf): Promise<WhatIfOutcome> {
+    return this.requests.send({ whatIf: question }, (r) => ('whatIf' in r ? { value: r.whatIf } : undefined), { channel: 'what-if' });
   }
 
   terminate(): void {

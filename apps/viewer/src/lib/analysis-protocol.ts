@@ -2,13 +2,16 @@
 // data, so it crosses postMessage as it is.
 import type { Diagnostic, LoadResult } from '@bulkhead/core';
 import type { Details } from './details.ts';
-import type { FocusView, SiteSummary } from './site-view.ts';
+import type { WhatIf } from './what-if.ts';
+import type { FocusView, SiteSummary, TagMatch } from './site-view.ts';
 
 export type AnalysisRequest =
   | { id: number; load: { fileName: string; bytes: Uint8Array } }
   /** null: the site overview. */
   | { id: number; focus: string | null }
-  | { id: number; details: string };
+  | { id: number; details: string }
+  | { id: number; search: string }
+  | { id: number; whatIf: WhatIf };
 
 /** A load attempt: its diagnostics, and when the model loaded and analysed, the site's summary. */
 export interface LoadOutcome {
@@ -20,9 +23,18 @@ export interface LoadOutcome {
   analysisError?: string;
 }
 
+/** The site as the what-if has it, and the statements that would make it so in the file. */
+export interface WhatIfOutcome {
+  summary: SiteSummary;
+  add: string[];
+  remove: string[];
+}
+
 export type AnalysisReply =
   | { id: number; progress: string }
   | { id: number; loaded: LoadOutcome }
   | { id: number; view: FocusView }
   | { id: number; details: Details | undefined }
+  | { id: number; matches: TagMatch[] }
+  | { id: number; whatIf: WhatIfOutcome }
   | { id: number; error: string };

@@ -3,11 +3,26 @@
 // assessment, findings) and for the details of one tag; it reports its progress stage by stage.
 import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
 import { detailsOf } from './details.ts';
-import { focusView, summariseSite } from './site-view.ts';
-import type { AnalysisReply, AnalysisRequest, LoadOutcome } from './analysis-protocol.ts';
+import { focusView, searchTags, summariseSite } from './site-view.ts';
+import type { AnalysisReply, AnalysisRequest, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
+import { applyWhatIf, isWhatIf, statementsToPaste, type WhatIf } from './what-if.ts';
+import { isoDate } from './sheet.ts';
 
 /** The last model that loaded and analysed; a later load with errors leaves it in place. */
+let fromFile: { model: Model; analysis: Analysis } | undefined;
+/** What the page is shown: the file's model, or a what-if made from it (never written anywhere). */
 let current: { model: Model; analysis: Analysis } | undefined;
+
+function whatIf(question: WhatIf): WhatIfOutcome {
+  if (!fromFile) throw new Error('no model is loaded');
+  if (!isWhatIf(question)) {
+    current = fromFile;
+    return { summary: summariseSite(fromFile.model, fromFile.analysis), add: [], remove: [] };
+  }
+  const model = applyWhatIf(fromFile.model, question, isoDate(new Date()));
+  current = { model, analysis: analyze(model) };
+  return { summary: summariseSite(model, current.analysis), ...statementsToPaste(fromFile.model, model) };
+}
 
 const reply = (message: AnalysisReply) => self.postMessage(message);
 
@@ -22,7 +37,8 @@ function load(id: number, fileName: string, bytes: Uint8Array): LoadOutcome {
   reply({ id, progress: `analysing ${result.model.elements.length} elements, ${result.model.functions.length} functions, ${result.model.scenarios.length} scenarios` });
   try {
     const analysis = analyze(result.model, { spans: result.spans });
-    current = { model: result.model, analysis };
+    fromFile = { model: result.model, analysis };
+    current = fromFile;
     return { ...base, summary: summariseSite(result.model, analysis) };
   } catch (e) {
     return { ...base, analysisError: e instanceof Error ? e.message : String(e) };
@@ -37,6 +53,11 @@ self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
     } else if ('focus' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, view: focusView(current.model, current.analysis, request.focus ?? undefined) });
+    } else if ('whatIf' in request) {
+      reply({ id: request.id, whatIf: whatIf(request.whatIf) });
+    } else if ('search' in request) {
+      if (!current) throw new Error('no model is loaded');
+      reply({ id: request.id, matches: searchTags(current.model, current.analysis, request.search) });
     } else if ('details' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, details: detailsOf(current.model, current.analysis, request.details) });

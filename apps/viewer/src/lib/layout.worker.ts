@@ -5,7 +5,7 @@ import { fromElk, toElk, warmUpScene, type Scene } from '@bulkhead/layout';
 
 const elk = new ELK();
 // Pay ELK's JIT warm-up while the page is still loading the model, not on the first real layout.
-const warm: Promise<unknown> = elk.layout(toElk(warmUpScene())).catch(() => undefined);
+const warm: Promise<unknown> = elk.layout(toElk(warmUpScene(24))).catch(() => undefined);
 
 type Request = { id: number; scene: Scene } | { id: number; ping: true };
 

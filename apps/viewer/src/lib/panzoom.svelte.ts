@@ -10,8 +10,11 @@ export interface Bounds {
 
 const MIN_SCALE = 0.08;
 const MAX_SCALE = 4;
-/** Below this scale the 13 px tags are too small to read. */
-export const READABLE_SCALE = 0.62;
+/**
+ * The reading scale: below it a box's 11 px lines fall under about 9 px on screen, too small to read
+ * at a glance. The first view and "show this finding" never go below it; Fit and the buttons may.
+ */
+export const READABLE_SCALE = 0.85;
 
 function clamp(k: number): number {
   return Math.min(MAX_SCALE, Math.max(MIN_SCALE, k));
@@ -55,16 +58,50 @@ export class PanZoom {
   }
 
   /**
-   * Centres the view on `b`, zooming so it fills at most 70% of the view; `coverRight` pixels on the
-   * right are hidden by a card, so the centre is that of the part still visible.
+   * Centres the view on `b` at a scale that shows it whole if it can, never below the reading scale
+   * (nor above 110%); when `b` is too large for that, `keep` (the shared element) is brought into view.
    */
-  centre(b: Bounds, coverRight = 0): void {
+  centre(b: Bounds, keep?: Bounds): void {
     if (this.width === 0) return;
-    const visible = Math.max(this.width - coverRight, this.width * 0.4);
-    const k = clamp(Math.min((visible * 0.7) / Math.max(b.width, 1), (this.height * 0.7) / Math.max(b.height, 1), 1.1));
+    const k = clamp(Math.max(READABLE_SCALE, Math.min((this.width * 0.85) / Math.max(b.width, 1), (this.height * 0.85) / Math.max(b.height, 1), 1.1)));
     this.k = k;
-    this.x = visible / 2 - (b.x + b.width / 2) * k;
+    this.x = this.width / 2 - (b.x + b.width / 2) * k;
     this.y = this.height / 2 - (b.y + b.height / 2) * k;
+    if (keep) this.reveal(keep);
+  }
+
+  /** Pans (never zooms) just enough that `b` is inside the view with a margin: keyboard focus on an off-screen box. */
+  reveal(b: Bounds, margin = 40): void {
+    if (this.width === 0) return;
+    const left = this.x + b.x * this.k;
+    const top = this.y + b.y * this.k;
+    const right = left + b.width * this.k;
+    const bottom = top + b.height * this.k;
+    if (left < margin) this.x += margin - left;
+    else if (right > this.width - margin) this.x -= Math.min(right - (this.width - margin), left - margin);
+    if (top < margin) this.y += margin - top;
+    else if (bottom > this.height - margin) this.y -= Math.min(bottom - (this.height - margin), top - margin);
+  }
+
+  /**
+   * After a new layout of the same scene: shifts the view so the box that was nearest the middle of
+   * the view is at the same place on screen as before. Boxes are matched by id.
+   */
+  keepAnchored(before: readonly (Bounds & { id: string })[], after: readonly (Bounds & { id: string })[]): void {
+    const cx = (this.width / 2 - this.x) / this.k;
+    const cy = (this.height / 2 - this.y) / this.k;
+    // eslint-disable-next-line svelte/prefer-svelte-reactivity -- a lookup local to this call, never read reactively
+    const now = new Map(after.map((b) => [b.id, b]));
+    let anchor: { was: Bounds; is: Bounds; distance: number } | undefined;
+    for (const was of before) {
+      const is = now.get(was.id);
+      if (!is) continue;
+      const distance = Math.hypot(was.x + was.width / 2 - cx, was.y + was.height / 2 - cy);
+      if (!anchor || distance < anchor.distance) anchor = { was, is, distance };
+    }
+    if (!anchor) return;
+    this.x += (anchor.was.x - anchor.is.x) * this.k;
+    this.y += (anchor.was.y - anchor.is.y) * this.k;
   }
 
   zoomAt(factor: number, px = this.width / 2, py = this.height / 2): void {

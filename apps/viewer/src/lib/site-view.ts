@@ -2,7 +2,7 @@
 // the site and, per focus, the scene to lay out with its assessment and findings. The model and the
 // analysis stay in the worker; only these small pieces cross to the page, so a large site never makes
 // the page copy or walk all of it.
-import { SEVERITY_RANK, type Analysis, type Finding, type Model, type ScenarioAssessment } from '@bulkhead/core';
+import { SEVERITY_RANK, type Analysis, type Finding, type LayerVerdict, type Model, type ScenarioAssessment } from '@bulkhead/core';
 import { scenarioScene, siteOverview, type Scene } from '@bulkhead/layout';
 
 export interface ScenarioRow {
@@ -14,7 +14,26 @@ export interface ScenarioRow {
   open: number;
   /** The claimed layers' functions in order (layer 1 first), to name the sides of a finding. */
   layers: string[];
+  /** Each claimed layer's verdict after independence, in the same order (for the all-scenarios matrix). */
+  verdicts: LayerVerdict[];
+  category?: string;
+  /** Mitigated frequency after independence over the tolerable one. */
+  gap?: number;
+  /** SIL the scenario asks of a SIF (0: none; 5: beyond SIL 4). */
+  sil?: number;
 }
+
+/** One tag that matches a search, with the scenarios whose cause or layers rely on it. */
+export interface TagMatch {
+  tag: string;
+  what: 'element' | 'function';
+  kind: string;
+  title?: string;
+  scenarios: string[];
+}
+
+/** A search answers at most this many tags. */
+export const SEARCH_LIMIT = 25;
 
 export interface SiteSummary {
   siteName: string;
@@ -57,6 +76,9 @@ export function summariseSite(model: Model, analysis: Analysis): SiteSummary {
         ...(a ? { claimed: a.meetsClaimed, after: a.meetsAfter } : {}),
         open: open.get(s.id) ?? 0,
         layers: (s.layers ?? []).map((l) => l.function),
+        verdicts: (s.layers ?? []).map((l) => a?.layers.find((x) => x.function === l.function)?.verdict ?? 'unverified'),
+        category: s.category,
+        ...(a ? { gap: a.gap, ...(a.sif ? { sil: a.sif.sil } : {}) } : {}),
       };
     }),
   };
@@ -75,4 +97,31 @@ export function focusView(model: Model, analysis: Analysis, focus: string | unde
     findings: shown,
     findingTotal: analysis.findings.length,
   };
+}
+
+/**
+ * Tags across the whole site that contain `query` (case-insensitive), whole-tag matches first, then in
+ * natural order; each with the scenarios whose cause or claimed layers rely on it (or are it).
+ */
+export function searchTags(model: Model, analysis: Analysis, query: string): TagMatch[] {
+  const q = query.trim().toLowerCase();
+  if (q === '') return [];
+  const natural = new Intl.Collator('en', { numeric: true });
+  const hits = [
+    ...model.elements.map((e) => ({ tag: e.tag, what: 'element' as const, kind: e.kind, title: e.title })),
+    ...model.functions.map((f) => ({ tag: f.tag, what: 'function' as const, kind: f.kind, title: f.title })),
+  ]
+    .filter((h) => h.tag.toLowerCase().includes(q))
+    .sort((a, b) => Number(b.tag.toLowerCase() === q) - Number(a.tag.toLowerCase() === q) || natural.compare(a.tag, b.tag))
+    .slice(0, SEARCH_LIMIT);
+  const relying = new Map<string, Set<string>>();
+  for (const h of hits) relying.set(h.tag, new Set([h.tag]));
+  for (const t of analysis.traces) for (const e of t.elements) relying.get(e.tag)?.add(t.function);
+  return hits.map((h) => {
+    const fns = relying.get(h.tag)!;
+    const scenarios = model.scenarios
+      .filter((s) => [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some((t) => t !== undefined && fns.has(t)))
+      .map((s) => s.id);
+    return { tag: h.tag, what: h.what, kind: h.kind, ...(h.title ? { title: h.title } : {}), scenarios };
+  });
 }

@@ -9,6 +9,9 @@ import { SupersededError } from './worker-requests.ts';
 import type { AnalysisClient } from './analysis-client.ts';
 import type { LoadOutcome } from './analysis-protocol.ts';
 import type { FocusView, SiteSummary } from './site-view.ts';
+import type { ViewLink } from './link.ts';
+import { sha256Hex } from './sheet.ts';
+import { isWhatIf, NO_WHAT_IF, type WhatIf } from './what-if.ts';
 
 export type Origin = 'served' | 'opened';
 
@@ -16,6 +19,8 @@ export interface GoodSite {
   summary: SiteSummary;
   fileName: string;
   revision: number;
+  /** SHA-256 of the file's bytes as loaded, for the sheet's title block and export names. */
+  sha256: string;
 }
 
 /** An overview with more areas than this is shown as a table, not laid out as a graph. */
@@ -42,6 +47,12 @@ export class Viewer {
   layoutMs = $state<number | undefined>();
   layoutError = $state<string | undefined>();
   laying = $state(false);
+  /** The what-if in force (none: the file's own model), and the statements that would make it real. */
+  whatIf = $state.raw<WhatIf>(NO_WHAT_IF);
+  whatIfStatements = $state.raw<{ add: string[]; remove: string[] }>({ add: [], remove: [] });
+  whatIfActive = $derived(isWhatIf(this.whatIf));
+  /** The centre shows the all-scenarios matrix instead of the graph. */
+  matrix = $state(false);
   /** Bumped whenever a finding is clicked, so the graph re-centres even on the same finding. */
   centreRequest = $state(0);
   private revision = 0;
@@ -58,6 +69,8 @@ export class Viewer {
   current: FocusView | undefined = $derived(this.view && this.view.focus === this.focus ? this.view : undefined);
   assessment = $derived(this.current?.assessment);
   findings: Finding[] = $derived(this.current?.findings ?? []);
+  /** The finding whose proof is shown, once the view that holds it is in. */
+  focusedFinding: Finding | undefined = $derived(this.finding === undefined ? undefined : this.findings.find((f) => f.key === this.finding));
   /** A large site's overview: too many areas to draw, so the page shows them as a table. */
   overviewTable = $derived(this.current !== undefined && this.current.focus === undefined && this.current.scene.nodes.length > OVERVIEW_GRAPH_LIMIT);
 
@@ -72,8 +85,9 @@ export class Viewer {
   async load(client: AnalysisClient, fileName: string, bytes: Uint8Array, origin: Origin): Promise<void> {
     this.progress = `reading ${fileName}`;
     let outcome: LoadOutcome;
+    let sha256: string;
     try {
-      outcome = await client.load(fileName, bytes, (stage) => (this.progress = stage));
+      [outcome, sha256] = await Promise.all([client.load(fileName, bytes, (stage) => (this.progress = stage)), sha256Hex(bytes)]);
     } catch (e) {
       this.analysisError = e instanceof Error ? e.message : String(e);
       this.progress = undefined;
@@ -82,6 +96,8 @@ export class Viewer {
     this.progress = undefined;
     this.missing = undefined;
     this.result = outcome;
+    // A new load replaces the model a what-if was made from (the worker has dropped it).
+    if (outcome.summary) this.clearWhatIfState();
     this.fileName = fileName;
     this.origin = origin;
     if (outcome.analysisError) {
@@ -94,9 +110,10 @@ export class Viewer {
       return;
     }
     this.analysisError = undefined;
+    performance.mark('bulkhead:analysed');
     const summary = outcome.summary;
     const sameFile = this.good?.fileName === fileName;
-    this.good = { summary, fileName, revision: ++this.revision };
+    this.good = { summary, fileName, revision: ++this.revision, sha256 };
     if (!sameFile) {
       this.focus = summary.scenarios[0]?.id;
       this.selected = undefined;
@@ -110,6 +127,7 @@ export class Viewer {
   async fetchView(client: AnalysisClient, focus: string | undefined): Promise<void> {
     try {
       const view = await client.focus(focus);
+      performance.mark('bulkhead:view');
       this.view = view;
       if (this.finding !== undefined && !view.findings.some((f) => f.key === this.finding)) this.finding = undefined;
     } catch (e) {
@@ -140,6 +158,7 @@ export class Viewer {
   }
 
   focusScenario(id: string | undefined): void {
+    this.matrix = false;
     if (this.focus === id) return;
     this.focus = id;
     this.finding = undefined;
@@ -155,7 +174,8 @@ export class Viewer {
     if (!finding) return;
     if (finding.scenario && finding.scenario !== this.focus) this.focusScenario(finding.scenario);
     this.finding = key;
-    this.selected = finding.element;
+    // The proof shows the finding; the element card stays closed so it covers none of the graph.
+    this.selected = undefined;
     this.centreRequest++;
   }
 
@@ -163,11 +183,58 @@ export class Viewer {
     this.finding = undefined;
   }
 
+  private clearWhatIfState(): void {
+    this.whatIf = NO_WHAT_IF;
+    this.whatIfStatements = { add: [], remove: [] };
+  }
+
+  /** Asks the worker to analyse the model as `question` changes it, and shows that; never writes the file. */
+  async askWhatIf(client: AnalysisClient, question: WhatIf): Promise<void> {
+    const good = this.good;
+    if (!good) return;
+    try {
+      const outcome = await client.whatIf(question);
+      this.whatIf = question;
+      this.whatIfStatements = { add: outcome.add, remove: outcome.remove };
+      this.good = { ...good, summary: outcome.summary, revision: ++this.revision };
+    } catch (e) {
+      if (!(e instanceof SupersededError)) this.analysisError = e instanceof Error ? e.message : String(e);
+    }
+  }
+
+  /** What is in view, as a link (lib/link.ts). */
+  get link(): ViewLink {
+    if (this.matrix) return { matrix: true };
+    return {
+      ...(this.focus ? { scenario: this.focus } : {}),
+      ...(this.finding ? { finding: this.finding } : {}),
+      ...(this.selected ? { element: this.selected } : {}),
+    };
+  }
+
+  /**
+   * Shows what a link names, once a site is loaded. A finding opens its proof as soon as the scenario's
+   * findings are in (fetchView keeps it only if the scenario has it); an unknown scenario is ignored.
+   */
+  followLink(link: ViewLink): void {
+    const summary = this.good?.summary;
+    if (!summary) return;
+    if (link.scenario && summary.scenarios.some((s) => s.id === link.scenario)) this.focusScenario(link.scenario);
+    this.matrix = link.matrix === true;
+    const tag = link.element ?? link.layer;
+    this.selected = tag;
+    if (link.finding) {
+      this.finding = link.finding;
+      this.centreRequest++;
+    }
+  }
+
   /** Lays out a scene in the worker; an answer for an older scene is dropped. */
   async layout(client: LayoutClient, scene: FocusView['scene']): Promise<void> {
     this.laying = true;
     try {
       const answer = await client.layout(scene);
+      performance.mark('bulkhead:drawn');
       this.drawing = answer.drawing;
       this.layoutMs = answer.ms;
       this.layoutError = undefined;
