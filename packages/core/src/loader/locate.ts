@@ -2,7 +2,7 @@
 // definition, a cause, an `accept` statement. Spans come from the loader; a model built in code has none,
 // and that is fine.
 import type { Span } from '../diagnostics/diagnostic.ts';
-import type { Finding, RelatedSpan } from '../vocabulary/types.ts';
+import type { RelatedSpan } from '../vocabulary/types.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { spanAt } from './schema-issues.ts';
 import type { Model } from '../model/schema.ts';
@@ -94,7 +94,15 @@ export class ModelLocator {
 /** Rules whose finding is about an `accept` statement: its key is the rule id, a colon, and the key accepted. */
 const ABOUT_ACCEPTANCE: ReadonlySet<string> = new Set(['stale-justification', 'duplicate-justification']);
 
-type Located = Pick<Finding, 'key' | 'rule' | 'scenario' | 'parties' | 'element' | 'accepted'>;
+/** What placing a finding needs: an analysis finding or a report's copy of one. */
+interface Located {
+  key: string;
+  rule: string;
+  scenario?: string | undefined;
+  parties: readonly { role: 'cause' | 'layer'; tag?: string | undefined }[];
+  element?: string | undefined;
+  accepted?: unknown;
+}
 
 /**
  * Where a finding points: its primary span (the claim of the layer it concerns, else the enabler or modifier,

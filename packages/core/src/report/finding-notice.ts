@@ -4,7 +4,7 @@
 import type { Finding } from '../vocabulary/types.ts';
 import type { Span } from '../diagnostics/diagnostic.ts';
 import { place, renderNotice, type Notice, type NoticeFact, type SourceText } from '../diagnostics/notice.ts';
-import { FACTOR_RULES, type ModelLocator } from '../loader/locate.ts';
+import { FACTOR_RULES, findingSpans, type ModelLocator } from '../loader/locate.ts';
 import { alikeDevices } from './alike.ts';
 
 const KINDS: Record<Finding['severity'], string> = {
@@ -13,13 +13,14 @@ const KINDS: Record<Finding['severity'], string> = {
   note: 'Note',
 };
 
+/** Where the finding points (loader/locate.ts, the same place SARIF gives), with what that place is. */
 function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span | undefined; role?: string } {
-  const layer = [...finding.parties].reverse().find((p) => p.role === 'layer');
-  if (layer?.tag) return { span: locate.layer(finding.scenario, layer.tag), role: `the claim of layer ${layer.tag}` };
-  const factor = finding.scenario && FACTOR_RULES.has(finding.rule) ? locate.factor(finding.scenario, finding.key) : undefined;
-  if (factor) return { span: factor, role: `the enabler or modifier of ${finding.scenario}` };
-  if (finding.scenario) return { span: locate.cause(finding.scenario), role: `the cause of ${finding.scenario}` };
-  return {};
+  const { span } = findingSpans(finding, locate);
+  if (!span) return {};
+  const layer = [...finding.parties].reverse().find((p) => p.role === 'layer' && p.tag !== undefined);
+  if (layer?.tag) return { span, role: `the claim of layer ${layer.tag}` };
+  if (finding.scenario && FACTOR_RULES.has(finding.rule)) return { span, role: `the enabler or modifier of ${finding.scenario}` };
+  return { span, role: finding.scenario ? `the cause of ${finding.scenario}` : 'the accept statement' };
 }
 
 export function findingNotice(finding: Finding, locate: ModelLocator): Notice {

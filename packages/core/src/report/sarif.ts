@@ -6,7 +6,7 @@ import { justifiedKeyOf } from '../justify/apply.ts';
 import type { SeverityLevel } from '../model/schema.ts';
 import type { ReportInput } from './build.ts';
 import type { ReportDocument, ReportFinding } from './document.ts';
-import { FACTOR_RULES, ModelLocator } from '../loader/locate.ts';
+import { findingSpans, ModelLocator } from '../loader/locate.ts';
 import { alikeDevices } from './alike.ts';
 import { policyText } from './text.ts';
 
@@ -78,18 +78,17 @@ class ResultBuilder {
     };
   }
 
-  /** The claimed layer first; for findings about justifications, the `accept` statement; else the cause. */
+  /**
+   * For findings about justifications, the `accept` statement; else where the finding itself points (the
+   * claimed layer, the enabler or modifier, the cause: loader/locate.ts, as the text notice does); else the
+   * scenario.
+   */
   private primary(f: ReportFinding): Span | undefined {
     const justified = justifiedKeyOf(f);
     if (justified !== undefined) return this.locator.justification(justified);
-    const layer = f.parties.find((p) => p.role === 'layer' && p.tag !== undefined);
-    if (layer?.tag) return this.locator.layer(f.scenario, layer.tag);
-    if (f.scenario !== undefined && FACTOR_RULES.has(f.rule)) {
-      const factor = this.locator.factor(f.scenario, f.key);
-      if (factor) return factor;
-    }
-    if (f.scenario !== undefined) return this.locator.cause(f.scenario) ?? this.locator.scenario(f.scenario);
-    return undefined;
+    const { span } = findingSpans(f, this.locator);
+    if (span) return span;
+    return f.scenario !== undefined ? this.locator.scenario(f.scenario) : undefined;
   }
 
   private related(f: ReportFinding): Sarif.Location[] {
@@ -98,9 +97,10 @@ class ResultBuilder {
     const alike = alikeDevices(f);
     if (alike) for (const tag of alike) out.push(this.location(this.locator.element(tag), `\`${tag}\`, of the same make and model, is defined here`, id++));
     else if (f.element !== undefined) out.push(this.location(this.locator.element(f.element), `shared element \`${f.element}\` is defined here`, id++));
-    const firstLayer = f.parties.findIndex((p) => p.role === 'layer' && p.tag !== undefined);
+    // The layer the primary location names (the last claimed one, as in findingSpans) is not repeated here.
+    const primaryLayer = f.parties.map((p) => p.role === 'layer' && p.tag !== undefined).lastIndexOf(true);
     f.parties.forEach((p, i) => {
-      if (i === firstLayer) return;
+      if (i === primaryLayer) return;
       const path = f.paths[i];
       const via = path && path.length > 0 ? ` (${path.join(' -> ')})` : '';
       if (p.role === 'cause' && f.scenario !== undefined) {
