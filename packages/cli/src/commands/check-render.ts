@@ -84,6 +84,16 @@ function legend(findings: readonly Finding[], paint: Paint): string[] {
 }
 
 export function renderCheck(result: LoadResult & { model: Model }, analysis: Analysis, options: CheckTextOptions = {}): string {
+  const parts: string[] = [];
+  writeCheck(result, analysis, options, (text) => parts.push(text));
+  return parts.join('');
+}
+
+/**
+ * The same text as renderCheck, handed to `write` a scenario at a time, so a large site's report (tens of
+ * megabytes) is never held whole, once as lines and again as one string, at the peak of a run.
+ */
+export function writeCheck(result: LoadResult & { model: Model }, analysis: Analysis, options: CheckTextOptions, write: (text: string) => void): void {
   const paint = options.paint ?? PLAIN;
   const verbose = options.verbose ?? false;
   const locate = new ModelLocator(result.model, result.spans);
@@ -95,10 +105,11 @@ export function renderCheck(result: LoadResult & { model: Model }, analysis: Ana
   const meeting = analysis.assessments.filter((a) => a.meetsAfter).length;
   const total = analysis.assessments.length;
 
-  const out: string[] = [
+  const out = new LineWriter(write);
+  out.push(
     paint.strong(`${result.source.file}: ${plural(total, 'scenario')}, ${meeting} meeting ${meeting === 1 ? 'its' : 'their'} criterion after independence, ${total - meeting} falling short`),
     '',
-  ];
+  );
   for (const a of analysis.assessments) out.push(...scenarioSummary(a, paint), '');
   out.push(
     `findings: ${counts['voids-credit']} void credit, ${counts['needs-justification']} need a justification, ${plural(counts.note, 'note')}${counts.note && !verbose ? ' (--verbose lists them)' : ''}, ${counts.accepted} accepted; detail below`,
@@ -112,5 +123,31 @@ export function renderCheck(result: LoadResult & { model: Model }, analysis: Ana
   const loose = byScenario.get(undefined) ?? [];
   if (loose.length) out.push(paint.strong('== model =='), '', ...groupLines(groupByLayer(undefined, loose, verbose), result, locate, paint));
   out.push(...legend(verbose ? analysis.findings : analysis.findings.filter((f) => f.severity !== 'note'), paint));
-  return `${out.join('\n').replace(/\n+$/, '')}\n`;
+  out.end();
+}
+
+/** Lines joined by newlines, passed on in pieces; the run of newlines at the very end becomes one. */
+class LineWriter {
+  private buffer = '';
+  private started = false;
+
+  constructor(private readonly write: (text: string) => void) {}
+
+  push(...lines: string[]): void {
+    for (const line of lines) {
+      this.buffer += this.started ? `\n${line}` : line;
+      this.started = true;
+    }
+    if (this.buffer.length > 1 << 16) {
+      // Trailing newlines stay behind: only at the end is it known whether they are the last ones.
+      const kept = this.buffer.length - /\n*$/.exec(this.buffer)![0].length;
+      this.write(this.buffer.slice(0, kept));
+      this.buffer = this.buffer.slice(kept);
+    }
+  }
+
+  end(): void {
+    this.write(`${this.buffer.replace(/\n+$/, '')}\n`);
+    this.buffer = '';
+  }
 }

@@ -5,7 +5,7 @@
 import { analyze, renderDiagnostics } from '@bulkhead/core';
 import { printDiagnostics, readModel } from '../io.ts';
 import { COLOUR, PLAIN, wantsColour } from '../colour.ts';
-import { renderCheck } from './check-render.ts';
+import { writeCheck } from './check-render.ts';
 import { gateFindings } from './fail-on.ts';
 
 export function checkCommand(file: string, options: { failOn?: string | undefined; verbose?: boolean } = {}): number {
@@ -18,6 +18,6 @@ export function checkCommand(file: string, options: { failOn?: string | undefine
   if (result.diagnostics.length) process.stderr.write(`${renderDiagnostics(result.diagnostics, result.source)}\n\n`);
   const analysis = analyze(result.model, { spans: result.spans });
   const paint = wantsColour(process.stdout, process.env) ? COLOUR : PLAIN;
-  process.stdout.write(renderCheck({ ...result, model: result.model }, analysis, { verbose: options.verbose ?? false, paint }));
+  writeCheck({ ...result, model: result.model }, analysis, { verbose: options.verbose ?? false, paint }, (text) => process.stdout.write(text));
   return gate(file, analysis.findings);
 }
