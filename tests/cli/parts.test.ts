@@ -1,5 +1,6 @@
 // A model split over part files, through the built command: check points into the part, SARIF names
-// the part's file for a result there, and fmt formats each file on its own, keeping the `part` lines.
+// the part's file for a result there, convert says it merges the parts, and fmt formats each file on its
+// own, keeping the `part` lines.
 import { cpSync, mkdirSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -41,6 +42,18 @@ describe('a model split over part files, on the command line', () => {
     });
     expect(uris).toContain('main.bulk');
     expect(uris).toContain('units/plant.bulk');
+  });
+
+  it('convert says on stderr that it merges the parts into one file, naming them, and the whole model is in the output', async () => {
+    const dir = splitDemo();
+    const split = await runCli(['convert', 'main.bulk', '--to', 'json'], { cwd: dir });
+    const whole = await runCli(['convert', 'whole.bulk', '--to', 'json'], { cwd: dir });
+    expect(split.code).toBe(0);
+    expect(split.stderr).toBe('bulkhead convert: note: main.bulk names 1 part file (units/plant.bulk); the json model written holds them all in one file, with no `part` statement; the part files are not changed\n');
+    expect(whole.stderr).toBe('');
+    const tags = (json: string) => (JSON.parse(json) as { elements: { tag: string }[] }).elements.map((e) => e.tag).sort();
+    expect(tags(split.stdout)).toEqual(tags(whole.stdout));
+    expect(tags(split.stdout)).toContain('UPS-1');
   });
 
   it('fmt formats each file and keeps the part statement', async () => {
