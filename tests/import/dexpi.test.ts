@@ -25,6 +25,9 @@ function domCounts() {
   const psgfs = elements('ProcessSignalGeneratingFunction');
   const locations = new Set(psgfs.flatMap((p) => Array.from(p.getElementsByTagName('Association')).filter((a) => a.getAttribute('Type') === 'is located in').map((a) => a.getAttribute('ItemID'))));
   const systems = elements('ActuatingSystem');
+  const flows = elements('InformationFlow');
+  const sensorIds = new Set(psgfs.map((p) => p.getAttribute('ID')));
+  const startsAtSensor = (f: DomElement) => Array.from(f.getElementsByTagName('Association')).some((a) => a.getAttribute('Type') === 'has logical start' && sensorIds.has(a.getAttribute('ItemID')));
   const components = elements('ActuatingSystemComponent');
   const valves = new Set(components.filter((c) => c.getAttribute('ComponentClass') === 'OperatedValveReference').flatMap((c) => Array.from(c.getElementsByTagName('Association')).map((a) => a.getAttribute('ItemID'))));
   return {
@@ -39,6 +42,9 @@ function domCounts() {
     equipment: elements('Equipment').filter((e) => (e.parentNode as DomElement).nodeName !== 'Equipment').length,
     nozzles: elements('Nozzle').length,
     lines: elements('PipingNetworkSystem').length,
+    // DEXPI 1.3 names measuring lines by class; a 1.2 file's sensor-to-function line starts at a sensor.
+    measuringLines: flows.filter((f) => f.getAttribute('ComponentClass') === 'MeasuringLineFunction' || startsAtSensor(f)).length,
+    signalLines: flows.filter((f) => f.getAttribute('ComponentClass') !== 'MeasuringLineFunction' && !startsAtSensor(f)).length,
   };
 }
 
@@ -57,8 +63,9 @@ describe('the DEXPI reference P&ID', () => {
 
   it('matches the counts the research note gives for this file', () => {
     // NOTES on DEXPI, section 0: 4 instrument functions, 3 sensors with their sensing locations, 3 actuating
-    // systems with fail actions driving 3 globe valves, a safety valve, 5 equipment items with 19 nozzles, 11 piping systems.
-    expect(result.counts).toEqual({ instrumentFunctions: 4, sensors: 3, sensingLocations: 3, actuatingSystemsWithFailAction: 3, valves: 3, safetyValves: 1, equipment: 5, nozzles: 19, lines: 11 });
+    // systems with fail actions driving 3 globe valves, a safety valve, 5 equipment items with 19 nozzles, 11 piping
+    // systems, 3 measuring lines and 3 signal lines.
+    expect(result.counts).toEqual({ instrumentFunctions: 4, sensors: 3, sensingLocations: 3, actuatingSystemsWithFailAction: 3, valves: 3, safetyValves: 1, equipment: 5, nozzles: 19, lines: 11, measuringLines: 3, signalLines: 3 });
   });
 
   it('imports sensors where they sense and final elements with their fail action, each with its XML line', () => {
@@ -78,8 +85,13 @@ describe('the DEXPI reference P&ID', () => {
     const reasons = result.skipped.map((s) => s.reason);
     expect(reasons.filter((r) => r === 'a part of the equipment around it')).toHaveLength(11);
     expect(result.skipped.find((s) => s.what === 'instrument function PI4712.01')?.reason).toMatch(/indication only/);
+    // Measuring and signal lines name no cable: each is listed, with its own reason, never dropped unseen.
+    expect(result.skipped.filter((s) => s.what.startsWith('measuring line ')).map((s) => s.what)).toEqual(['measuring line MeasuringLineFunction-1', 'measuring line MeasuringLineFunction-2', 'measuring line MeasuringLineFunction-3']);
+    expect(result.skipped.filter((s) => s.what.startsWith('signal line ')).map((s) => s.what)).toEqual(['signal line SignalConveyingFunction-1', 'signal line SignalConveyingFunction-2', 'signal line SignalConveyingFunction-3']);
+    expect(describePlace(result.skipped.find((s) => s.what === 'measuring line MeasuringLineFunction-2')!.place)).toBe(`${FILE}:2370:5`);
+    expect(reasons.filter((r) => /^a logical line that names no cable/.test(r))).toHaveLength(6);
     // Read = imported + skipped: every object the importer looked at is accounted for.
-    expect(result.records.length + result.skipped.length).toBe(59);
+    expect(result.records.length + result.skipped.length).toBe(59 + 6);
   });
 
   it('loads clean with the control-system tables, lists tags found in one source only, and check runs', () => {

@@ -9,6 +9,8 @@ export class UsageError extends Error {}
 export interface ReadResult extends LoadResult {
   /** The bytes as read, when the file could be read. */
   bytes?: Uint8Array;
+  /** The bytes of each part file read, by the path the load names it (so a report hashes what it read). */
+  partBytes?: Map<string, Uint8Array>;
 }
 
 const REASONS: Record<string, string> = {
@@ -49,7 +51,13 @@ export function readModel(file: string): ReadResult {
   } catch (e) {
     return failed(file, `cannot read \`${file}\`: ${reason(e)}`);
   }
-  return { ...loadModelText(file, bytes, { readPart: readPartFile }), bytes };
+  const partBytes = new Map<string, Uint8Array>();
+  const readPart = (path: string): PartBytes => {
+    const part = readPartFile(path);
+    if (part instanceof Uint8Array) partBytes.set(path, part);
+    return part;
+  };
+  return { ...loadModelText(file, bytes, { readPart }), bytes, ...(partBytes.size ? { partBytes } : {}) };
 }
 
 /** Reads a part file a model names, with the same existence and size checks as the model file itself. */

@@ -10,7 +10,7 @@ export { parseBulk, type ParsedFile, type Statement } from './bulk/parser.ts';
 export { printBulk, formatNumber, type PartLine } from './bulk/printer.ts';
 export { formatModelFile } from './bulk/fragment.ts';
 export type { SpanMap } from './bulk/to-model.ts';
-export { loadModelText, detectFormat, MAX_FILE_BYTES, type LoadResult, type LoadOptions, type ModelFormat } from './loader/load.ts';
+export { loadModelText, partFilesOf, detectFormat, MAX_FILE_BYTES, type LoadResult, type LoadOptions, type ModelFormat } from './loader/load.ts';
 export { joinRelative, normalPath, PART_KEYWORD, type PartReader, type PartBytes } from './loader/parts.ts';
 export { spanAt } from './loader/schema-issues.ts';
 export { printJson } from './json/printer.ts';

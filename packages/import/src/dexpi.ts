@@ -3,6 +3,7 @@
 // functions), final elements (actuating systems with their fail action and the valve they drive),
 // safety valves, and control functions. What a P&ID does not hold (cards, cabinets, supplies, solvers)
 // comes from the tables; nothing is taken as independent for being absent (see NOTES on DEXPI, 2.11).
+// Measuring and signal lines are counted and listed as skipped, with the reason (countSignalLines).
 import { issue, type ImportIssue, type Place } from './issues.ts';
 import type { CellValue, TagRecord } from './records.ts';
 import { descendants, readXml, type XmlElement } from './xml.ts';
@@ -18,6 +19,10 @@ export interface DexpiCounts {
   equipment: number;
   nozzles: number;
   lines: number;
+  /** Sensor to instrument function (MeasuringLineFunction in 1.3; in 1.2 a signal line that starts at a sensor). */
+  measuringLines: number;
+  /** Instrument function to final element or to another function. */
+  signalLines: number;
 }
 
 export interface DexpiResult {
@@ -56,6 +61,24 @@ const VARIABLES: Record<string, string> = { L: 'level', P: 'pressure', T: 'tempe
 function ancestor(node: XmlElement, test: (n: XmlElement) => boolean): XmlElement | undefined {
   for (let n = node.parent; n; n = n.parent) if (test(n)) return n;
   return undefined;
+}
+
+/** Why a measuring or signal line is not an element: what it links is already the loop's sensors and finals. */
+const LOGICAL_LINE_REASON = 'a logical line that names no cable or I/O channel (those come from the tables)';
+
+/**
+ * Measuring and signal lines (`InformationFlow`): counted and listed as skipped. The model's signal kinds
+ * (card, cable, network) are physical things a P&ID line does not identify, and the link it draws is
+ * already in the loop's sensors and final elements; inventing a cable per line would be a guess.
+ */
+function countSignalLines(all: XmlElement[], byId: Map<string, XmlElement>, counts: DexpiCounts, skip: (what: string, reason: string, n: XmlElement) => void): void {
+  for (const flow of all.filter((n) => n.name === 'InformationFlow')) {
+    const start = byId.get(associated(flow, 'has logical start')[0] ?? '');
+    const measuring = flow.attributes.ComponentClass === 'MeasuringLineFunction' || start?.name === 'ProcessSignalGeneratingFunction';
+    if (measuring) counts.measuringLines++;
+    else counts.signalLines++;
+    skip(`${measuring ? 'measuring line' : 'signal line'} ${flow.attributes.ID ?? `at line ${flow.line}`}`, LOGICAL_LINE_REASON, flow);
+  }
 }
 
 export function readDexpi(file: string, text: string, issues: ImportIssue[]): DexpiResult | undefined {
@@ -129,7 +152,19 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
   }
 
   // Instrument functions, their sensors and sensing locations, and the final elements they drive.
-  const counts: DexpiCounts = { instrumentFunctions: 0, sensors: 0, sensingLocations: 0, actuatingSystemsWithFailAction: 0, valves: 0, safetyValves: safetyValves.length, equipment: equipment.length, nozzles: nozzles.length, lines: systems.length };
+  const counts: DexpiCounts = {
+    instrumentFunctions: 0,
+    sensors: 0,
+    sensingLocations: 0,
+    actuatingSystemsWithFailAction: 0,
+    valves: 0,
+    safetyValves: safetyValves.length,
+    equipment: equipment.length,
+    nozzles: nozzles.length,
+    lines: systems.length,
+    measuringLines: 0,
+    signalLines: 0,
+  };
   const locations = new Set<string>();
   const valves = new Set<string>();
   for (const pif of all.filter((n) => n.name === 'ProcessInstrumentationFunction')) {
@@ -186,6 +221,7 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
     if (letters.includes('C')) record(tag, 'loop', pif, [...(sensors.length ? [['sensors', sensors.join(',')] as [string, string]] : []), ...(finals.length ? [['finals', finals.join(',')] as [string, string]] : [])], letters.length > 1 ? [`DEXPI letters ${category}${letters}: its other letters are the same function, not separate layers`] : []);
     else skipped.push({ what: `instrument function ${tag}`, reason: letters === 'I' ? 'indication only: no control or protective action' : `letters ${category}${letters} name no control loop; model its protective use in the loop list`, place: place(pif) });
   }
+  countSignalLines(all, byId, counts, (what, reason, n) => skipped.push({ what, reason, place: place(n) }));
   counts.sensingLocations = locations.size;
   counts.valves = valves.size;
   return { records, counts, skipped };

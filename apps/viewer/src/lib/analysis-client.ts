@@ -3,15 +3,16 @@
 import type { Details } from './details.ts';
 import type { AnalysisReply, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import type { WhatIf } from './what-if.ts';
+import type { ServedParts } from './live.ts';
 import type { FocusView, TagMatch } from './site-view.ts';
 import { WorkerRequests } from './worker-requests.ts';
 
 export class AnalysisClient {
   private readonly requests = new WorkerRequests<AnalysisReply>(new Worker(new URL('./analysis.worker.ts', import.meta.url), { type: 'module' }), 'analysis');
 
-  /** Reads and analyses a file in the worker; `progress` hears each stage as it starts. */
-  load(fileName: string, bytes: Uint8Array, progress?: (stage: string) => void): Promise<LoadOutcome> {
-    return this.requests.send({ load: { fileName, bytes } }, (r) => ('loaded' in r ? { value: r.loaded } : undefined), progress ? { progress } : {});
+  /** Reads and analyses a file (with its part files, when served) in the worker; `progress` hears each stage. */
+  load(fileName: string, bytes: Uint8Array, parts: ServedParts | undefined, progress?: (stage: string) => void): Promise<LoadOutcome> {
+    return this.requests.send({ load: { fileName, bytes, ...(parts ? { parts } : {}) } }, (r) => ('loaded' in r ? { value: r.loaded } : undefined), progress ? { progress } : {});
   }
 
   /** The scene, assessment and findings of one scenario, or of the site overview (undefined). */

@@ -3,10 +3,12 @@
 import type { Diagnostic, LoadResult } from '@bulkhead/core';
 import type { Details } from './details.ts';
 import type { WhatIf } from './what-if.ts';
+import type { ServedParts } from './live.ts';
 import type { FocusView, SiteSummary, TagMatch } from './site-view.ts';
 
 export type AnalysisRequest =
-  | { id: number; load: { fileName: string; bytes: Uint8Array } }
+  /** `parts` only when the page is served with the part files; without them a `part` line is an error. */
+  | { id: number; load: { fileName: string; bytes: Uint8Array; parts?: ServedParts } }
   /** null: the site overview. */
   | { id: number; focus: string | null }
   | { id: number; details: string }

@@ -7,6 +7,7 @@ import { focusView, searchTags, summariseSite } from './site-view.ts';
 import type { AnalysisReply, AnalysisRequest, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import { applyWhatIf, isWhatIf, statementsToPaste, type WhatIf } from './what-if.ts';
 import { isoDate } from './sheet.ts';
+import type { ServedParts } from './live.ts';
 
 /** The last model that loaded and analysed; a later load with errors leaves it in place. */
 let fromFile: { model: Model; analysis: Analysis } | undefined;
@@ -26,9 +27,13 @@ function whatIf(question: WhatIf): WhatIfOutcome {
 
 const reply = (message: AnalysisReply) => self.postMessage(message);
 
-function load(id: number, fileName: string, bytes: Uint8Array): LoadOutcome {
-  reply({ id, progress: `reading ${fileName} (${Math.ceil(bytes.length / 1024)} kB)` });
-  const result = loadModelText(fileName, bytes);
+function load(id: number, fileName: string, bytes: Uint8Array, parts: ServedParts | undefined): LoadOutcome {
+  const partBytes = (parts ?? []).reduce((n, [, part]) => n + (part instanceof Uint8Array ? part.length : 0), 0);
+  const files = parts?.length ? ` and ${parts.length} part file${parts.length === 1 ? '' : 's'}` : '';
+  reply({ id, progress: `reading ${fileName}${files} (${Math.ceil((bytes.length + partBytes) / 1024)} kB)` });
+  // Served parts are all the model can name: the server found them by the same reading of the same file.
+  const served = parts ? new Map(parts) : undefined;
+  const result = loadModelText(fileName, bytes, served ? { readPart: (path) => served.get(path) ?? { problem: 'the view server had not sent it yet; the page reloads on the next save' } } : {});
   const failed = result.diagnostics.some((d) => d.severity === 'error');
   // The file's lines are needed only to show the errors' excerpts.
   const source = failed ? result.source : { file: result.source.file, lines: [] };
@@ -49,7 +54,7 @@ self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
   const request = ev.data;
   try {
     if ('load' in request) {
-      reply({ id: request.id, loaded: load(request.id, request.load.fileName, request.load.bytes) });
+      reply({ id: request.id, loaded: load(request.id, request.load.fileName, request.load.bytes, request.load.parts) });
     } else if ('focus' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, view: focusView(current.model, current.analysis, request.focus ?? undefined) });

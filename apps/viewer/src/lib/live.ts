@@ -1,12 +1,33 @@
-// When the page is served by `bulkhead view`, it fetches the one model at /model and listens on
-// /events (server-sent events) for each save. Elsewhere (vite preview, a file) both are absent.
+// When the page is served by `bulkhead view`, it fetches the model at /model, the part files it names
+// at /parts, and listens on /events (server-sent events) for each save of any of them. Elsewhere (vite
+// preview, a file) all are absent.
+import type { PartBytes } from '@bulkhead/core';
 
 export const MODEL_FILE_HEADER = 'x-bulkhead-file';
 /** Why the served file cannot be shown (deleted, renamed, a directory, too large), from the server. */
 export const MISSING_HEADER = 'x-bulkhead-missing';
 
-/** The served file's bytes, or why there are none just now; the file name either way. */
-export type ServedModel = { fileName: string; bytes: Uint8Array } | { fileName: string; missing: string };
+/** The part files, keyed by the path the model's load asks for each, as the reader hands them over. */
+export type ServedParts = [path: string, part: PartBytes][];
+
+/** The served file's bytes and its parts, or why there are none just now; the file name either way. */
+export type ServedModel = { fileName: string; bytes: Uint8Array; parts: ServedParts } | { fileName: string; missing: string };
+
+/** One part as the server sends it: the bytes as latin1 text (one char per byte), or why it was not read. */
+type SentPart = { path: string; text: string } | { path: string; missing: string };
+
+function latin1Bytes(text: string): Uint8Array {
+  const bytes = new Uint8Array(text.length);
+  for (let i = 0; i < text.length; i++) bytes[i] = text.charCodeAt(i);
+  return bytes;
+}
+
+async function fetchServedParts(): Promise<ServedParts> {
+  const response = await fetch('./parts', { cache: 'no-store' });
+  if (!response.ok) throw new Error(`the server answered ${response.status} for the part files`);
+  const sent = ((await response.json()) as { parts: SentPart[] }).parts;
+  return sent.map((part) => [part.path, 'text' in part ? latin1Bytes(part.text) : { problem: part.missing }]);
+}
 
 export async function fetchServedModel(): Promise<ServedModel | undefined> {
   let response: Response;
@@ -16,7 +37,8 @@ export async function fetchServedModel(): Promise<ServedModel | undefined> {
     if (fileName === null) return undefined;
     const missing = response.headers.get(MISSING_HEADER);
     if (!response.ok) return { fileName: decodeURIComponent(fileName), missing: missing !== null ? decodeURIComponent(missing) : `the server answered ${response.status}` };
-    return { fileName: decodeURIComponent(fileName), bytes: new Uint8Array(await response.arrayBuffer()) };
+    const [bytes, parts] = await Promise.all([response.arrayBuffer(), fetchServedParts()]);
+    return { fileName: decodeURIComponent(fileName), bytes: new Uint8Array(bytes), parts };
   } catch {
     return undefined;
   }

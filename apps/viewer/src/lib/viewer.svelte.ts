@@ -8,6 +8,7 @@ import type { LayoutClient } from './layout-client.ts';
 import { SupersededError } from './worker-requests.ts';
 import type { AnalysisClient } from './analysis-client.ts';
 import type { LoadOutcome } from './analysis-protocol.ts';
+import type { ServedParts } from './live.ts';
 import type { FocusView, SiteSummary } from './site-view.ts';
 import type { ViewLink } from './link.ts';
 import { sha256Hex } from './sheet.ts';
@@ -82,12 +83,12 @@ export class Viewer {
   }
 
   /** Reads and analyses a file in the worker; on errors the diagnostics show and the last good view stays. */
-  async load(client: AnalysisClient, fileName: string, bytes: Uint8Array, origin: Origin): Promise<void> {
+  async load(client: AnalysisClient, fileName: string, bytes: Uint8Array, origin: Origin, parts?: ServedParts): Promise<void> {
     this.progress = `reading ${fileName}`;
     let outcome: LoadOutcome;
     let sha256: string;
     try {
-      [outcome, sha256] = await Promise.all([client.load(fileName, bytes, (stage) => (this.progress = stage)), sha256Hex(bytes)]);
+      [outcome, sha256] = await Promise.all([client.load(fileName, bytes, parts, (stage) => (this.progress = stage)), sha256Hex(bytes)]);
     } catch (e) {
       this.analysisError = e instanceof Error ? e.message : String(e);
       this.progress = undefined;

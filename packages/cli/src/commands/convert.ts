@@ -23,5 +23,12 @@ export function convertCommand(file: string, to: string | undefined, out: string
   if (out) checkOutput(out, { inputs: [file], force, replaceable: () => readFileSync(out, 'utf8') === text, what, unlike });
   if (out) writeFileAtomic(out, text);
   else process.stdout.write(text);
+  // A split model comes out as one file: that is what was asked, but never done unsaid.
+  if (result.parts?.length) {
+    const count = `${result.parts.length} part file${result.parts.length === 1 ? '' : 's'}`;
+    process.stderr.write(
+      `bulkhead convert: note: ${file} names ${count} (${result.parts.join(', ')}); the ${to} model written holds them all in one file, with no \`part\` statement; the part files are not changed\n`,
+    );
+  }
   return 0;
 }

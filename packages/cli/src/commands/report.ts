@@ -75,6 +75,7 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
       analysis,
       file,
       sha256: createHash('sha256').update(result.bytes).digest('hex'),
+      ...(result.partBytes ? { parts: [...result.partBytes].map(([part, bytes]) => ({ file: part, sha256: createHash('sha256').update(bytes).digest('hex') })) } : {}),
       toolVersion: cliVersion(),
       ...(date ? { date } : {}),
       spans: result.spans,

@@ -2,7 +2,7 @@
 // pushes every save to the page. Builds nothing at run time: without apps/viewer/dist it says how.
 import { statSync } from 'node:fs';
 import { analyze, loadModelText } from '@bulkhead/core';
-import { printDiagnostics, readModel, UsageError } from '../io.ts';
+import { printDiagnostics, readModel, readPartFile, UsageError } from '../io.ts';
 import { renderCheck } from './check-render.ts';
 import { hasBuiltViewer } from '../view/assets.ts';
 import { startViewServer, type FileState } from '../view/server.ts';
@@ -21,14 +21,19 @@ function describe(file: string, state: FileState): string {
   if ('missing' in state) return `${state.missing}; the page says so and keeps the last good view`;
   let result;
   try {
-    result = loadModelText(file, Buffer.from(state.text, 'latin1'));
+    result = loadModelText(file, Buffer.from(state.text, 'latin1'), { readPart: readPartFile });
   } catch (e) {
     return `could not be checked here (${(e as Error).message}); see the page`;
   }
   const errors = result.diagnostics.filter((d) => d.severity === 'error');
   if (errors.length === 0) return 'loads cleanly';
   const first = errors[0]!.span;
-  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${file}:${first.line}:${first.column}` : ''}; the page keeps the last good view`;
+  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${first.file ?? file}:${first.line}:${first.column}` : ''}; the page keeps the last good view`;
+}
+
+/** The part files a save touched, when it was not the model file alone, named before the model's verdict. */
+function savedFiles(file: string, changed: string[]): string {
+  return changed.length === 1 && changed[0] === file ? '' : `${changed.join(', ')}; `;
 }
 
 export function viewCommand(file: string, portText: string | undefined, distDir = VIEWER_DIST): number {
@@ -55,7 +60,8 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
       file,
       distDir,
       port,
-      onChange: (state) => process.stdout.write(`${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${file} ${describe(file, state)}\n`),
+      onChange: (state, changed) =>
+        process.stdout.write(`${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(file, changed)}${file} ${describe(file, state)}\n`),
     }).then(
       (server) => {
         process.stdout.write(`bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`);

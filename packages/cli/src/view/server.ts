@@ -1,11 +1,14 @@
-// The `bulkhead view` server (node:http, no framework): serves the built viewer, the one model file
-// at /model, and server-sent events at /events on every save. Binds 127.0.0.1; anything else is 404.
+// The `bulkhead view` server (node:http, no framework): serves the built viewer, the model file at
+// /model, the part files it names at /parts, and server-sent events at /events on every save of any of
+// them. Binds 127.0.0.1; anything else is 404.
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
-import { readFileSync, statSync, unwatchFile, watch, watchFile, type FSWatcher } from 'node:fs';
-import { basename, dirname } from 'node:path';
+import { unwatchFile, watch, watchFile, type FSWatcher } from 'node:fs';
+import { basename, dirname, join, resolve } from 'node:path';
 import type { AddressInfo } from 'node:net';
-import { MAX_FILE_BYTES } from '@bulkhead/core';
 import { readAssets, type Asset } from './assets.ts';
+import { partOnDisk, partsBody, readSiteFiles, readState, sameSite, sameState, type FileState, type SiteFiles } from './site-files.ts';
+
+export { readState, type FileState } from './site-files.ts';
 
 export const HOST = '127.0.0.1';
 export const MODEL_FILE_HEADER = 'X-Bulkhead-File';
@@ -19,8 +22,11 @@ export interface ViewServerOptions {
   distDir: string;
   /** 0 asks the system for a free port. */
   port: number;
-  /** Called after each save is seen, with the new text, or why there is none (for a console line). */
-  onChange?: (file: FileState) => void;
+  /**
+   * Called after each save is seen, with the model file's new text or why there is none, and the files
+   * that changed (the model file as given, part files joined to its folder), for a console line.
+   */
+  onChange?: (file: FileState, changed: string[]) => void;
 }
 
 export interface ViewServer {
@@ -55,30 +61,6 @@ function notFound(res: ServerResponse): void {
   send(res, 404, 'text/plain; charset=utf-8', 'not found\n', { 'Cache-Control': 'no-store' });
 }
 
-/** What the watched path holds now: text, or the reason there is none to show. */
-export type FileState = { text: string } | { missing: string };
-
-/**
- * The path's state without reading more than the limit: a file replaced by a directory, a device or a
- * gigabyte of noise is reported, never read whole or allowed to throw.
- */
-export function readState(file: string): FileState {
-  try {
-    const stat = statSync(file);
-    if (stat.isDirectory()) return { missing: 'the path is now a directory, not a file' };
-    if (!stat.isFile()) return { missing: 'the path is not a regular file' };
-    if (stat.size > MAX_FILE_BYTES) return { missing: `the file is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
-    return { text: readFileSync(file, 'latin1') };
-  } catch (e) {
-    const code = (e as NodeJS.ErrnoException).code;
-    return { missing: code === 'ENOENT' ? 'the file is missing (deleted or renamed)' : `the file cannot be read (${code ?? 'read error'})` };
-  }
-}
-
-function sameState(a: FileState, b: FileState): boolean {
-  return 'text' in a && 'text' in b ? a.text === b.text : 'missing' in a && 'missing' in b && a.missing === b.missing;
-}
-
 /**
  * The path of a request, or undefined when it must be refused: no percent-encoding, backslash, dot
  * segment or empty segment is ever matched, whatever it decodes to.
@@ -96,7 +78,7 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
   const clients = new Set<ServerResponse>();
   const fileName = basename(options.file);
   let revision = 0;
-  let last: FileState = readState(options.file);
+  let last: SiteFiles = readSiteFiles(options.file);
   let port = 0;
 
   function allowedHost(req: IncomingMessage): boolean {
@@ -119,6 +101,10 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
       // The bytes go as they are (latin1 keeps every byte), so the page's loader judges them, not us.
       if ('text' in state) return send(res, 200, 'application/octet-stream', Buffer.from(state.text, 'latin1'), named, head);
       return send(res, 404, 'text/plain; charset=utf-8', `${state.missing}\n`, { ...named, [MISSING_HEADER]: encodeURIComponent(state.missing) }, head);
+    }
+    if (path === '/parts') {
+      // Read afresh like /model; the page loads the model with exactly these files.
+      return send(res, 200, 'application/json; charset=utf-8', partsBody(readSiteFiles(options.file).parts), { 'Cache-Control': 'no-store' }, head);
     }
     if (path === '/events') {
       if (clients.size >= MAX_EVENT_CLIENTS) {
@@ -149,32 +135,75 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     timer = setTimeout(() => settle(false), WATCH_DEBOUNCE_MS);
   }
   function settle(confirmed: boolean): void {
-    const state = readState(options.file);
-    if (sameState(state, last)) return;
-    if ('missing' in state && !confirmed) {
+    const site = readSiteFiles(options.file);
+    if (sameSite(site, last)) return;
+    if (!confirmed && [site.main, ...site.parts.values()].some((state) => 'missing' in state)) {
       timer = setTimeout(() => settle(true), MISSING_GRACE_MS);
       return;
     }
-    last = state;
+    const changedFiles = changedBetween(last, site);
+    last = site;
+    follow(site);
     push();
     try {
-      options.onChange?.(state);
+      options.onChange?.(site.main, changedFiles);
     } catch {
       // A console line is not worth the server: the page still gets the change.
     }
   }
 
-  // Watch the directory (editors often save by renaming a new file over the old) and poll as well,
-  // because fs.watch misses events on some file systems.
-  let watcher: FSWatcher | undefined;
-  try {
-    watcher = watch(dirname(options.file), (_event, name) => {
-      if (name === null || name === fileName) changed();
-    });
-  } catch {
-    watcher = undefined;
+  function changedBetween(before: SiteFiles, after: SiteFiles): string[] {
+    const changedFiles = sameState(before.main, after.main) ? [] : [options.file];
+    for (const part of new Set([...before.parts.keys(), ...after.parts.keys()])) {
+      const was = before.parts.get(part);
+      const now = after.parts.get(part);
+      if (!was || !now || !sameState(was, now)) changedFiles.push(join(dirname(options.file), part));
+    }
+    return changedFiles;
   }
-  watchFile(options.file, { interval: POLL_MS }, changed);
+
+  // Watch each file's directory (editors often save by renaming a new file over the old) and poll each
+  // file as well, because fs.watch misses events on some file systems. The set follows the model's parts.
+  const polled = new Set<string>();
+  const watchers = new Map<string, FSWatcher>();
+  function follow(site: SiteFiles): void {
+    const wanted = new Set([resolve(options.file), ...[...site.parts.keys()].map((part) => partOnDisk(options.file, part))]);
+    for (const file of polled) {
+      if (wanted.has(file)) continue;
+      unwatchFile(file, changed);
+      polled.delete(file);
+    }
+    for (const file of wanted) {
+      if (polled.has(file)) continue;
+      watchFile(file, { interval: POLL_MS }, changed);
+      polled.add(file);
+    }
+    const folders = new Set([...wanted].map((file) => dirname(file)));
+    for (const [folder, watcher] of watchers) {
+      if (folders.has(folder)) continue;
+      watcher.close();
+      watchers.delete(folder);
+    }
+    for (const folder of folders) {
+      if (!watchers.has(folder)) watchFolder(folder);
+    }
+  }
+  function watchFolder(folder: string): void {
+    try {
+      const watcher = watch(folder, (_event, name) => {
+        if (name === null || polled.has(join(folder, name))) changed();
+      });
+      // A folder removed while watched: polling still sees its files come back.
+      watcher.on('error', () => {
+        watcher.close();
+        watchers.delete(folder);
+      });
+      watchers.set(folder, watcher);
+    } catch {
+      // A folder that cannot be watched (missing, no permission) is left to polling.
+    }
+  }
+  follow(last);
   const keepalive = setInterval(() => {
     for (const c of clients) c.write(': keep-alive\n\n');
   }, KEEPALIVE_MS);
@@ -192,8 +221,8 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
   server.on('clientError', (_e, socket) => socket.destroy());
   return new Promise((resolve, reject) => {
     const stop = () => {
-      watcher?.close();
-      unwatchFile(options.file, changed);
+      for (const watcher of watchers.values()) watcher.close();
+      for (const file of polled) unwatchFile(file, changed);
       clearInterval(keepalive);
       clearTimeout(timer);
     };

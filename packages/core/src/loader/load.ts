@@ -11,7 +11,7 @@ import { kebab } from '../model/fields.ts';
 import { Category, Element, Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { issueToDiagnostics, type FieldNamer } from './schema-issues.ts';
 import { validateModel, type Origins } from './validate.ts';
-import { PART_KEYWORD, readParts, type PartReader } from './parts.ts';
+import { PART_KEYWORD, readParts, type PartBytes, type PartReader } from './parts.ts';
 
 /** A top-level `part` statement somewhere in the text (a cheap test; the parser decides). */
 const NAMES_A_PART = new RegExp(`^${PART_KEYWORD}\\b`, 'm');
@@ -112,6 +112,25 @@ function salvage(raw: unknown, brokenTags: Set<string>): { model: Model; origins
 function isMissing(issue: z.core.$ZodIssue): boolean {
   if (issue.code === 'invalid_type') return (issue as { input?: unknown }).input === undefined;
   return issue.code === 'invalid_union' && !!(issue as { discriminator?: string }).discriminator;
+}
+
+/**
+ * The part files a .bulk model names, directly or through other parts, each as `read` gave it, keyed by
+ * the path a load of the same file passes to its `readPart`. It parses but builds nothing, so a server
+ * can learn cheaply which files to watch and send with the model.
+ */
+export function partFilesOf(file: string, bytes: Uint8Array, read: PartReader): Map<string, PartBytes> {
+  const got = new Map<string, PartBytes>();
+  const ignored: Diagnostic[] = [];
+  const text = decode(bytes, ignored);
+  if (text === undefined || detectFormat(file, text) !== 'bulk' || !NAMES_A_PART.test(text)) return got;
+  const record: PartReader = (path) => {
+    const part = read(path);
+    got.set(path, part);
+    return part;
+  };
+  readParts(file, parseBulk(text, ignored), record, decode, ignored);
+  return got;
 }
 
 export function loadModelText(file: string, bytes: Uint8Array | string, options: LoadOptions = {}): LoadResult {

@@ -97,7 +97,7 @@ export function readParts(file: string, parsed: ParsedFile, read: PartReader | u
       }
       if (!read) {
         diagnostics.push(error('BH123', `the part file \`${target.value}\` cannot be read here`, tokenSpan(target), {
-          help: 'a model split over files is read from disk: open the main file with the command-line tool',
+          help: 'a model split over files is read from disk: run `bulkhead view MAIN.bulk` (or check, report) on the main file',
         }));
         continue;
       }

@@ -23,6 +23,8 @@ export interface ReportInput {
   file: string;
   /** SHA-256 of the model file's bytes, lower-case hex (the caller computes it; core has no Node APIs). */
   sha256: string;
+  /** The part files the model names, in the order first read, each with the SHA-256 of the bytes read. */
+  parts?: { file: string; sha256: string }[];
   toolVersion: string;
   /** YYYY-MM-DD, only when the user asks for it: without it the output is reproducible. */
   date?: string;

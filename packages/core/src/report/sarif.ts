@@ -59,19 +59,27 @@ function rules(doc: ReportDocument): Sarif.ReportingDescriptor[] {
 class ResultBuilder {
   private readonly locator: ModelLocator;
   private readonly uri: string;
+  /** Each part file's place among the run's artifacts (the main file is 0). */
+  private readonly partIndex: Map<string, number>;
 
   constructor(input: ReportInput) {
     this.locator = new ModelLocator(input.model, input.spans);
     this.uri = artifactUri(input.file);
+    this.partIndex = new Map((input.parts ?? []).map((part, i) => [part.file, i + 1]));
+  }
+
+  private artifactLocation(span: Span | undefined): Sarif.ArtifactLocation {
+    if (span?.file === undefined) return { uri: this.uri, index: 0 };
+    const index = this.partIndex.get(span.file);
+    return { uri: artifactUri(span.file), ...(index !== undefined ? { index } : {}) };
   }
 
   location(span: Span | undefined, message?: string, id?: number): Sarif.Location {
     return {
       ...(id !== undefined ? { id } : {}),
-      // A span in a part file of a multi-file model points at that file (not listed among the artifacts,
-      // whose one entry is the main file the report hashes).
+      // A span in a part file of a multi-file model points at that file, listed among the artifacts.
       physicalLocation: {
-        artifactLocation: span?.file === undefined ? { uri: this.uri, index: 0 } : { uri: artifactUri(span.file) },
+        artifactLocation: this.artifactLocation(span),
         ...(span ? { region: region(span) } : {}),
       },
       ...(message ? { message: { text: message } } : {}),
@@ -189,7 +197,10 @@ export function renderSarif(doc: ReportDocument, input: ReportInput): string {
             ...(overrides.length ? { ruleConfigurationOverrides: overrides } : {}),
           },
         ],
-        artifacts: [{ location: { uri: artifactUri(doc.model.file) }, hashes: { 'sha-256': doc.model.sha256 } }],
+        artifacts: [
+          { location: { uri: artifactUri(doc.model.file) }, hashes: { 'sha-256': doc.model.sha256 } },
+          ...(input.parts ?? []).map((part) => ({ location: { uri: artifactUri(part.file) }, hashes: { 'sha-256': part.sha256 } })),
+        ],
         columnKind: 'utf16CodeUnits',
         results: doc.findings.map((f) => builder.result(f, ruleIds.indexOf(f.rule))),
         properties: {
