@@ -3,7 +3,7 @@
 import { parse as parseCsv } from 'csv-parse/sync';
 import { parse as parseHtml, type HTMLElement } from 'node-html-parser';
 import { expect } from 'vitest';
-import { CSV_COLUMNS, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula, type ReportDocument } from '../../packages/core/src/report/index.ts';
+import { CSV_COLUMNS, csvFigure, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula, type ReportDocument } from '../../packages/core/src/report/index.ts';
 import { sarifValidator } from './sarif-schema.ts';
 
 const validateSarif = sarifValidator();
@@ -67,15 +67,15 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
           scenario: s.id,
           scenario_title: guardFormula(s.title ?? ''),
           category: s.category,
-          tolerable_per_year: String(s.tolerable),
+          tolerable_per_year: csvFigure(s.tolerable),
           cause: guardFormula(s.cause.label),
-          cause_frequency_per_year: String(s.cause.frequency.value),
+          cause_frequency_per_year: csvFigure(s.cause.frequency.value),
           layer: l.function,
           layer_kind: l.kind,
           layer_title: guardFormula(l.title ?? ''),
-          claimed_pfd: String(l.claimedPfd.value),
+          claimed_pfd: csvFigure(l.claimedPfd.value),
           claimed_pfd_origin: l.claimedPfd.origin,
-          allowed_pfd: String(l.allowedPfd),
+          allowed_pfd: csvFigure(l.allowedPfd),
           verdict: l.verdict,
           credited_after_independence: yes(l.credited),
           credited_if_accepted: yes(l.creditedIfAccepted),
@@ -91,7 +91,7 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
           // The two derived columns are checked against the findings themselves below.
           element_worst_severity: '',
           element_findings_accepted: '',
-          mitigated_after_per_year: String(s.lopa[1]!.mitigated),
+          mitigated_after_per_year: csvFigure(s.lopa[1]!.mitigated),
           meets_after: yes(s.lopa[1]!.meets),
           required_sil: s.sif ? String(s.sif.sil) : '',
         });

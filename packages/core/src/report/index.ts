@@ -65,7 +65,7 @@ export {
   type ReportFinding,
   type ScenarioReport,
 } from './document.ts';
-export { CSV_COLUMNS, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula } from './csv.ts';
+export { CSV_COLUMNS, CSV_SIGNIFICANT_FIGURES, LIST_SEPARATOR, PATH_SEPARATOR, csvFigure, guardFormula } from './csv.ts';
 export { SARIF_LEVELS, FINGERPRINT } from './sarif.ts';
 export { escapeHtml } from './html.ts';
 export { escapeMarkdown } from './markdown.ts';
