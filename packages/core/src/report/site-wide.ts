@@ -9,7 +9,8 @@ import { csvFigure, guardFormula } from './csv.ts';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
-function countByOrder(s: ScenarioCutSets): string {
+/** "0 single points, 83 pairs": one count per order up to the largest asked (text and the evidence list). */
+export function countByOrder(s: Pick<ScenarioCutSets, 'maxOrder' | 'cutSets'>): string {
   const counts: string[] = [];
   for (let order = 1; order <= Math.min(s.maxOrder, 9); order++) {
     const n = s.cutSets.filter((c) => c.elements.length === order).length;
