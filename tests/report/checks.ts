@@ -218,6 +218,10 @@ export function checkSiteWideHtml(root: HTMLElement, doc: ReportDocument): void 
       cellsOf(t).flatMap((row) => {
         const partners = row[2]!.text.split(', ');
         expect(row[3]!.text).toBe(String(partners.length));
+        // The shared member's path from each side, as the JSON report gives them.
+        const member = row[0]!.text;
+        const paths = s.cutSets.find((c) => c.elements.includes(member))!.paths.filter((p) => p.element === member);
+        expect(row[1]!.text).toBe(paths.map((p) => `${p.party === 'cause' ? 'cause' : 'layer'} ${p.path.join(' -> ')}`).join('; '));
         return partners.map((p) => [row[0]!.text, ...p.split(' + ')].sort().join(' + '));
       }),
     );

@@ -64,7 +64,8 @@ function groupRow(group: SetGroup, findings: ReadonlyMap<string, ReportFinding>)
   const about = [...new Set(group.sets.flatMap((c) => c.findings))].filter((k) => findings.get(k)?.element === group.element);
   return [
     [code(group.element)],
-    paths.flatMap((p, i) => [...(i > 0 ? ['; '] : []), p.party === 'cause' ? 'cause: ' : `${p.party}: `, ...pathText(p.path)]),
+    // Each path starts at the side's function (the cause's loop, or the layer itself), as `bulkhead cut-sets` prints it.
+    paths.flatMap((p, i) => [...(i > 0 ? ['; '] : []), p.party === 'cause' ? 'cause ' : 'layer ', ...pathText(p.path)]),
     partners,
     [String(group.sets.length)],
     about.length ? codeList(about) : ['none'],
