@@ -3,7 +3,7 @@
 import { parse as parseCsv } from 'csv-parse/sync';
 import { parse as parseHtml, type HTMLElement } from 'node-html-parser';
 import { expect } from 'vitest';
-import { CSV_COLUMNS, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula, type ReportDocument } from '../../packages/core/src/report/index.ts';
+import { CSV_COLUMNS, csvFigure, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula, type ReportDocument } from '../../packages/core/src/report/index.ts';
 import { sarifValidator } from './sarif-schema.ts';
 
 const validateSarif = sarifValidator();
@@ -67,15 +67,15 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
           scenario: s.id,
           scenario_title: guardFormula(s.title ?? ''),
           category: s.category,
-          tolerable_per_year: String(s.tolerable),
+          tolerable_per_year: csvFigure(s.tolerable),
           cause: guardFormula(s.cause.label),
-          cause_frequency_per_year: String(s.cause.frequency.value),
+          cause_frequency_per_year: csvFigure(s.cause.frequency.value),
           layer: l.function,
           layer_kind: l.kind,
           layer_title: guardFormula(l.title ?? ''),
-          claimed_pfd: String(l.claimedPfd.value),
+          claimed_pfd: csvFigure(l.claimedPfd.value),
           claimed_pfd_origin: l.claimedPfd.origin,
-          allowed_pfd: String(l.allowedPfd),
+          allowed_pfd: csvFigure(l.allowedPfd),
           verdict: l.verdict,
           credited_after_independence: yes(l.credited),
           credited_if_accepted: yes(l.creditedIfAccepted),
@@ -91,7 +91,7 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
           // The two derived columns are checked against the findings themselves below.
           element_worst_severity: '',
           element_findings_accepted: '',
-          mitigated_after_per_year: String(s.lopa[1]!.mitigated),
+          mitigated_after_per_year: csvFigure(s.lopa[1]!.mitigated),
           meets_after: yes(s.lopa[1]!.meets),
           required_sil: s.sif ? String(s.sif.sil) : '',
         });
@@ -162,4 +162,70 @@ export function checkSarif(text: string, doc: ReportDocument): SarifLog {
     else expect(r.suppressions).toBeUndefined();
   });
   return log;
+}
+
+const cellsOf = (table: HTMLElement) => table.querySelectorAll('tbody tr').map((tr) => tr.querySelectorAll('th, td'));
+const tableCaptioned = (root: HTMLElement, start: string) => root.querySelectorAll('table').filter((t) => t.querySelector('caption')?.text.startsWith(start));
+
+/**
+ * The site-wide section and each scenario's cut sets, read back from the HTML and compared with the JSON
+ * report: the counts per scenario, every single point with its paths, every larger set exactly once in its
+ * grouped table, and the ranking row by row in rank order (figures printed to two significant figures).
+ */
+export function checkSiteWideHtml(root: HTMLElement, doc: ReportDocument): void {
+  const site = root.querySelector('section#site-wide');
+  if (!doc.cutSets || !doc.commonCauses) {
+    expect(site).toBeNull();
+    return;
+  }
+  expect(site, 'the site-wide section').not.toBeNull();
+  const counts = cellsOf(tableCaptioned(site!, 'Minimal cut sets per scenario')[0]!);
+  expect(counts.map((row) => row.slice(0, 2 + doc.cutSets!.maxOrder).map((c) => c.text))).toEqual(
+    doc.cutSets.scenarios.map((s) => [
+      s.scenario,
+      s.layers.length ? s.layers.join(', ') : 'none',
+      ...Array.from({ length: s.maxOrder }, (_, i) => (s.noStartingElement ? '-' : String(s.cutSets.filter((c) => c.elements.length === i + 1).length))),
+    ]),
+  );
+
+  const ranking = cellsOf(tableCaptioned(site!, 'Common-cause ranking')[0]!);
+  expect(ranking.map((row) => [row[0]!.text, row[1]!.text, row[3]!.text, row[4]!.text, row[5]!.text])).toEqual(
+    doc.commonCauses.elements.map((r) => [String(r.rank), r.element, String(r.layers), r.scenarios.length ? r.scenarios.join(', ') : 'none', `${r.openFindings} of ${r.findings}`]),
+  );
+  const perYear = (text: string) => Number(/^([\d.e-]+) \/yr$/.exec(text)![1]);
+  ranking.forEach((row, i) => {
+    const r = doc.commonCauses!.elements[i]!;
+    for (const [cell, full] of [[row[6]!, r.frequencyCost], [row[7]!, r.gapReduction], [row[8]!, r.frequencyAtStake]] as const) {
+      expect(Math.abs(perYear(cell.text) - full)).toBeLessThanOrEqual(Math.abs(full) * 0.05);
+    }
+  });
+  expect(site!.text).toContain(doc.commonCauses.order);
+  expect(site!.text).toContain(doc.cutSets.method);
+
+  for (const s of doc.cutSets.scenarios) {
+    const section = root.querySelector(`section#scenario-${s.scenario}`)!;
+    const singles = section.querySelectorAll('li').filter((li) => li.text.startsWith('Single point of failure:'));
+    expect(singles.map((li) => li.querySelector('code')!.text)).toEqual(s.cutSets.filter((c) => c.elements.length === 1).map((c) => c.elements[0]));
+    for (const c of s.cutSets.filter((x) => x.elements.length === 1)) {
+      const items = singles.find((li) => li.querySelector('code')!.text === c.elements[0])!.parentNode!.querySelectorAll('li').map((li) => li.text);
+      for (const p of c.paths) expect(items).toContain(`${p.party === 'cause' ? 'From the cause' : `From layer ${p.party}`}: ${p.path.join(' -> ')}`);
+      if (c.findings.length) expect(items).toContain(`Findings about it: ${c.findings.join(', ')}`);
+    }
+    const grouped = tableCaptioned(section, `Cut sets of ${s.scenario} with more than one element`);
+    const larger = s.cutSets.filter((c) => c.elements.length > 1).map((c) => c.elements.join(' + '));
+    expect(grouped).toHaveLength(larger.length ? 1 : 0);
+    const shown = grouped.flatMap((t) =>
+      cellsOf(t).flatMap((row) => {
+        const partners = row[2]!.text.split(', ');
+        expect(row[3]!.text).toBe(String(partners.length));
+        // The shared member's path from each side, as the JSON report gives them.
+        const member = row[0]!.text;
+        const paths = s.cutSets.find((c) => c.elements.includes(member))!.paths.filter((p) => p.element === member);
+        expect(row[1]!.text).toBe(paths.map((p) => `${p.party === 'cause' ? 'cause' : 'layer'} ${p.path.join(' -> ')}`).join('; '));
+        return partners.map((p) => [row[0]!.text, ...p.split(' + ')].sort().join(' + '));
+      }),
+    );
+    // Every set exactly once: nothing lost, nothing repeated, nothing invented.
+    expect([...shown].sort()).toEqual([...larger].map((set) => set.split(' + ').sort().join(' + ')).sort());
+  }
 }

@@ -3,7 +3,7 @@
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { buildReportDocument, renderReport, REPORT_FORMATS, ReportDocument, type ReportFormat } from '@bulkhead/core';
-import { checkCsvAgainstJson, checkHtml, checkSarif } from './checks.ts';
+import { checkCsvAgainstJson, checkHtml, checkSarif, checkSiteWideHtml } from './checks.ts';
 import { DEMO, DEMO_REV_B, GOLDEN_DIR, demoInput, readDemo, reorderStatements } from './demo.ts';
 
 const CASES: { name: string; file: string; formats: readonly ReportFormat[] }[] = [
@@ -52,6 +52,19 @@ describe('demo reports, checked as a reader would', () => {
   it('HTML has one section per scenario with headed tables', () => {
     const root = checkHtml(renderReport(input, 'html'), doc);
     expect(root.querySelectorAll('section.scenario').map((s) => s.id)).toEqual(['scenario-S-101', 'scenario-S-102', 'scenario-S-103', 'scenario-S-104']);
+  });
+
+  it('HTML shows the minimal cut sets and the common-cause ranking of the JSON report', () => {
+    const root = checkHtml(renderReport(input, 'html'), doc);
+    checkSiteWideHtml(root, doc);
+    // Worked by hand from the demo model and `bulkhead cut-sets`: S-101 has no single point and 83 pairs. What
+    // the cause shares with SIF-101 (bridle BR-101, its nozzles N-101A and N-101B, junction box JB-101) pairs
+    // with each of the 12 elements that defeat LAH-101; what it shares with LAH-101 (AI-1-03, BPCS-C1, CAB-1,
+    // CKT-11, UPS-1) pairs with the 7 SIF-101 elements not already counted: 4 x 12 + 5 x 7 = 83.
+    const rows = root.querySelectorAll('section#scenario-S-101 table').find((t) => t.querySelector('caption')!.text.startsWith('Cut sets of S-101'))!.querySelectorAll('tbody tr');
+    expect(rows.map((tr) => `${tr.querySelector('th')!.text}:${tr.querySelectorAll('td')[2]!.text}`)).toEqual([
+      'BR-101:12', 'JB-101:12', 'N-101A:12', 'N-101B:12', 'AI-1-03:7', 'BPCS-C1:7', 'CAB-1:7', 'CKT-11:7', 'UPS-1:7',
+    ]);
   });
 
   it('CSV parses back into the JSON report', () => {

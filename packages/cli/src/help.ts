@@ -51,6 +51,8 @@ at process equipment. For a function it also lists each voting channel and any p
 Analyses FILE and writes the evidence list: for every scenario the cause and its elements, each claimed
 layer with what it relies on and its verdict, the LOPA before and after independence and the required SIL,
 then every function's trace and every finding. Accepted findings stay in the report, marked accepted.
+In md, html and json it also shows the minimal cut sets up to order 2 (single points of failure first)
+and the common-cause ranking, as \`bulkhead cut-sets\` and \`bulkhead common-causes\` give them.
 
   --format     md (Markdown), html (one self-contained page, printable), csv (one row per scenario,
                layer and element), json (versioned; schema from --json-schema), sarif (SARIF 2.1.0)

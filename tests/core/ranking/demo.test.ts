@@ -39,7 +39,9 @@ describe('common-cause ranking of demo revision A', () => {
     expect(RANKING_ORDER).toMatch(/^Ranked by the mitigated frequency the element alone costs/);
     const rows = renderCommonCausesCsv(ranking).trimEnd().split('\r\n');
     expect(rows).toHaveLength(ranking.length + 1);
-    expect(rows[1]).toMatch(/^1,TW-302,tapping,"Thermowell, SIS",1,1,S-103,1,1,0\.009/);
-    expect(rows[2]).toMatch(/^2,LT-102,transmitter,,2,1,S-101,1,1,0,0\.04997/);
+    // Figures to six significant figures (csvFigure): 0.1 x 0.1 - 0.1 x 0.1 x 0.1 = 0.009 by hand, with no binary noise.
+    expect(rows[1]).toBe('1,TW-302,tapping,"Thermowell, SIS",1,1,S-103,1,1,0.009,0.009,0.009,');
+    // 0.05 - 0.05 x 0.005 x 0.1 = 0.049975 by hand.
+    expect(rows[2]).toBe('2,LT-102,transmitter,,2,1,S-101,1,1,0,0.049975,0,');
   });
 });

@@ -6,7 +6,7 @@ import { stringify } from 'csv-stringify/browser/esm/sync';
 import { analyze } from '../analysis/analyze.ts';
 import type { Model } from '../model/schema.ts';
 import type { ReportDocument, ReportFinding } from './document.ts';
-import { guardFormula, LIST_SEPARATOR } from './csv.ts';
+import { csvFigure, guardFormula, LIST_SEPARATOR } from './csv.ts';
 import { compareTags, SEVERITY_RANK } from './order.ts';
 
 export interface Action {
@@ -115,7 +115,7 @@ export const ACTION_COLUMNS = [
 
 /** RFC 4180 like the other CSV report: one row per action; owner, due date and status left blank to fill. */
 export function renderActionsCsv(actions: readonly Action[]): string {
-  const figures = (a: Action, pick: 'now' | 'closed' | 'layersCleared') => (a.worth ?? []).map((w) => `${w.scenario}=${w[pick]}`).join(LIST_SEPARATOR);
+  const figures = (a: Action, pick: 'now' | 'closed' | 'layersCleared') => (a.worth ?? []).map((w) => `${w.scenario}=${csvFigure(w[pick])}`).join(LIST_SEPARATOR);
   const records = actions.map((a) => ({
     action: a.id,
     severity: a.severity,

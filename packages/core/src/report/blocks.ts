@@ -28,8 +28,8 @@ export type Block =
   | { type: 'list'; items: Rich[] }
   | { type: 'caution'; title: string; items: Rich[] }
   | Table
-  /** A unit that starts a new page when printed: one scenario, or an appendix. */
-  | { type: 'section'; kind: 'scenario' | 'appendix' | 'front'; id: string; blocks: Block[] };
+  /** A unit that starts a new page when printed: one scenario, the site-wide picture, or an appendix. */
+  | { type: 'section'; kind: 'scenario' | 'site-wide' | 'appendix' | 'front'; id: string; blocks: Block[] };
 
 export const code = (text: string): Inline => ({ code: text });
 export const strong = (text: string): Inline => ({ strong: text });

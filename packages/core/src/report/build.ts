@@ -253,8 +253,8 @@ function findingReport(f: Finding): ReportDocument['findings'][number] {
 }
 
 /**
- * `siteWide` adds the minimal cut sets and the common-cause ranking (the JSON report carries them); the
- * other formats do not show them, so they skip the work.
+ * `siteWide` adds the minimal cut sets and the common-cause ranking (the evidence list in JSON, Markdown
+ * and HTML shows them); the other formats and contents do not, so they skip the work.
  */
 function siteWide({ model, analysis }: ReportInput): Pick<ReportDocument, 'cutSets' | 'commonCauses'> {
   return {

@@ -51,6 +51,18 @@ export function guardFormula(text: string): string {
   return /^[=+\-@\t\r]/.test(text) ? `'${text}` : text;
 }
 
+/** Significant figures a CSV figure keeps: enough for any engineering figure, none of the binary noise. */
+export const CSV_SIGNIFICANT_FIGURES = 6;
+
+/**
+ * A figure for a CSV cell, rounded to CSV_SIGNIFICANT_FIGURES so 0.1 x 0.1 prints 0.01, not
+ * 0.010000000000000002; trailing zeros dropped, and exponent form where JavaScript uses it (1e-7), which
+ * spreadsheets read as a number. The JSON report keeps every figure in full.
+ */
+export function csvFigure(value: number): string {
+  return Number.isFinite(value) ? String(Number(value.toPrecision(CSV_SIGNIFICANT_FIGURES))) : String(value);
+}
+
 const yesNo = (value: boolean) => (value ? 'yes' : 'no');
 const SEVERITY_ORDER = ['voids-credit', 'needs-justification', 'note'] as const;
 
@@ -62,21 +74,21 @@ function rowsOf(byKey: Findings, s: ScenarioReport, layer: LayerReport): Record<
     scenario: s.id,
     scenario_title: guardFormula(s.title ?? ''),
     category: s.category,
-    tolerable_per_year: String(s.tolerable),
+    tolerable_per_year: csvFigure(s.tolerable),
     cause: guardFormula(s.cause.label),
-    cause_frequency_per_year: String(s.cause.frequency.value),
+    cause_frequency_per_year: csvFigure(s.cause.frequency.value),
     layer: layer.function,
     layer_kind: layer.kind,
     layer_title: guardFormula(layer.title ?? ''),
-    claimed_pfd: String(layer.claimedPfd.value),
+    claimed_pfd: csvFigure(layer.claimedPfd.value),
     claimed_pfd_origin: layer.claimedPfd.origin,
-    allowed_pfd: String(layer.allowedPfd),
+    allowed_pfd: csvFigure(layer.allowedPfd),
     verdict: layer.verdict,
     credited_after_independence: yesNo(layer.credited),
     credited_if_accepted: yesNo(layer.creditedIfAccepted),
     layer_missing: layer.missing.join(LIST_SEPARATOR),
     layer_findings: layer.findings.join(LIST_SEPARATOR),
-    mitigated_after_per_year: String(s.lopa[1]!.mitigated),
+    mitigated_after_per_year: csvFigure(s.lopa[1]!.mitigated),
     meets_after: yesNo(s.lopa[1]!.meets),
     required_sil: s.sif ? String(s.sif.sil) : '',
   };

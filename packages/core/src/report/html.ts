@@ -36,7 +36,7 @@ table.worksheet td, table.worksheet th { font-size: .85em; }
 @media print {
   body { max-width: none; padding: 0; font-size: 10.5pt; }
   @page { margin: 14mm 12mm; }
-  section.scenario, section.appendix { break-before: page; }
+  section.scenario, section.site-wide, section.appendix { break-before: page; }
   h2, h3, h4, caption { break-after: avoid; }
   thead { display: table-header-group; }
   tr { break-inside: avoid; }

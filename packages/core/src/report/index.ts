@@ -22,6 +22,9 @@ export const FORMATS_OF: Record<ReportContents, readonly ReportFormat[]> = {
   actions: ['csv'],
 };
 
+/** The evidence-list formats that show the minimal cut sets and the common-cause ranking. */
+const SITE_WIDE_FORMATS: readonly ReportFormat[] = ['json', 'md', 'html'];
+
 export function isReportFormat(word: string): word is ReportFormat {
   return (REPORT_FORMATS as readonly string[]).includes(word);
 }
@@ -33,8 +36,8 @@ export function isReportContents(word: string): word is ReportContents {
 /** Renders one report. The same input gives byte-identical output: nothing here reads a clock or a locale. */
 export function renderReport(input: ReportInput, format: ReportFormat, contents: ReportContents = 'evidence'): string {
   if (!FORMATS_OF[contents].includes(format)) throw new Error(`the ${contents} report has no ${format} format`);
-  // Cut sets and the ranking cost more than the analysis; only the JSON evidence list carries them.
-  const doc = buildReportDocument(input, { siteWide: format === 'json' && contents === 'evidence' });
+  // Cut sets and the ranking cost more than the analysis; only the evidence list in JSON, Markdown and HTML shows them.
+  const doc = buildReportDocument(input, { siteWide: contents === 'evidence' && SITE_WIDE_FORMATS.includes(format) });
   const footer = runningFooter(doc);
   if (contents === 'worksheet') {
     if (format === 'csv') return renderWorksheetCsv(doc);
@@ -65,7 +68,7 @@ export {
   type ReportFinding,
   type ScenarioReport,
 } from './document.ts';
-export { CSV_COLUMNS, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula } from './csv.ts';
+export { CSV_COLUMNS, CSV_SIGNIFICANT_FIGURES, LIST_SEPARATOR, PATH_SEPARATOR, csvFigure, guardFormula } from './csv.ts';
 export { SARIF_LEVELS, FINGERPRINT } from './sarif.ts';
 export { escapeHtml } from './html.ts';
 export { escapeMarkdown } from './markdown.ts';

@@ -2,6 +2,8 @@
 // scenario (cause, layers with their traced elements and verdicts, LOPA lines), then the appendices.
 import { justifiedKeyOf } from '../justify/apply.ts';
 import { alikeDevices } from './alike.ts';
+import { compareTags } from './order.ts';
+import { scenarioCutSetBlocks, siteWideSection } from './site-wide-layout.ts';
 import { studyText } from './worksheet.ts';
 import { assumptionsBlocks, issueBlock, referencesOf, signOff, sourcesAppendix } from './control-layout.ts';
 import type { LayerReport, ReportDocument, ReportFinding, ScenarioReport } from './document.ts';
@@ -216,7 +218,8 @@ function actsText(s: ScenarioReport, l: ScenarioReport['layers'][number]): strin
   return `${acts} (${l.actsStated ? 'stated' : 'default'})${pfh}`;
 }
 
-function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): Block {
+/** `cutSets`: the scenario's minimal cut sets, laid out by site-wide-layout.ts, placed after its LOPA. */
+function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>, cutSets: readonly Block[]): Block {
   const blocks: Block[] = [
     { type: 'heading', level: 2, text: [`Scenario `, code(s.id), s.title ? `: ${s.title}` : ''] },
     { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
@@ -297,6 +300,7 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>): 
       items: s.alternatives.map((a) => ['Alternative credit set: ', ...(a.layers.length ? codeList(a.layers) : ['none']), `, PFD product ${formatProbability(a.pfdProduct)}${a.mitigated !== undefined ? `, mitigated ${formatFrequency(a.mitigated)}` : ''}`]),
     });
   }
+  blocks.push(...cutSets);
   return { type: 'section', kind: 'scenario', id: anchorOf('scenario', s.id), blocks };
 }
 
@@ -357,7 +361,8 @@ export function layoutReport(doc: ReportDocument): Block[] {
   const findings = doc.findings.map((f) => byKey.get(f.key)!);
   return [
     { type: 'section', kind: 'front', id: 'front', blocks: [...header(doc), ...summary(doc), ...ruleSet(doc)] },
-    ...doc.scenarios.map((s) => scenarioSection(s, byKey)),
+    ...siteWideSection(doc),
+    ...doc.scenarios.map((s) => scenarioSection(s, byKey, scenarioCutSetBlocks(doc, s.id, byKey, compareTags))),
     ...appendices({ ...doc, findings }),
     sourcesAppendix(doc),
   ];

@@ -5,11 +5,12 @@ import { ASSESSMENT_CAUTION, formatFrequency } from '../assess/index.ts';
 import type { ScenarioCutSets } from '../cutsets/index.ts';
 import type { Model } from '../model/schema.ts';
 import { RANKING_ORDER, type RankedCommonCause } from '../ranking/index.ts';
-import { guardFormula } from './csv.ts';
+import { csvFigure, guardFormula } from './csv.ts';
 
 const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
-function countByOrder(s: ScenarioCutSets): string {
+/** "0 single points, 83 pairs": one count per order up to the largest asked (text and the evidence list). */
+export function countByOrder(s: Pick<ScenarioCutSets, 'maxOrder' | 'cutSets'>): string {
   const counts: string[] = [];
   for (let order = 1; order <= Math.min(s.maxOrder, 9); order++) {
     const n = s.cutSets.filter((c) => c.elements.length === order).length;
@@ -106,9 +107,9 @@ export function renderCommonCausesCsv(ranking: readonly RankedCommonCause[]): st
     guardFormula(r.scenarios.join(' ')),
     r.findings,
     r.openFindings,
-    r.frequencyCost,
-    r.frequencyAtStake,
-    r.gapReduction,
+    csvFigure(r.frequencyCost),
+    csvFigure(r.frequencyAtStake),
+    csvFigure(r.gapReduction),
     guardFormula(r.wouldMeet.join(' ')),
   ]);
   return stringify([[...COMMON_CAUSE_CSV_COLUMNS], ...rows], { record_delimiter: '\r\n' });

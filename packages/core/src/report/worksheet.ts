@@ -7,7 +7,7 @@ import type { Block } from './blocks.ts';
 import { issueBlock, signOff } from './control-layout.ts';
 import { decidingReasons, decidingText } from './deciding.ts';
 import { stringify } from 'csv-stringify/browser/esm/sync';
-import { guardFormula } from './csv.ts';
+import { csvFigure, guardFormula } from './csv.ts';
 import { formatFrequency, formatProbability, formatRatio, gapText } from './text.ts';
 
 export const WORKSHEET_COLUMNS = [
@@ -38,7 +38,7 @@ export const WORKSHEET_COLUMNS = [
 ] as const;
 
 export type WorksheetColumn = (typeof WORKSHEET_COLUMNS)[number];
-/** Numbers stay numbers so the CSV keeps full precision and the text formats round them one way. */
+/** Numbers stay numbers so each format rounds them its own one way (text to two, CSV to six significant figures). */
 export type WorksheetRow = Record<WorksheetColumn, string | number | undefined>;
 
 /** "study HS-100 rev 2, node 3, deviation high level, recommendations R-12 R-14". */
@@ -176,10 +176,10 @@ export function layoutWorksheet(doc: ReportDocument): Block[] {
   ];
 }
 
-/** RFC 4180, CRLF, one row per scenario and layer, numbers in full precision. */
+/** RFC 4180, CRLF, one row per scenario and layer, figures to six significant figures (csvFigure). */
 export function renderWorksheetCsv(doc: ReportDocument): string {
   const records = worksheetRows(doc).map((row) =>
-    Object.fromEntries(WORKSHEET_COLUMNS.map((c) => [c, row[c] === undefined ? '' : typeof row[c] === 'number' ? String(row[c]) : guardFormula(String(row[c]))])),
+    Object.fromEntries(WORKSHEET_COLUMNS.map((c) => [c, row[c] === undefined ? '' : typeof row[c] === 'number' ? csvFigure(row[c]) : guardFormula(String(row[c]))])),
   );
   return stringify(records, { header: true, columns: [...WORKSHEET_COLUMNS], record_delimiter: '\r\n', quoted_match: /^\s|\s$/ });
 }
