@@ -3,7 +3,7 @@
 import type { Details } from './details.ts';
 import type { AnalysisReply, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import type { WhatIf } from './what-if.ts';
-import type { FocusView, TagMatch } from './site-view.ts';
+import type { FocusView, RankingView, TagMatch } from './site-view.ts';
 import { WorkerRequests } from './worker-requests.ts';
 
 export class AnalysisClient {
@@ -31,6 +31,11 @@ export class AnalysisClient {
   /** Analyses the file's model as the what-if changes it (none: back to the file's own). */
   whatIf(question: WhatIf): Promise<WhatIfOutcome> {
     return this.requests.send({ whatIf: question }, (r) => ('whatIf' in r ? { value: r.whatIf } : undefined), { channel: 'what-if' });
+  }
+
+  /** The top of the site-wide common-cause ranking of what the page shows (the file, or its what-if). */
+  ranking(): Promise<RankingView> {
+    return this.requests.send({ ranking: true }, (r) => ('ranking' in r ? { value: r.ranking } : undefined), { channel: 'ranking' });
   }
 
   terminate(): void {

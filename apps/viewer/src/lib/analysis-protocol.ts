@@ -3,7 +3,7 @@
 import type { Diagnostic, LoadResult } from '@bulkhead/core';
 import type { Details } from './details.ts';
 import type { WhatIf } from './what-if.ts';
-import type { FocusView, SiteSummary, TagMatch } from './site-view.ts';
+import type { FocusView, RankingView, SiteSummary, TagMatch } from './site-view.ts';
 
 export type AnalysisRequest =
   | { id: number; load: { fileName: string; bytes: Uint8Array } }
@@ -11,7 +11,8 @@ export type AnalysisRequest =
   | { id: number; focus: string | null }
   | { id: number; details: string }
   | { id: number; search: string }
-  | { id: number; whatIf: WhatIf };
+  | { id: number; whatIf: WhatIf }
+  | { id: number; ranking: true };
 
 /** A load attempt: its diagnostics, and when the model loaded and analysed, the site's summary. */
 export interface LoadOutcome {
@@ -37,4 +38,5 @@ export type AnalysisReply =
   | { id: number; details: Details | undefined }
   | { id: number; matches: TagMatch[] }
   | { id: number; whatIf: WhatIfOutcome }
+  | { id: number; ranking: RankingView }
   | { id: number; error: string };

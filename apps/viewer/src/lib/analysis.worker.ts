@@ -3,7 +3,7 @@
 // assessment, findings) and for the details of one tag; it reports its progress stage by stage.
 import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
 import { detailsOf } from './details.ts';
-import { focusView, searchTags, summariseSite } from './site-view.ts';
+import { focusView, rankingView, searchTags, summariseSite, type RankingView } from './site-view.ts';
 import type { AnalysisReply, AnalysisRequest, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import { applyWhatIf, isWhatIf, statementsToPaste, type WhatIf } from './what-if.ts';
 import { isoDate } from './sheet.ts';
@@ -12,6 +12,14 @@ import { isoDate } from './sheet.ts';
 let fromFile: { model: Model; analysis: Analysis } | undefined;
 /** What the page is shown: the file's model, or a what-if made from it (never written anywhere). */
 let current: { model: Model; analysis: Analysis } | undefined;
+/** The ranking of `current`, worked out the first time the matrix asks (it assesses scenarios again). */
+let ranked: { of: typeof current; view: RankingView } | undefined;
+
+function ranking(): RankingView {
+  if (!current) throw new Error('no model is loaded');
+  if (ranked?.of !== current) ranked = { of: current, view: rankingView(current.model, current.analysis) };
+  return ranked.view;
+}
 
 function whatIf(question: WhatIf): WhatIfOutcome {
   if (!fromFile) throw new Error('no model is loaded');
@@ -58,6 +66,8 @@ self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
     } else if ('search' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, matches: searchTags(current.model, current.analysis, request.search) });
+    } else if ('ranking' in request) {
+      reply({ id: request.id, ranking: ranking() });
     } else if ('details' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, details: detailsOf(current.model, current.analysis, request.details) });
