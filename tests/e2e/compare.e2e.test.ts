@@ -16,6 +16,8 @@ const BIN = join(ROOT, 'packages/cli/bin/bulkhead.js');
 
 interface CliFindingRef {
   key: string;
+  scenario?: string;
+  element?: string;
 }
 interface CliDiff {
   verdicts: { scenario: string; change: string }[];
@@ -72,6 +74,27 @@ describe('comparing two revisions in the viewer', () => {
     for (const words of ['▲ worse', '▼ better', '+ new scenario', '− scenario gone', '+ new finding', '− finding gone']) expect(legend).toContain(words);
     expect(await seriousViolations(page)).toEqual([]);
     copyTo(await screenshot(page, 'compare'), join(ROOT, 'docs/viewer-compare.png'));
+  });
+
+  it("marks on the graph each element of the scenario whose findings changed, and keys the marks in the legend", async () => {
+    await page.click('[data-testid=mode-graph]');
+    await page.waitForSelector('svg[data-testid=graph][data-scenario="S-101"] g.box');
+    // The worst news shows when an element has several: worse, then new, then better, then gone.
+    const byElement = new Map<string, string>();
+    const changed = [...truth.severityChanged, ...truth.acceptanceChanged].map((c) => c.new);
+    for (const [change, refs] of [['new', truth.appeared], ['gone', truth.disappeared]] as const) for (const f of refs) if (f.scenario === 'S-101' && f.element) byElement.set(f.element, change);
+    // A changed finding's direction is the viewer's own call (severity and acceptance); only its presence is checked here.
+    for (const f of changed) if (f.scenario === 'S-101' && f.element) byElement.set(f.element, 'worse|better');
+    const marked = await page.locator('svg[data-testid=graph] g.box[data-change]').evaluateAll((gs) => gs.map((g) => [g.getAttribute('data-tag')!, g.getAttribute('data-change')!]));
+    expect(marked.length).toBeGreaterThan(0);
+    for (const [tag, change] of marked) expect(byElement.get(tag)?.split('|'), tag).toContain(change);
+    const drawn = new Set(await page.locator('svg[data-testid=graph] g.box').evaluateAll((gs) => gs.map((g) => g.getAttribute('data-tag'))));
+    for (const tag of byElement.keys()) if (drawn.has(tag)) expect(marked.map(([t]) => t), tag).toContain(tag);
+    expect(await page.innerText('[data-testid=graph-compare-key]')).toContain('▲ worse');
+    expect(await seriousViolations(page)).toEqual([]);
+    copyTo(await screenshot(page, 'compare-graph'), join(ROOT, 'docs/viewer-compare-graph.png'));
+    await page.click('[data-testid=mode-matrix]');
+    await page.waitForSelector('[data-testid=compare-summary]');
   });
 
   it('compares again with the same earlier file when the served file is saved', async () => {

@@ -64,3 +64,18 @@ export function compareView(old: { model: Model; analysis: Analysis; fileName: s
     findings: [...diff.appeared.map((f) => ref(f, 'new')), ...diff.disappeared.map((f) => ref(f, 'gone')), ...changed],
   };
 }
+
+/** Which change of a finding shows on its element's box when it has several: the worst news first. */
+const SHOWN_FIRST: FindingChange[] = ['worse', 'new', 'better', 'gone'];
+
+/** The elements of one scenario whose findings changed, each with the change to show on its box. */
+export function changedElements(view: CompareView, scenario: string | undefined): Map<string, { change: FindingChange; mark: string; words: string }> {
+  const shown = new Map<string, { change: FindingChange; mark: string; words: string }>();
+  for (const change of SHOWN_FIRST) {
+    for (const f of view.findings) {
+      if (f.change !== change || f.element === undefined || f.scenario !== scenario || shown.has(f.element)) continue;
+      shown.set(f.element, { change, ...CHANGE_MARKS[change] });
+    }
+  }
+  return shown;
+}
