@@ -5,6 +5,7 @@
 import { mkdirSync, readFileSync, renameSync, rmdirSync, rmSync, writeFileSync } from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
+import { seriousViolations } from './axe.ts';
 import { DEMO, GRAPH_BOX, openLiveDemo, screenshot } from './harness.ts';
 
 describe('the watched file through its life', () => {
@@ -63,6 +64,7 @@ describe('the watched file through its life', () => {
     rmSync(file);
     await showsMissing('missing');
     await screenshot(page, 'file-missing');
+    expect(await seriousViolations(page)).toEqual([]);
     await recovers();
   });
 

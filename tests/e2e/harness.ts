@@ -117,6 +117,8 @@ export interface CliReport {
     sif?: { function?: string; requiredPfd: number; requiredRrf: number; sil: number };
   }[];
   findings: { key: string; scenario?: string; element?: string; severity: string }[];
+  /** The site-wide common-cause ranking, best first. */
+  commonCauses: { order: string; elements: { rank: number; element: string; layers: number; scenarios: string[]; frequencyCost: number; frequencyAtStake: number }[] };
 }
 
 /** The CLI's JSON report for a file, plus the analysis in this process for what the report does not carry. */

@@ -8,6 +8,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ensureGenerated } from '../../bench/generate.ts';
+import { seriousViolations } from './axe.ts';
 import { ARTIFACTS, GRAPH_BOX, launch, startView, watchPage, type ViewProcess } from './harness.ts';
 
 const SIZE = 10_000;
@@ -91,6 +92,8 @@ describe(`a generated ${SIZE}-element site in the viewer`, () => {
     // The overview lists the most severe findings, not every one of the site's hundreds.
     expect(await page.locator('[data-testid=findings] li').count()).toBeLessThanOrEqual(100);
     expect(await page.innerText('[data-testid=findings-shown]')).toMatch(/most severe of \d+/);
+    steps.push(['axe-core on the overview table', await now()]);
+    expect(await seriousViolations(page)).toEqual([]);
   }, 120_000);
 
   it('never holds the main thread for a second or more', async () => {

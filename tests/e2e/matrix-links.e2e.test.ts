@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { seriousViolations } from './axe.ts';
 import { join } from 'node:path';
-import { copyTo, DEMO, type DemoTruth, focusScenario, launch, ROOT, screenshot, startView, truthFor, viewerForTests, type ViewProcess } from './harness.ts';
+import { copyTo, DEMO, sameFigure, type DemoTruth, focusScenario, launch, ROOT, screenshot, startView, truthFor, viewerForTests, type ViewProcess } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 
@@ -17,7 +17,7 @@ describe('the all-scenarios matrix and the tag search', () => {
     page = viewer.page;
   });
 
-  const matrixIds = () => page.locator('[data-testid=matrix] tbody tr').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-scenario')!));
+  const matrixIds = () => page.locator('[data-testid=matrix] tbody tr[data-scenario]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-scenario')!));
 
   it('lists every scenario with its verdict after independence and each layer under its verdict', async () => {
     await page.click('[data-testid=mode-matrix]');
@@ -49,6 +49,38 @@ describe('the all-scenarios matrix and the tag search', () => {
     const withSif201 = truth.model.scenarios.filter((s) => (s.layers ?? []).some((l) => l.function === 'SIF-201')).map((s) => s.id).sort();
     expect((await matrixIds()).sort()).toEqual(withSif201);
     await page.fill('[data-testid=matrix-filter]', '');
+  });
+
+  it('ranks the common causes under the matrix as the CLI report does, each a link to its element', async () => {
+    // The truth is the CLI's JSON report of the same file (`bulkhead report --format json`, commonCauses).
+    const expected = truth.report.commonCauses.elements;
+    expect(expected.length).toBeGreaterThan(1);
+    const ranking = page.locator('[data-testid=ranking]');
+    await ranking.locator('tbody tr').first().waitFor();
+    const rows = ranking.locator('tbody tr');
+    expect(await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-element')))).toEqual(expected.slice(0, 25).map((e) => e.element));
+    for (const e of expected.slice(0, 25)) {
+      const row = ranking.locator(`tr[data-element="${e.element}"]`);
+      expect(await row.locator('[data-cell=rank]').innerText()).toBe(String(e.rank));
+      expect(await row.locator('[data-cell=layers]').innerText()).toBe(String(e.layers));
+      expect(await row.locator('[data-cell=scenarios] a').allInnerTexts()).toEqual(e.scenarios);
+      for (const [cell, exact] of [['cost', e.frequencyCost], ['at-stake', e.frequencyAtStake]] as const) {
+        const shown = await row.locator(`[data-cell=${cell}]`).innerText();
+        if (exact === 0) expect(shown, `${e.element} ${cell}`).toBe('—');
+        else expect(sameFigure(shown.replace(' /yr', ''), exact), `${e.element} ${cell}: ${shown} vs ${exact}`).toBe(true);
+      }
+    }
+    expect(await ranking.innerText()).toContain(truth.report.commonCauses.order);
+    expect(await seriousViolations(page)).toEqual([]);
+    await ranking.scrollIntoViewIfNeeded();
+    copyTo(await screenshot(page, 'ranking'), join(ROOT, 'docs/viewer-ranking.png'));
+    // The top element's link shows it in the first scenario it touches, its card open.
+    const top = expected[0]!;
+    await ranking.locator(`tr[data-element="${top.element}"] [data-cell=element]`).click();
+    await page.waitForSelector(`svg[data-testid=graph][data-scenario="${top.scenarios[0]}"] g.box`);
+    await page.waitForSelector(`[data-testid=details][data-tag="${top.element}"]`);
+    await page.click('[data-testid=mode-matrix]');
+    await page.waitForSelector('[data-testid=matrix]');
   });
 
   it('opens a scenario from its row', async () => {

@@ -1,10 +1,10 @@
 // The page's side of the analysis worker (analysis.worker.ts). Loads are answered in order; for the
 // focus and the details only the newest request matters, so an answer to an older one is dropped.
 import type { Details } from './details.ts';
-import type { AnalysisReply, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
+import type { AnalysisReply, CompareOutcome, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import type { WhatIf } from './what-if.ts';
 import type { ServedParts } from './live.ts';
-import type { FocusView, TagMatch } from './site-view.ts';
+import type { FocusView, RankingView, TagMatch } from './site-view.ts';
 import { WorkerRequests } from './worker-requests.ts';
 
 export class AnalysisClient {
@@ -32,6 +32,16 @@ export class AnalysisClient {
   /** Analyses the file's model as the what-if changes it (none: back to the file's own). */
   whatIf(question: WhatIf): Promise<WhatIfOutcome> {
     return this.requests.send({ whatIf: question }, (r) => ('whatIf' in r ? { value: r.whatIf } : undefined), { channel: 'what-if' });
+  }
+
+  /** The top of the site-wide common-cause ranking of what the page shows (the file, or its what-if). */
+  ranking(): Promise<RankingView> {
+    return this.requests.send({ ranking: true }, (r) => ('ranking' in r ? { value: r.ranking } : undefined), { channel: 'ranking' });
+  }
+
+  /** What changed from an earlier file (kept in the worker) to what the page shows; null: the one kept. */
+  compare(earlier: { fileName: string; bytes: Uint8Array } | null): Promise<CompareOutcome> {
+    return this.requests.send({ compare: earlier }, (r) => ('compared' in r ? { value: r.compared } : undefined), { channel: 'compare' });
   }
 
   terminate(): void {

@@ -4,7 +4,8 @@ import type { Diagnostic, LoadResult } from '@bulkhead/core';
 import type { Details } from './details.ts';
 import type { WhatIf } from './what-if.ts';
 import type { ServedParts } from './live.ts';
-import type { FocusView, SiteSummary, TagMatch } from './site-view.ts';
+import type { CompareView } from './compare-view.ts';
+import type { FocusView, RankingView, SiteSummary, TagMatch } from './site-view.ts';
 
 export type AnalysisRequest =
   /** `parts` only when the page is served with the part files; without them a `part` line is an error. */
@@ -13,7 +14,16 @@ export type AnalysisRequest =
   | { id: number; focus: string | null }
   | { id: number; details: string }
   | { id: number; search: string }
-  | { id: number; whatIf: WhatIf };
+  | { id: number; whatIf: WhatIf }
+  | { id: number; ranking: true }
+  /** An earlier revision to compare with (kept in the worker); null: compare again with the one kept. */
+  | { id: number; compare: { fileName: string; bytes: Uint8Array } | null };
+
+/** A comparison: the earlier file's errors when it does not load, else the changes. */
+export interface CompareOutcome {
+  diagnostics: Diagnostic[];
+  view?: CompareView;
+}
 
 /** A load attempt: its diagnostics, and when the model loaded and analysed, the site's summary. */
 export interface LoadOutcome {
@@ -39,4 +49,6 @@ export type AnalysisReply =
   | { id: number; details: Details | undefined }
   | { id: number; matches: TagMatch[] }
   | { id: number; whatIf: WhatIfOutcome }
+  | { id: number; ranking: RankingView }
+  | { id: number; compared: CompareOutcome }
   | { id: number; error: string };

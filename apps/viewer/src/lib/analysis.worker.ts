@@ -3,16 +3,41 @@
 // assessment, findings) and for the details of one tag; it reports its progress stage by stage.
 import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
 import { detailsOf } from './details.ts';
-import { focusView, searchTags, summariseSite } from './site-view.ts';
-import type { AnalysisReply, AnalysisRequest, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
+import { focusView, rankingView, searchTags, summariseSite, type RankingView } from './site-view.ts';
+import type { AnalysisReply, AnalysisRequest, CompareOutcome, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import { applyWhatIf, isWhatIf, statementsToPaste, type WhatIf } from './what-if.ts';
 import { isoDate } from './sheet.ts';
 import type { ServedParts } from './live.ts';
+import { compareView } from './compare-view.ts';
 
 /** The last model that loaded and analysed; a later load with errors leaves it in place. */
 let fromFile: { model: Model; analysis: Analysis } | undefined;
 /** What the page is shown: the file's model, or a what-if made from it (never written anywhere). */
 let current: { model: Model; analysis: Analysis } | undefined;
+/** The ranking of `current`, worked out the first time the matrix asks (it assesses scenarios again). */
+let ranked: { of: typeof current; view: RankingView } | undefined;
+
+/** The earlier revision the page compares with, once a file for it loaded. */
+let earlier: { model: Model; analysis: Analysis; fileName: string } | undefined;
+let currentFileName = '';
+
+function compare(file: { fileName: string; bytes: Uint8Array } | null): CompareOutcome {
+  if (!current) throw new Error('no model is loaded');
+  if (file) {
+    const result = loadModelText(file.fileName, file.bytes);
+    const errors = result.diagnostics.filter((d) => d.severity === 'error');
+    if (!result.model || errors.length > 0) return { diagnostics: errors };
+    earlier = { model: result.model, analysis: analyze(result.model, { spans: result.spans }), fileName: file.fileName };
+  }
+  if (!earlier) return { diagnostics: [] };
+  return { diagnostics: [], view: compareView(earlier, { ...current, fileName: currentFileName }) };
+}
+
+function ranking(): RankingView {
+  if (!current) throw new Error('no model is loaded');
+  if (ranked?.of !== current) ranked = { of: current, view: rankingView(current.model, current.analysis) };
+  return ranked.view;
+}
 
 function whatIf(question: WhatIf): WhatIfOutcome {
   if (!fromFile) throw new Error('no model is loaded');
@@ -43,6 +68,7 @@ function load(id: number, fileName: string, bytes: Uint8Array, parts: ServedPart
   try {
     const analysis = analyze(result.model, { spans: result.spans });
     fromFile = { model: result.model, analysis };
+    currentFileName = fileName;
     current = fromFile;
     return { ...base, summary: summariseSite(result.model, analysis) };
   } catch (e) {
@@ -63,6 +89,10 @@ self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
     } else if ('search' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, matches: searchTags(current.model, current.analysis, request.search) });
+    } else if ('compare' in request) {
+      reply({ id: request.id, compared: compare(request.compare) });
+    } else if ('ranking' in request) {
+      reply({ id: request.id, ranking: ranking() });
     } else if ('details' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, details: detailsOf(current.model, current.analysis, request.details) });

@@ -2,7 +2,7 @@
 // the site and, per focus, the scene to lay out with its assessment and findings. The model and the
 // analysis stay in the worker; only these small pieces cross to the page, so a large site never makes
 // the page copy or walk all of it.
-import { SEVERITY_RANK, type Analysis, type Finding, type LayerVerdict, type Model, type ScenarioAssessment } from '@bulkhead/core';
+import { rankCommonCauses, RANKING_ORDER, SEVERITY_RANK, type Analysis, type Finding, type LayerVerdict, type Model, type RankedCommonCause, type ScenarioAssessment } from '@bulkhead/core';
 import { scenarioScene, siteOverview, type Scene } from '@bulkhead/layout';
 
 export interface ScenarioRow {
@@ -124,4 +124,20 @@ export function searchTags(model: Model, analysis: Analysis, query: string): Tag
       .map((s) => s.id);
     return { tag: h.tag, what: h.what, kind: h.kind, ...(h.title ? { title: h.title } : {}), scenarios };
   });
+}
+
+/** The matrix shows this many elements of the common-cause ranking at most. */
+export const RANKING_SHOWN = 25;
+
+/** The top of the site-wide common-cause ranking (core's rankCommonCauses), with its order in words. */
+export interface RankingView {
+  rows: RankedCommonCause[];
+  /** How many elements the ranking holds in all (more than `rows` on a large site). */
+  total: number;
+  order: string;
+}
+
+export function rankingView(model: Model, analysis: Analysis): RankingView {
+  const all = rankCommonCauses(model, analysis);
+  return { rows: all.slice(0, RANKING_SHOWN), total: all.length, order: RANKING_ORDER };
 }

@@ -13,6 +13,7 @@ import type { FocusView, SiteSummary } from './site-view.ts';
 import type { ViewLink } from './link.ts';
 import { sha256Hex } from './sheet.ts';
 import { isWhatIf, NO_WHAT_IF, type WhatIf } from './what-if.ts';
+import type { CompareView } from './compare-view.ts';
 
 export type Origin = 'served' | 'opened';
 
@@ -54,6 +55,8 @@ export class Viewer {
   whatIfActive = $derived(isWhatIf(this.whatIf));
   /** The centre shows the all-scenarios matrix instead of the graph. */
   matrix = $state(false);
+  /** What changed since an earlier file the reviewer opened to compare with; undefined: no comparison. */
+  comparison = $state.raw<CompareView | undefined>();
   /** Bumped whenever a finding is clicked, so the graph re-centres even on the same finding. */
   centreRequest = $state(0);
   private revision = 0;
