@@ -2,11 +2,12 @@
 // source), the total against the claim and the governing requirement, the architectural constraints, the
 // inputs with their bases, and the findings. Answer first, workings after.
 import { formatPerHour, formatProbability, formatRatio } from '../assess/format.ts';
-import { ANNEX_B, PROOF_TEST_EXTENSION } from './annex-b.ts';
-import type { ElementFigures } from './figures.ts';
-import type { SubsystemResult } from './subsystems.ts';
+import { ANNEX_B, PROOF_TEST_EXTENSION } from '../reliability/annex-b.ts';
+import type { ElementFigures } from '../reliability/figures.ts';
+import type { SubsystemResult } from '../reliability/subsystems.ts';
 import { OUTCOME_SUM_SOURCE, type TargetCandidate } from './target.ts';
-import { SUBSYSTEM_WORDS, VERIFY_CAUTION, type SifVerification, type TargetCheck } from './verify.ts';
+import { SUBSYSTEM_WORDS } from '../reliability/compute.ts';
+import { VERIFY_CAUTION, type SifVerification, type TargetCheck } from './verify.ts';
 
 const NAMES = SUBSYSTEM_WORDS;
 
