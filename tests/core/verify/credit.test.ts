@@ -1,10 +1,12 @@
 // Issue 16, item 3: a voted-group common cause becomes a number. With complete failure data the shared element is
 // in series with the group in the computed PFDavg, so the finding no longer withholds credit: the layer is credited
 // at the larger of its claimed and computed PFD. Figures are worked by hand from the IEC 61508-6:2010 Annex B
-// equations (from memory; checked against its tables in tests/standards/annex-b.test.ts); the models are invented.
+// equations (from memory; checked against its tables in tests/standards/annex-b.test.ts), SIF-1's in
+// credit-model.ts; the models are invented.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { analyze, loadModelText, type Analysis, type Finding, type Model } from '@bulkhead/core';
+import { BETA, COMPUTED, PLANT, ROWS, row, scenario } from './credit-model.ts';
 
 function load(text: string, file = 'test.bulk'): Model {
   const result = loadModelText(file, text);
@@ -16,31 +18,6 @@ const KEY = (scenario: string, sif: string, element: string) => `voted-group-com
 const findingOf = (a: Analysis, key: string): Finding => a.findings.find((f) => f.key === key)!;
 const layerOf = (a: Analysis, scenario: string, tag: string) => a.assessments.find((s) => s.scenario === scenario)!.layers.find((l) => l.function === tag)!;
 
-const row = (tag: string, du: number, extra = 'proof-test-coverage=1 mttr-hours=8') =>
-  `failure-data FD-${tag} element=${tag} lambda-du=${du} lambda-dd=0 proof-test-hours=8760 ${extra} basis="vendor data (invented)" test-basis="site procedure (invented)"\n`;
-
-const PLANT = `
-site "Credit works (invented)"
-category people tolerable=1e-4 harm=people
-vessel V-1
-tapping TW-1 mounted-on=V-1
-transmitter TT-1 supply=self-contained mounted-on=TW-1
-transmitter TT-2 supply=self-contained mounted-on=TW-1
-logic-solver LS-1 system=sis supply=self-contained
-line L-1
-shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=LS-1 supply=self-contained
-sif SIF-1 sensors=TT-1,TT-2 sensor-voting=1oo2 solver=LS-1 finals=XV-1 trip=close
-`;
-const BETA = 'common-cause SIF-1 group=sensors beta=0.05 beta-d=0.025 basis="scoring (invented)"\n';
-const ROWS = row('TT-1', 1e-7) + row('TT-2', 1e-7) + row('LS-1', 1e-9) + row('XV-1', 1e-7);
-const scenario = (claim: number) =>
-  `scenario S-1 category=people\n  cause external="Feed upset" frequency=0.1 basis="site history (invented)"\n  layer SIF-1 pfd=${claim} basis="MF-SV-1 (invented)"\n`;
-
-// By hand, lambdaDU 1e-7 /h, lambdaDD 0, T1 8,760 h, MTTR = MRT = 8 h (tCE 4,388 h, tGE 2,928 h), beta 5%:
-// 1oo2 pair: 2 x (0.95e-7)^2 x 4,388 x 2,928 + 0.05 x 1e-7 x 4,388 = 2.3191e-7 + 2.194e-5 = 2.2172e-5 (B.3.2.2.2);
-// TW-1, XV-1: 1e-7 x 4,388 = 4.388e-4 each; LS-1: 1e-9 x 4,388 = 4.388e-6 (B.3.2.2.1);
-// total 2.2172e-5 + 4.388e-4 + 4.388e-6 + 4.388e-4 = 9.0416e-4.
-const COMPUTED = 9.0416e-4;
 
 describe('the rule table: a voted-group common cause on a SIF with failure data', () => {
   const complete = PLANT + BETA + ROWS + row('TW-1', 1e-7);

@@ -3,45 +3,27 @@
 // file, and a problem in a row must point at the part file, its line and column. The model is invented.
 import { describe, expect, it } from 'vitest';
 import { analyze, loadModelText, renderDiagnostics, verifyModel, type PartReader } from '@bulkhead/core';
+import { BETA, COMPUTED, PLANT, row, scenario } from './credit-model.ts';
 
 function reader(files: Record<string, string>): PartReader {
   return (path) => (path in files ? new TextEncoder().encode(files[path]) : { problem: 'no such file' });
 }
 
-const PLANT = `site "Part works (invented)"
-category people tolerable=1e-4 harm=people
-vessel V-1
-tapping TW-1 mounted-on=V-1
-transmitter TT-1 supply=self-contained mounted-on=TW-1
-transmitter TT-2 supply=self-contained mounted-on=TW-1
-logic-solver LS-1 system=sis supply=self-contained
-line L-1
-shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=LS-1 supply=self-contained
-sif SIF-1 sensors=TT-1,TT-2 sensor-voting=1oo2 solver=LS-1 finals=XV-1 trip=close
-scenario S-1 category=people
-  cause external="Feed upset" frequency=0.1 basis="site history (invented)"
-  layer SIF-1 pfd=0.01 basis="MF-SV-1 (invented)"
-`;
-
-const row = (tag: string, du: string) =>
-  `failure-data FD-${tag} element=${tag} lambda-du=${du} lambda-dd=0 proof-test-hours=8760 proof-test-coverage=1 mttr-hours=8 basis="vendor data (invented)" test-basis="site procedure (invented)"`;
-
 const DATA = [
-  '# Site failure data table (invented), kept apart from the plant model',
-  row('TT-1', '1e-7'),
-  row('TT-2', '1e-7'),
-  row('TW-1', '1e-7'),
-  row('LS-1', '1e-9'),
-  row('XV-1', '1e-7'),
-  'common-cause SIF-1 group=sensors beta=0.05 beta-d=0.025 basis="scoring (invented)"',
-  '',
-].join('\n');
+  '# Site failure data table (invented), kept apart from the plant model\n',
+  row('TT-1', 1e-7),
+  row('TT-2', 1e-7),
+  row('TW-1', 1e-7),
+  row('LS-1', 1e-9),
+  row('XV-1', 1e-7),
+  BETA,
+].join('');
 
-const MAIN = `${PLANT}part "data/failure-data.bulk"\n`;
+const MAIN = `${PLANT}${scenario(0.01)}part "data/failure-data.bulk"\n`;
 
 describe('failure data in a part file', () => {
   const split = loadModelText('site/main.bulk', MAIN, { readPart: reader({ 'site/data/failure-data.bulk': DATA }) });
-  const whole = loadModelText('whole.bulk', PLANT + DATA);
+  const whole = loadModelText('whole.bulk', PLANT + scenario(0.01) + DATA);
 
   it('loads the rows from the part, and verifies the SIF as if they were written in the main file', () => {
     expect(split.diagnostics).toEqual([]);
@@ -49,8 +31,7 @@ describe('failure data in a part file', () => {
     expect(split.model!.failureData?.map((r) => r.id)).toEqual(['FD-TT-1', 'FD-TT-2', 'FD-TW-1', 'FD-LS-1', 'FD-XV-1']);
     const [fromPart] = verifyModel(split.model!);
     const [inline] = verifyModel(whole.model!);
-    // By hand (tests/core/verify/credit.test.ts): pair 2.2172e-5, TW-1 4.388e-4, LS-1 4.388e-6, XV-1 4.388e-4.
-    expect(fromPart!.pfd).toBeCloseTo(9.0416e-4, 8);
+    expect(fromPart!.pfd).toBeCloseTo(COMPUTED, 8);
     expect(fromPart!.pfd).toBe(inline!.pfd);
     // No finding on the inputs; only the HFT check (SIL 3 needed, HFT 1) speaks, from the requirement, not the rows.
     expect(fromPart!.findings.filter((f) => f.code !== 'hft-short')).toEqual([]);
@@ -65,7 +46,7 @@ describe('failure data in a part file', () => {
 
   it('points a problem in a row at the part file, its line and column', () => {
     // Line 3 of the part: FD-TT-2, with a proof-test coverage below 1 and no mission time (BH344).
-    const bad = DATA.replace(`${row('TT-2', '1e-7')}`, row('TT-2', '1e-7').replace('proof-test-coverage=1', 'proof-test-coverage=0.9'));
+    const bad = DATA.replace(`${row('TT-2', 1e-7)}`, row('TT-2', 1e-7).replace('proof-test-coverage=1', 'proof-test-coverage=0.9'));
     const result = loadModelText('site/main.bulk', MAIN, { readPart: reader({ 'site/data/failure-data.bulk': bad }) });
     expect(result.model).toBeUndefined();
     const problem = result.diagnostics.find((d) => d.code === 'BH344')!;
