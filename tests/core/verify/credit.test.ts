@@ -5,7 +5,7 @@
 // credit-model.ts; the models are invented.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { analyze, loadModelText, type Analysis, type Finding, type Model } from '@bulkhead/core';
+import { analyze, loadModelText, renderVerificationText, verifyModel, type Analysis, type Finding, type Model } from '@bulkhead/core';
 import { BETA, COMPUTED, PLANT, ROWS, row, scenario } from './credit-model.ts';
 
 function load(text: string, file = 'test.bulk'): Model {
@@ -61,6 +61,15 @@ describe('the rule table: a voted-group common cause on a SIF with failure data'
     expect(f.messageId).toBe('voted-group-common-cause/shared-in-group');
     expect(f.severity).toBe('needs-justification');
     expect(layerOf(a, 'S-1', 'SIF-1')).toMatchObject({ credited: false, verdict: 'open' });
+    expect(verifyModel(load(text + scenario(0.01)))[0]!.complete).toBe(false);
+  });
+
+  it('says in verify which of the two check does', () => {
+    const [v] = verifyModel(load(complete + scenario(0.01)));
+    expect(v!.complete).toBe(true);
+    expect(renderVerificationText(v!)).toContain('`check` credits the layer at the larger of its claimed and computed PFD');
+    const [short] = verifyModel(load(PLANT + ROWS + row('TW-1', 1e-7) + scenario(0.01)));
+    expect(renderVerificationText(short!)).toContain('`check` withholds the credit until a justification accepts it');
   });
 });
 

@@ -82,7 +82,11 @@ function verdictLines(v: SifVerification): string[] {
     const tags = [...s.tags, ...s.withoutData].join(', ');
     lines.push(
       t!.meets
-        ? `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF still meets its requirement, so the layer may be credited at the computed figure`
+        ? `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF still meets its requirement; ${
+            v.complete
+              ? '`check` credits the layer at the larger of its claimed and computed PFD'
+              : 'the inputs are incomplete or take defaults, so `check` withholds the credit until a justification accepts it'
+          }`
         : `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF falls short${Number.isFinite(t!.ratio) && t!.ratio >= 1 ? ` by a factor of ${formatRatio(t!.ratio)}` : ''}`,
     );
   }

@@ -10,7 +10,7 @@ import { buildPlantGraph } from '../graph/plant-graph.ts';
 import type { Analysis } from '../vocabulary/types.ts';
 import { HFT_SOURCE, requiredHft } from '../reliability/architecture.ts';
 import { FailureDataIndex } from '../reliability/figures.ts';
-import { SUBSYSTEM_WORDS, computeSif, type VerifyFinding } from '../reliability/compute.ts';
+import { SUBSYSTEM_WORDS, computeSif, verificationComplete, type VerifyFinding } from '../reliability/compute.ts';
 import type { SubsystemResult } from '../reliability/subsystems.ts';
 import { sifTarget, type SifTarget } from './target.ts';
 
@@ -41,6 +41,8 @@ export interface SifVerification {
   /** The SIL the computed figure reaches (0: below SIL 1). */
   silReached?: number;
   architecture: { sil: number; mode: 'low-demand' | 'high-demand'; required: number; source: string; bySubsystem: { subsystem: Subsystem; hft: number; meets: boolean }[] } | undefined;
+  /** Whether the inputs are complete enough for `check` to credit the SIF at its computed figure (issue 16, item 3). */
+  complete: boolean;
   /** Shared elements of voted groups, as the independence rules see them, now in the figure. */
   sharedInSeries: { subsystem: Subsystem; tags: string[]; withoutData: string[] }[];
   findings: VerifyFinding[];
@@ -65,7 +67,8 @@ function targetSil(target: SifTarget): number | undefined {
 }
 
 export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tracer, data: FailureDataIndex): SifVerification {
-  const { subsystems, findings, pfd, pfh } = computeSif(tracer, data, sif);
+  const calculation = computeSif(tracer, data, sif);
+  const { subsystems, findings, pfd, pfh } = calculation;
   const target = sifTarget(model, analysis.assessments, sif.tag);
   const incomplete = findings.some((f) => f.code === 'incomplete');
   const result: SifVerification = {
@@ -75,6 +78,7 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
     claimed: { ...(sif.pfd !== undefined ? { pfd: sif.pfd } : {}), ...(sif.pfh !== undefined ? { pfh: sif.pfh } : {}), ...(sif.sil !== undefined ? { sil: sif.sil } : {}) },
     target,
     architecture: undefined,
+    complete: verificationComplete(calculation),
     sharedInSeries: subsystems
       .filter((s) => s.shared.length || s.sharedWithoutData.length)
       .map((s) => ({ subsystem: s.subsystem, tags: s.shared.map((c) => c.tag), withoutData: s.sharedWithoutData })),
