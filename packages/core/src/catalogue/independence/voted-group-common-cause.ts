@@ -4,7 +4,7 @@ import { ruleEntry, tagList } from '../define.ts';
 import { formatPerHour, formatProbability, formatRatio } from '../../util/figures.ts';
 
 /** The shared element counted by `bulkhead verify`: the SIF's PFDavg with it in series, and the PFD the layer claims. */
-interface CountedData {
+export interface CountedData {
   role: 'sensor' | 'final';
   channels: string[];
   function: string;
