@@ -30,6 +30,7 @@ describe('the rule table: a voted-group common cause on a SIF with failure data'
     if (f.messageId === 'voted-group-common-cause/counted-within-claim') expect(f.data.computed).toBeCloseTo(COMPUTED, 8);
     expect(f.message).toContain('counted in the calculation: PFDavg 9.0e-4 with the shared element in series (bulkhead verify)');
     expect(layerOf(a, 'S-1', 'SIF-1')).toMatchObject({ credited: true, allowedPfd: 0.01 });
+    expect(layerOf(a, 'S-1', 'SIF-1').reasons.find((r) => r.rule === 'voted-group-common-cause')).toEqual({ key: f.key, rule: f.rule, severity: 'note', effect: 'note', element: 'TW-1' });
     // 0.1 /yr x 0.01 = 1e-3 /yr.
     expect(a.assessments[0]!.mitigatedAfter).toBeCloseTo(1e-3, 12);
   });
@@ -45,6 +46,7 @@ describe('the rule table: a voted-group common cause on a SIF with failure data'
     expect(layer.credited).toBe(true);
     expect(layer.allowedPfd).toBeCloseTo(COMPUTED, 8);
     expect(layer.allowedPfdIfAccepted).toBe(5e-4);
+    expect(layer.reasons.find((r) => r.rule === 'voted-group-common-cause')).toMatchObject({ effect: 'caps', cap: layer.allowedPfd });
     expect(a.assessments[0]!.mitigatedAfter).toBeCloseTo(0.1 * COMPUTED, 10);
   });
 

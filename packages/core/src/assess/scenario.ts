@@ -177,7 +177,8 @@ function countedFigures(f: Finding): { pfd: number; pfh: number } | undefined {
 }
 
 function capAtCounted(w: LayerWork, f: Finding, counted: { pfd: number; pfh: number }): void {
-  w.reasons.push({ ...reasonOf(f, 'caps'), cap: counted.pfd });
+  // Within the claim (a note) nothing is capped; above it the computed figure is the cap.
+  w.reasons.push({ ...reasonOf(f, 'caps'), ...(f.severity !== 'note' ? { cap: counted.pfd } : {}) });
   for (const figure of FIGURES) {
     if (!inForce(f, figure)) continue;
     w.pfd[figure] = Math.max(w.pfd[figure], counted.pfd);
