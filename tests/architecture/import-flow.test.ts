@@ -8,8 +8,12 @@ import { describe, expect, it } from 'vitest';
 
 const SRC = fileURLToPath(new URL('../../packages/core/src/', import.meta.url));
 
-/** Bottom first. A folder may import from any folder before it. */
-const FLOW = ['diagnostics', 'util', 'model', 'catalogue', 'vocabulary', 'bulk', 'json', 'loader', 'graph', 'trace', 'rules', 'assess', 'justify', 'analysis', 'verify', 'cutsets', 'ranking', 'report', 'diff'];
+/**
+ * Bottom first. A folder may import from any folder before it. `reliability` (a SIF's PFDavg and PFH from its failure
+ * data) reads only the model and the traces, and comes before `assess`, which credits a SIF at its computed figure;
+ * `verify` judges that figure against the scenarios' requirements, so it stays after `analysis`.
+ */
+const FLOW = ['diagnostics', 'util', 'model', 'catalogue', 'vocabulary', 'bulk', 'json', 'loader', 'graph', 'trace', 'reliability', 'rules', 'assess', 'justify', 'analysis', 'verify', 'cutsets', 'ranking', 'report', 'diff'];
 
 function files(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {

@@ -77,10 +77,10 @@ describe('bulkhead cut-sets and common-causes', () => {
 
   it('ranks common causes with the order stated, as text, JSON and CSV', async () => {
     const text = (await runCli(['common-causes', A])).stdout.split('\n');
-    expect(text[0]).toMatch(/^8 elements take part in open findings; first: TW-302: 1 layer in 1 scenario/);
+    expect(text[0]).toMatch(/^7 elements take part in open findings; first: LT-102: 2 layers in 1 scenario/);
     expect(text[1]).toMatch(/^Ranked by/);
     const json = JSON.parse((await runCli(['common-causes', A, '--format', 'json'])).stdout);
-    expect(json.elements[0].element).toBe('TW-302');
+    expect(json.elements[0].element).toBe('LT-102');
     const csv = (await runCli(['common-causes', A, '--format', 'csv'])).stdout;
     expect(csv.split('\r\n')[0]).toBe('rank,element,kind,title,layers,scenarios,scenario_ids,findings,open_findings,frequency_cost_per_year,frequency_at_stake_per_year,gap_reduction_per_year,would_meet');
   });

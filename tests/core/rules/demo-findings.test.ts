@@ -60,20 +60,21 @@ describe('the demo findings', () => {
       ...S102_SUPPLY_NOTES,
       // TT-302A and TT-302B (1oo2) share thermowell TW-302 and input card AI-S-02. The finding has one party
       // (the SIF) and so one path, through the first channel; its message names both channels. AI-S-02 is a
-      // card of SIF-301's own solver: part of the logic-solver subsystem, a note (issue 16, item 6).
-      row('voted-group-common-cause:S-103:SIF-301:TW-302', 'needs-justification', 'TW-302', [['SIF-301', 'TT-302A', 'TW-302']]),
+      // card of SIF-301's own solver: part of the logic-solver subsystem, a note (issue 16, item 6). TW-302 is a note
+      // too: SIF-301's failure data are complete, and its computed PFD counts TW-302 in series (issue 16, item 3).
       SIF301_NO_BASIS,
+      row('voted-group-common-cause:S-103:SIF-301:TW-302', 'note', 'TW-302', [['SIF-301', 'TT-302A', 'TW-302']]),
       ...S103_SUPPLY_NOTES,
       row('voted-group-common-cause:S-103:SIF-301:AI-S-02', 'note', 'AI-S-02', [['SIF-301', 'TT-302A', 'AI-S-02']]),
     ]);
   });
 
-  it('revision A voids both layers of S-101 and leaves SIF-301 open', () => {
+  it('revision A voids both layers of S-101 and credits SIF-301 by its computed PFD', () => {
     const verdicts = analysed('fixtures/demo/marrow-fen.bulk').assessments.map((a) => [a.scenario, a.layers.map((l) => `${l.function} ${l.verdict}`)]);
     expect(verdicts).toEqual([
       ['S-101', ['SIF-101 voided', 'LAH-101 voided']],
       ['S-102', ['SIF-201 independent', 'IPL-PSV-201 independent']],
-      ['S-103', ['SIF-301 open', 'TAH-304 independent']],
+      ['S-103', ['SIF-301 independent', 'TAH-304 independent']],
       // High demand (3 /yr, the relief valve acts after): SIF-201 judged by its PFH, independent of the external cause.
       ['S-104', ['SIF-201 independent', 'IPL-PSV-201 independent']],
     ]);

@@ -9,6 +9,7 @@ import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
 import { findingKey as independenceFindingKey } from '../rules/define.ts';
 import { causeSide, runRules, type RuleEnvironment } from '../rules/run.ts';
 import { Tracer } from '../trace/trace.ts';
+import { countSharedInCalculation } from './counted-in-calculation.ts';
 import type { Analysis, Finding, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
 
 export interface AnalyzeOptions {
@@ -41,16 +42,18 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   const independence = independenceRulesInForce(model);
   const env = ruleEnvironment(model, tracer, independence);
   const raw: Finding[] = model.scenarios.flatMap((s) => runRules(env, s));
-  const independent = applyJustifications(raw, model.justifications, options.spans).findings;
-  // The assessment's limit findings read their own acceptances; staleness is judged over all findings.
   // Facts and findings are gathered once for all scenarios: per scenario, the cost would grow with
   // scenarios times the site.
   const bpcs = bpcsFactsOf(model);
+  // A shared element of a voted group that the SIF's computed PFD counts no longer withholds credit (issue 16, item 3).
+  const counted = countSharedInCalculation(model, tracer, raw, bpcs);
+  // The assessment's limit findings read their own acceptances; staleness is judged over all findings.
+  const independent = applyJustifications(counted, model.justifications, options.spans).findings;
   const byScenario = groupByScenario(independent);
   const acceptances = acceptancesOf(model.justifications);
   const narrowedEnv = environmentOnceNarrowed(env);
   const assessed = model.scenarios.map((scenario) => {
-    const narrowed = findingsOnceNarrowed(env, narrowedEnv, scenario, acceptances);
+    const narrowed = findingsOnceNarrowed(env, narrowedEnv, scenario, acceptances, (fs) => countSharedInCalculation(model, tracer, fs, bpcs));
     return assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions, ...(narrowed ? { findingsIfAccepted: narrowed } : {}) });
   });
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
@@ -99,10 +102,16 @@ function environmentOnceNarrowed(env: RuleEnvironment): RuleEnvironment {
  * A narrowed cause (only=) not yet accepted: the rules run again as if its narrowing were accepted, so the "if open
  * findings are accepted" figure is the figure the tool will give once it is (issue 9, item 7).
  */
-function findingsOnceNarrowed(env: RuleEnvironment, narrowedEnv: RuleEnvironment, scenario: Scenario, acceptances: Acceptances): Finding[] | undefined {
+function findingsOnceNarrowed(
+  env: RuleEnvironment,
+  narrowedEnv: RuleEnvironment,
+  scenario: Scenario,
+  acceptances: Acceptances,
+  counted: (findings: Finding[]) => Finding[],
+): Finding[] | undefined {
   const key = narrowingKey(scenario);
   if (key === undefined || env.acceptedKeys.has(key)) return undefined;
-  return acceptFindings(runRules(narrowedEnv, scenario), acceptances).findings;
+  return acceptFindings(counted(runRules(narrowedEnv, scenario)), acceptances).findings;
 }
 
 function groupByScenario(findings: readonly Finding[]): Map<string | undefined, Finding[]> {

@@ -167,11 +167,35 @@ function reasonOf(f: Finding, effect: LayerReason['effect'], other?: string): La
   };
 }
 
+/**
+ * A voted-group common cause that the SIF's computed figure counts (issue 16, item 3): it caps the layer's credit at
+ * the computed PFD and PFH where it is in force, and never removes the credit.
+ */
+function countedFigures(f: Finding): { pfd: number; pfh: number } | undefined {
+  if (f.messageId !== 'voted-group-common-cause/counted-within-claim' && f.messageId !== 'voted-group-common-cause/counted-claim-missed') return undefined;
+  return { pfd: f.data.computed, pfh: f.data.computedPfh };
+}
+
+function capAtCounted(w: LayerWork, f: Finding, counted: { pfd: number; pfh: number }): void {
+  // Within the claim (a note) nothing is capped; above it the computed figure is the cap.
+  w.reasons.push({ ...reasonOf(f, 'caps'), ...(f.severity !== 'note' ? { cap: counted.pfd } : {}) });
+  for (const figure of FIGURES) {
+    if (!inForce(f, figure)) continue;
+    w.pfd[figure] = Math.max(w.pfd[figure], counted.pfd);
+    if (w.pfh) w.pfh[figure] = Math.max(w.pfh[figure], counted.pfh);
+  }
+}
+
 /** Sorts the independence findings into single-layer effects and layer-layer conflicts. */
 function applyIndependence(findings: readonly Finding[], works: Map<string, LayerWork>, conflicts: Conflict[]): Map<string, Finding[]> {
   const againstLayer = new Map<string, Finding[]>();
   for (const f of findings) {
     const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    const counted = countedFigures(f);
+    if (counted && layers.length === 1) {
+      capAtCounted(works.get(layers[0]!)!, f, counted);
+      continue;
+    }
     const withCause = f.parties.some((p) => p.role === 'cause');
     if (layers.length === 2 && layers[0] !== layers[1]) {
       const [a, b] = layers as [string, string];
@@ -194,6 +218,8 @@ function independenceEffects(findings: readonly Finding[], works: Map<string, La
   const againstLayer = new Map<string, Finding[]>();
   for (const f of findings) {
     const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    // Its cap is already on the layer, from the same finding in the headline figure.
+    if (countedFigures(f)) continue;
     if (layers.length === 2 && layers[0] !== layers[1]) conflicts.push({ a: layers[0]!, b: layers[1]!, finding: f });
     else if (layers.length >= 1) againstLayer.set(layers[0]!, [...(againstLayer.get(layers[0]!) ?? []), f]);
   }

@@ -2,11 +2,12 @@
 // source), the total against the claim and the governing requirement, the architectural constraints, the
 // inputs with their bases, and the findings. Answer first, workings after.
 import { formatPerHour, formatProbability, formatRatio } from '../assess/format.ts';
-import { ANNEX_B, PROOF_TEST_EXTENSION } from './annex-b.ts';
-import type { ElementFigures } from './figures.ts';
-import type { SubsystemResult } from './subsystems.ts';
+import { ANNEX_B, PROOF_TEST_EXTENSION } from '../reliability/annex-b.ts';
+import type { ElementFigures } from '../reliability/figures.ts';
+import type { SubsystemResult } from '../reliability/subsystems.ts';
 import { OUTCOME_SUM_SOURCE, type TargetCandidate } from './target.ts';
-import { SUBSYSTEM_WORDS, VERIFY_CAUTION, type SifVerification, type TargetCheck } from './verify.ts';
+import { SUBSYSTEM_WORDS } from '../reliability/compute.ts';
+import { VERIFY_CAUTION, type SifVerification, type TargetCheck } from './verify.ts';
 
 const NAMES = SUBSYSTEM_WORDS;
 
@@ -81,7 +82,11 @@ function verdictLines(v: SifVerification): string[] {
     const tags = [...s.tags, ...s.withoutData].join(', ');
     lines.push(
       t!.meets
-        ? `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF still meets its requirement, so the layer may be credited at the computed figure`
+        ? `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF still meets its requirement; ${
+            v.complete
+              ? '`check` credits the layer at the larger of its claimed and computed PFD'
+              : 'the inputs are incomplete or take defaults, so `check` withholds the credit until a justification accepts it'
+          }`
         : `  shared:   ${tags} (${NAMES[s.subsystem]}) in series with the voted group: with it the SIF falls short${Number.isFinite(t!.ratio) && t!.ratio >= 1 ? ` by a factor of ${formatRatio(t!.ratio)}` : ''}`,
     );
   }

@@ -8,24 +8,16 @@ import type { FunctionKindOf, Model, Subsystem } from '../model/schema.ts';
 import { Tracer } from '../trace/trace.ts';
 import { buildPlantGraph } from '../graph/plant-graph.ts';
 import type { Analysis } from '../vocabulary/types.ts';
-import { HFT_SOURCE, requiredHft } from './architecture.ts';
-import { FailureDataIndex } from './figures.ts';
-import { SubsystemCalculator, type SubsystemResult } from './subsystems.ts';
+import { HFT_SOURCE, requiredHft } from '../reliability/architecture.ts';
+import { FailureDataIndex } from '../reliability/figures.ts';
+import { SUBSYSTEM_WORDS, computeSif, verificationComplete, type VerifyFinding } from '../reliability/compute.ts';
+import type { SubsystemResult } from '../reliability/subsystems.ts';
 import { sifTarget, type SifTarget } from './target.ts';
 
 export const VERIFY_CAUTION =
   'The calculation supports, and does not replace, a SIL verification by a competent person. It uses the simplified ' +
   'equations of IEC 61508-6:2010 Annex B and the failure data in the model; defer to IEC 61511, the device safety ' +
   'manuals, local codes and licensed practice.';
-
-export type VerifyFindingCode = 'no-basis' | 'no-test-basis' | 'common-cause-default' | 'common-cause-no-basis' | 'incomplete' | 'hft-short';
-
-/** A problem with the verification's inputs or result. Stable code, subject, words. */
-export interface VerifyFinding {
-  code: VerifyFindingCode;
-  subject: string;
-  message: string;
-}
 
 export interface SifVerification {
   sif: string;
@@ -49,6 +41,8 @@ export interface SifVerification {
   /** The SIL the computed figure reaches (0: below SIL 1). */
   silReached?: number;
   architecture: { sil: number; mode: 'low-demand' | 'high-demand'; required: number; source: string; bySubsystem: { subsystem: Subsystem; hft: number; meets: boolean }[] } | undefined;
+  /** Whether the inputs are complete enough for `check` to credit the SIF at its computed figure (issue 16, item 3). */
+  complete: boolean;
   /** Shared elements of voted groups, as the independence rules see them, now in the figure. */
   sharedInSeries: { subsystem: Subsystem; tags: string[]; withoutData: string[] }[];
   findings: VerifyFinding[];
@@ -65,33 +59,6 @@ export interface TargetCheck {
 
 type Sif = FunctionKindOf<'sif'>;
 
-export const SUBSYSTEM_WORDS: Record<Subsystem, string> = { sensors: 'sensors', solver: 'logic solver', finals: 'final elements' };
-
-function basisFindings(results: readonly SubsystemResult[]): VerifyFinding[] {
-  const out: VerifyFinding[] = [];
-  const seen = new Set<string>();
-  for (const r of results) {
-    for (const input of r.inputs) {
-      if (seen.has(input.row)) continue;
-      seen.add(input.row);
-      if (input.basis === undefined) out.push({ code: 'no-basis', subject: input.row, message: `failure data ${input.row} (used for ${input.tag}) gives rates with no basis` });
-      if (input.testBasis === undefined && (input.t1 !== undefined || input.missionHours !== undefined)) {
-        out.push({ code: 'no-test-basis', subject: input.row, message: `failure data ${input.row} gives a proof-test interval with no test-basis` });
-      }
-    }
-    if (r.beta?.fromDefault) {
-      out.push({ code: 'common-cause-default', subject: r.subsystem, message: `the ${SUBSYSTEM_WORDS[r.subsystem]} group has no common-cause factors: beta ${r.beta.beta} taken by default (top of the IEC 61508-6 Annex D range, from memory)` });
-    } else if (r.beta && r.beta.basis === undefined) {
-      out.push({ code: 'common-cause-no-basis', subject: r.subsystem, message: `the common-cause factors of the ${SUBSYSTEM_WORDS[r.subsystem]} group give no basis` });
-    }
-    for (const m of r.missing) out.push({ code: 'incomplete', subject: m.tag, message: `${m.tag} ${m.why}: the ${SUBSYSTEM_WORDS[r.subsystem]} subsystem is not computed` });
-    for (const tag of r.sharedWithoutData) {
-      out.push({ code: 'incomplete', subject: tag, message: `${tag} is shared by the ${SUBSYSTEM_WORDS[r.subsystem]} channels and has no failure data: its failure defeats the group, and the figure leaves it out` });
-    }
-  }
-  return out;
-}
-
 /** The SIL the most demanding requirement needs, when the SIF claims none: the higher of the two modes'. */
 function targetSil(target: SifTarget): number | undefined {
   const low = target.governingPfd ? requiredSil(target.governingPfd.requiredPfd!, target.governingPfd.edge) : undefined;
@@ -100,13 +67,9 @@ function targetSil(target: SifTarget): number | undefined {
 }
 
 export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tracer, data: FailureDataIndex): SifVerification {
-  const calc = new SubsystemCalculator(tracer, data);
-  const subsystems = [calc.votedGroup(sif, 'sensors'), calc.solver(sif), calc.votedGroup(sif, 'finals')];
-  const findings = basisFindings(subsystems);
+  const calculation = computeSif(tracer, data, sif);
+  const { subsystems, findings, pfd, pfh } = calculation;
   const target = sifTarget(model, analysis.assessments, sif.tag);
-  const computed = subsystems.every((s) => s.pfd !== undefined);
-  const pfd = computed ? subsystems.reduce((s, r) => s + r.pfd!, 0) : undefined;
-  const pfh = computed ? subsystems.reduce((s, r) => s + r.pfh!, 0) : undefined;
   const incomplete = findings.some((f) => f.code === 'incomplete');
   const result: SifVerification = {
     sif: sif.tag,
@@ -115,6 +78,7 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
     claimed: { ...(sif.pfd !== undefined ? { pfd: sif.pfd } : {}), ...(sif.pfh !== undefined ? { pfh: sif.pfh } : {}), ...(sif.sil !== undefined ? { sil: sif.sil } : {}) },
     target,
     architecture: undefined,
+    complete: verificationComplete(calculation),
     sharedInSeries: subsystems
       .filter((s) => s.shared.length || s.sharedWithoutData.length)
       .map((s) => ({ subsystem: s.subsystem, tags: s.shared.map((c) => c.tag), withoutData: s.sharedWithoutData })),
