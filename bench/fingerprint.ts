@@ -10,7 +10,10 @@ const root = new URL('..', import.meta.url).pathname;
 const demo = join(root, 'fixtures', 'demo');
 const sizes = (process.argv[2] ?? '1000,10000').split(',').map(Number);
 const files = [
-  ...readdirSync(demo).filter((f) => /\.(bulk|json)$/.test(f)).sort().map((f) => join(demo, f)),
+  ...readdirSync(demo)
+    .filter((f) => /\.(bulk|json)$/.test(f))
+    .sort()
+    .map((f) => join(demo, f)),
   ...sizes.flatMap((size) => Object.values(ensureGenerated(size))),
 ];
 for (const file of files) {

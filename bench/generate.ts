@@ -3,7 +3,15 @@
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { analyze, printBulk, printJson, type Element, type Model, type PlantFunction, type Scenario } from '@bulkhead/core';
+import {
+  analyze,
+  printBulk,
+  printJson,
+  type Element,
+  type Model,
+  type PlantFunction,
+  type Scenario,
+} from '@bulkhead/core';
 
 /** Bump when the generated model changes, so stale files are rebuilt. */
 export const GENERATOR_VERSION = 2;
@@ -121,11 +129,22 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
     }
     if ((n - 1) % UNITS_PER_PANEL === 0) {
       const p = Math.ceil(n / UNITS_PER_PANEL);
-      panelBpcs = add({ kind: 'power-supply', tag: `DB-${pad(p, 2)}B`, title: 'BPCS distribution board', poweredBy: [upsA] });
+      panelBpcs = add({
+        kind: 'power-supply',
+        tag: `DB-${pad(p, 2)}B`,
+        title: 'BPCS distribution board',
+        poweredBy: [upsA],
+      });
       // Most SIS boards hang off the other UPS; every fourth shares the BPCS UPS (a note for de-energise SIFs).
-      panelSis = add({ kind: 'power-supply', tag: `DB-${pad(p, 2)}S`, title: 'SIS distribution board', poweredBy: [p % 4 === 0 ? upsA : upsB] });
+      panelSis = add({
+        kind: 'power-supply',
+        tag: `DB-${pad(p, 2)}S`,
+        title: 'SIS distribution board',
+        poweredBy: [p % 4 === 0 ? upsA : upsB],
+      });
     }
-    const ckt = (suffix: string, board: string) => add({ kind: 'circuit', tag: `${code}-CKT-${suffix}`, poweredBy: [board] });
+    const ckt = (suffix: string, board: string) =>
+      add({ kind: 'circuit', tag: `${code}-CKT-${suffix}`, poweredBy: [board] });
     const cktA = ckt('A', panelBpcs);
     // Controller B normally has its own board; one unit in five puts it on A's circuit (a deliberate shared support).
     const cktB = n % 5 === 0 ? cktA : ckt('B', panelSis);
@@ -136,14 +155,42 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
       add({ kind: 'controller', tag: `${code}-C1`, system: 'bpcs', housedIn: [bpcsCabinet], poweredBy: [cktA] }),
       add({ kind: 'controller', tag: `${code}-C2`, system: 'bpcs', housedIn: [bpcsCabinet], poweredBy: [cktB] }),
     ];
-    const solver = add({ kind: 'logic-solver', tag: `${code}-LS1`, system: 'sis', housedIn: [sisCabinet], poweredBy: [cktS], make: 'Trellan', model: 'SX-4' });
-    const air = add({ kind: 'air-header', tag: `${code}-IA`, title: `Unit ${code} instrument air`, airFrom: ['IA-MAIN'] });
+    const solver = add({
+      kind: 'logic-solver',
+      tag: `${code}-LS1`,
+      system: 'sis',
+      housedIn: [sisCabinet],
+      poweredBy: [cktS],
+      make: 'Trellan',
+      model: 'SX-4',
+    });
+    const air = add({
+      kind: 'air-header',
+      tag: `${code}-IA`,
+      title: `Unit ${code} instrument air`,
+      airFrom: ['IA-MAIN'],
+    });
     const consoleTag = add({ kind: 'console', tag: `${code}-CON`, signalVia: [...controllers], poweredBy: [cktA] });
     const operator = add({ kind: 'operator', tag: `${code}-OP`, title: `Unit ${code} board operator` });
     unit = {
-      code, controllers, solver, air, console: consoleTag, operator, bpcsCabinet, sisCabinet,
-      cards: new Map(), cardCount: new Map(), lastSifMount: '',
-      equipment: [], pumps: [], fieldBox: '', sisBox: '', sisBoxB: '', loops: 0, serial: 0,
+      code,
+      controllers,
+      solver,
+      air,
+      console: consoleTag,
+      operator,
+      bpcsCabinet,
+      sisCabinet,
+      cards: new Map(),
+      cardCount: new Map(),
+      lastSifMount: '',
+      equipment: [],
+      pumps: [],
+      fieldBox: '',
+      sisBox: '',
+      sisBoxB: '',
+      loops: 0,
+      serial: 0,
     };
     return unit;
   };
@@ -186,19 +233,40 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
   };
 
   /** Transmitter plus its field cable to an input channel (`cardKind` AIB keeps a voted pair's cards apart). */
-  const transmitter = (u: Unit, tag: string, variable: Variable, mount: string, owner: string, box: string, cardKind = 'AI'): string => {
+  const transmitter = (
+    u: Unit,
+    tag: string,
+    variable: Variable,
+    mount: string,
+    owner: string,
+    box: string,
+    cardKind = 'AI',
+  ): string => {
     const card = channel(u, cardKind, owner);
     const cable = add({ kind: 'cable', tag: `${tag}-W`, signalVia: [card], housedIn: [box] });
     const [make, model] = pick(CATALOGUE);
-    return add({ kind: 'transmitter', tag, variable, make, model, mountedOn: [mount], signalVia: [cable], housedIn: [box] });
+    return add({
+      kind: 'transmitter',
+      tag,
+      variable,
+      make,
+      model,
+      mountedOn: [mount],
+      signalVia: [cable],
+      housedIn: [box],
+    });
   };
 
   while (elements.length < targetElements) {
     const u = unit && unit.loops < LOOPS_PER_UNIT ? unit : newUnit();
     const k = u.loops++;
-    if (k % 4 === 0) u.equipment.push(add({ kind: pick(['vessel', 'column', 'tank', 'exchanger'] as const), tag: `${u.code}-E${pad(k / 4 + 1)}` }));
+    if (k % 4 === 0)
+      u.equipment.push(
+        add({ kind: pick(['vessel', 'column', 'tank', 'exchanger'] as const), tag: `${u.code}-E${pad(k / 4 + 1)}` }),
+      );
     if (k % 8 === 0) u.pumps.push(add({ kind: 'pump', tag: `${u.code}-P${pad(k / 8 + 1)}` }));
-    if (k % LOOPS_PER_JUNCTION_BOX === 0) u.fieldBox = add({ kind: 'junction-box', tag: `${u.code}-JB${pad(k / LOOPS_PER_JUNCTION_BOX + 1)}` });
+    if (k % LOOPS_PER_JUNCTION_BOX === 0)
+      u.fieldBox = add({ kind: 'junction-box', tag: `${u.code}-JB${pad(k / LOOPS_PER_JUNCTION_BOX + 1)}` });
     if (k % (LOOPS_PER_JUNCTION_BOX * 2) === 0) {
       // SIS field wiring has its own boxes, one for each channel of a voted pair.
       u.sisBox = add({ kind: 'junction-box', tag: `${u.code}-JBS${pad(k / 16 + 1)}A` });
@@ -210,10 +278,30 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
     const number = `${u.code}-${pad(++u.serial)}`;
     const controller = (k % 2) as 0 | 1;
     const conn = connection(number, variable, equipment);
-    const tx = transmitter(u, `${LETTER[variable]}T-${number}`, variable, conn.mount, u.controllers[controller], u.fieldBox);
+    const tx = transmitter(
+      u,
+      `${LETTER[variable]}T-${number}`,
+      variable,
+      conn.mount,
+      u.controllers[controller],
+      u.fieldBox,
+    );
     const line = add({ kind: 'line', tag: `L-${number}` });
-    const positioner = add({ kind: 'positioner', tag: `${LETTER[variable]}Y-${number}`, failsTo: 'closed', signalVia: [channel(u, 'AO', u.controllers[controller])], airFrom: [u.air] });
-    const valve = add({ kind: 'control-valve', tag: `${LETTER[variable]}V-${number}`, failsTo: pick(['closed', 'open'] as const), mountedOn: [line], signalVia: [positioner], airFrom: [u.air] });
+    const positioner = add({
+      kind: 'positioner',
+      tag: `${LETTER[variable]}Y-${number}`,
+      failsTo: 'closed',
+      signalVia: [channel(u, 'AO', u.controllers[controller])],
+      airFrom: [u.air],
+    });
+    const valve = add({
+      kind: 'control-valve',
+      tag: `${LETTER[variable]}V-${number}`,
+      failsTo: pick(['closed', 'open'] as const),
+      mountedOn: [line],
+      signalVia: [positioner],
+      airFrom: [u.air],
+    });
     const loop = `${LETTER[variable]}IC-${number}`;
     functions.push({ kind: 'loop', tag: loop, sensors: [tx], solver: u.controllers[controller], finals: [valve] });
     loops.push({ tag: loop, variable, controller, transmitter: tx, connection: conn.mount, equipment, line });
@@ -229,20 +317,52 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
     for (let s = 0; s < (voted ? 2 : 1); s++) {
       const suffix = voted ? String.fromCharCode(65 + s) : '';
       let mount: string;
-      if (s === 0 && chance(0.08)) mount = loop.connection; // deliberate: the SIF sensor on the loop's connection
-      else if (s === 1 && chance(0.1)) mount = u.lastSifMount; // deliberate: both channels on one connection
+      if (s === 0 && chance(0.08))
+        mount = loop.connection; // deliberate: the SIF sensor on the loop's connection
+      else if (s === 1 && chance(0.1))
+        mount = u.lastSifMount; // deliberate: both channels on one connection
       else mount = connection(`${number}${suffix}`, loop.variable, loop.equipment).mount;
       u.lastSifMount = mount;
-      sensors.push(transmitter(u, `${letter}T-${number}${suffix}`, loop.variable, mount, u.solver, s === 0 ? u.sisBox : u.sisBoxB, s === 0 ? 'AI' : 'AIB'));
+      sensors.push(
+        transmitter(
+          u,
+          `${letter}T-${number}${suffix}`,
+          loop.variable,
+          mount,
+          u.solver,
+          s === 0 ? u.sisBox : u.sisBoxB,
+          s === 0 ? 'AI' : 'AIB',
+        ),
+      );
     }
-    const solenoid = add({ kind: 'solenoid', tag: `XY-${number}`, failsTo: 'closed', signalVia: [channel(u, 'DO', u.solver)] });
-    const valve = add({ kind: 'shutdown-valve', tag: `XV-${number}`, failsTo: 'closed', mountedOn: [loop.line], signalVia: [solenoid], airFrom: [u.air] });
+    const solenoid = add({
+      kind: 'solenoid',
+      tag: `XY-${number}`,
+      failsTo: 'closed',
+      signalVia: [channel(u, 'DO', u.solver)],
+    });
+    const valve = add({
+      kind: 'shutdown-valve',
+      tag: `XV-${number}`,
+      failsTo: 'closed',
+      mountedOn: [loop.line],
+      signalVia: [solenoid],
+      airFrom: [u.air],
+    });
     const sif = `SIF-${number}`;
     const sil = chance(0.3) ? 2 : 1;
     const pfd = sil === 2 ? pick([0.005, 0.008, 0.004]) : pick([0.05, 0.02, 0.03]);
     functions.push({
-      kind: 'sif', tag: sif, sensors, ...(voted ? { sensorVoting: '1oo2' } : {}), solver: u.solver, finals: [valve],
-      trip: 'close', tripMode: 'de-energise', sil, pfd,
+      kind: 'sif',
+      tag: sif,
+      sensors,
+      ...(voted ? { sensorVoting: '1oo2' } : {}),
+      solver: u.solver,
+      finals: [valve],
+      trip: 'close',
+      tripMode: 'de-energise',
+      sil,
+      pfd,
     });
     const layers: { function: string; pfd?: number; basis?: string }[] = [{ function: sif, pfd }];
 
@@ -256,9 +376,24 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
         const conn = connection(`${number}H`, loop.variable, loop.equipment);
         sensor = transmitter(u, `${letter}T-${number}H`, loop.variable, conn.mount, raisedIn, u.fieldBox);
       }
-      const starter = add({ kind: 'motor-starter', tag: `MS-${number}`, failsTo: 'off', mountedOn: [u.pumps[u.pumps.length - 1]!], signalVia: [channel(u, 'DO', raisedIn)] });
+      const starter = add({
+        kind: 'motor-starter',
+        tag: `MS-${number}`,
+        failsTo: 'off',
+        mountedOn: [u.pumps[u.pumps.length - 1]!],
+        signalVia: [channel(u, 'DO', raisedIn)],
+      });
       const alarm = `${letter}AH-${number}`;
-      functions.push({ kind: 'alarm', tag: alarm, sensors: [sensor], raisedIn, console: u.console, operator: u.operator, finals: [starter], minutes: pick([15, 20, 30]) });
+      functions.push({
+        kind: 'alarm',
+        tag: alarm,
+        sensors: [sensor],
+        raisedIn,
+        console: u.console,
+        operator: u.operator,
+        finals: [starter],
+        minutes: pick([15, 20, 30]),
+      });
       layers.push({ function: alarm, pfd: 0.1, basis: 'Operator response (invented)' });
     }
     if (loop.variable === 'pressure' && chance(0.6)) {
@@ -272,7 +407,9 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
       title: `${loop.tag} fails and ${loop.variable} runs away`,
       category: pick(['people-serious', 'people-fatal', 'release-major'] as const),
       // Half the causes take the typical loop-failure row, half a site figure with its basis.
-      cause: chance(0.5) ? { function: loop.tag, typical: 'bpcs-loop-failure' } : { function: loop.tag, frequency: 0.1, basis: 'Site failure records (invented)' },
+      cause: chance(0.5)
+        ? { function: loop.tag, typical: 'bpcs-loop-failure' }
+        : { function: loop.tag, frequency: 0.1, basis: 'Site failure records (invented)' },
       layers,
     });
   }
@@ -281,7 +418,9 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
     site: {
       name: `Synthetic site, ${targetElements} elements`,
       description: 'Invented site generated for the benchmark; no real plant is described.',
-      comments: [` Generated by bench/generate.ts version ${GENERATOR_VERSION}, seed ${seed}. Do not edit: regenerated on demand.`],
+      comments: [
+        ` Generated by bench/generate.ts version ${GENERATOR_VERSION}, seed ${seed}. Do not edit: regenerated on demand.`,
+      ],
     },
     categories: [
       { id: 'people-serious', title: 'Serious injury', tolerable: 1e-4, harm: 'people' },
@@ -296,7 +435,12 @@ export function generateSite(targetElements: number, seed = 20261): GeneratedSit
   const open = analyze(model).findings.filter((f) => f.severity === 'needs-justification');
   const accepted = open.filter((_, i) => i % 10 === 0);
   if (accepted.length) {
-    model.justifications = accepted.map((f) => ({ finding: f.key, by: 'Benchmark reviewer (invented)', date: '2026-01-15', reason: 'Synthetic acceptance for the benchmark' }));
+    model.justifications = accepted.map((f) => ({
+      finding: f.key,
+      by: 'Benchmark reviewer (invented)',
+      date: '2026-01-15',
+      reason: 'Synthetic acceptance for the benchmark',
+    }));
   }
   return { model, counts: { elements: elements.length, functions: functions.length, scenarios: scenarios.length } };
 }

@@ -15,7 +15,12 @@ mkdirSync(dir, { recursive: true });
 const cards = Math.ceil(ROWS / 16);
 const index = ['Tag No.,Type,Service,Measured Variable,Manufacturer,Model No.,Process Connection,Supply,Loop No.'];
 const io = ['Tag No.,I/O Card,Channel'];
-const system = ['Tag No.,Type,Service,System,Cabinet,Fed From,Signal Via', 'UPS-1,ups,Instrument UPS,,,,', 'CAB-1,cabinet,Marshalling cabinet,,,,', 'C-1,controller,Controller,bpcs,CAB-1,UPS-1,'];
+const system = [
+  'Tag No.,Type,Service,System,Cabinet,Fed From,Signal Via',
+  'UPS-1,ups,Instrument UPS,,,,',
+  'CAB-1,cabinet,Marshalling cabinet,,,,',
+  'C-1,controller,Controller,bpcs,CAB-1,UPS-1,',
+];
 const plant = ['Tag,Type,Service,Mounted On', 'V-1,vessel,Drum,'];
 for (let c = 1; c <= cards; c++) system.push(`AI-${c},io-card,Input card ${c},,CAB-1,UPS-1,C-1`);
 for (let i = 1; i <= ROWS; i++) {
@@ -33,8 +38,20 @@ const probeFile = join(dir, 'probe.json');
 const runs: { wall: number; cpu: number; rss: number }[] = [];
 for (let run = 0; run < 3; run++) {
   const start = performance.now();
-  const args = ['--import', PROBE, BIN, 'import', ...Object.keys(files).map((f) => join(dir, f)), '-o', join(dir, 'plant.bulk'), '--force'];
-  const child = spawnSync(process.execPath, args, { encoding: 'utf8', env: { ...process.env, BULKHEAD_BENCH_RSS_FILE: probeFile } });
+  const args = [
+    '--import',
+    PROBE,
+    BIN,
+    'import',
+    ...Object.keys(files).map((f) => join(dir, f)),
+    '-o',
+    join(dir, 'plant.bulk'),
+    '--force',
+  ];
+  const child = spawnSync(process.execPath, args, {
+    encoding: 'utf8',
+    env: { ...process.env, BULKHEAD_BENCH_RSS_FILE: probeFile },
+  });
   const wall = performance.now() - start;
   if (child.status !== 0) throw new Error(`import exited ${child.status}: ${child.stderr.slice(0, 800)}`);
   const probe = JSON.parse(readFileSync(probeFile, 'utf8')) as { maxRss: number; cpuMs: number };

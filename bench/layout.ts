@@ -30,19 +30,34 @@ async function time(name: string, scene: Scene, repeats: number, limitMs?: numbe
   runs.sort((a, b) => a - b);
   const medianMs = Math.round(runs[Math.floor(runs.length / 2)]!);
   const maxMs = Math.round(runs[runs.length - 1]!);
-  return { name, nodes: scene.nodes.length, edges: scene.edges.length, medianMs, maxMs, ...(limitMs ? { limitMs } : {}), ok: limitMs === undefined || maxMs < limitMs };
+  return {
+    name,
+    nodes: scene.nodes.length,
+    edges: scene.edges.length,
+    medianMs,
+    maxMs,
+    ...(limitMs ? { limitMs } : {}),
+    ok: limitMs === undefined || maxMs < limitMs,
+  };
 }
 
 function scenes(model: Model) {
   const analysis = analyze(model);
-  return { analysis, scene: (id: string) => scenarioScene(model, analysis, id), overview: () => siteOverview(model, analysis) };
+  return {
+    analysis,
+    scene: (id: string) => scenarioScene(model, analysis, id),
+    overview: () => siteOverview(model, analysis),
+  };
 }
 
-export async function runLayoutBench(options: { repeats?: number; focusedNodes?: number; siteElements?: number } = {}): Promise<LayoutBenchResult[]> {
+export async function runLayoutBench(
+  options: { repeats?: number; focusedNodes?: number; siteElements?: number } = {},
+): Promise<LayoutBenchResult[]> {
   const repeats = options.repeats ?? 5;
   const results: LayoutBenchResult[] = [];
   const demo = scenes(demoModel());
-  for (const a of demo.analysis.assessments) results.push(await time(`demo ${a.scenario}`, demo.scene(a.scenario), repeats));
+  for (const a of demo.analysis.assessments)
+    results.push(await time(`demo ${a.scenario}`, demo.scene(a.scenario), repeats));
 
   const wide = scenes(generateWideScenario(options.focusedNodes ?? 300));
   results.push(await time('focused scenario, ~300 nodes', wide.scene('S-WIDE'), repeats, 1000));
@@ -51,13 +66,21 @@ export async function runLayoutBench(options: { repeats?: number; focusedNodes?:
   const site = scenes(siteModel);
   results.push(await time(`site overview, ${siteModel.elements.length} elements`, site.overview(), repeats, 1000));
   const first = siteModel.scenarios[0]!.id;
-  results.push(await time(`one scenario of the ${siteModel.elements.length}-element site`, site.scene(first), repeats, 1000));
+  results.push(
+    await time(`one scenario of the ${siteModel.elements.length}-element site`, site.scene(first), repeats, 1000),
+  );
   return results;
 }
 
 export function formatLayoutBench(results: LayoutBenchResult[]): string {
-  const rows = results.map((r) => `${r.name.padEnd(44)} ${String(r.nodes).padStart(5)} ${String(r.edges).padStart(5)} ${String(r.medianMs).padStart(7)} ${String(r.maxMs).padStart(7)} ${r.limitMs ? `< ${r.limitMs}`.padStart(7) : '       '} ${r.ok ? 'ok' : 'SLOW'}`);
-  return [`${'layout (elk.bundled.js, in process)'.padEnd(44)} nodes edges  median     max  target`, ...rows].join('\n') + '\n';
+  const rows = results.map(
+    (r) =>
+      `${r.name.padEnd(44)} ${String(r.nodes).padStart(5)} ${String(r.edges).padStart(5)} ${String(r.medianMs).padStart(7)} ${String(r.maxMs).padStart(7)} ${r.limitMs ? `< ${r.limitMs}`.padStart(7) : '       '} ${r.ok ? 'ok' : 'SLOW'}`,
+  );
+  return (
+    [`${'layout (elk.bundled.js, in process)'.padEnd(44)} nodes edges  median     max  target`, ...rows].join('\n') +
+    '\n'
+  );
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {

@@ -2,8 +2,17 @@
 // own: times load and each analysis stage in analyze()'s order, then analyze() whole, and prints JSON.
 import { readFileSync } from 'node:fs';
 import {
-  analyze, applyJustifications, assessScenario, bpcsFactsOf, loadModelText, PlantIndex, ruleEnvironment,
-  runRules, Tracer, type Finding, type Model,
+  analyze,
+  applyJustifications,
+  assessScenario,
+  bpcsFactsOf,
+  loadModelText,
+  PlantIndex,
+  ruleEnvironment,
+  runRules,
+  Tracer,
+  type Finding,
+  type Model,
 } from '@bulkhead/core';
 
 export interface StageTimes {
@@ -60,7 +69,8 @@ function stages(model: Model, times: Partial<StageTimes>): number {
   const byScenario = new Map<string | undefined, Finding[]>();
   for (const f of independent) (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
   const assessed = model.scenarios.map((scenario) =>
-    assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions }));
+    assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions }),
+  );
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications);
   lap('assess');
@@ -96,7 +106,13 @@ export function measure(file: string, jsonFile: string, runs: number): Measureme
     t = performance.now();
     const loaded = loadModelText(file, bytes);
     times.load = performance.now() - t;
-    if (!loaded.model) throw new Error(`${file} does not load: ${loaded.diagnostics.map((d) => `${d.code} ${d.message}`).slice(0, 3).join('; ')}`);
+    if (!loaded.model)
+      throw new Error(
+        `${file} does not load: ${loaded.diagnostics
+          .map((d) => `${d.code} ${d.message}`)
+          .slice(0, 3)
+          .join('; ')}`,
+      );
     model = loaded.model;
     replicaFindings = stages(model, times);
     gc();

@@ -6,7 +6,9 @@ import { Session, type Profiler } from 'node:inspector';
 import { analyze, loadModelText } from '@bulkhead/core';
 
 function post<T>(session: Session, method: string, params?: object): Promise<T> {
-  return new Promise((resolve, reject) => session.post(method, params ?? {}, (e, r) => (e ? reject(e) : resolve(r as T))));
+  return new Promise((resolve, reject) =>
+    session.post(method, params ?? {}, (e, r) => (e ? reject(e) : resolve(r as T))),
+  );
 }
 
 interface Row {

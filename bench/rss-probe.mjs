@@ -7,6 +7,9 @@ const target = process.env.BULKHEAD_BENCH_RSS_FILE;
 if (target) {
   process.on('exit', () => {
     const usage = process.resourceUsage();
-    writeFileSync(target, JSON.stringify({ maxRss: usage.maxRSS * 1024, cpuMs: (usage.userCPUTime + usage.systemCPUTime) / 1000 }));
+    writeFileSync(
+      target,
+      JSON.stringify({ maxRss: usage.maxRSS * 1024, cpuMs: (usage.userCPUTime + usage.systemCPUTime) / 1000 }),
+    );
   });
 }

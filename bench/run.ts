@@ -49,11 +49,19 @@ function timeNode(args: string[], times: number, nodeFlags: string[] = []): Proc
     const start = performance.now();
     const child = spawnSync(
       'sh',
-      ['-c', `exec "${process.execPath}" ${nodeFlags.join(' ')} --import "${path('rss-probe.mjs', HERE)}" ${args.map(quoted).join(' ')} > "${outFile}"`],
-      { env: { ...process.env, BULKHEAD_BENCH_RSS_FILE: probeFile }, stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' },
+      [
+        '-c',
+        `exec "${process.execPath}" ${nodeFlags.join(' ')} --import "${path('rss-probe.mjs', HERE)}" ${args.map(quoted).join(' ')} > "${outFile}"`,
+      ],
+      {
+        env: { ...process.env, BULKHEAD_BENCH_RSS_FILE: probeFile },
+        stdio: ['ignore', 'ignore', 'pipe'],
+        encoding: 'utf8',
+      },
     );
     walls.push(performance.now() - start);
-    if (child.status !== 0) throw new Error(`node ${args.join(' ')} exited ${child.status}: ${child.stderr.slice(0, 500)}`);
+    if (child.status !== 0)
+      throw new Error(`node ${args.join(' ')} exited ${child.status}: ${child.stderr.slice(0, 500)}`);
     const probe = JSON.parse(readFileSync(probeFile, 'utf8')) as { maxRss: number; cpuMs: number };
     cpus.push(probe.cpuMs);
     maxRss = Math.max(maxRss, probe.maxRss);
@@ -61,7 +69,8 @@ function timeNode(args: string[], times: number, nodeFlags: string[] = []): Proc
   return { wallMs: Math.min(...walls), cpuMs: Math.min(...cpus), maxRss, outputBytes: readFileSync(outFile).length };
 }
 
-const timeCheck = (file: string, times: number, nodeFlags: string[] = []) => timeNode([BIN, 'check', file, '--fail-on', 'none'], times, nodeFlags);
+const timeCheck = (file: string, times: number, nodeFlags: string[] = []) =>
+  timeNode([BIN, 'check', file, '--fail-on', 'none'], times, nodeFlags);
 
 const median = (values: number[]) => {
   const sorted = [...values].sort((a, b) => a - b);
@@ -101,11 +110,15 @@ function startUp(file: string, runs: number): StartUp {
 }
 
 function measureSize(bulk: string, json: string): Measurement {
-  const child = spawnSync(process.execPath, ['--expose-gc', '--import', 'tsx', path('measure.ts', HERE), bulk, json, String(runs)], {
-    cwd: path('.'),
-    encoding: 'utf8',
-    maxBuffer: 1 << 24,
-  });
+  const child = spawnSync(
+    process.execPath,
+    ['--expose-gc', '--import', 'tsx', path('measure.ts', HERE), bulk, json, String(runs)],
+    {
+      cwd: path('.'),
+      encoding: 'utf8',
+      maxBuffer: 1 << 24,
+    },
+  );
   if (child.status !== 0) throw new Error(`measuring ${bulk} failed:\n${child.stderr}`);
   return JSON.parse(child.stdout) as Measurement;
 }
@@ -121,12 +134,45 @@ const ms = (n: number) => `${Math.round(n)}`;
 const mb = (bytes: number) => `${Math.round(bytes / 1e6)}`;
 
 function table(rows: Row[]): string {
-  const head = ['elements', 'functions', 'scenarios', 'findings', 'JSON.parse', 'load', 'load json', 'index', 'trace', 'rules', 'assess', 'analyze()', 'load+analyze', 'x JSON.parse', 'check (CLI)', 'check CPU', 'peak MB', 'check MB'];
+  const head = [
+    'elements',
+    'functions',
+    'scenarios',
+    'findings',
+    'JSON.parse',
+    'load',
+    'load json',
+    'index',
+    'trace',
+    'rules',
+    'assess',
+    'analyze()',
+    'load+analyze',
+    'x JSON.parse',
+    'check (CLI)',
+    'check CPU',
+    'peak MB',
+    'check MB',
+  ];
   const body = rows.map(({ m, check }) => [
-    String(m.elements), String(m.functions), String(m.scenarios), String(m.findings),
-    ms(m.best.jsonParse), ms(m.best.load), ms(m.best.loadJson), ms(m.best.graph), ms(m.best.trace), ms(m.best.rules), ms(m.best.assess),
-    ms(m.best.analyze), ms(m.best.load + m.best.analyze), ((m.best.load + m.best.analyze) / m.best.jsonParse).toFixed(1),
-    ms(check.wallMs), ms(check.cpuMs), mb(m.maxRss), mb(check.maxRss),
+    String(m.elements),
+    String(m.functions),
+    String(m.scenarios),
+    String(m.findings),
+    ms(m.best.jsonParse),
+    ms(m.best.load),
+    ms(m.best.loadJson),
+    ms(m.best.graph),
+    ms(m.best.trace),
+    ms(m.best.rules),
+    ms(m.best.assess),
+    ms(m.best.analyze),
+    ms(m.best.load + m.best.analyze),
+    ((m.best.load + m.best.analyze) / m.best.jsonParse).toFixed(1),
+    ms(check.wallMs),
+    ms(check.cpuMs),
+    mb(m.maxRss),
+    mb(check.maxRss),
   ]);
   const widths = head.map((h, i) => Math.max(h.length, ...body.map((r) => r[i]!.length)));
   const line = (cells: string[]) => cells.map((c, i) => c.padStart(widths[i]!)).join('  ');
@@ -156,19 +202,42 @@ function targets(rows: Row[], start: StartUp | undefined): Target[] {
   const t = big.m.best;
   const ratio = (t.load + t.analyze) / t.jsonParse;
   out.push(
-    { name: 'check (load + analyze) at most 4x a bare JSON.parse of the JSON twin', measured: `${ratio.toFixed(1)}x (${ms(t.load + t.analyze)} ms vs ${ms(t.jsonParse)} ms)`, ok: ratio <= 4 },
-    { name: 'analysis after loading takes no longer than loading', measured: `analyze() ${ms(t.analyze)} ms vs load ${ms(t.load)} ms`, ok: t.analyze <= t.load },
+    {
+      name: 'check (load + analyze) at most 4x a bare JSON.parse of the JSON twin',
+      measured: `${ratio.toFixed(1)}x (${ms(t.load + t.analyze)} ms vs ${ms(t.jsonParse)} ms)`,
+      ok: ratio <= 4,
+    },
+    {
+      name: 'analysis after loading takes no longer than loading',
+      measured: `analyze() ${ms(t.analyze)} ms vs load ${ms(t.load)} ms`,
+      ok: t.analyze <= t.load,
+    },
     // The real command's peak; the measuring process also loads the JSON twin and analyses twice, so it is shown, not judged.
-    { name: 'peak memory of `bulkhead check` under 500 MB', measured: `check ${mb(big.check.maxRss)} MB (measuring process ${mb(big.m.maxRss)} MB)`, ok: big.check.maxRss < 500e6 },
+    {
+      name: 'peak memory of `bulkhead check` under 500 MB',
+      measured: `check ${mb(big.check.maxRss)} MB (measuring process ${mb(big.m.maxRss)} MB)`,
+      ok: big.check.maxRss < 500e6,
+    },
   );
   if (mid) {
     // Time per element may grow by at most 10% from 10k to 100k: 10x the elements, at most 11x the time.
-    const growth = (a: number, b: number) => (b / a) / (big.m.elements / mid.m.elements) * 10;
+    const growth = (a: number, b: number) => (b / a / (big.m.elements / mid.m.elements)) * 10;
     const pipeline = growth(mid.m.best.load + mid.m.best.analyze, t.load + t.analyze);
-    const stages = (['load', 'graph', 'trace', 'rules', 'assess'] as const).map((k) => ({ k, g: growth(mid.m.best[k], t[k]) }));
+    const stages = (['load', 'graph', 'trace', 'rules', 'assess'] as const).map((k) => ({
+      k,
+      g: growth(mid.m.best[k], t[k]),
+    }));
     out.push(
-      { name: 'time grows linearly (10x elements, at most 11x time)', measured: `load+analyze ${pipeline.toFixed(1)}x`, ok: pipeline <= 11 },
-      { name: 'every stage grows at most 11x', measured: stages.map(({ k, g }) => `${k === 'graph' ? 'index' : k} ${g.toFixed(1)}x`).join(', '), ok: stages.every(({ g }) => g <= 11) },
+      {
+        name: 'time grows linearly (10x elements, at most 11x time)',
+        measured: `load+analyze ${pipeline.toFixed(1)}x`,
+        ok: pipeline <= 11,
+      },
+      {
+        name: 'every stage grows at most 11x',
+        measured: stages.map(({ k, g }) => `${k === 'graph' ? 'index' : k} ${g.toFixed(1)}x`).join(', '),
+        ok: stages.every(({ g }) => g <= 11),
+      },
     );
   }
   return out;
@@ -189,7 +258,11 @@ function viewerFigure(): ViewerFigure | string {
   if (!existsSync('/usr/bin/chromium')) return 'skipped: no /usr/bin/chromium';
   const report = path('test-artifacts/e2e/large-site.json');
   rmSync(report, { force: true });
-  const build = spawnSync('npm', ['run', 'build', '-w', '@bulkhead/viewer'], { cwd: path('.'), stdio: ['ignore', 'ignore', 'pipe'], encoding: 'utf8' });
+  const build = spawnSync('npm', ['run', 'build', '-w', '@bulkhead/viewer'], {
+    cwd: path('.'),
+    stdio: ['ignore', 'ignore', 'pipe'],
+    encoding: 'utf8',
+  });
   if (build.status !== 0) return `skipped: the viewer did not build: ${build.stderr.slice(0, 300)}`;
   const run = spawnSync('npx', ['vitest', 'run', '-c', 'vitest.e2e.config.ts', 'tests/e2e/large-site.e2e.test.ts'], {
     cwd: path('.'),
@@ -206,13 +279,19 @@ async function layoutBenchmark(): Promise<void> {
     process.stdout.write('\nlayout benchmark: not present\n');
     return;
   }
-  const layout = (await import('./layout.ts')) as { runLayoutBench?: () => Promise<unknown>; formatLayoutBench?: (r: never) => string };
+  const layout = (await import('./layout.ts')) as {
+    runLayoutBench?: () => Promise<unknown>;
+    formatLayoutBench?: (r: never) => string;
+  };
   if (!layout.runLayoutBench) {
     process.stdout.write('\nlayout benchmark: bench/layout.ts exports no runLayoutBench\n');
     return;
   }
   const results = await layout.runLayoutBench();
-  process.stdout.write('\n' + (layout.formatLayoutBench ? layout.formatLayoutBench(results as never) : JSON.stringify(results, null, 2) + '\n'));
+  process.stdout.write(
+    '\n' +
+      (layout.formatLayoutBench ? layout.formatLayoutBench(results as never) : JSON.stringify(results, null, 2) + '\n'),
+  );
 }
 
 const loadAtStart = loadavg()[0]!;
@@ -224,7 +303,10 @@ for (const size of sizes) {
   process.stderr.write(`site of ${size} elements: generating if needed, then measuring\n`);
   const files = ensureGenerated(size);
   const m = measureSize(files.bulk, files.json);
-  if (m.replicaFindings !== m.findings) throw new Error(`the stage replica found ${m.replicaFindings} findings, analyze() ${m.findings}: bench/measure.ts no longer follows analyze()`);
+  if (m.replicaFindings !== m.findings)
+    throw new Error(
+      `the stage replica found ${m.replicaFindings} findings, analyze() ${m.findings}: bench/measure.ts no longer follows analyze()`,
+    );
   rows.push({ size, m, check: timeCheck(files.bulk, Math.min(runs, 3)) });
 }
 process.stderr.write('start-up: node -e 0, bulkhead --version and bulkhead check of the 1k site, in turn\n');
@@ -232,15 +314,34 @@ const start = startUp(ensureGenerated(1000).bulk, Math.max(5, runs));
 if (values.viewer) process.stderr.write('viewer: the 10k site in headless Chromium (--no-viewer skips it)\n');
 const viewer = values.viewer ? viewerFigure() : undefined;
 
-process.stdout.write(`Bulkhead benchmark: synthetic sites, best of ${runs} runs (check: of ${Math.min(runs, 3)}), times in ms, node ${process.version}, ${cpus().length} cores\n`);
-process.stdout.write(`load average (1 min) at start ${loadAtStart.toFixed(2)}, at end ${loadavg()[0]!.toFixed(2)}: other work on the machine inflates the times; read the ratios\n`);
-process.stdout.write('load = parse + validate (.bulk); index = the plant index the tracer walks; stages follow analyze(); analyze() is timed whole; x JSON.parse = (load + analyze()) / JSON.parse of the JSON twin;\ncheck = the built `bulkhead check` in a child process (wall, and CPU of all threads)\n\n');
+process.stdout.write(
+  `Bulkhead benchmark: synthetic sites, best of ${runs} runs (check: of ${Math.min(runs, 3)}), times in ms, node ${process.version}, ${cpus().length} cores\n`,
+);
+process.stdout.write(
+  `load average (1 min) at start ${loadAtStart.toFixed(2)}, at end ${loadavg()[0]!.toFixed(2)}: other work on the machine inflates the times; read the ratios\n`,
+);
+process.stdout.write(
+  'load = parse + validate (.bulk); index = the plant index the tracer walks; stages follow analyze(); analyze() is timed whole; x JSON.parse = (load + analyze()) / JSON.parse of the JSON twin;\ncheck = the built `bulkhead check` in a child process (wall, and CPU of all threads)\n\n',
+);
 process.stdout.write(table(rows) + '\n');
 const results = targets(rows, start);
 if (typeof viewer === 'object') {
   results.push(
-    { name: `viewer, ${viewer.elements}-element site: no main-thread task over 200 ms`, measured: `longest task ${viewer.longestTaskMs} ms (PerformanceObserver, page load to overview; ${viewer.longTasks.filter((t) => t.ms >= 100).map((t) => `${t.ms} ms in ${t.step}`).join(', ') || 'none of 100 ms'})`, ok: viewer.longestTaskMs <= 200 },
-    { name: 'viewer: first graph under 3 s', measured: `${(viewer.firstGraphMs / 1000).toFixed(1)} s from navigation`, ok: viewer.firstGraphMs < 3000 },
+    {
+      name: `viewer, ${viewer.elements}-element site: no main-thread task over 200 ms`,
+      measured: `longest task ${viewer.longestTaskMs} ms (PerformanceObserver, page load to overview; ${
+        viewer.longTasks
+          .filter((t) => t.ms >= 100)
+          .map((t) => `${t.ms} ms in ${t.step}`)
+          .join(', ') || 'none of 100 ms'
+      })`,
+      ok: viewer.longestTaskMs <= 200,
+    },
+    {
+      name: 'viewer: first graph under 3 s',
+      measured: `${(viewer.firstGraphMs / 1000).toFixed(1)} s from navigation`,
+      ok: viewer.firstGraphMs < 3000,
+    },
   );
 } else if (viewer) {
   process.stdout.write(`\nviewer: ${viewer}\n`);
@@ -255,12 +356,20 @@ const largest = rows[rows.length - 1];
 if (largest) {
   const flag = '--max-semi-space-size=64';
   const tuned = timeCheck(ensureGenerated(largest.size).bulk, Math.min(runs, 3), [flag]);
-  process.stdout.write(`\nFor comparison, not a target: \`node ${flag}\` check of the ${largest.m.elements}-element site: ${ms(tuned.wallMs)} ms, ${mb(tuned.maxRss)} MB\n`);
+  process.stdout.write(
+    `\nFor comparison, not a target: \`node ${flag}\` check of the ${largest.m.elements}-element site: ${ms(tuned.wallMs)} ms, ${mb(tuned.maxRss)} MB\n`,
+  );
 }
 await layoutBenchmark();
 // Issue 15: minimal cut sets at order 2, the common-cause ranking and the diff on the largest site (bench/site-wide.ts).
 if (largest) {
-  const siteWide = spawnSync(process.execPath, ['--import', 'tsx', path('site-wide.ts', HERE), String(largest.size)], { cwd: path('.'), encoding: 'utf8', maxBuffer: 1 << 24 });
-  process.stdout.write(`\nSite-wide views (best of 3, ms):\n${siteWide.status === 0 ? siteWide.stdout : `failed: ${siteWide.stderr.slice(0, 500)}\n`}`);
+  const siteWide = spawnSync(process.execPath, ['--import', 'tsx', path('site-wide.ts', HERE), String(largest.size)], {
+    cwd: path('.'),
+    encoding: 'utf8',
+    maxBuffer: 1 << 24,
+  });
+  process.stdout.write(
+    `\nSite-wide views (best of 3, ms):\n${siteWide.status === 0 ? siteWide.stdout : `failed: ${siteWide.stderr.slice(0, 500)}\n`}`,
+  );
 }
 if (values.strict && results.some((r) => !r.ok)) process.exitCode = 1;

@@ -2,7 +2,14 @@
 // tag suffixed per copy), and one scenario whose functions have so many channels that its focused
 // graph reaches a given node count. Benchmark data only: no real plant.
 import { readFileSync } from 'node:fs';
-import { LINK_FIELDS, loadModelText, type Element, type Model, type PlantFunction, type Scenario } from '@bulkhead/core';
+import {
+  LINK_FIELDS,
+  loadModelText,
+  type Element,
+  type Model,
+  type PlantFunction,
+  type Scenario,
+} from '@bulkhead/core';
 
 const DEMO = new URL('../fixtures/demo/marrow-fen.bulk', import.meta.url);
 
@@ -23,7 +30,9 @@ function renameElement(e: Element, rename: (t: string) => string): Element {
 
 function renameFunction(f: PlantFunction, rename: (t: string) => string): PlantFunction {
   const copy = { ...f, tag: rename(f.tag) } as Record<string, unknown>;
-  for (const field of ['sensors', 'finals'] as const) if (field in f && f[field as keyof PlantFunction]) copy[field] = (f[field as keyof PlantFunction] as string[]).map(rename);
+  for (const field of ['sensors', 'finals'] as const)
+    if (field in f && f[field as keyof PlantFunction])
+      copy[field] = (f[field as keyof PlantFunction] as string[]).map(rename);
   for (const field of ['solver', 'raisedIn', 'console', 'operator', 'device'] as const) {
     const value = (f as Record<string, unknown>)[field];
     if (typeof value === 'string') copy[field] = rename(value);
@@ -49,7 +58,14 @@ function renameScenario(s: Scenario, rename: (t: string) => string): Scenario {
 export function generateSite(elements: number): Model {
   const demo = demoModel();
   const copies = Math.ceil(elements / demo.elements.length);
-  const model: Model = { ...demo, site: { name: `Invented site of ${copies} demo units` }, elements: [], functions: [], scenarios: [], justifications: [] };
+  const model: Model = {
+    ...demo,
+    site: { name: `Invented site of ${copies} demo units` },
+    elements: [],
+    functions: [],
+    scenarios: [],
+    justifications: [],
+  };
   for (let i = 1; i <= copies; i++) {
     const rename = (t: string) => `${t}.U${i}`;
     model.elements.push(...demo.elements.map((e) => renameElement(e, rename)));
@@ -76,22 +92,57 @@ export function generateWideScenario(nodes: number): Model {
   for (const side of sides) {
     sensorsOf[side] = [];
     for (let c = 0; c < channels; c++) {
-      const card = side === 'CAUSE' || c === 0 ? `AI-W-${side === 'CAUSE' ? 'C' : side}-${Math.floor(c / 8)}` : `AI-W-${side}-${Math.floor(c / 8)}`;
+      const card =
+        side === 'CAUSE' || c === 0
+          ? `AI-W-${side === 'CAUSE' ? 'C' : side}-${Math.floor(c / 8)}`
+          : `AI-W-${side}-${Math.floor(c / 8)}`;
       if (!elements.some((e) => e.tag === card)) {
-        elements.push({ kind: 'io-card', tag: card, signalVia: [side === 'CAUSE' ? 'BPCS-C1' : 'SIS-1'], housedIn: [side === 'CAUSE' ? 'CAB-1' : 'CAB-2'], poweredBy: [side === 'CAUSE' ? 'CKT-11' : 'CKT-21'] });
+        elements.push({
+          kind: 'io-card',
+          tag: card,
+          signalVia: [side === 'CAUSE' ? 'BPCS-C1' : 'SIS-1'],
+          housedIn: [side === 'CAUSE' ? 'CAB-1' : 'CAB-2'],
+          poweredBy: [side === 'CAUSE' ? 'CKT-11' : 'CKT-21'],
+        });
       }
       const n = `${side}-${c}`;
       elements.push({ kind: 'tapping', tag: `TP-W-${n}`, mountedOn: ['V-101'] });
       elements.push({ kind: 'impulse-line', tag: `IL-W-${n}`, mountedOn: [`TP-W-${n}`] });
       // The first channel of each layer shares the cause's first card: a shared I/O card to mark.
       const via = side !== 'CAUSE' && c === 0 ? 'AI-W-C-0' : card;
-      elements.push({ kind: 'transmitter', tag: `PT-W-${n}`, variable: 'pressure', mountedOn: [`IL-W-${n}`], signalVia: [via] });
+      elements.push({
+        kind: 'transmitter',
+        tag: `PT-W-${n}`,
+        variable: 'pressure',
+        mountedOn: [`IL-W-${n}`],
+        signalVia: [via],
+      });
       sensorsOf[side]!.push(`PT-W-${n}`);
     }
   }
   functions.push({ kind: 'loop', tag: 'PIC-W', sensors: sensorsOf.CAUSE!, solver: 'BPCS-C1', finals: ['PV-201'] });
-  functions.push({ kind: 'sif', tag: 'SIF-WA', sensors: sensorsOf.SIFA!, sensorVoting: `1oo${channels}`, solver: 'SIS-1', finals: ['XV-201'], trip: 'close', tripMode: 'de-energise', pfd: 0.01 });
-  functions.push({ kind: 'sif', tag: 'SIF-WB', sensors: sensorsOf.SIFB!, sensorVoting: `1oo${channels}`, solver: 'SIS-1', finals: ['XV-101'], trip: 'close', tripMode: 'de-energise', pfd: 0.01 });
+  functions.push({
+    kind: 'sif',
+    tag: 'SIF-WA',
+    sensors: sensorsOf.SIFA!,
+    sensorVoting: `1oo${channels}`,
+    solver: 'SIS-1',
+    finals: ['XV-201'],
+    trip: 'close',
+    tripMode: 'de-energise',
+    pfd: 0.01,
+  });
+  functions.push({
+    kind: 'sif',
+    tag: 'SIF-WB',
+    sensors: sensorsOf.SIFB!,
+    sensorVoting: `1oo${channels}`,
+    solver: 'SIS-1',
+    finals: ['XV-101'],
+    trip: 'close',
+    tripMode: 'de-energise',
+    pfd: 0.01,
+  });
   return {
     ...demo,
     site: { name: 'Invented wide scenario' },
@@ -102,7 +153,10 @@ export function generateWideScenario(nodes: number): Model {
         id: 'S-WIDE',
         category: demo.categories[0]!.id,
         cause: { function: 'PIC-W', frequency: 0.1 },
-        layers: [{ function: 'SIF-WA', pfd: 0.01 }, { function: 'SIF-WB', pfd: 0.01 }],
+        layers: [
+          { function: 'SIF-WA', pfd: 0.01 },
+          { function: 'SIF-WB', pfd: 0.01 },
+        ],
       },
     ],
     justifications: [],

@@ -26,7 +26,10 @@ function revised(model: Model): Model {
   return next;
 }
 
-const sizes = process.argv.slice(2).map(Number).filter((n) => n > 0);
+const sizes = process.argv
+  .slice(2)
+  .map(Number)
+  .filter((n) => n > 0);
 for (const size of sizes.length ? sizes : [100000]) {
   const files = ensureGenerated(size);
   const model = loadModelText(files.bulk, readFileSync(files.bulk)).model!;
@@ -37,12 +40,28 @@ for (const size of sizes.length ? sizes : [100000]) {
   const ranking = best(3, () => rankCommonCauses(model, analysis.result));
   const next = revised(model);
   const nextAnalysis = analyze(next);
-  const diff = best(3, () => diffRevisions({ model, label: 'old', analysis: analysis.result }, { model: next, label: 'new', analysis: nextAnalysis }));
-  const line = (what: string, ms: number, detail: string) => process.stdout.write(`${String(size).padStart(7)} elements  ${what.padEnd(26)} ${String(Math.round(ms)).padStart(6)} ms  ${detail}\n`);
+  const diff = best(3, () =>
+    diffRevisions(
+      { model, label: 'old', analysis: analysis.result },
+      { model: next, label: 'new', analysis: nextAnalysis },
+    ),
+  );
+  const line = (what: string, ms: number, detail: string) =>
+    process.stdout.write(
+      `${String(size).padStart(7)} elements  ${what.padEnd(26)} ${String(Math.round(ms)).padStart(6)} ms  ${detail}\n`,
+    );
   line('analyze()', analysis.ms, `${model.scenarios.length} scenarios, ${analysis.result.findings.length} findings`);
   // Ratios to analyze() in the same process: the machine may be shared, and load inflates every time alike.
   const ratio = (ms: number) => `${(ms / analysis.ms).toFixed(2)}x analyze()`;
-  line('cut sets, order 2 (MOCUS)', cutSets.ms, `${ratio(cutSets.ms)}; ${sets.length} minimal cut sets: ${singles} single points, ${sets.length - singles} pairs`);
+  line(
+    'cut sets, order 2 (MOCUS)',
+    cutSets.ms,
+    `${ratio(cutSets.ms)}; ${sets.length} minimal cut sets: ${singles} single points, ${sets.length - singles} pairs`,
+  );
   line('common-cause ranking', ranking.ms, `${ratio(ranking.ms)}; ${ranking.result.length} elements ranked`);
-  line('diff (analyses given)', diff.ms, `${ratio(diff.ms)}; ${diff.result.renames.length} rename, ${diff.result.elements.changed.length} element changed, ${diff.result.verdicts.filter((v) => v.change !== 'same').length} scenarios changed verdict`);
+  line(
+    'diff (analyses given)',
+    diff.ms,
+    `${ratio(diff.ms)}; ${diff.result.renames.length} rename, ${diff.result.elements.changed.length} element changed, ${diff.result.verdicts.filter((v) => v.change !== 'same').length} scenarios changed verdict`,
+  );
 }

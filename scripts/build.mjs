@@ -35,10 +35,17 @@ export async function buildBin() {
 }
 
 export function buildLibraries() {
-  const tsc = spawnSync(process.execPath, [
-    fileURLToPath(new URL('../node_modules/typescript/bin/tsc', import.meta.url)),
-    '-b', 'packages/core/tsconfig.build.json', 'packages/layout/tsconfig.build.json', 'packages/import/tsconfig.build.json',
-  ], { cwd: root, stdio: 'inherit' });
+  const tsc = spawnSync(
+    process.execPath,
+    [
+      fileURLToPath(new URL('../node_modules/typescript/bin/tsc', import.meta.url)),
+      '-b',
+      'packages/core/tsconfig.build.json',
+      'packages/layout/tsconfig.build.json',
+      'packages/import/tsconfig.build.json',
+    ],
+    { cwd: root, stdio: 'inherit' },
+  );
   if (tsc.status !== 0) throw new Error(`tsc -b exited ${tsc.status}`);
 }
 

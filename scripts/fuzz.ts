@@ -7,7 +7,9 @@ import { mkdirSync, writeFileSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import { budgetMs, makeInput, runOne, seeds } from '../tests/fuzz/fuzzer.ts';
 
-const { values } = parseArgs({ options: { inputs: { type: 'string', default: '50000' }, seed: { type: 'string', default: '1' } } });
+const { values } = parseArgs({
+  options: { inputs: { type: 'string', default: '50000' }, seed: { type: 'string', default: '1' } },
+});
 const total = Number(values.inputs);
 const seed = Number(values.seed);
 const all = seeds();
@@ -30,13 +32,22 @@ for (let i = 0; i < total; i++) {
       if (retry.cpuMs < outcome.cpuMs) outcome = retry;
     }
   }
-  if (input.bytes.length >= 50 * 1024) worstPer100k = Math.max(worstPer100k, (outcome.cpuMs * 100 * 1024) / input.bytes.length);
+  if (input.bytes.length >= 50 * 1024)
+    worstPer100k = Math.max(worstPer100k, (outcome.cpuMs * 100 * 1024) / input.bytes.length);
   slowest = Math.max(slowest, outcome.cpuMs);
-  const note = (kind: string, detail: string) => problems.push({ kind, label: input.label, detail, bytes: input.bytes, name: input.name });
+  const note = (kind: string, detail: string) =>
+    problems.push({ kind, label: input.label, detail, bytes: input.bytes, name: input.name });
   if (outcome.crash) note('crash', outcome.crash);
-  if (outcome.cpuMs > budgetMs(input.bytes.length)) note('slow', `${outcome.cpuMs.toFixed(0)} ms CPU (${outcome.ms.toFixed(0)} ms wall) for ${input.bytes.length} bytes`);
+  if (outcome.cpuMs > budgetMs(input.bytes.length))
+    note(
+      'slow',
+      `${outcome.cpuMs.toFixed(0)} ms CPU (${outcome.ms.toFixed(0)} ms wall) for ${input.bytes.length} bytes`,
+    );
   if (outcome.outside.length) note('outside', outcome.outside.slice(0, 3).join('; '));
-  if ((i + 1) % 5000 === 0) process.stdout.write(`  ${i + 1} inputs, ${problems.length} problems, ${((performance.now() - started) / 1000).toFixed(0)} s\n`);
+  if ((i + 1) % 5000 === 0)
+    process.stdout.write(
+      `  ${i + 1} inputs, ${problems.length} problems, ${((performance.now() - started) / 1000).toFixed(0)} s\n`,
+    );
 }
 
 const count = (kind: string) => problems.filter((p) => p.kind === kind).length;

@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// The whole test suite, as the README's test command runs it: type check, lint, unit and standards tests,
+// The whole test suite, as the README's test command runs it: type check, lint, format, unit and standards tests,
 // then the browser tests when a viewer exists. Prints one plain closing line "N passed, N failed"
 // because CI reads that line, not vitest's own summary.
 import { spawnSync } from 'node:child_process';
@@ -16,16 +16,33 @@ function step(name, command, args) {
 
 let ok = step('type check', 'npx', ['tsc', '--noEmit', '-p', '.']);
 ok = step('lint', 'npx', ['eslint', '.']) && ok;
+ok = step('format', 'npx', ['prettier', '--check', '.']) && ok;
 const reports = [];
 const hasViewer = existsSync('apps/viewer/vite.config.ts');
 if (hasViewer) {
   ok = step('viewer check', 'npm', ['run', 'check', '-w', '@bulkhead/viewer']) && ok;
   ok = step('viewer build', 'npm', ['run', 'build', '-w', '@bulkhead/viewer']) && ok;
 }
-ok = step('unit tests', 'npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile.json=.reports/unit.json']) && ok;
+ok =
+  step('unit tests', 'npx', [
+    'vitest',
+    'run',
+    '--reporter=default',
+    '--reporter=json',
+    '--outputFile.json=.reports/unit.json',
+  ]) && ok;
 reports.push('.reports/unit.json');
 if (hasViewer && existsSync('vitest.e2e.config.ts')) {
-  ok = step('browser tests', 'npx', ['vitest', 'run', '-c', 'vitest.e2e.config.ts', '--reporter=default', '--reporter=json', '--outputFile.json=.reports/e2e.json']) && ok;
+  ok =
+    step('browser tests', 'npx', [
+      'vitest',
+      'run',
+      '-c',
+      'vitest.e2e.config.ts',
+      '--reporter=default',
+      '--reporter=json',
+      '--outputFile.json=.reports/e2e.json',
+    ]) && ok;
   reports.push('.reports/e2e.json');
 }
 

@@ -4,6 +4,8 @@ import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 
 export default function setup(): void {
-  const build = spawnSync(process.execPath, [fileURLToPath(new URL('../scripts/build.mjs', import.meta.url)), 'bin'], { encoding: 'utf8' });
+  const build = spawnSync(process.execPath, [fileURLToPath(new URL('../scripts/build.mjs', import.meta.url)), 'bin'], {
+    encoding: 'utf8',
+  });
   if (build.status !== 0) throw new Error(`building the bulkhead bin failed:\n${build.stderr}`);
 }

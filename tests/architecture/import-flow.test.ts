@@ -13,7 +13,28 @@ const SRC = fileURLToPath(new URL('../../packages/core/src/', import.meta.url));
  * data) reads only the model and the traces, and comes before `assess`, which credits a SIF at its computed figure;
  * `verify` judges that figure against the scenarios' requirements, so it stays after `analysis`.
  */
-const FLOW = ['diagnostics', 'util', 'model', 'catalogue', 'vocabulary', 'bulk', 'json', 'loader', 'graph', 'trace', 'reliability', 'rules', 'assess', 'justify', 'analysis', 'verify', 'cutsets', 'ranking', 'report', 'diff'];
+const FLOW = [
+  'diagnostics',
+  'util',
+  'model',
+  'catalogue',
+  'vocabulary',
+  'bulk',
+  'json',
+  'loader',
+  'graph',
+  'trace',
+  'reliability',
+  'rules',
+  'assess',
+  'justify',
+  'analysis',
+  'verify',
+  'cutsets',
+  'ranking',
+  'report',
+  'diff',
+];
 
 function files(dir: string): string[] {
   return readdirSync(dir).flatMap((name) => {

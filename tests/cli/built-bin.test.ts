@@ -14,7 +14,11 @@ describe('the built bin', () => {
   it('should analyse the demo from a copy of the bundle far from the repository and its node_modules', () => {
     const lonely = mkdtempSync(join(tmpdir(), 'bulkhead-bundle-'));
     copyFileSync(BUNDLE, join(lonely, 'bulkhead.js'));
-    const r = spawnSync(process.execPath, [join(lonely, 'bulkhead.js'), 'check', DEMO, '--fail-on', 'voids-credit'], { cwd: lonely, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' } });
+    const r = spawnSync(process.execPath, [join(lonely, 'bulkhead.js'), 'check', DEMO, '--fail-on', 'voids-credit'], {
+      cwd: lonely,
+      encoding: 'utf8',
+      env: { ...process.env, NO_COLOR: '1' },
+    });
     expect(hasStackTrace(r.stderr)).toBe(false);
     // Exit 1: the demo's revision A has findings that void credit (an SIS transmitter on the loop's bridle).
     expect(r.status).toBe(1);
@@ -22,9 +26,11 @@ describe('the built bin', () => {
     expect(r.stdout).toMatch(/4 scenarios, 1 meeting its criterion after independence[\s\S]*findings: \d+ void credit/);
   });
 
-  it('should name no TypeScript loader, in the bin or among the command\'s dependencies', () => {
+  it("should name no TypeScript loader, in the bin or among the command's dependencies", () => {
     expect(readFileSync(CLI_BIN, 'utf8')).not.toMatch(/tsx|\.ts['"]/);
-    const pkg = JSON.parse(readFileSync(join(REPO_ROOT, 'packages/cli/package.json'), 'utf8')) as { dependencies?: Record<string, string> };
+    const pkg = JSON.parse(readFileSync(join(REPO_ROOT, 'packages/cli/package.json'), 'utf8')) as {
+      dependencies?: Record<string, string>;
+    };
     expect(Object.keys(pkg.dependencies ?? {})).not.toContain('tsx');
   });
 

@@ -30,7 +30,9 @@ describe('check on the demo, answer first', () => {
     }
     // The element that voided each lost layer is named on the first screen.
     expect(screen).toContain('  lost credit  SIF-101 voided by BR-101 (shared-bridle); 2 open findings too');
-    expect(screen.join('\n')).toMatch(/LAH-101 voided by BPCS-C1 \(alarm-on-failed-bpcs\), AI-1-03 \(shared-io\), CKT-11 \(shared-support\)/);
+    expect(screen.join('\n')).toMatch(
+      /LAH-101 voided by BPCS-C1 \(alarm-on-failed-bpcs\), AI-1-03 \(shared-io\), CKT-11 \(shared-support\)/,
+    );
     // No finding comes before the summary ends.
     expect(screen.some((l) => /^(Credit voided|Needs a justification|Note):/.test(l))).toBe(false);
   });

@@ -10,11 +10,23 @@ describe('options are per command', () => {
   it.each([
     [['check', DEMO, '--to', 'json'], '`bulkhead check` has no option `--to` (it belongs to `bulkhead convert`)'],
     [['check', DEMO, '--port', '9'], '`bulkhead check` has no option `--port` (it belongs to `bulkhead view`)'],
-    [['check', DEMO, '--date', '2020-01-01'], '`bulkhead check` has no option `--date` (it belongs to `bulkhead report`)'],
-    [['fmt', DEMO, '--format', 'md'], '`bulkhead fmt` has no option `--format` (it belongs to `bulkhead report`, `bulkhead cut-sets`, `bulkhead diff`, `bulkhead common-causes`, `bulkhead verify`)'],
+    [
+      ['check', DEMO, '--date', '2020-01-01'],
+      '`bulkhead check` has no option `--date` (it belongs to `bulkhead report`)',
+    ],
+    [
+      ['fmt', DEMO, '--format', 'md'],
+      '`bulkhead fmt` has no option `--format` (it belongs to `bulkhead report`, `bulkhead cut-sets`, `bulkhead diff`, `bulkhead common-causes`, `bulkhead verify`)',
+    ],
     [['view', DEMO, '--check'], '`bulkhead view` has no option `--check` (it belongs to `bulkhead fmt`)'],
-    [['trace', DEMO, 'LIC-101', '--fail-on', 'note'], '`bulkhead trace` has no option `--fail-on` (it belongs to `bulkhead check`, `bulkhead report`, `bulkhead diff`)'],
-    [['report', DEMO, '--format', 'md', '--frobnicate'], '`bulkhead report` has no option `--frobnicate`; its options are'],
+    [
+      ['trace', DEMO, 'LIC-101', '--fail-on', 'note'],
+      '`bulkhead trace` has no option `--fail-on` (it belongs to `bulkhead check`, `bulkhead report`, `bulkhead diff`)',
+    ],
+    [
+      ['report', DEMO, '--format', 'md', '--frobnicate'],
+      '`bulkhead report` has no option `--frobnicate`; its options are',
+    ],
     [['schema', 'extra.bulk'], '`bulkhead schema` takes no file; found `extra.bulk`'],
     [['check', DEMO, 'second.bulk'], '`bulkhead check` takes a model file; found'],
   ])('`bulkhead %j` is refused with exit 2', async (args, message) => {

@@ -1,7 +1,17 @@
 // The `bulkhead` commands of the foundation (check, fmt, convert, schema) run as a user runs them:
 // exit codes (0 clean, 1 fmt --check found changes, 2 bad input or usage), help, and clean pipes.
 import { spawn } from 'node:child_process';
-import { chmodSync, cpSync, lstatSync, mkdtempSync, readFileSync, rmSync, statSync, symlinkSync, writeFileSync } from 'node:fs';
+import {
+  chmodSync,
+  cpSync,
+  lstatSync,
+  mkdtempSync,
+  readFileSync,
+  rmSync,
+  statSync,
+  symlinkSync,
+  writeFileSync,
+} from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -23,15 +33,20 @@ function temp(name: string, text: string): string {
 }
 
 describe('help and usage', () => {
-  it.each([['--help'], ['-h'], ['help'], ['check', '--help'], ['fmt', '--help'], ['convert', '--help'], ['schema', '--help']])(
-    '`bulkhead %s` prints usage and exits 0',
-    async (...args) => {
-      const r = await runCli(args);
-      expect(r.code).toBe(0);
-      expect(r.stdout).toMatch(/usage: bulkhead/);
-      expect(r.stderr).toBe('');
-    },
-  );
+  it.each([
+    ['--help'],
+    ['-h'],
+    ['help'],
+    ['check', '--help'],
+    ['fmt', '--help'],
+    ['convert', '--help'],
+    ['schema', '--help'],
+  ])('`bulkhead %s` prints usage and exits 0', async (...args) => {
+    const r = await runCli(args);
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/usage: bulkhead/);
+    expect(r.stderr).toBe('');
+  });
 
   it('with no command prints usage and exits 2', async () => {
     const r = await runCli([]);
@@ -76,7 +91,13 @@ describe('schema', () => {
 
 describe('fmt', () => {
   it('--check passes on canonical fixtures (both forms) and exits 0', async () => {
-    const r = await runCli(['fmt', '--check', 'fixtures/demo/marrow-fen.bulk', 'fixtures/demo/marrow-fen-rev-b.bulk', DEMO_JSON]);
+    const r = await runCli([
+      'fmt',
+      '--check',
+      'fixtures/demo/marrow-fen.bulk',
+      'fixtures/demo/marrow-fen-rev-b.bulk',
+      DEMO_JSON,
+    ]);
     expect(r.code).toBe(0);
     expect(r.stdout).toBe('');
   });
@@ -90,7 +111,9 @@ describe('fmt', () => {
     expect(readFileSync(file, 'utf8')).toBe(messy);
     const fmt = await runCli(['fmt', file]);
     expect(fmt.code).toBe(0);
-    expect(readFileSync(file, 'utf8')).toBe('site "Messy" # note\ncategory c tolerable=1e-4 harm=people\n\nvessel V-1 title="Drum"\n');
+    expect(readFileSync(file, 'utf8')).toBe(
+      'site "Messy" # note\ncategory c tolerable=1e-4 harm=people\n\nvessel V-1 title="Drum"\n',
+    );
     expect((await runCli(['fmt', '--check', file])).code).toBe(0);
   });
 
@@ -178,7 +201,10 @@ describe('pipes closed early (EPIPE)', () => {
   function piped(args: string[]): Promise<{ code: number | null; stdout: string; stderr: string }> {
     return new Promise((resolve) => {
       const quoted = [process.execPath, CLI_BIN, ...args].map((a) => `'${a.replace(/'/g, `'\\''`)}'`).join(' ');
-      const child = spawn('bash', ['-c', `set -o pipefail; ${quoted} | head -1`], { cwd: REPO_ROOT, env: { ...process.env, NO_COLOR: '1' } });
+      const child = spawn('bash', ['-c', `set -o pipefail; ${quoted} | head -1`], {
+        cwd: REPO_ROOT,
+        env: { ...process.env, NO_COLOR: '1' },
+      });
       let stdout = '';
       let stderr = '';
       child.stdout.on('data', (c: Buffer) => (stdout += c.toString()));
@@ -196,7 +222,8 @@ describe('pipes closed early (EPIPE)', () => {
 
   it('a large conversion into `head -1` (output far beyond the pipe buffer) exits cleanly', async () => {
     const lines = ['site "Big"'];
-    for (let i = 0; i < 20000; i++) lines.push(`vessel V-${i} title="vessel number ${i}, with a title long enough to fill the pipe"`);
+    for (let i = 0; i < 20000; i++)
+      lines.push(`vessel V-${i} title="vessel number ${i}, with a title long enough to fill the pipe"`);
     const file = temp('big.bulk', lines.join('\n') + '\n');
     const r = await piped(['convert', file, '--to', 'json']);
     expect(r.code).toBe(0);

@@ -87,9 +87,13 @@ describe('isReportText', () => {
     expect(isReportText(renderReport(input, format).slice(0, 4096))).toBe(true);
   });
 
-  it('does not take a model, a note or another tool\'s SARIF for one of ours', () => {
+  it("does not take a model, a note or another tool's SARIF for one of ours", () => {
     expect(isReportText(original)).toBe(false);
     expect(isReportText('# Notes\n')).toBe(false);
-    expect(isReportText('{\n  "$schema": "https://json.schemastore.org/sarif-2.1.0.json",\n  "runs": [{ "tool": { "driver": { "name": "other" } } }]\n}')).toBe(false);
+    expect(
+      isReportText(
+        '{\n  "$schema": "https://json.schemastore.org/sarif-2.1.0.json",\n  "runs": [{ "tool": { "driver": { "name": "other" } } }]\n}',
+      ),
+    ).toBe(false);
   });
 });

@@ -19,7 +19,10 @@ function splitDemo(): string {
   const lines = readFileSync('fixtures/demo/marrow-fen.bulk', 'utf8').split('\n');
   const from = lines.findIndex((l) => l.startsWith('# ---- Supports'));
   const to = lines.findIndex((l) => l.startsWith('# ---- Functions'));
-  writeFileSync(join(dir, 'main.bulk'), [...lines.slice(0, from), 'part "units/plant.bulk"', '', ...lines.slice(to)].join('\n'));
+  writeFileSync(
+    join(dir, 'main.bulk'),
+    [...lines.slice(0, from), 'part "units/plant.bulk"', '', ...lines.slice(to)].join('\n'),
+  );
   cpSync('fixtures/demo/marrow-fen.bulk', join(dir, 'whole.bulk'));
   mkdirSync(join(dir, 'units'));
   writeFileSync(join(dir, 'units', 'plant.bulk'), lines.slice(from, to).join('\n') + '\n');
@@ -33,7 +36,9 @@ describe('a model split over part files, on the command line', () => {
     const whole = await runCli(['check', 'whole.bulk'], { cwd: dir });
     expect(split.code).toBe(whole.code);
     const verdicts = (out: string) => out.slice(out.indexOf('== verdict =='));
-    expect(verdicts(split.stdout).replace(/main\.bulk/g, 'X')).toBe(verdicts(whole.stdout).replace(/whole\.bulk/g, 'X'));
+    expect(verdicts(split.stdout).replace(/main\.bulk/g, 'X')).toBe(
+      verdicts(whole.stdout).replace(/whole\.bulk/g, 'X'),
+    );
     expect(split.stdout).toContain('element  BR-101, defined at units/plant.bulk line');
   });
 
@@ -45,7 +50,10 @@ describe('a model split over part files, on the command line', () => {
     // SARIF 2.1.0 (OASIS), 3.4.5: an artifactLocation's index is its place in run.artifacts; the
     // published schema (fixtures/sarif) checks the shape.
     expect(sarifValidator()(log)).toEqual([]);
-    const sha256 = (path: string) => createHash('sha256').update(readFileSync(join(dir, path))).digest('hex');
+    const sha256 = (path: string) =>
+      createHash('sha256')
+        .update(readFileSync(join(dir, path)))
+        .digest('hex');
     expect(log.runs[0]!.artifacts).toEqual([
       { location: { uri: 'main.bulk' }, hashes: { 'sha-256': sha256('main.bulk') } },
       { location: { uri: 'units/plant.bulk' }, hashes: { 'sha-256': sha256('units/plant.bulk') } },
@@ -56,7 +64,12 @@ describe('a model split over part files, on the command line', () => {
       return value;
     });
     const indexOf = new Map(locations.map((l) => [l.uri, l.index]));
-    expect([...indexOf]).toEqual(expect.arrayContaining([['main.bulk', 0], ['units/plant.bulk', 1]]));
+    expect([...indexOf]).toEqual(
+      expect.arrayContaining([
+        ['main.bulk', 0],
+        ['units/plant.bulk', 1],
+      ]),
+    );
     expect(indexOf.size).toBe(2);
     expect(locations.every((l) => l.index === (l.uri === 'main.bulk' ? 0 : 1))).toBe(true);
   });
@@ -66,16 +79,22 @@ describe('a model split over part files, on the command line', () => {
     const split = await runCli(['convert', 'main.bulk', '--to', 'json'], { cwd: dir });
     const whole = await runCli(['convert', 'whole.bulk', '--to', 'json'], { cwd: dir });
     expect(split.code).toBe(0);
-    expect(split.stderr).toBe('bulkhead convert: note: main.bulk names 1 part file (units/plant.bulk); the json model written holds them all in one file, with no `part` statement; the part files are not changed\n');
+    expect(split.stderr).toBe(
+      'bulkhead convert: note: main.bulk names 1 part file (units/plant.bulk); the json model written holds them all in one file, with no `part` statement; the part files are not changed\n',
+    );
     expect(whole.stderr).toBe('');
-    const tags = (json: string) => (JSON.parse(json) as { elements: { tag: string }[] }).elements.map((e) => e.tag).sort();
+    const tags = (json: string) =>
+      (JSON.parse(json) as { elements: { tag: string }[] }).elements.map((e) => e.tag).sort();
     expect(tags(split.stdout)).toEqual(tags(whole.stdout));
     expect(tags(split.stdout)).toContain('UPS-1');
   });
 
   it('fmt formats each file and keeps the part statement', async () => {
     const dir = splitDemo();
-    writeFileSync(join(dir, 'units', 'plant.bulk'), readFileSync(join(dir, 'units', 'plant.bulk'), 'utf8').replace('ups UPS-1 ', 'ups   UPS-1   '));
+    writeFileSync(
+      join(dir, 'units', 'plant.bulk'),
+      readFileSync(join(dir, 'units', 'plant.bulk'), 'utf8').replace('ups UPS-1 ', 'ups   UPS-1   '),
+    );
     const fmt = await runCli(['fmt', 'main.bulk'], { cwd: dir });
     expect(fmt.code).toBe(0);
     expect(fmt.stdout).toContain('units/plant.bulk: formatted');

@@ -6,7 +6,9 @@ import { runCli } from '../helpers/cli.ts';
 
 const readme = readFileSync(new URL('../../README.md', import.meta.url), 'utf8');
 const section = readme.slice(readme.indexOf('## What `check` tells you'), readme.indexOf('## The .bulk language'));
-const blocks = [...section.matchAll(/```text\n([\s\S]*?)```/g)].map((m) => m[1]!.split('\n').filter((l) => l.trim() !== ''));
+const blocks = [...section.matchAll(/```text\n([\s\S]*?)```/g)].map((m) =>
+  m[1]!.split('\n').filter((l) => l.trim() !== ''),
+);
 
 describe('README check excerpts', () => {
   it('quotes the first screen of the demo verbatim, within its first 25 lines', async () => {
@@ -26,6 +28,11 @@ describe('README check excerpts', () => {
   it('quotes an input error verbatim', async () => {
     const r = await runCli(['check', 'fixtures/bad/unknown-attribute.bulk']);
     expect(r.code).toBe(2);
-    expect(blocks[2]!.join('\n')).toBe(r.stderr.split('\n').filter((l) => l.trim() !== '').join('\n'));
+    expect(blocks[2]!.join('\n')).toBe(
+      r.stderr
+        .split('\n')
+        .filter((l) => l.trim() !== '')
+        .join('\n'),
+    );
   });
 });

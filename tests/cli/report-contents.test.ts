@@ -26,10 +26,23 @@ describe('report --contents', () => {
 
   it('writes the actions CSV and replaces its own earlier file without --force, but not another file', async () => {
     const out = join(dir, 'actions.csv');
-    const first = await runCli(['report', DEMO, '--format', 'csv', '--contents', 'actions', '-o', out, '--fail-on', 'none']);
+    const first = await runCli([
+      'report',
+      DEMO,
+      '--format',
+      'csv',
+      '--contents',
+      'actions',
+      '-o',
+      out,
+      '--fail-on',
+      'none',
+    ]);
     expect(first.code).toBe(0);
     expect(readFileSync(out, 'utf8')).toMatch(/^action,severity,what_to_do,/);
-    expect((await runCli(['report', DEMO, '--format', 'csv', '--contents', 'actions', '-o', out, '--fail-on', 'none'])).code).toBe(0);
+    expect(
+      (await runCli(['report', DEMO, '--format', 'csv', '--contents', 'actions', '-o', out, '--fail-on', 'none'])).code,
+    ).toBe(0);
     const mine = join(dir, 'tracker.csv');
     writeFileSync(mine, 'owner,due\nA. Person,2026-03-01\n');
     const refused = await runCli(['report', DEMO, '--format', 'csv', '--contents', 'actions', '-o', mine]);
@@ -38,7 +51,22 @@ describe('report --contents', () => {
   });
 
   it('prints the document number, revision and status given on the command line', async () => {
-    const r = await runCli(['report', DEMO, '--format', 'md', '--contents', 'worksheet', '--document', 'X-9', '--revision', 'C', '--status', 'issued', '--fail-on', 'none']);
+    const r = await runCli([
+      'report',
+      DEMO,
+      '--format',
+      'md',
+      '--contents',
+      'worksheet',
+      '--document',
+      'X-9',
+      '--revision',
+      'C',
+      '--status',
+      'issued',
+      '--fail-on',
+      'none',
+    ]);
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('| Document number | X-9 |');
     expect(r.stdout).toContain('| Revision | C |');

@@ -16,7 +16,9 @@ describe('bulkhead diff', () => {
   it('answers first, exits 0 when nothing got worse, 1 with --fail-on worse when something did', async () => {
     const better = await runCli(['diff', A, B, '--fail-on', 'worse']);
     expect(better.code).toBe(0);
-    expect(better.stdout.split('\n')[0]).toBe('0 scenarios got worse, 3 better; 0 findings appeared, 10 disappeared, 0 changed severity; 1 finding changed acceptance.');
+    expect(better.stdout.split('\n')[0]).toBe(
+      '0 scenarios got worse, 3 better; 0 findings appeared, 10 disappeared, 0 changed severity; 1 finding changed acceptance.',
+    );
     const worse = await runCli(['diff', B, A, '--fail-on', 'worse']);
     expect(worse.code).toBe(1);
     expect(worse.stdout.split('\n')[0]).toMatch(/^3 scenarios got worse, 0 better; 10 findings appeared/);
@@ -30,13 +32,19 @@ describe('bulkhead diff', () => {
     expect(md).toMatch(/^# Revision diff\n\n\*\*0 scenarios got worse, 3 better/);
     const sarif = JSON.parse((await runCli(['diff', B, A, '--format', 'sarif'])).stdout);
     expect(sarif.version).toBe('2.1.0');
-    expect(sarif.runs[0].results.map((r: { ruleId: string }) => r.ruleId).sort()).toEqual(json.appeared.map((f: { rule: string }) => f.rule).sort());
+    expect(sarif.runs[0].results.map((r: { ruleId: string }) => r.ruleId).sort()).toEqual(
+      json.appeared.map((f: { rule: string }) => f.rule).sort(),
+    );
     const none = JSON.parse((await runCli(['diff', A, B, '--format', 'sarif'])).stdout);
     expect(none.runs[0].results).toEqual([]);
   });
 
   it('reads OLD from a git revision of the same file', async () => {
-    const git = (...args: string[]) => execFileSync('git', ['-c', 'user.name=Test', '-c', 'user.email=test@example.invalid', ...args], { cwd: dir, stdio: 'ignore' });
+    const git = (...args: string[]) =>
+      execFileSync('git', ['-c', 'user.name=Test', '-c', 'user.email=test@example.invalid', ...args], {
+        cwd: dir,
+        stdio: 'ignore',
+      });
     git('init', '-q');
     copyFileSync(join(REPO_ROOT, A), join(dir, 'unit.bulk'));
     git('add', 'unit.bulk');
@@ -82,6 +90,8 @@ describe('bulkhead cut-sets and common-causes', () => {
     const json = JSON.parse((await runCli(['common-causes', A, '--format', 'json'])).stdout);
     expect(json.elements[0].element).toBe('LT-102');
     const csv = (await runCli(['common-causes', A, '--format', 'csv'])).stdout;
-    expect(csv.split('\r\n')[0]).toBe('rank,element,kind,title,layers,scenarios,scenario_ids,findings,open_findings,frequency_cost_per_year,frequency_at_stake_per_year,gap_reduction_per_year,would_meet');
+    expect(csv.split('\r\n')[0]).toBe(
+      'rank,element,kind,title,layers,scenarios,scenario_ids,findings,open_findings,frequency_cost_per_year,frequency_at_stake_per_year,gap_reduction_per_year,would_meet',
+    );
   });
 });

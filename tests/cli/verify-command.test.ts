@@ -11,8 +11,12 @@ describe('bulkhead verify', () => {
     expect(r.stdout).toMatch(/^ {2}sensors +1oo2 +4\.9e-4 .*IEC 61508-6:2010 Annex B B\.3\.2\.2\.2/m);
     expect(r.stdout).toMatch(/^ {2}logic solver +1oo1 /m);
     expect(r.stdout).toMatch(/^ {2}final elements +1oo1 /m);
-    expect(r.stdout).toContain('shared by the channels, in series with the group: TW-302 PFD 4.4e-4; group alone 5.5e-5');
-    expect(r.stdout).toContain('TW-302 (sensors) in series with the voted group: with it the SIF still meets its requirement');
+    expect(r.stdout).toContain(
+      'shared by the channels, in series with the group: TW-302 PFD 4.4e-4; group alone 5.5e-5',
+    );
+    expect(r.stdout).toContain(
+      'TW-302 (sensors) in series with the voted group: with it the SIF still meets its requirement',
+    );
     expect(r.stdout).toContain('basis: Thermowell fouling, Marrow Fen inspection records 2015-2025 (invented)');
     expect(r.stdout).toContain('supports, and does not replace, a SIL verification by a competent person');
   });
@@ -20,7 +24,9 @@ describe('bulkhead verify', () => {
   it('exits 1 when a SIF falls short, and says by how much (revision B, SIF-201 in high demand)', async () => {
     const r = await runCli(['verify', 'fixtures/demo/marrow-fen-rev-b.bulk', 'SIF-201']);
     expect(r.code).toBe(1);
-    expect(r.stdout).toMatch(/verdict: {2}computed \S+ \/h falls short of the requirement \(high-demand, S-104\) by a factor of \d/);
+    expect(r.stdout).toMatch(
+      /verdict: {2}computed \S+ \/h falls short of the requirement \(high-demand, S-104\) by a factor of \d/,
+    );
     expect(r.stdout).toMatch(/verdict: {2}computed \S+ meets the requirement \(low-demand, S-102\), margin x/);
     expect(r.stdout).toContain('[hft-short] HFT of the final elements is 0; SIL 2 in high-demand needs 1');
   });

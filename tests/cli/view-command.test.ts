@@ -7,7 +7,12 @@ import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 
 const BIN = new URL('../../packages/cli/bin/bulkhead.js', import.meta.url).pathname;
-const run = (...args: string[]) => spawnSync(process.execPath, [BIN, ...args], { encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' }, timeout: 30_000 });
+const run = (...args: string[]) =>
+  spawnSync(process.execPath, [BIN, ...args], {
+    encoding: 'utf8',
+    env: { ...process.env, NO_COLOR: '1' },
+    timeout: 30_000,
+  });
 
 describe('bulkhead view', () => {
   it('should exit 2 and say so when the model file is missing', () => {

@@ -20,7 +20,8 @@ const SUPPORTS = 'air-header IA-1 title="Instrument air"\n';
 describe('partFilesOf', () => {
   it('names the same files, by the same paths, that a load of the model asks its reader for', () => {
     const files: Record<string, string> = { 'units/plant.bulk': PLANT, '../shared/supports.bulk': SUPPORTS };
-    const reader = (path: string): PartBytes => (path in files ? new TextEncoder().encode(files[path]) : { problem: 'no such file' });
+    const reader = (path: string): PartBytes =>
+      path in files ? new TextEncoder().encode(files[path]) : { problem: 'no such file' };
     const asked: string[] = [];
     loadModelText('main.bulk', MAIN, {
       readPart: (path) => {
@@ -62,7 +63,12 @@ describe('the view server on a model split over part files', () => {
     writeFileSync(join(dir, 'site', 'units', 'unnamed.bulk'), 'ups UPS-9\n');
     // Outside the model's folder, named through `..` from the part: the model names it, so it is sent.
     writeFileSync(supports, SUPPORTS);
-    server = await startViewServer({ file: model, distDir: dist, port: 0, onChange: (_state, changed) => changes.push(changed) });
+    server = await startViewServer({
+      file: model,
+      distDir: dist,
+      port: 0,
+      onChange: (_state, changed) => changes.push(changed),
+    });
   });
 
   afterAll(async () => {
@@ -95,7 +101,13 @@ describe('the view server on a model split over part files', () => {
       events.close();
       const sent = (JSON.parse((await get(server.port, '/parts')).body) as SentParts).parts;
       expect(sent.some((part) => 'text' in part && part.text === text)).toBe(true);
-      await until(() => changes.length > 0 && changes[changes.length - 1]!.includes(join(dir, 'site', file === plant ? 'units/plant.bulk' : '../shared/supports.bulk')));
+      await until(
+        () =>
+          changes.length > 0 &&
+          changes[changes.length - 1]!.includes(
+            join(dir, 'site', file === plant ? 'units/plant.bulk' : '../shared/supports.bulk'),
+          ),
+      );
     }
   });
 
@@ -106,7 +118,12 @@ describe('the view server on a model split over part files', () => {
     writeFileSync(model, `${MAIN}part "units/unnamed.bulk"\n`);
     await until(() => server.revision() === before + 2);
     const sent = (JSON.parse((await get(server.port, '/parts')).body) as SentParts).parts;
-    expect(sent.map((part) => part.path)).toEqual(['units/plant.bulk', '../shared/supports.bulk', 'units/missing.bulk', 'units/unnamed.bulk']);
+    expect(sent.map((part) => part.path)).toEqual([
+      'units/plant.bulk',
+      '../shared/supports.bulk',
+      'units/missing.bulk',
+      'units/unnamed.bulk',
+    ]);
     writeFileSync(join(dir, 'site', 'units', 'unnamed.bulk'), 'ups UPS-10\n');
     await until(() => server.revision() === before + 3);
   });

@@ -6,7 +6,13 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { get, nextChange, until } from '../helpers/view-http.ts';
-import { MAX_EVENT_CLIENTS, requestPath, startViewServer, type FileState, type ViewServer } from '../../packages/cli/src/view/server.ts';
+import {
+  MAX_EVENT_CLIENTS,
+  requestPath,
+  startViewServer,
+  type FileState,
+  type ViewServer,
+} from '../../packages/cli/src/view/server.ts';
 
 describe('requestPath', () => {
   it.each([
@@ -15,10 +21,17 @@ describe('requestPath', () => {
     ['/assets/index-abc.js', '/assets/index-abc.js'],
   ])('should keep %s as %s', (raw, path) => expect(requestPath(raw)).toBe(path));
 
-  it.each(['/../x', '/assets/../index.html', '/./model', '/%2e%2e/x', '/assets%2fx', '/a\\..\\b', '//etc/passwd', 'model', '*'])(
-    'should refuse %s',
-    (raw) => expect(requestPath(raw)).toBeUndefined(),
-  );
+  it.each([
+    '/../x',
+    '/assets/../index.html',
+    '/./model',
+    '/%2e%2e/x',
+    '/assets%2fx',
+    '/a\\..\\b',
+    '//etc/passwd',
+    'model',
+    '*',
+  ])('should refuse %s', (raw) => expect(requestPath(raw)).toBeUndefined());
 });
 
 describe('startViewServer', () => {
@@ -57,7 +70,18 @@ describe('startViewServer', () => {
   });
 
   it('should answer 404 to paths it does not serve and to traversal, encoded or not', async () => {
-    for (const path of ['/plant.bulk', '/outside.txt', '/assets/.hidden', '/assets/../outside.txt', '/../outside.txt', '/%2e%2e/outside.txt', '/assets/%2e%2e%2foutside.txt', '/%2e%2e%5coutside.txt', '/index.html/..', '/model/']) {
+    for (const path of [
+      '/plant.bulk',
+      '/outside.txt',
+      '/assets/.hidden',
+      '/assets/../outside.txt',
+      '/../outside.txt',
+      '/%2e%2e/outside.txt',
+      '/assets/%2e%2e%2foutside.txt',
+      '/%2e%2e%5coutside.txt',
+      '/index.html/..',
+      '/model/',
+    ]) {
       const r = await get(server.port, path);
       expect(r.status, path).toBe(404);
       expect(r.body).not.toContain('outside the dist');
@@ -103,7 +127,6 @@ function openEvents(port: number): Promise<{ status: number; close: () => void }
   });
 }
 
-
 describe('the view server through the life of the watched file (issue 10)', () => {
   const dir = mkdtempSync(join(tmpdir(), 'bulkhead-life-'));
   const dist = join(dir, 'dist');
@@ -116,10 +139,15 @@ describe('the view server through the life of the watched file (issue 10)', () =
     writeFileSync(join(dist, 'index.html'), '<!doctype html><title>test page</title>');
     writeFileSync(model, 'site "Test site"\n');
     // The console line runs the loader on every save; make it throw to prove the server does not care.
-    server = await startViewServer({ file: model, distDir: dist, port: 0, onChange: (state) => {
-      seen.push(state);
-      throw new Error('a console line that fails');
-    } });
+    server = await startViewServer({
+      file: model,
+      distDir: dist,
+      port: 0,
+      onChange: (state) => {
+        seen.push(state);
+        throw new Error('a console line that fails');
+      },
+    });
   });
 
   afterAll(async () => {

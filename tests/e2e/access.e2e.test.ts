@@ -55,12 +55,14 @@ describe('the viewer with assistive technology and the keyboard', () => {
   it('reaches every control with Tab alone', async () => {
     await focus('S-101');
     // Every control a mouse user can use: buttons, fields, links and the focusable boxes, as shown.
-    const controls = await page.locator('button:visible, input:visible, a[href]:visible, select:visible, [tabindex="0"]').evaluateAll((els) =>
-      els.map((e, i) => {
-        e.setAttribute('data-reach', String(i));
-        return String(i);
-      }),
-    );
+    const controls = await page
+      .locator('button:visible, input:visible, a[href]:visible, select:visible, [tabindex="0"]')
+      .evaluateAll((els) =>
+        els.map((e, i) => {
+          e.setAttribute('data-reach', String(i));
+          return String(i);
+        }),
+      );
     expect(controls.length).toBeGreaterThan(40);
     await page.locator('body').focus();
     const reached = new Set<string>();
@@ -70,7 +72,9 @@ describe('the viewer with assistive technology and the keyboard', () => {
       if (mark !== null) reached.add(mark);
     }
     const missed = controls.filter((c) => !reached.has(c));
-    const names = await Promise.all(missed.map((c) => page.locator(`[data-reach="${c}"]`).evaluate((e) => e.outerHTML.slice(0, 80))));
+    const names = await Promise.all(
+      missed.map((c) => page.locator(`[data-reach="${c}"]`).evaluate((e) => e.outerHTML.slice(0, 80))),
+    );
     expect(names).toEqual([]);
     expect(await page.getAttribute('[data-testid=open-button]', 'data-reach')).not.toBeNull();
   });
@@ -82,7 +86,10 @@ describe('the viewer with assistive technology and the keyboard', () => {
     await page.click('button[aria-label="Zoom in"]');
     const graph = (await page.locator('svg[data-testid=graph]').boundingBox())!;
     const inside = (b: { x: number; y: number; width: number; height: number }) =>
-      b.x >= graph.x && b.y >= graph.y && b.x + b.width <= graph.x + graph.width && b.y + b.height <= graph.y + graph.height;
+      b.x >= graph.x &&
+      b.y >= graph.y &&
+      b.x + b.width <= graph.x + graph.width &&
+      b.y + b.height <= graph.y + graph.height;
     const tags = await page.locator(GRAPH_BOX).evaluateAll((els) => els.map((e) => e.getAttribute('data-tag')!));
     let offscreen: string | undefined;
     for (const tag of tags) {
@@ -93,7 +100,9 @@ describe('the viewer with assistive technology and the keyboard', () => {
     }
     expect(offscreen, 'a box starts off-screen at this zoom').toBeDefined();
     await page.locator(`${GRAPH_BOX}[data-tag="${offscreen}"]`).focus();
-    await expect.poll(async () => inside((await page.locator(`${GRAPH_BOX}[data-tag="${offscreen}"] rect.body`).boundingBox())!)).toBe(true);
+    await expect
+      .poll(async () => inside((await page.locator(`${GRAPH_BOX}[data-tag="${offscreen}"] rect.body`).boundingBox())!))
+      .toBe(true);
   });
 
   it('announces the scenario and its verdict when they change', async () => {
@@ -102,7 +111,9 @@ describe('the viewer with assistive technology and the keyboard', () => {
       const report = truth.report.scenarios.find((s) => s.id === id)!;
       const after = report.lopa.find((l) => l.figure === 'after-independence')!;
       const announce = page.locator('[role=status][aria-live=polite][data-testid=announce]');
-      await expect.poll(() => announce.innerText()).toContain(`Scenario ${id}: ${after.meets ? 'meets' : 'falls short'}`);
+      await expect
+        .poll(() => announce.innerText())
+        .toContain(`Scenario ${id}: ${after.meets ? 'meets' : 'falls short'}`);
     }
     expect(viewer.session.seen.errors).toEqual([]);
   });

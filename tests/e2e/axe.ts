@@ -16,8 +16,11 @@ export async function seriousViolations(page: Page): Promise<string[]> {
   // Evaluated through the debugging protocol, which the page's script-src 'self' policy does not cover.
   await page.evaluate(AXE_SOURCE);
   const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (context: Document) => Promise<{ violations: AxeViolation[] }> } }).axe;
+    const axe = (window as unknown as { axe: { run: (context: Document) => Promise<{ violations: AxeViolation[] }> } })
+      .axe;
     return (await axe.run(document)).violations;
   });
-  return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical').map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+  return violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
 }

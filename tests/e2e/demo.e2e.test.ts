@@ -6,7 +6,18 @@ import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { copyTo, DEMO, type DemoTruth, GRAPH_BOX, openViewer, ROOT, sameFigure, screenshot, type Session, truthFor } from './harness.ts';
+import {
+  copyTo,
+  DEMO,
+  type DemoTruth,
+  GRAPH_BOX,
+  openViewer,
+  ROOT,
+  sameFigure,
+  screenshot,
+  type Session,
+  truthFor,
+} from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 
@@ -41,10 +52,13 @@ describe('the demo in the viewer', () => {
     await page.waitForSelector(`[data-testid=lopa][data-scenario="${id}"]`);
   }
 
-  const figure = (name: string, row = page.locator('[data-testid=lopa]')) => row.locator(`[data-figure=${name}]`).first().innerText();
+  const figure = (name: string, row = page.locator('[data-testid=lopa]')) =>
+    row.locator(`[data-figure=${name}]`).first().innerText();
 
   it('lists every scenario of the model', async () => {
-    const ids = await page.locator('[data-testid=scenarios] button[data-scenario]').evaluateAll((els) => els.map((e) => e.getAttribute('data-scenario')));
+    const ids = await page
+      .locator('[data-testid=scenarios] button[data-scenario]')
+      .evaluateAll((els) => els.map((e) => e.getAttribute('data-scenario')));
     expect(ids).toEqual(truth.model.scenarios.map((s) => s.id));
   });
 
@@ -64,7 +78,15 @@ describe('the demo in the viewer', () => {
           const banner = await box.locator('.banner-text').textContent();
           const oneElement = f.paths.every((p) => p[p.length - 1] === f.element);
           expect(banner, `${f.key}`).toMatch(oneElement ? /^SHARED / : /^(SHARED|ALIKE) /);
-          const letters = f.parties.map((p) => (p.role === 'cause' ? 'C' : String((truth.model.scenarios.find((s) => s.id === scenario.id)!.layers ?? []).findIndex((l) => l.function === p.tag) + 1)));
+          const letters = f.parties.map((p) =>
+            p.role === 'cause'
+              ? 'C'
+              : String(
+                  (truth.model.scenarios.find((s) => s.id === scenario.id)!.layers ?? []).findIndex(
+                    (l) => l.function === p.tag,
+                  ) + 1,
+                ),
+          );
           for (const letter of letters) expect(banner!.split(' ')[1]!.split('+'), `${f.key} sides`).toContain(letter);
         }
         await screenshot(page, `demo-${scenario.id}`);
@@ -82,7 +104,9 @@ describe('the demo in the viewer', () => {
         expect(await page.innerText('[data-testid=meets-after]')).toBe(meets(byFigure['after-independence']!.meets));
         for (const layer of scenario.layers) {
           const row = page.locator(`[data-testid=lopa] tr[data-layer="${layer.function}"]`);
-          expect(sameFigure(await figure('claimedPfd', row), layer.claimedPfd.value), `${layer.function} claimed`).toBe(true);
+          expect(sameFigure(await figure('claimedPfd', row), layer.claimedPfd.value), `${layer.function} claimed`).toBe(
+            true,
+          );
           const after = await figure('pfdAfter', row);
           if (layer.credited) expect(sameFigure(after, layer.allowedPfd)).toBe(true);
           else expect(after).toBe('no credit');
@@ -92,17 +116,25 @@ describe('the demo in the viewer', () => {
           expect(sameFigure(await figure('requiredPfd'), scenario.sif.requiredPfd)).toBe(true);
           expect(sameFigure(await figure('requiredRrf'), scenario.sif.requiredRrf)).toBe(true);
           expect(await page.getAttribute('[data-testid=required-sil]', 'data-sil')).toBe(String(scenario.sif.sil));
-          if (scenario.sif.sil >= 1 && scenario.sif.sil <= 4) expect(await page.innerText('[data-testid=required-sil]')).toBe(`SIL ${scenario.sif.sil}`);
+          if (scenario.sif.sil >= 1 && scenario.sif.sil <= 4)
+            expect(await page.innerText('[data-testid=required-sil]')).toBe(`SIL ${scenario.sif.sil}`);
         }
       });
 
       it('draws the cause and every claimed layer with its own line style, named in the legend', async () => {
         const labels = await page.locator('[data-testid=legend] [data-side] .label').allInnerTexts();
         const layers = truth.model.scenarios.find((s) => s.id === scenario.id)!.layers ?? [];
-        expect(labels).toEqual([expect.stringMatching(/^Cause: /), ...layers.map((l, i) => `Layer ${i + 1}: ${l.function}`)]);
-        const dashes = await page.locator('[data-testid=legend] [data-side] line').evaluateAll((lines) => lines.map((l) => getComputedStyle(l).strokeDasharray));
+        expect(labels).toEqual([
+          expect.stringMatching(/^Cause: /),
+          ...layers.map((l, i) => `Layer ${i + 1}: ${l.function}`),
+        ]);
+        const dashes = await page
+          .locator('[data-testid=legend] [data-side] line')
+          .evaluateAll((lines) => lines.map((l) => getComputedStyle(l).strokeDasharray));
         expect(new Set(dashes).size).toBe(dashes.length);
-        const colours = await page.locator('[data-testid=legend] [data-side] line').evaluateAll((lines) => lines.map((l) => getComputedStyle(l).stroke));
+        const colours = await page
+          .locator('[data-testid=legend] [data-side] line')
+          .evaluateAll((lines) => lines.map((l) => getComputedStyle(l).stroke));
         expect(new Set(colours).size).toBe(colours.length);
       });
     });
@@ -110,7 +142,9 @@ describe('the demo in the viewer', () => {
 
   it('centres and highlights a finding when it is clicked in the list', async () => {
     await focus('S-101');
-    const finding = truth.analysis.findings.find((f) => f.scenario === 'S-101' && f.severity === 'voids-credit' && f.element)!;
+    const finding = truth.analysis.findings.find(
+      (f) => f.scenario === 'S-101' && f.severity === 'voids-credit' && f.element,
+    )!;
     await page.locator('svg[data-testid=graph]').hover();
     await page.mouse.wheel(0, 600); // zoom out first, so centring has to move the view
     await page.click(`[data-finding="${finding.key}"]`);
@@ -121,7 +155,12 @@ describe('the demo in the viewer', () => {
     // Every step of each side's path is highlighted (and, beyond them, what the shared element relies on).
     for (const path of finding.paths) {
       for (let i = 1; i < path.length; i++) {
-        expect(await page.locator(`svg[data-testid=graph] g.edge[data-edge="${path[i - 1]}\u2192${path[i]}"] polyline.in-focus`).count(), `${path[i - 1]} to ${path[i]}`).toBeGreaterThan(0);
+        expect(
+          await page
+            .locator(`svg[data-testid=graph] g.edge[data-edge="${path[i - 1]}\u2192${path[i]}"] polyline.in-focus`)
+            .count(),
+          `${path[i - 1]} to ${path[i]}`,
+        ).toBeGreaterThan(0);
       }
     }
     expect(await page.locator('svg[data-testid=graph] polyline.in-focus').count()).toBeGreaterThanOrEqual(pathEdges);
@@ -144,7 +183,10 @@ describe('the demo in the viewer', () => {
     await details.waitFor();
     expect(await details.locator('.kind').first().innerText()).toBe('bridle');
     expect(await details.innerText()).toContain('mounted on');
-    const relying = truth.analysis.traces.filter((t) => t.elements.some((e) => e.tag === 'BR-101')).map((t) => t.function).sort();
+    const relying = truth.analysis.traces
+      .filter((t) => t.elements.some((e) => e.tag === 'BR-101'))
+      .map((t) => t.function)
+      .sort();
     const shown = (await details.locator('[data-testid=relied-on-by] > li > button.link.tag').allInnerTexts()).sort();
     expect(shown).toEqual(relying);
     expect(relying).toEqual(expect.arrayContaining(['LIC-101', 'SIF-101']));
@@ -181,7 +223,8 @@ describe('the demo in the viewer', () => {
     expect(download.suggestedFilename()).toBe(`marrow-fen_S-101_sha-${sha256.slice(0, 12)}.svg`);
     const text = readFileSync((await download.path())!, 'utf8');
     expect(text).toContain('<g class="title-block">');
-    for (const row of ['Marrow Fen Chemical Works, Unit 100', 'marrow-fen.bulk', sha256, 'LOPA per year']) expect(text).toContain(`>${row}`);
+    for (const row of ['Marrow Fen Chemical Works, Unit 100', 'marrow-fen.bulk', sha256, 'LOPA per year'])
+      expect(text).toContain(`>${row}`);
     expect(text.startsWith('<svg xmlns="http://www.w3.org/2000/svg"')).toBe(true);
     for (const tag of ['BR-101', 'LIC-101', 'SIF-101', 'LAH-101']) expect(text).toContain(`data-tag="${tag}"`);
     expect(text).toContain('Decision support only');

@@ -52,7 +52,11 @@ describe('the watched file through its life', () => {
     ['a binary file (NUL bytes)', Buffer.from([0x00, 0x01, 0x02, 0x03, 0x00]), 'BH102'],
     ['an empty file', Buffer.alloc(0), 'BH100'],
     ['a statement named `constructor`', Buffer.from(`${original}constructor X-1\n`), 'BH115'],
-    ['a scenario line named `__proto__`', Buffer.from(`${original}scenario S-900 category=people-serious\n  __proto__ X\n`), 'BH115'],
+    [
+      'a scenario line named `__proto__`',
+      Buffer.from(`${original}scenario S-900 category=people-serious\n  __proto__ X\n`),
+      'BH115',
+    ],
     ['JSON-looking garbage nested 100,000 deep', Buffer.from('['.repeat(100_000)), 'BH1'],
   ])('%s: diagnostics, a stale header, then recovery', async (_, bytes, code) => {
     writeFileSync(file, bytes);

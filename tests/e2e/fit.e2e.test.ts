@@ -17,9 +17,20 @@ describe('the graph at several screen sizes', () => {
   async function offScreen(): Promise<string[]> {
     const graph = (await page.locator('svg[data-testid=graph]').boundingBox())!;
     const boxes = await page.locator(`${GRAPH_BOX} rect.body`).evaluateAll((els) =>
-      els.map((e) => ({ tag: e.closest('g.box')!.getAttribute('data-tag')!, r: e.getBoundingClientRect().toJSON() as DOMRect })),
+      els.map((e) => ({
+        tag: e.closest('g.box')!.getAttribute('data-tag')!,
+        r: e.getBoundingClientRect().toJSON() as DOMRect,
+      })),
     );
-    return boxes.filter(({ r }) => r.x < graph.x - 0.5 || r.y < graph.y - 0.5 || r.right > graph.x + graph.width + 0.5 || r.bottom > graph.y + graph.height + 0.5).map((b) => b.tag);
+    return boxes
+      .filter(
+        ({ r }) =>
+          r.x < graph.x - 0.5 ||
+          r.y < graph.y - 0.5 ||
+          r.right > graph.x + graph.width + 0.5 ||
+          r.bottom > graph.y + graph.height + 0.5,
+      )
+      .map((b) => b.tag);
   }
 
   for (const s of truth.model.scenarios) {

@@ -37,7 +37,12 @@ export interface ViewProcess {
 /** Spawns `bulkhead view FILE --port N` and resolves once it prints its URL. */
 export async function startView(file: string): Promise<ViewProcess> {
   const port = await freePort();
-  const child = spawn(process.execPath, [BIN, 'view', file, '--port', String(port)], { cwd: ROOT, detached: true, stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, NO_COLOR: '1' } });
+  const child = spawn(process.execPath, [BIN, 'view', file, '--port', String(port)], {
+    cwd: ROOT,
+    detached: true,
+    stdio: ['ignore', 'pipe', 'pipe'],
+    env: { ...process.env, NO_COLOR: '1' },
+  });
   let out = '';
   child.stdout!.on('data', (b: Buffer) => (out += b.toString()));
   child.stderr!.on('data', (b: Buffer) => (out += b.toString()));
@@ -67,7 +72,15 @@ export async function launch(): Promise<BrowserContext> {
     headless: true,
     viewport: { width: 1440, height: 900 },
     acceptDownloads: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
 }
 
@@ -113,12 +126,29 @@ export interface CliReport {
     tolerable: number;
     gap: number;
     lopa: { figure: 'claimed' | 'after-independence' | 'if-accepted'; mitigated: number; meets: boolean }[];
-    layers: { function: string; claimedPfd: { value: number }; allowedPfd: number; verdict: string; credited: boolean; creditedIfAccepted: boolean }[];
+    layers: {
+      function: string;
+      claimedPfd: { value: number };
+      allowedPfd: number;
+      verdict: string;
+      credited: boolean;
+      creditedIfAccepted: boolean;
+    }[];
     sif?: { function?: string; requiredPfd: number; requiredRrf: number; sil: number };
   }[];
   findings: { key: string; scenario?: string; element?: string; severity: string }[];
   /** The site-wide common-cause ranking, best first. */
-  commonCauses: { order: string; elements: { rank: number; element: string; layers: number; scenarios: string[]; frequencyCost: number; frequencyAtStake: number }[] };
+  commonCauses: {
+    order: string;
+    elements: {
+      rank: number;
+      element: string;
+      layers: number;
+      scenarios: string[];
+      frequencyCost: number;
+      frequencyAtStake: number;
+    }[];
+  };
 }
 
 /** The CLI's JSON report for a file, plus the analysis in this process for what the report does not carry. */
@@ -142,7 +172,7 @@ export function sameFigure(shown: string, exact: number): boolean {
   const value = Number(text);
   if (!/^-?\d+(\.\d+)?(e-?\d+)?$/.test(text) || !Number.isFinite(value)) return false;
   const [mantissa, exponent = '0'] = text.split('e');
-  const decimals = mantissa!.includes('.') ? mantissa!.split('.')[1]!.length : -(/0*$/.exec(mantissa!)![0].length);
+  const decimals = mantissa!.includes('.') ? mantissa!.split('.')[1]!.length : -/0*$/.exec(mantissa!)![0].length;
   const halfUnit = 0.5 * 10 ** (Number(exponent) - decimals);
   return Math.abs(value - exact) <= halfUnit * (1 + 1e-9);
 }

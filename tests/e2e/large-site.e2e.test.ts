@@ -61,7 +61,11 @@ describe(`a generated ${SIZE}-element site in the viewer`, () => {
     await page.waitForSelector(GRAPH_BOX, { timeout: 60_000 });
     firstGraphMs = await page.evaluate(() => performance.now());
     await page.waitForSelector('[data-testid=scenarios][data-listed=all]');
-    scenarios.push(...(await page.locator('[data-testid=scenarios] button[data-scenario]').evaluateAll((els) => els.map((e) => e.getAttribute('data-scenario')!))));
+    scenarios.push(
+      ...(await page
+        .locator('[data-testid=scenarios] button[data-scenario]')
+        .evaluateAll((els) => els.map((e) => e.getAttribute('data-scenario')!))),
+    );
   }, 120_000);
 
   afterAll(async () => {
@@ -71,7 +75,9 @@ describe(`a generated ${SIZE}-element site in the viewer`, () => {
   it('shows its progress while the worker reads and analyses the site', async () => {
     const { progress } = await probe(page);
     expect(progress.some((p) => p.startsWith('reading '))).toBe(true);
-    expect(progress.some((p) => p.startsWith(`analysing ${SIZE + 1} elements`) || /^analysing \d+ elements/.test(p))).toBe(true);
+    expect(
+      progress.some((p) => p.startsWith(`analysing ${SIZE + 1} elements`) || /^analysing \d+ elements/.test(p)),
+    ).toBe(true);
     expect(await page.locator('[data-testid=progress]').count()).toBe(0);
   });
 
@@ -101,12 +107,23 @@ describe(`a generated ${SIZE}-element site in the viewer`, () => {
     const longest = Math.max(0, ...longTasks.map(([, duration]) => duration));
     const stepOf = (start: number) => steps.filter(([, at]) => at <= start).at(-1)![0];
     mkdirSync(ARTIFACTS, { recursive: true });
-    writeFileSync(LARGE_SITE_REPORT, JSON.stringify({
-      elements: SIZE,
-      longestTaskMs: Math.round(longest),
-      longTasks: longTasks.map(([start, duration]) => ({ step: stepOf(start), startMs: Math.round(start), ms: Math.round(duration) })),
-      firstGraphMs: Math.round(firstGraphMs),
-    }, null, 2));
+    writeFileSync(
+      LARGE_SITE_REPORT,
+      JSON.stringify(
+        {
+          elements: SIZE,
+          longestTaskMs: Math.round(longest),
+          longTasks: longTasks.map(([start, duration]) => ({
+            step: stepOf(start),
+            startMs: Math.round(start),
+            ms: Math.round(duration),
+          })),
+          firstGraphMs: Math.round(firstGraphMs),
+        },
+        null,
+        2,
+      ),
+    );
     expect(longest).toBeLessThan(1000);
     expect(seen.errors).toEqual([]);
   });

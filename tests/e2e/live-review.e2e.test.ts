@@ -16,7 +16,10 @@ async function screenBoxes(page: Page): Promise<Map<string, Rect>> {
   const rects = await page.locator(`${GRAPH_BOX} rect.body`).evaluateAll((els) =>
     els.map((e) => {
       const r = e.getBoundingClientRect();
-      return [e.closest('g.box')!.getAttribute('data-tag')!, { x: r.x, y: r.y, width: r.width, height: r.height }] as const;
+      return [
+        e.closest('g.box')!.getAttribute('data-tag')!,
+        { x: r.x, y: r.y, width: r.width, height: r.height },
+      ] as const;
     }),
   );
   return new Map(rects);
@@ -36,7 +39,9 @@ describe('the viewer while the model is edited', () => {
   });
 
   it('draws the first graph soon after the analysis answers (recorded in test-artifacts/e2e/first-graph.json)', async () => {
-    const marks = await page.evaluate(() => Object.fromEntries(performance.getEntriesByType('mark').map((m) => [m.name, Math.round(m.startTime)])));
+    const marks = await page.evaluate(() =>
+      Object.fromEntries(performance.getEntriesByType('mark').map((m) => [m.name, Math.round(m.startTime)])),
+    );
     const wait = marks['bulkhead:drawn']! - marks['bulkhead:view']!;
     mkdirSync(ARTIFACTS, { recursive: true });
     writeFileSync(join(ARTIFACTS, 'first-graph.json'), JSON.stringify({ ...marks, layoutWaitMs: wait }, null, 2));
@@ -52,7 +57,10 @@ describe('the viewer while the model is edited', () => {
     const edited = session.original.replace('layer SIF-101 pfd=0.005', 'layer SIF-101 pfd=0.004');
     expect(edited).not.toBe(session.original);
     writeFileSync(session.file, edited);
-    await page.waitForSelector('[data-testid=lopa] tr[data-layer="SIF-101"] [data-figure=claimedPfd]:has-text("4.0e-3")', { timeout: 5_000 });
+    await page.waitForSelector(
+      '[data-testid=lopa] tr[data-layer="SIF-101"] [data-figure=claimedPfd]:has-text("4.0e-3")',
+      { timeout: 5_000 },
+    );
     const after = await screenBoxes(page);
     expect([...after.keys()].sort()).toEqual([...before.keys()].sort());
     for (const [tag, b] of after) {
@@ -65,20 +73,32 @@ describe('the viewer while the model is edited', () => {
     const graph = (await page.locator('svg[data-testid=graph]').boundingBox())!;
     const centre = { x: graph.x + graph.width / 2, y: graph.y + graph.height / 2 };
     const before = await screenBoxes(page);
-    const nearest = [...before].sort(([, a], [, b]) => Math.hypot(a.x + a.width / 2 - centre.x, a.y + a.height / 2 - centre.y) - Math.hypot(b.x + b.width / 2 - centre.x, b.y + b.height / 2 - centre.y))[0]![0];
-    const edited = session.original.replace('transmitter LT-101 variable=level', 'transmitter LT-101 title="Level transmitter on the north side of V-101" variable=level');
+    const nearest = [...before].sort(
+      ([, a], [, b]) =>
+        Math.hypot(a.x + a.width / 2 - centre.x, a.y + a.height / 2 - centre.y) -
+        Math.hypot(b.x + b.width / 2 - centre.x, b.y + b.height / 2 - centre.y),
+    )[0]![0];
+    const edited = session.original.replace(
+      'transmitter LT-101 variable=level',
+      'transmitter LT-101 title="Level transmitter on the north side of V-101" variable=level',
+    );
     expect(edited).not.toBe(session.original);
     writeFileSync(session.file, edited);
     await page.waitForSelector(`${GRAPH_BOX}[data-tag="LT-101"] text.title`, { timeout: 5_000 });
-    await expect.poll(async () => {
-      const now = (await screenBoxes(page)).get(nearest)!;
-      const was = before.get(nearest)!;
-      return Math.abs(now.x - was.x) + Math.abs(now.y - was.y);
-    }).toBeLessThan(1);
+    await expect
+      .poll(async () => {
+        const now = (await screenBoxes(page)).get(nearest)!;
+        const was = before.get(nearest)!;
+        return Math.abs(now.x - was.x) + Math.abs(now.y - was.y);
+      })
+      .toBeLessThan(1);
   });
 
   it('stops saying "live" and marks the figures stale while the saved file does not load', async () => {
-    writeFileSync(session.file, session.original.replace('transmitter LT-102 ', 'transmitter LT-102 mounted-on=BR-999 '));
+    writeFileSync(
+      session.file,
+      session.original.replace('transmitter LT-102 ', 'transmitter LT-102 mounted-on=BR-999 '),
+    );
     await page.waitForSelector('[data-testid=diagnostics]', { timeout: 5_000 });
     const live = page.locator('[data-testid=live]');
     expect(await live.getAttribute('data-live')).toBe('stale');

@@ -30,7 +30,10 @@ describe('live reload from bulkhead view', () => {
     expect(renamed).not.toBe(original);
     const saved = Date.now();
     writeFileSync(file, renamed);
-    await page.waitForSelector('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Bridle renamed in a save")', { timeout: 5_000 });
+    await page.waitForSelector(
+      'svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Bridle renamed in a save")',
+      { timeout: 5_000 },
+    );
     const elapsed = Date.now() - saved;
     expect(elapsed).toBeLessThan(1_000);
     // The focused scenario stays in focus across the reload.
@@ -56,7 +59,9 @@ describe('live reload from bulkhead view', () => {
   it('clears the errors when the file is fixed', async () => {
     writeFileSync(file, original);
     await page.waitForSelector('[data-testid=diagnostics]', { state: 'detached', timeout: 5_000 });
-    await page.waitForSelector('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")');
+    await page.waitForSelector(
+      'svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")',
+    );
     expect(session.seen.errors).toEqual([]);
   });
 });

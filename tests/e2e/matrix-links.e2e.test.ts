@@ -6,7 +6,20 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { seriousViolations } from './axe.ts';
 import { join } from 'node:path';
-import { copyTo, DEMO, sameFigure, type DemoTruth, focusScenario, launch, ROOT, screenshot, startView, truthFor, viewerForTests, type ViewProcess } from './harness.ts';
+import {
+  copyTo,
+  DEMO,
+  sameFigure,
+  type DemoTruth,
+  focusScenario,
+  launch,
+  ROOT,
+  screenshot,
+  startView,
+  truthFor,
+  viewerForTests,
+  type ViewProcess,
+} from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 
@@ -17,7 +30,10 @@ describe('the all-scenarios matrix and the tag search', () => {
     page = viewer.page;
   });
 
-  const matrixIds = () => page.locator('[data-testid=matrix] tbody tr[data-scenario]').evaluateAll((rows) => rows.map((r) => r.getAttribute('data-scenario')!));
+  const matrixIds = () =>
+    page
+      .locator('[data-testid=matrix] tbody tr[data-scenario]')
+      .evaluateAll((rows) => rows.map((r) => r.getAttribute('data-scenario')!));
 
   it('lists every scenario with its verdict after independence and each layer under its verdict', async () => {
     await page.click('[data-testid=mode-matrix]');
@@ -28,7 +44,10 @@ describe('the all-scenarios matrix and the tag search', () => {
       const after = s.lopa.find((l) => l.figure === 'after-independence')!;
       expect(await row.locator('[data-cell=after]').innerText()).toBe(after.meets ? '✓ meets' : '✗ falls short');
       for (const layer of s.layers) {
-        expect(await row.locator(`[data-cell="${layer.verdict}"] button`, { hasText: layer.function }).count(), `${s.id} ${layer.function}`).toBe(1);
+        expect(
+          await row.locator(`[data-cell="${layer.verdict}"] button`, { hasText: layer.function }).count(),
+          `${s.id} ${layer.function}`,
+        ).toBe(1);
       }
     }
     expect(await seriousViolations(page)).toEqual([]);
@@ -36,17 +55,29 @@ describe('the all-scenarios matrix and the tag search', () => {
   });
 
   it('sorts by gap, both ways, and filters by text and by falling short', async () => {
-    const byGap = [...truth.report.scenarios].sort((a, b) => b.gap - a.gap || a.id.localeCompare(b.id, 'en', { numeric: true })).map((s) => s.id);
+    const byGap = [...truth.report.scenarios]
+      .sort((a, b) => b.gap - a.gap || a.id.localeCompare(b.id, 'en', { numeric: true }))
+      .map((s) => s.id);
     // Opens sorted by gap, largest first; one click on the heading turns the order round.
     expect(await matrixIds()).toEqual(byGap);
     await page.click('[data-testid=matrix] [data-sort=gap]');
-    expect(await matrixIds()).toEqual([...truth.report.scenarios].sort((a, b) => a.gap - b.gap || a.id.localeCompare(b.id, 'en', { numeric: true })).map((s) => s.id));
+    expect(await matrixIds()).toEqual(
+      [...truth.report.scenarios]
+        .sort((a, b) => a.gap - b.gap || a.id.localeCompare(b.id, 'en', { numeric: true }))
+        .map((s) => s.id),
+    );
     await page.check('[data-testid=matrix-short]');
-    const short = truth.report.scenarios.filter((s) => !s.lopa.find((l) => l.figure === 'after-independence')!.meets).map((s) => s.id).sort();
+    const short = truth.report.scenarios
+      .filter((s) => !s.lopa.find((l) => l.figure === 'after-independence')!.meets)
+      .map((s) => s.id)
+      .sort();
     expect((await matrixIds()).sort()).toEqual(short);
     await page.uncheck('[data-testid=matrix-short]');
     await page.fill('[data-testid=matrix-filter]', 'SIF-201');
-    const withSif201 = truth.model.scenarios.filter((s) => (s.layers ?? []).some((l) => l.function === 'SIF-201')).map((s) => s.id).sort();
+    const withSif201 = truth.model.scenarios
+      .filter((s) => (s.layers ?? []).some((l) => l.function === 'SIF-201'))
+      .map((s) => s.id)
+      .sort();
     expect((await matrixIds()).sort()).toEqual(withSif201);
     await page.fill('[data-testid=matrix-filter]', '');
   });
@@ -58,16 +89,22 @@ describe('the all-scenarios matrix and the tag search', () => {
     const ranking = page.locator('[data-testid=ranking]');
     await ranking.locator('tbody tr').first().waitFor();
     const rows = ranking.locator('tbody tr');
-    expect(await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-element')))).toEqual(expected.slice(0, 25).map((e) => e.element));
+    expect(await rows.evaluateAll((trs) => trs.map((tr) => tr.getAttribute('data-element')))).toEqual(
+      expected.slice(0, 25).map((e) => e.element),
+    );
     for (const e of expected.slice(0, 25)) {
       const row = ranking.locator(`tr[data-element="${e.element}"]`);
       expect(await row.locator('[data-cell=rank]').innerText()).toBe(String(e.rank));
       expect(await row.locator('[data-cell=layers]').innerText()).toBe(String(e.layers));
       expect(await row.locator('[data-cell=scenarios] a').allInnerTexts()).toEqual(e.scenarios);
-      for (const [cell, exact] of [['cost', e.frequencyCost], ['at-stake', e.frequencyAtStake]] as const) {
+      for (const [cell, exact] of [
+        ['cost', e.frequencyCost],
+        ['at-stake', e.frequencyAtStake],
+      ] as const) {
         const shown = await row.locator(`[data-cell=${cell}]`).innerText();
         if (exact === 0) expect(shown, `${e.element} ${cell}`).toBe('—');
-        else expect(sameFigure(shown.replace(' /yr', ''), exact), `${e.element} ${cell}: ${shown} vs ${exact}`).toBe(true);
+        else
+          expect(sameFigure(shown.replace(' /yr', ''), exact), `${e.element} ${cell}: ${shown} vs ${exact}`).toBe(true);
       }
     }
     expect(await ranking.innerText()).toContain(truth.report.commonCauses.order);
@@ -90,8 +127,16 @@ describe('the all-scenarios matrix and the tag search', () => {
 
   it('finds a tag across the site with every scenario that relies on it, and shows it', async () => {
     const tag = 'UPS-1';
-    const relying = new Set(truth.analysis.traces.filter((t) => t.elements.some((e) => e.tag === tag)).map((t) => t.function));
-    const expected = truth.model.scenarios.filter((s) => [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some((t) => t && relying.has(t))).map((s) => s.id);
+    const relying = new Set(
+      truth.analysis.traces.filter((t) => t.elements.some((e) => e.tag === tag)).map((t) => t.function),
+    );
+    const expected = truth.model.scenarios
+      .filter((s) =>
+        [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some(
+          (t) => t && relying.has(t),
+        ),
+      )
+      .map((s) => s.id);
     expect(expected.length).toBeGreaterThan(1);
     await page.fill('[data-testid=tag-search]', 'ups-');
     const result = page.locator(`[data-tag-result="${tag}"]`);
@@ -134,7 +179,9 @@ describe('links to what is in view', () => {
     await focusScenario(page, 'S-101');
     const finding = truth.analysis.findings.find((f) => f.scenario === 'S-101' && f.rule === 'shared-bridle')!;
     await page.click(`[data-finding="${finding.key}"]`);
-    await expect.poll(() => new URL(page.url()).hash).toBe(`#scenario=S-101&finding=${encodeURIComponent(finding.key)}`);
+    await expect
+      .poll(() => new URL(page.url()).hash)
+      .toBe(`#scenario=S-101&finding=${encodeURIComponent(finding.key)}`);
     const link = page.url();
     await page.goto('about:blank');
     await page.goto(link);

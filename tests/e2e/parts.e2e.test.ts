@@ -32,7 +32,11 @@ describe('bulkhead view on a model split over part files', () => {
     expect(await page.locator('[data-testid=diagnostics]').count()).toBe(0);
     await focusScenario(page, 'S-101');
     // BR-101 and LT-102 are defined only in the part file; the scenario is in the main file.
-    expect(await page.locator('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")').count()).toBe(1);
+    expect(
+      await page
+        .locator('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")')
+        .count(),
+    ).toBe(1);
     expect(await page.locator('svg[data-testid=graph] g.box[data-tag="LT-102"]').count()).toBe(1);
     await screenshot(page, 'parts-site');
     expect(session.seen.errors).toEqual([]);
@@ -42,7 +46,10 @@ describe('bulkhead view on a model split over part files', () => {
     const renamed = original.replace('title="Level bridle on V-101"', 'title="Bridle renamed in the part"');
     expect(renamed).not.toBe(original);
     writeFileSync(part, renamed);
-    await page.waitForSelector('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Bridle renamed in the part")', { timeout: 5_000 });
+    await page.waitForSelector(
+      'svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Bridle renamed in the part")',
+      { timeout: 5_000 },
+    );
     expect(await page.getAttribute('svg[data-testid=graph]', 'data-scenario')).toBe('S-101');
     expect(session.view.output()).toContain(`saved: ${join(dir, 'generated', 'plant.bulk')}; ${file} loads cleanly`);
   });
@@ -65,7 +72,9 @@ describe('bulkhead view on a model split over part files', () => {
   it('clears the error when the part is fixed', async () => {
     writeFileSync(part, original);
     await page.waitForSelector('[data-testid=diagnostics]', { state: 'detached', timeout: 5_000 });
-    await page.waitForSelector('svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")');
+    await page.waitForSelector(
+      'svg[data-testid=graph] g.box[data-tag="BR-101"] text.title:has-text("Level bridle on V-101")',
+    );
     expect(session.seen.errors).toEqual([]);
   });
 });

@@ -45,7 +45,7 @@ async function footerInk(pdf: Uint8Array, name: string): Promise<number[]> {
     context.fillRect(0, 0, canvas.width, canvas.height);
     await page.render({ canvasContext: context as never, viewport }).promise;
     writeFileSync(join(ARTIFACTS, `print-${name}-p${n}.png`), canvas.toBuffer('image/png'));
-    const mm = viewport.height / (page.view[3]! / 72 * 25.4);
+    const mm = viewport.height / ((page.view[3]! / 72) * 25.4);
     const top = Math.floor(canvas.height - 14 * mm);
     const strip = context.getImageData(0, top, canvas.width, Math.floor(10 * mm)).data;
     let dark = 0;
@@ -70,31 +70,39 @@ describe('printed reports', () => {
     ['evidence', 'Letter'],
     ['worksheet', 'A4'],
     ['worksheet', 'Letter'],
-  ] as [ReportContents, 'A4' | 'Letter'][])('%s on %s: hash and page number on every page, no row split', async (contents, paper) => {
-    const html = renderReport(input, 'html', contents);
-    const file = join(dir, `${contents}.html`);
-    writeFileSync(file, html);
-    const page = await context.newPage();
-    await page.goto(`file://${file}`);
-    const pdf = new Uint8Array(await page.pdf({ format: paper, landscape: contents === 'worksheet', printBackground: true }));
-    await page.close();
-    const pages = await pageTexts(pdf);
-    // Canary: a real multi-page document was printed.
-    expect(pages.length).toBeGreaterThan(contents === 'evidence' ? 5 : 1);
-    pages.forEach((text, i) => {
-      expect(text, `page ${i + 1}`).toContain(input.sha256);
-      expect(text, `page ${i + 1}`).toContain(squeeze(DEMO_FILE));
-      expect(text, `page ${i + 1}`).toContain(`Page${i + 1}of${pages.length}`);
-    });
-    // Each table row, as its text, stands whole on one page: a row cut by a page break would not.
-    const rows = parseHtml(html).querySelectorAll('tbody tr').map((tr) => squeeze(tr.text)).filter((t) => t !== '');
-    expect(rows.length).toBeGreaterThan(10);
-    const split = rows.filter((row) => !pages.some((text) => text.includes(row)));
-    expect(split).toEqual([]);
-    // The page images: the foot of every page has print on it (the footer), yet is mostly white paper.
-    const ink = await footerInk(pdf, `${contents}-${paper}`);
-    expect(ink).toHaveLength(pages.length);
-    for (const [i, share] of ink.entries()) expect(share, `page ${i + 1}`).toBeGreaterThan(0.001);
-    for (const [i, share] of ink.entries()) expect(share, `page ${i + 1}`).toBeLessThan(0.2);
-  });
+  ] as [ReportContents, 'A4' | 'Letter'][])(
+    '%s on %s: hash and page number on every page, no row split',
+    async (contents, paper) => {
+      const html = renderReport(input, 'html', contents);
+      const file = join(dir, `${contents}.html`);
+      writeFileSync(file, html);
+      const page = await context.newPage();
+      await page.goto(`file://${file}`);
+      const pdf = new Uint8Array(
+        await page.pdf({ format: paper, landscape: contents === 'worksheet', printBackground: true }),
+      );
+      await page.close();
+      const pages = await pageTexts(pdf);
+      // Canary: a real multi-page document was printed.
+      expect(pages.length).toBeGreaterThan(contents === 'evidence' ? 5 : 1);
+      pages.forEach((text, i) => {
+        expect(text, `page ${i + 1}`).toContain(input.sha256);
+        expect(text, `page ${i + 1}`).toContain(squeeze(DEMO_FILE));
+        expect(text, `page ${i + 1}`).toContain(`Page${i + 1}of${pages.length}`);
+      });
+      // Each table row, as its text, stands whole on one page: a row cut by a page break would not.
+      const rows = parseHtml(html)
+        .querySelectorAll('tbody tr')
+        .map((tr) => squeeze(tr.text))
+        .filter((t) => t !== '');
+      expect(rows.length).toBeGreaterThan(10);
+      const split = rows.filter((row) => !pages.some((text) => text.includes(row)));
+      expect(split).toEqual([]);
+      // The page images: the foot of every page has print on it (the footer), yet is mostly white paper.
+      const ink = await footerInk(pdf, `${contents}-${paper}`);
+      expect(ink).toHaveLength(pages.length);
+      for (const [i, share] of ink.entries()) expect(share, `page ${i + 1}`).toBeGreaterThan(0.001);
+      for (const [i, share] of ink.entries()) expect(share, `page ${i + 1}`).toBeLessThan(0.2);
+    },
+  );
 });

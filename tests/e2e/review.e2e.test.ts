@@ -22,7 +22,9 @@ describe('reviewing a finding in the viewer', () => {
 
   const percent = async () => Number((await page.innerText('.pct')).replace('%', ''));
 
-  const sharedFindings = truth.analysis.findings.filter((f) => f.scenario && f.element && f.paths.length === 2 && f.paths.every((p) => p.at(-1) === f.element));
+  const sharedFindings = truth.analysis.findings.filter(
+    (f) => f.scenario && f.element && f.paths.length === 2 && f.paths.every((p) => p.at(-1) === f.element),
+  );
 
   for (const f of sharedFindings.filter((x) => x.severity === 'voids-credit')) {
     it(`shows the proof of ${f.key}: both chains meet at ${f.element}, readable, in view`, async () => {
@@ -32,22 +34,37 @@ describe('reviewing a finding in the viewer', () => {
       await page.click(`[data-finding="${f.key}"]`);
       const proof = page.locator(`[data-testid=proof][data-finding="${f.key}"]`);
       await proof.waitFor();
-      const chains = await proof.locator('ol.chain').evaluateAll((ols) => ols.map((ol) => [...ol.querySelectorAll('button')].map((b) => b.textContent!.trim())));
+      const chains = await proof
+        .locator('ol.chain')
+        .evaluateAll((ols) => ols.map((ol) => [...ol.querySelectorAll('button')].map((b) => b.textContent!.trim())));
       expect(chains).toEqual(f.paths.map((p) => p.slice(0, -1)));
       expect((await proof.locator('[data-testid=proof-meeting] button').innerText()).trim()).toBe(f.element);
       expect(await proof.innerText()).toContain(f.rule);
       expect(await proof.innerText()).toContain(f.source);
-      expect(await proof.locator('[data-testid=accept-line]').inputValue()).toMatch(new RegExp(`^accept ${f.key.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} by="[^"]+" date=\\d{4}-\\d{2}-\\d{2} reason="[^"]+"$`));
+      expect(await proof.locator('[data-testid=accept-line]').inputValue()).toMatch(
+        new RegExp(
+          `^accept ${f.key.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} by="[^"]+" date=\\d{4}-\\d{2}-\\d{2} reason="[^"]+"$`,
+        ),
+      );
       // The element card does not open over the graph; the graph shows the shared element whole.
       expect(await page.locator('[data-testid=details]').count()).toBe(0);
       await expect.poll(percent).toBeGreaterThanOrEqual(READING_PERCENT);
       const graph = (await page.locator('svg[data-testid=graph]').boundingBox())!;
       const shared = page.locator(`svg[data-testid=graph] g.box[data-tag="${f.element}"] rect.body`);
-      await expect.poll(async () => {
-        const b = (await shared.boundingBox())!;
-        return b.x >= graph.x && b.y >= graph.y && b.x + b.width <= graph.x + graph.width && b.y + b.height <= graph.y + graph.height;
-      }).toBe(true);
-      expect(await page.locator(`svg[data-testid=graph] g.box[data-tag="${f.element}"]`).getAttribute('class')).toContain('in-focus');
+      await expect
+        .poll(async () => {
+          const b = (await shared.boundingBox())!;
+          return (
+            b.x >= graph.x &&
+            b.y >= graph.y &&
+            b.x + b.width <= graph.x + graph.width &&
+            b.y + b.height <= graph.y + graph.height
+          );
+        })
+        .toBe(true);
+      expect(
+        await page.locator(`svg[data-testid=graph] g.box[data-tag="${f.element}"]`).getAttribute('class'),
+      ).toContain('in-focus');
     });
   }
 
@@ -59,7 +76,9 @@ describe('reviewing a finding in the viewer', () => {
     const named = [...bridle.message.matchAll(/`([^`]+)`/g)].map((m) => m[1]!).filter((t) => /^N-/.test(t));
     expect(named.length).toBeGreaterThan(0);
     for (const tag of named) {
-      await expect.poll(() => page.locator(`svg[data-testid=graph] g.box[data-tag="${tag}"]`).getAttribute('class')).toContain('through');
+      await expect
+        .poll(() => page.locator(`svg[data-testid=graph] g.box[data-tag="${tag}"]`).getAttribute('class'))
+        .toContain('through');
       expect(await page.innerText('[data-testid=proof-through]')).toContain(tag);
     }
     await page.mouse.move(0, 0);
@@ -117,7 +136,10 @@ describe('reviewing a finding in the viewer', () => {
       for (const f of findings) {
         const first = layers.find((tag) => f.parties.some((p) => p.role === 'layer' && p.tag === tag));
         const group = first ?? 'scenario';
-        expect(await page.locator(`[data-testid=findings] ul[data-group="${group}"] [data-finding="${f.key}"]`).count(), f.key).toBe(1);
+        expect(
+          await page.locator(`[data-testid=findings] ul[data-group="${group}"] [data-finding="${f.key}"]`).count(),
+          f.key,
+        ).toBe(1);
       }
       expect(await page.locator('[data-testid=findings] [data-finding]').count()).toBe(findings.length);
     });
@@ -138,9 +160,16 @@ describe('reviewing a finding in the viewer', () => {
     await page.locator('svg[data-testid=graph] g.box[data-tag="BR-101"]').dispatchEvent('click');
     const card = page.locator('[data-testid=details][data-tag="BR-101"]');
     await card.waitFor();
-    const expected = truth.analysis.findings.filter((f) => f.scenario === 'S-101' && (f.element === 'BR-101' || f.paths.some((p) => p.includes('BR-101')))).map((f) => f.key).sort();
+    const expected = truth.analysis.findings
+      .filter((f) => f.scenario === 'S-101' && (f.element === 'BR-101' || f.paths.some((p) => p.includes('BR-101'))))
+      .map((f) => f.key)
+      .sort();
     expect(expected.length).toBeGreaterThan(0);
-    const listed = (await card.locator('[data-testid=element-findings] [data-finding-link]').evaluateAll((els) => els.map((e) => e.getAttribute('data-finding-link')!))).sort();
+    const listed = (
+      await card
+        .locator('[data-testid=element-findings] [data-finding-link]')
+        .evaluateAll((els) => els.map((e) => e.getAttribute('data-finding-link')!))
+    ).sort();
     expect(listed).toEqual(expected);
     await card.locator(`[data-finding-link="${expected[0]}"]`).click();
     await page.waitForSelector(`[data-testid=proof][data-finding="${expected[0]}"]`);

@@ -6,7 +6,11 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO, startView, type ViewProcess } from './harness.ts';
 
 /** A GET with the path sent exactly as written (fetch would resolve `..` before sending). */
-function rawGet(port: number, path: string, headers: Record<string, string> = {}): Promise<{ status: number; body: string }> {
+function rawGet(
+  port: number,
+  path: string,
+  headers: Record<string, string> = {},
+): Promise<{ status: number; body: string }> {
   return new Promise((resolve, reject) => {
     const req = request({ host: '127.0.0.1', port, path, method: 'GET', headers }, (res) => {
       let body = '';
@@ -57,13 +61,28 @@ describe('what bulkhead view serves', () => {
   });
 
   it('answers 404 to any other path', async () => {
-    for (const path of ['/package.json', '/fixtures/demo/marrow-fen.bulk', '/assets/', '/assets/nothing.js', '/model/x', '/etc/passwd', '/.git/config']) {
+    for (const path of [
+      '/package.json',
+      '/fixtures/demo/marrow-fen.bulk',
+      '/assets/',
+      '/assets/nothing.js',
+      '/model/x',
+      '/etc/passwd',
+      '/.git/config',
+    ]) {
       expect((await fetch(new URL(path, view.url))).status, path).toBe(404);
     }
   });
 
   it('answers 404 to .. traversal sent as written', async () => {
-    for (const path of ['/../package.json', '/assets/../../package.json', '/assets/../index.html', '/./model', '/assets/..\\..\\package.json', '//etc/passwd']) {
+    for (const path of [
+      '/../package.json',
+      '/assets/../../package.json',
+      '/assets/../index.html',
+      '/./model',
+      '/assets/..\\..\\package.json',
+      '//etc/passwd',
+    ]) {
       const r = await rawGet(view.port, path);
       expect(r.status, path).toBe(404);
       expect(r.body).not.toContain('"workspaces"');
@@ -71,7 +90,14 @@ describe('what bulkhead view serves', () => {
   });
 
   it('answers 404 to percent-encoded traversal', async () => {
-    for (const path of ['/%2e%2e/package.json', '/assets/%2e%2e/%2e%2e/package.json', '/assets%2f..%2f..%2fpackage.json', '/%2E%2E%2Fpackage.json', '/assets/%252e%252e/package.json', '/%6dodel']) {
+    for (const path of [
+      '/%2e%2e/package.json',
+      '/assets/%2e%2e/%2e%2e/package.json',
+      '/assets%2f..%2f..%2fpackage.json',
+      '/%2E%2E%2Fpackage.json',
+      '/assets/%252e%252e/package.json',
+      '/%6dodel',
+    ]) {
       expect((await fetch(new URL(path, view.url))).status, path).toBe(404);
       expect((await rawGet(view.port, path)).status, path).toBe(404);
     }
@@ -84,7 +110,10 @@ describe('what bulkhead view serves', () => {
   });
 
   it('is not reachable on another address than 127.0.0.1', async () => {
-    const r = await fetch(`http://[::1]:${view.port}/`).then((x) => x.status, () => 'refused');
+    const r = await fetch(`http://[::1]:${view.port}/`).then(
+      (x) => x.status,
+      () => 'refused',
+    );
     expect(r).toBe('refused');
   });
 });

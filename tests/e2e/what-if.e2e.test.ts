@@ -7,7 +7,18 @@ import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { seriousViolations } from './axe.ts';
-import { copyTo, DEMO, type DemoTruth, focusScenario, ROOT, sameFigure, screenshot, tempDir, truthFor, viewerForTests } from './harness.ts';
+import {
+  copyTo,
+  DEMO,
+  type DemoTruth,
+  focusScenario,
+  ROOT,
+  sameFigure,
+  screenshot,
+  tempDir,
+  truthFor,
+  viewerForTests,
+} from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 const before = readFileSync(DEMO);
@@ -23,7 +34,9 @@ describe('what-if in the viewer', () => {
 
   it('accepting every open finding of S-103 gives the figure the CLI reports as "if open findings accepted"', async () => {
     await focusScenario(page, 'S-103');
-    const open = truth.analysis.findings.filter((f) => f.scenario === 'S-103' && f.severity === 'needs-justification' && !f.accepted);
+    const open = truth.analysis.findings.filter(
+      (f) => f.scenario === 'S-103' && f.severity === 'needs-justification' && !f.accepted,
+    );
     expect(open.length).toBeGreaterThan(0);
     for (const f of open) {
       await page.click(`[data-finding="${f.key}"]`);
@@ -43,7 +56,9 @@ describe('what-if in the viewer', () => {
   it('goes back to the file, with its own figures', async () => {
     await page.click('[data-testid=what-if-reset]');
     await page.waitForSelector('[data-testid=what-if]', { state: 'detached' });
-    const after = truth.report.scenarios.find((s) => s.id === 'S-103')!.lopa.find((l) => l.figure === 'after-independence')!;
+    const after = truth.report.scenarios
+      .find((s) => s.id === 'S-103')!
+      .lopa.find((l) => l.figure === 'after-independence')!;
     await expect.poll(async () => sameFigure(await figure('mitigatedAfter'), after.mitigated)).toBe(true);
     expect(await page.getAttribute('[data-testid=lopa]', 'data-what-if')).toBe('no');
   });
@@ -55,7 +70,9 @@ describe('what-if in the viewer', () => {
     await page.click('[data-testid=what-if-twin]');
     await page.waitForSelector('[data-testid=what-if] li[data-change=twin]');
     const add = (await page.inputValue('[data-testid=what-if-add]')).split('\n');
-    const remove = (await page.innerText('[data-testid=what-if-remove]')).replace(/^Lines to delete: /, '').split(' · ');
+    const remove = (await page.innerText('[data-testid=what-if-remove]'))
+      .replace(/^Lines to delete: /, '')
+      .split(' · ');
     // Paste: drop the lines to delete, add the lines to add, and let the CLI judge the result.
     const original = readFileSync(DEMO, 'utf8').split('\n');
     for (const line of remove) expect(original, line).toContain(line);
@@ -63,10 +80,23 @@ describe('what-if in the viewer', () => {
     const file = join(tempDir('bulkhead-what-if-'), 'marrow-fen.bulk');
     writeFileSync(file, pasted);
     const expected = truthFor(file);
-    const keys = expected.analysis.findings.filter((f) => f.scenario === 'S-101').map((f) => f.key).sort();
+    const keys = expected.analysis.findings
+      .filter((f) => f.scenario === 'S-101')
+      .map((f) => f.key)
+      .sort();
     expect(keys).not.toContain(bridle.key);
-    await expect.poll(async () => (await page.locator('[data-testid=findings] [data-finding]').evaluateAll((els) => els.map((e) => e.getAttribute('data-finding')!))).sort()).toEqual(keys);
-    const after = expected.report.scenarios.find((s) => s.id === 'S-101')!.lopa.find((l) => l.figure === 'after-independence')!;
+    await expect
+      .poll(async () =>
+        (
+          await page
+            .locator('[data-testid=findings] [data-finding]')
+            .evaluateAll((els) => els.map((e) => e.getAttribute('data-finding')!))
+        ).sort(),
+      )
+      .toEqual(keys);
+    const after = expected.report.scenarios
+      .find((s) => s.id === 'S-101')!
+      .lopa.find((l) => l.figure === 'after-independence')!;
     expect(sameFigure(await figure('mitigatedAfter'), after.mitigated)).toBe(true);
     await page.mouse.move(0, 0);
     await page.addStyleTag({ content: '[data-testid=layout-status] { visibility: hidden; }' });

@@ -39,9 +39,48 @@ export function seeds(): Seed[] {
   return [...from('fixtures/demo/'), ...from('fixtures/bad/')];
 }
 
-const OBJECT_NAMES = ['__proto__', 'constructor', 'toString', 'valueOf', 'hasOwnProperty', 'prototype', '__defineSetter__'];
-const KEYWORDS = ['site', 'policy', 'category', 'rule', 'scenario', 'accept', 'vessel', 'transmitter', 'sif', 'loop', 'alarm', 'cause', 'layer', 'enabler', 'modifier', 'cable'];
-const NUMBERS = ['1e309', '-1e309', '1e-400', '0.00500000000000000000001', '99999999999999999999999', '-0', 'NaN', 'Infinity', '0x10', '1e', '.', '9'.repeat(400), '0.1e+99999'];
+const OBJECT_NAMES = [
+  '__proto__',
+  'constructor',
+  'toString',
+  'valueOf',
+  'hasOwnProperty',
+  'prototype',
+  '__defineSetter__',
+];
+const KEYWORDS = [
+  'site',
+  'policy',
+  'category',
+  'rule',
+  'scenario',
+  'accept',
+  'vessel',
+  'transmitter',
+  'sif',
+  'loop',
+  'alarm',
+  'cause',
+  'layer',
+  'enabler',
+  'modifier',
+  'cable',
+];
+const NUMBERS = [
+  '1e309',
+  '-1e309',
+  '1e-400',
+  '0.00500000000000000000001',
+  '99999999999999999999999',
+  '-0',
+  'NaN',
+  'Infinity',
+  '0x10',
+  '1e',
+  '.',
+  '9'.repeat(400),
+  '0.1e+99999',
+];
 const enc = new TextEncoder();
 const dec = new TextDecoder('utf-8', { fatal: false });
 
@@ -91,7 +130,14 @@ export const MUTATIONS: Record<string, Mutation> = {
     const l = lines(b);
     const word = r.next() < 0.6 ? r.pick(OBJECT_NAMES) : r.pick(KEYWORDS);
     const indent = r.next() < 0.5 ? '  ' : '';
-    const rest = r.pick(['', ' X-1', ` ${r.pick(OBJECT_NAMES)}=1`, ` ${r.pick(OBJECT_NAMES)}`, ' tag=constructor', ` ${word}=${word}`]);
+    const rest = r.pick([
+      '',
+      ' X-1',
+      ` ${r.pick(OBJECT_NAMES)}=1`,
+      ` ${r.pick(OBJECT_NAMES)}`,
+      ' tag=constructor',
+      ` ${word}=${word}`,
+    ]);
     l.splice(r.int(l.length + 1), 0, `${indent}${word}${rest}`);
     return enc.encode(l.join('\n'));
   },
@@ -113,7 +159,12 @@ export const MUTATIONS: Record<string, Mutation> = {
   'deep nesting': (b, r) => {
     const depth = 50 + r.int(20_000);
     const open = r.next() < 0.5 ? '['.repeat(depth) : '{"a":'.repeat(depth);
-    return splice(b, r.int(b.length + 1), 0, enc.encode(open + (r.next() < 0.5 ? (open[0] === '[' ? ']' : '1}').repeat(depth) : '')));
+    return splice(
+      b,
+      r.int(b.length + 1),
+      0,
+      enc.encode(open + (r.next() < 0.5 ? (open[0] === '[' ? ']' : '1}').repeat(depth) : '')),
+    );
   },
   'long line': (b, r) => {
     const unit = r.pick(['x', '!', 'a=1 ', 'A-1,', '"', '\\', '# ', ' ', 'é', '\t']);
@@ -128,7 +179,15 @@ export const MUTATIONS: Record<string, Mutation> = {
   'line endings': (b, r) => enc.encode(dec.decode(b).replace(/\n/g, r.pick(['\r\n', '\r', '\n\r', '\u2028']))),
   'byte-order mark': (b) => splice(b, 0, 0, new Uint8Array([0xef, 0xbb, 0xbf])),
   'NUL byte': (b, r) => splice(b, r.int(b.length + 1), 0, new Uint8Array([0])),
-  'invalid UTF-8': (b, r) => splice(b, r.int(b.length + 1), 0, new Uint8Array(r.pick([[0xff], [0xc0, 0x80], [0x80], [0xed, 0xa0, 0x80], [0xf4, 0x90, 0x80, 0x80], [0xe2, 0x82]]))),
+  'invalid UTF-8': (b, r) =>
+    splice(
+      b,
+      r.int(b.length + 1),
+      0,
+      new Uint8Array(
+        r.pick([[0xff], [0xc0, 0x80], [0x80], [0xed, 0xa0, 0x80], [0xf4, 0x90, 0x80, 0x80], [0xe2, 0x82]]),
+      ),
+    ),
   'splice another seed': (b, r, other) => {
     const o = other();
     const from = r.int(o.length + 1);
@@ -213,7 +272,14 @@ export function runOne(input: FuzzInput): Outcome {
       loaded = true;
       const model = result.model;
       const analysis = analyze(model, { spans: result.spans });
-      const report = { model, analysis, file: input.name, sha256: '0'.repeat(64), toolVersion: '0.0.0', spans: result.spans };
+      const report = {
+        model,
+        analysis,
+        file: input.name,
+        sha256: '0'.repeat(64),
+        toolVersion: '0.0.0',
+        spans: result.spans,
+      };
       for (const format of REPORT_FORMATS) {
         const text = renderReport(report, format);
         if (format === 'sarif') outside.push(...sarifOutside(text, result.source.lines));
@@ -225,19 +291,30 @@ export function runOne(input: FuzzInput): Outcome {
       for (const s of model.scenarios.slice(0, 3)) scenarioScene(model, analysis, s.id);
     }
   } catch (e) {
-    return { crash: e instanceof Error ? `${e.name}: ${e.message}` : String(e), outside, ms: performance.now() - started, cpuMs: cpuNow() - cpuStarted, loaded };
+    return {
+      crash: e instanceof Error ? `${e.name}: ${e.message}` : String(e),
+      outside,
+      ms: performance.now() - started,
+      cpuMs: cpuNow() - cpuStarted,
+      loaded,
+    };
   }
   return { outside, ms: performance.now() - started, cpuMs: cpuNow() - cpuStarted, loaded };
 }
 
 function sarifOutside(text: string, lines: readonly string[]): string[] {
   const out: string[] = [];
-  const log = JSON.parse(text) as { runs: { results: { locations?: { physicalLocation?: { region?: { startLine?: number; startColumn?: number } } }[] }[] }[] };
+  const log = JSON.parse(text) as {
+    runs: {
+      results: { locations?: { physicalLocation?: { region?: { startLine?: number; startColumn?: number } } }[] }[];
+    }[];
+  };
   for (const result of log.runs[0]?.results ?? []) {
     for (const location of result.locations ?? []) {
       const region = location.physicalLocation?.region;
       if (region?.startLine === undefined) continue;
-      if (!inside(lines, { line: region.startLine, column: region.startColumn ?? 1, length: 1 })) out.push(`SARIF region ${region.startLine}:${region.startColumn}`);
+      if (!inside(lines, { line: region.startLine, column: region.startColumn ?? 1, length: 1 }))
+        out.push(`SARIF region ${region.startLine}:${region.startColumn}`);
     }
   }
   return out;

@@ -2,13 +2,26 @@
 // event, and waiting for a condition (bounded, for file-system events that arrive when they arrive).
 import { request } from 'node:http';
 
-export function get(port: number, path: string, options: { method?: string; host?: string } = {}): Promise<{ status: number; headers: Record<string, unknown>; body: string }> {
+export function get(
+  port: number,
+  path: string,
+  options: { method?: string; host?: string } = {},
+): Promise<{ status: number; headers: Record<string, unknown>; body: string }> {
   return new Promise((resolve, reject) => {
-    const req = request({ host: '127.0.0.1', port, path, method: options.method ?? 'GET', headers: options.host ? { Host: options.host } : {} }, (res) => {
-      let body = '';
-      res.on('data', (b: Buffer) => (body += b.toString()));
-      res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body }));
-    });
+    const req = request(
+      {
+        host: '127.0.0.1',
+        port,
+        path,
+        method: options.method ?? 'GET',
+        headers: options.host ? { Host: options.host } : {},
+      },
+      (res) => {
+        let body = '';
+        res.on('data', (b: Buffer) => (body += b.toString()));
+        res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body }));
+      },
+    );
     req.on('error', reject);
     req.end();
   });

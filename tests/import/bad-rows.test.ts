@@ -4,7 +4,18 @@ import { existsSync, mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { defaultHeaderMap, describePlace, importTables, readCsvTable, readMapping, renderReport, revisionChanges, staleJustifications, suggestKind, type ImportIssue } from '@bulkhead/import';
+import {
+  defaultHeaderMap,
+  describePlace,
+  importTables,
+  readCsvTable,
+  readMapping,
+  renderReport,
+  revisionChanges,
+  staleJustifications,
+  suggestKind,
+  type ImportIssue,
+} from '@bulkhead/import';
 import { runCli } from '../helpers/cli.ts';
 
 function run(csv: string, name = 'index.csv') {
@@ -22,12 +33,32 @@ const first = (csv: string) => {
 describe('bad rows', () => {
   it.each([
     ['a row with no tag', 'Tag,Type\nLT-1,transmitter\n,transmitter\n', 'BH503', 'index.csv, row 3, column A (Tag)'],
-    ['a tag twice in one table', 'Tag,Type\nLT-1,transmitter\nLT-1,transmitter\n', 'BH504', 'index.csv, row 3, column A (Tag)'],
+    [
+      'a tag twice in one table',
+      'Tag,Type\nLT-1,transmitter\nLT-1,transmitter\n',
+      'BH504',
+      'index.csv, row 3, column A (Tag)',
+    ],
     ['no kind and no letters to go by', 'Tag,Service\nQQ,Something\n', 'BH506', 'index.csv, row 2, column A (Tag)'],
     ['an unknown kind', 'Tag,Type\nLT-1,transmiter\n', 'BH507', 'index.csv, row 2, column B (Type)'],
-    ['a value not among the allowed words', 'Tag,Type,Fail Action\nXV-1,shutdown-valve,shut\n', 'BH507', 'index.csv, row 2, column C (Fail Action)'],
-    ['a field the kind does not take', 'Tag,Type,Measured Variable\nXV-1,shutdown-valve,level\n', 'BH507', 'index.csv, row 2, column C (Measured Variable)'],
-    ['a number that is not one', 'Tag,Type,Sensors,Solver,Finals,PFD\nSIF-1,sif,LT-1,S-1,XV-1,low\n', 'BH507', 'index.csv, row 2, column F (PFD)'],
+    [
+      'a value not among the allowed words',
+      'Tag,Type,Fail Action\nXV-1,shutdown-valve,shut\n',
+      'BH507',
+      'index.csv, row 2, column C (Fail Action)',
+    ],
+    [
+      'a field the kind does not take',
+      'Tag,Type,Measured Variable\nXV-1,shutdown-valve,level\n',
+      'BH507',
+      'index.csv, row 2, column C (Measured Variable)',
+    ],
+    [
+      'a number that is not one',
+      'Tag,Type,Sensors,Solver,Finals,PFD\nSIF-1,sif,LT-1,S-1,XV-1,low\n',
+      'BH507',
+      'index.csv, row 2, column F (PFD)',
+    ],
     ['malformed CSV', 'Tag,Type\n"LT-1,transmitter\n', 'BH501', 'index.csv:2:1'],
   ])('%s: %s at %s', (_what, csv, code, where) => {
     const got = first(csv);
@@ -48,14 +79,19 @@ describe('bad rows', () => {
 
   it('reports a column the mapping does not know, and reads the rest', () => {
     const result = run('Tag,Type,Colour\nV-1,vessel,red\n');
-    expect(result.issues).toMatchObject([{ code: 'BH510', severity: 'warning', place: { column: 3, header: 'Colour' } }]);
+    expect(result.issues).toMatchObject([
+      { code: 'BH510', severity: 'warning', place: { column: 3, header: 'Colour' } },
+    ]);
     expect(result.text).toContain('vessel V-1');
     expect(result.tallies[0]!.unknownColumns).toEqual(['Colour']);
   });
 
   it('counts blank and spare rows as skipped, with their reason', () => {
     const result = run('Tag,Type\nV-1,vessel\n,\nSPARE,io-card\n');
-    expect([...result.tallies[0]!.skipped]).toEqual([['blank row', 1], ['spare', 1]]);
+    expect([...result.tallies[0]!.skipped]).toEqual([
+      ['blank row', 1],
+      ['spare', 1],
+    ]);
     expect(result.tallies[0]).toMatchObject({ read: 2, imported: 1, skippedRows: ['row 4: spare'] });
     expect(renderReport(result.tallies, 0)).toContain('index.csv: skipped\n  row 4: spare');
   });
@@ -64,10 +100,17 @@ describe('bad rows', () => {
 describe('the mapping file', () => {
   it('maps a header to a field, drops a column knowingly, and reports a malformed line at its line', () => {
     const issues: ImportIssue[] = [];
-    const map = readMapping('map.txt', '# ours\nPos. on Fail = fails-to\nRev = ignore\nno equals here\nX = colour\n', issues);
+    const map = readMapping(
+      'map.txt',
+      '# ours\nPos. on Fail = fails-to\nRev = ignore\nno equals here\nX = colour\n',
+      issues,
+    );
     expect(map.get('pos on fail')).toBe('fails-to');
     expect(map.get('rev')).toBe('ignore');
-    expect(issues.map((i) => [i.code, describePlace(i.place)])).toEqual([['BH508', 'map.txt:4:1'], ['BH508', 'map.txt:5:5']]);
+    expect(issues.map((i) => [i.code, describePlace(i.place)])).toEqual([
+      ['BH508', 'map.txt:4:1'],
+      ['BH508', 'map.txt:5:5'],
+    ]);
   });
 });
 
@@ -131,8 +174,10 @@ describe('bulkhead import on the command line', () => {
 describe('re-import as a revision', () => {
   // Finding keys as rules/define.ts findingKey writes them: rule:scenario:party+party:element.
   it('compares statements by tag, comments aside, and lists accepts whose finding names a changed or removed tag', () => {
-    const before = 'vessel V-1 title="Drum" # from a.csv row 2\nvessel V-2\ntransmitter LT-1 variable=level mounted-on=V-1\n';
-    const after = 'vessel V-1 title="Drum" # from a.csv row 9\nvessel V-3\ntransmitter LT-1 variable=level mounted-on=V-3\n';
+    const before =
+      'vessel V-1 title="Drum" # from a.csv row 2\nvessel V-2\ntransmitter LT-1 variable=level mounted-on=V-1\n';
+    const after =
+      'vessel V-1 title="Drum" # from a.csv row 9\nvessel V-3\ntransmitter LT-1 variable=level mounted-on=V-3\n';
     const changes = revisionChanges(before, after);
     expect(changes).toEqual({ added: ['V-3'], removed: ['V-2'], changed: ['LT-1'] });
     const accepts = [

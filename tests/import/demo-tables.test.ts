@@ -13,8 +13,16 @@ const PART = `${DIR}/generated/plant.bulk`;
 
 async function importDemo() {
   const issues: ImportIssue[] = [];
-  const map = readMapping(`${DIR}/marrow-fen-mapping.txt`, readFileSync(`${DIR}/marrow-fen-mapping.txt`, 'utf8'), issues);
-  const tables = await readXlsxTables(`${DIR}/marrow-fen-plant.xlsx`, readFileSync(`${DIR}/marrow-fen-plant.xlsx`), issues);
+  const map = readMapping(
+    `${DIR}/marrow-fen-mapping.txt`,
+    readFileSync(`${DIR}/marrow-fen-mapping.txt`, 'utf8'),
+    issues,
+  );
+  const tables = await readXlsxTables(
+    `${DIR}/marrow-fen-plant.xlsx`,
+    readFileSync(`${DIR}/marrow-fen-plant.xlsx`),
+    issues,
+  );
   const model = { file: SITE, text: readFileSync(SITE, 'utf8'), readPart: memoryReader({}) };
   return importTables(tables, map, { generatedPath: PART, model }, issues);
 }
@@ -26,7 +34,10 @@ describe('the demo plant workbook', () => {
     expect(result.modelProblems).toEqual([]);
     expect(result.text).toBeDefined();
     // Rows read = imported + skipped, table by table: nothing is dropped unseen.
-    for (const t of result.tallies) expect(t.read).toBe(t.imported + [...t.skipped].filter(([r]) => r !== 'blank row').reduce((n, [, c]) => n + c, 0));
+    for (const t of result.tallies)
+      expect(t.read).toBe(
+        t.imported + [...t.skipped].filter(([r]) => r !== 'blank row').reduce((n, [, c]) => n + c, 0),
+      );
     expect(result.tallies.find((t) => t.table.endsWith('[IO List]'))!.skipped.get('spare')).toBe(1);
     expect(result.suggestedKinds).toBe(2);
     expect(renderReport(result.tallies, result.suggestedKinds)).toContain('2 kinds suggested from ISA-5.1 tag letters');

@@ -3,16 +3,19 @@
 import { analyze, loadModelText, type Model, type PartReader } from '@bulkhead/core';
 
 export function memoryReader(files: Record<string, string>, fallback?: PartReader): PartReader {
-  return (path) => (path in files ? new TextEncoder().encode(files[path]) : (fallback?.(path) ?? { problem: 'no such file' }));
+  return (path) =>
+    path in files ? new TextEncoder().encode(files[path]) : (fallback?.(path) ?? { problem: 'no such file' });
 }
 
 export function loadWithParts(file: string, text: string, parts: Record<string, string>): Model {
   const result = loadModelText(file, text, { readPart: memoryReader(parts) });
-  if (!result.model) throw new Error(result.diagnostics.map((d) => `${d.code} ${d.message} ${JSON.stringify(d.span)}`).join('\n'));
+  if (!result.model)
+    throw new Error(result.diagnostics.map((d) => `${d.code} ${d.message} ${JSON.stringify(d.span)}`).join('\n'));
   return result.model;
 }
 
-const withoutPlaces = (_key: string, value: unknown) => (_key === 'span' || _key === 'spans' || _key === 'comments' || _key === 'trailingComment' ? undefined : value);
+const withoutPlaces = (_key: string, value: unknown) =>
+  _key === 'span' || _key === 'spans' || _key === 'comments' || _key === 'trailingComment' ? undefined : value;
 
 /** Findings and assessments as JSON, positions and comments left out. */
 export function outcome(model: Model): string {
@@ -22,6 +25,10 @@ export function outcome(model: Model): string {
 
 /** A model's content with comments left out and every list of tagged items in tag order. */
 export function content(model: Model): string {
-  const byTag = <T extends { tag?: string; id?: string }>(list: T[]) => [...list].sort((x, y) => ((x.tag ?? x.id ?? '') < (y.tag ?? y.id ?? '') ? -1 : 1));
-  return JSON.stringify({ ...model, elements: byTag(model.elements), functions: byTag(model.functions), scenarios: byTag(model.scenarios) }, withoutPlaces);
+  const byTag = <T extends { tag?: string; id?: string }>(list: T[]) =>
+    [...list].sort((x, y) => ((x.tag ?? x.id ?? '') < (y.tag ?? y.id ?? '') ? -1 : 1));
+  return JSON.stringify(
+    { ...model, elements: byTag(model.elements), functions: byTag(model.functions), scenarios: byTag(model.scenarios) },
+    withoutPlaces,
+  );
 }

@@ -7,16 +7,41 @@ import { demo } from './fixtures.ts';
 
 describe('offsetPolyline', () => {
   it('should move a straight segment sideways by the offset', () => {
-    expect(offsetPolyline([{ x: 0, y: 0 }, { x: 10, y: 0 }], 4)).toEqual([{ x: 0, y: 4 }, { x: 10, y: 4 }]);
+    expect(
+      offsetPolyline(
+        [
+          { x: 0, y: 0 },
+          { x: 10, y: 0 },
+        ],
+        4,
+      ),
+    ).toEqual([
+      { x: 0, y: 4 },
+      { x: 10, y: 4 },
+    ]);
   });
 
   it('should keep a right-angle corner square', () => {
-    const out = offsetPolyline([{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 10, y: 10 }], 2);
-    expect(out).toEqual([{ x: 0, y: 2 }, { x: 8, y: 2 }, { x: 8, y: 10 }]);
+    const out = offsetPolyline(
+      [
+        { x: 0, y: 0 },
+        { x: 10, y: 0 },
+        { x: 10, y: 10 },
+      ],
+      2,
+    );
+    expect(out).toEqual([
+      { x: 0, y: 2 },
+      { x: 8, y: 2 },
+      { x: 8, y: 10 },
+    ]);
   });
 
   it('should leave the line alone for a zero offset', () => {
-    const line = [{ x: 1, y: 2 }, { x: 3, y: 4 }];
+    const line = [
+      { x: 1, y: 2 },
+      { x: 3, y: 4 },
+    ];
     expect(offsetPolyline(line, 0)).toEqual(line);
   });
 });
@@ -41,11 +66,12 @@ describe('layoutScene on the demo', async () => {
 
   it('should not let two boxes overlap', () => {
     for (const d of Object.values(drawings)) {
-      for (const a of d.boxes) for (const b of d.boxes) {
-        if (a === b) continue;
-        const apart = a.x + a.width <= b.x || b.x + b.width <= a.x || a.y + a.height <= b.y || b.y + b.height <= a.y;
-        expect(apart, `${a.id} and ${b.id}`).toBe(true);
-      }
+      for (const a of d.boxes)
+        for (const b of d.boxes) {
+          if (a === b) continue;
+          const apart = a.x + a.width <= b.x || b.x + b.width <= a.x || a.y + a.height <= b.y || b.y + b.height <= a.y;
+          expect(apart, `${a.id} and ${b.id}`).toBe(true);
+        }
     }
   });
 
@@ -82,12 +108,21 @@ describe('layoutScene on the demo', async () => {
     // The path of each side, and what the bridle carries with it: the message names those elements
     // ("and through it `N-101A`, `N-101B`"), and their edges below the bridle are lit for both sides.
     const through = d.findings.find((p) => p.key === finding.key)!.through!;
-    expect(through.nodes).toEqual([...finding.message.matchAll(/through it (.*)\)/g)].flatMap((m) => [...m[1]!.matchAll(/`([^`]+)`/g)].map((t) => t[1])));
+    expect(through.nodes).toEqual(
+      [...finding.message.matchAll(/through it (.*)\)/g)].flatMap((m) =>
+        [...m[1]!.matchAll(/`([^`]+)`/g)].map((t) => t[1]),
+      ),
+    );
     expect(through.nodes).toEqual(['N-101A', 'N-101B']);
-    const throughLanes = d.edges.filter((e) => through.edges.includes(e.id)).reduce((n, e) => n + e.lanes.filter((l) => l.side !== undefined && [0, 1].includes(l.side)).length, 0);
+    const throughLanes = d.edges
+      .filter((e) => through.edges.includes(e.id))
+      .reduce((n, e) => n + e.lanes.filter((l) => l.side !== undefined && [0, 1].includes(l.side)).length, 0);
     expect(throughLanes).toBe(4);
     expect(focused.length).toBe(finding.paths.reduce((n, p) => n + p.length - 1, 0) + throughLanes);
-    expect(plan.boxes.filter((b) => b.className.split(' ').includes('through')).map((b) => b.id)).toEqual(['N-101A', 'N-101B']);
+    expect(plan.boxes.filter((b) => b.className.split(' ').includes('through')).map((b) => b.id)).toEqual([
+      'N-101A',
+      'N-101B',
+    ]);
     const box = d.boxes.find((b) => b.id === 'BR-101')!;
     const f = plan.focusBounds!;
     expect(box.x).toBeGreaterThanOrEqual(f.x);

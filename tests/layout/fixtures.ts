@@ -13,7 +13,8 @@ export function demo(): { model: Model; analysis: Analysis } {
 /** Loads a small .bulk text (invented test data) and analyses it. */
 export function small(text: string): { model: Model; analysis: Analysis } {
   const loaded = loadModelText('test.bulk', text);
-  if (!loaded.model) throw new Error(`test model does not load: ${loaded.diagnostics.map((d) => d.message).join('; ')}`);
+  if (!loaded.model)
+    throw new Error(`test model does not load: ${loaded.diagnostics.map((d) => d.message).join('; ')}`);
   return { model: loaded.model, analysis: analyze(loaded.model) };
 }
 

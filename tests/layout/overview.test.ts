@@ -20,14 +20,19 @@ describe('siteOverview', () => {
     const drawing = await layoutScene(scene);
     for (const c of drawing.clusters) {
       const kids = drawing.boxes.filter((b) => scene.clusters.find((x) => x.id === c.id)!.children.includes(b.id));
-      for (const b of kids) expect(b.x >= c.x && b.y >= c.y && b.x + b.width <= c.x + c.width && b.y + b.height <= c.y + c.height, `${b.id} in ${c.label}`).toBe(true);
+      for (const b of kids)
+        expect(
+          b.x >= c.x && b.y >= c.y && b.x + b.width <= c.x + c.width && b.y + b.height <= c.y + c.height,
+          `${b.id} in ${c.label}`,
+        ).toBe(true);
     }
   });
 
   it('should count open findings on the units they touch', () => {
     const { model, analysis } = demo();
     const scene = siteOverview(model, analysis);
-    const open = (scenario: string) => analysis.findings.filter((f) => f.scenario === scenario && f.severity !== 'note' && !f.accepted).length;
+    const open = (scenario: string) =>
+      analysis.findings.filter((f) => f.scenario === scenario && f.severity !== 'note' && !f.accepted).length;
     expect(scene.nodes.find((n) => n.id === 'V-101')!.findingCount).toBe(open('S-101'));
   });
 

@@ -22,9 +22,13 @@ describe('scenarioScene', () => {
   it("should draw exactly the cause's and each layer's traced elements and the functions themselves", () => {
     for (const s of model.scenarios) {
       const scene = scenarioScene(model, analysis, s.id);
-      const fns = [...(s.cause.function !== undefined ? [s.cause.function] : []), ...(s.layers ?? []).map((l) => l.function)];
+      const fns = [
+        ...(s.cause.function !== undefined ? [s.cause.function] : []),
+        ...(s.layers ?? []).map((l) => l.function),
+      ];
       const expected = new Set(fns);
-      for (const fn of fns) for (const t of analysis.traces.find((x) => x.function === fn)!.elements) expected.add(t.tag);
+      for (const fn of fns)
+        for (const t of analysis.traces.find((x) => x.function === fn)!.elements) expected.add(t.tag);
       expect(new Set(scene.nodes.map((n) => n.id))).toEqual(expected);
     }
   });
@@ -40,16 +44,24 @@ describe('scenarioScene', () => {
   it("should mark a finding's shared element with the sides of both parties and the worst severity", () => {
     const scene = scenarioScene(model, analysis, 'S-101');
     const bridle = scene.nodes.find((n) => n.id === 'BR-101')!;
-    expect(bridle.shared).toMatchObject({ relation: 'shared', severity: 'voids-credit', sides: [0, 1], accepted: false });
+    expect(bridle.shared).toMatchObject({
+      relation: 'shared',
+      severity: 'voids-credit',
+      sides: [0, 1],
+      accepted: false,
+    });
     const air = scene.nodes.find((n) => n.id === 'IA-1')!;
     expect(air.shared?.severity).toBe('note'); // fails safe for the SIF: listed, not voiding
   });
 
   it('should mark both ends of a finding about two alike elements, not call them shared', () => {
     const scene = scenarioScene(model, analysis, 'S-101');
-    const alike = analysis.findings.find((f) => f.scenario === 'S-101' && f.paths.length === 2 && f.paths[0]!.at(-1) !== f.paths[1]!.at(-1))!;
+    const alike = analysis.findings.find(
+      (f) => f.scenario === 'S-101' && f.paths.length === 2 && f.paths[0]!.at(-1) !== f.paths[1]!.at(-1),
+    )!;
     expect(alike).toBeDefined();
-    for (const path of alike.paths) expect(scene.nodes.find((n) => n.id === path.at(-1))!.shared?.relation).toBe('alike');
+    for (const path of alike.paths)
+      expect(scene.nodes.find((n) => n.id === path.at(-1))!.shared?.relation).toBe('alike');
   });
 
   it('should put every step of each finding path on the path of its side', () => {
@@ -79,7 +91,10 @@ describe('scenarioScene', () => {
     const { model: m, analysis: a } = small(SHARED_TAPPING('function=LIC-1 only=LV-1 frequency=0.1'));
     const scene = scenarioScene(m, a, 'S-1');
     const cause = scene.nodes.filter((n) => n.sides.includes(0)).map((n) => n.id);
-    const narrowed = a.traces.find((t) => t.function === 'LIC-1')!.elements.filter((t) => t.path.includes('LV-1')).map((t) => t.tag);
+    const narrowed = a.traces
+      .find((t) => t.function === 'LIC-1')!
+      .elements.filter((t) => t.path.includes('LV-1'))
+      .map((t) => t.tag);
     const onCausePaths = a.findings.flatMap((f) => f.paths.filter((_, i) => f.parties[i]?.role === 'cause').flat());
     expect(cause).toEqual(expect.arrayContaining(['LIC-1', ...narrowed]));
     for (const tag of cause) expect([...narrowed, ...onCausePaths, 'LIC-1'], tag).toContain(tag);

@@ -20,7 +20,11 @@ function readmeExample(): string {
 }
 
 function node(args: string[]) {
-  return spawnSync(process.execPath, args, { cwd: REPO_ROOT, encoding: 'utf8', env: { ...process.env, NO_COLOR: '1' } });
+  return spawnSync(process.execPath, args, {
+    cwd: REPO_ROOT,
+    encoding: 'utf8',
+    env: { ...process.env, NO_COLOR: '1' },
+  });
 }
 
 beforeAll(() => {
@@ -59,11 +63,27 @@ describe('the README library example', () => {
   });
 
   it('should type-check against the built declarations, which catch a misuse', () => {
-    writeFileSync(MISTYPED, "// @ts-check\n/** @type {import('@bulkhead/core').Finding} */\nconst finding = JSON.parse('{}');\n/** @type {number} */\nexport const severity = finding.severity;\n");
+    writeFileSync(
+      MISTYPED,
+      "// @ts-check\n/** @type {import('@bulkhead/core').Finding} */\nconst finding = JSON.parse('{}');\n/** @type {number} */\nexport const severity = finding.severity;\n",
+    );
     const tsc = node([
-      join(REPO_ROOT, 'node_modules', 'typescript', 'bin', 'tsc'), '--noEmit', '--allowJs', '--checkJs', '--strict',
-      '--module', 'esnext', '--moduleResolution', 'bundler', '--target', 'es2022', '--types', 'node', '--skipLibCheck',
-      EXAMPLE, MISTYPED,
+      join(REPO_ROOT, 'node_modules', 'typescript', 'bin', 'tsc'),
+      '--noEmit',
+      '--allowJs',
+      '--checkJs',
+      '--strict',
+      '--module',
+      'esnext',
+      '--moduleResolution',
+      'bundler',
+      '--target',
+      'es2022',
+      '--types',
+      'node',
+      '--skipLibCheck',
+      EXAMPLE,
+      MISTYPED,
     ]);
     const errors = tsc.stdout.split('\n').filter((l) => /error TS/.test(l));
     // The example is clean; the one misuse (a severity word into a number) is the only error.

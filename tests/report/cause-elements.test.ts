@@ -16,7 +16,13 @@ function reportOf(causeLine: string, extra: string[] = []) {
   });
   const loaded = loadModelText('case.bulk', text);
   if (!loaded.model) throw new Error('case does not load');
-  const doc = buildReportDocument({ model: loaded.model, analysis: analyze(loaded.model), file: 'case.bulk', sha256: '0'.repeat(64), toolVersion: '0.0.0' });
+  const doc = buildReportDocument({
+    model: loaded.model,
+    analysis: analyze(loaded.model),
+    file: 'case.bulk',
+    sha256: '0'.repeat(64),
+    toolVersion: '0.0.0',
+  });
   const [s] = doc.scenarios;
   const inCause = s!.layers[0]!.elements.filter((e) => e.inCause).map((e) => e.tag);
   return { elements: s!.cause.elements, inCause };
@@ -35,7 +41,7 @@ describe('the cause element set in reports', () => {
     expect(inCause).toEqual(['IA-A', 'L-1']);
   });
 
-  it('is the whole loop for a narrowed cause until the narrowing is accepted, then the element\'s set', () => {
+  it("is the whole loop for a narrowed cause until the narrowing is accepted, then the element's set", () => {
     const open = reportOf('function=LC-1 only=CV-1 frequency=0.1');
     expect(open.elements).toContain('T-1');
     expect(open.inCause).toEqual(['IA-A', 'L-1', 'V-1']);

@@ -3,7 +3,14 @@
 import { parse as parseCsv } from 'csv-parse/sync';
 import { parse as parseHtml, type HTMLElement } from 'node-html-parser';
 import { expect } from 'vitest';
-import { CSV_COLUMNS, csvFigure, LIST_SEPARATOR, PATH_SEPARATOR, guardFormula, type ReportDocument } from '../../packages/core/src/report/index.ts';
+import {
+  CSV_COLUMNS,
+  csvFigure,
+  LIST_SEPARATOR,
+  PATH_SEPARATOR,
+  guardFormula,
+  type ReportDocument,
+} from '../../packages/core/src/report/index.ts';
 import { sarifValidator } from './sarif-schema.ts';
 
 const validateSarif = sarifValidator();
@@ -21,9 +28,14 @@ export function checkHtml(html: string, doc: ReportDocument): HTMLElement {
   expect(root.querySelector('style')?.text).toMatch(/@media print/);
 
   const ids = root.querySelectorAll('[id]').map((el) => el.id);
-  expect(ids.filter((id, i) => ids.indexOf(id) !== i), 'ids are unique').toEqual([]);
+  expect(
+    ids.filter((id, i) => ids.indexOf(id) !== i),
+    'ids are unique',
+  ).toEqual([]);
   const sections = root.querySelectorAll('section.scenario');
-  expect(sections.map((s) => s.querySelector('h2')?.querySelector('code')?.text)).toEqual(doc.scenarios.map((s) => s.id));
+  expect(sections.map((s) => s.querySelector('h2')?.querySelector('code')?.text)).toEqual(
+    doc.scenarios.map((s) => s.id),
+  );
 
   for (const table of root.querySelectorAll('table')) {
     expect(table.querySelector('caption')?.text.trim(), 'every table says what it holds').toBeTruthy();
@@ -31,7 +43,10 @@ export function checkHtml(html: string, doc: ReportDocument): HTMLElement {
     expect(head.length).toBeGreaterThan(0);
     for (const th of head) expect(th.getAttribute('scope')).toBe('col');
     for (const row of table.querySelectorAll('tbody tr')) {
-      const cells = row.childNodes.filter((n): n is HTMLElement => n instanceof Object && 'tagName' in n && ['TH', 'TD'].includes((n as HTMLElement).tagName));
+      const cells = row.childNodes.filter(
+        (n): n is HTMLElement =>
+          n instanceof Object && 'tagName' in n && ['TH', 'TD'].includes((n as HTMLElement).tagName),
+      );
       expect(cells).toHaveLength(head.length);
       expect(cells[0]!.tagName).toBe('TH');
       expect(cells[0]!.getAttribute('scope')).toBe('row');
@@ -108,29 +123,50 @@ export function checkCsvAgainstJson(csv: string, doc: ReportDocument): Row[] {
   expect(own.map((r) => r.element_findings)).toEqual(doc.findings.filter((f) => !shown.has(f.key)).map((f) => f.key));
   for (const r of own) {
     const f = doc.findings.find((x) => x.key === r.element_findings)!;
-    expect([r.scenario, r.element, r.element_worst_severity, r.element_findings_accepted]).toEqual([f.scenario ?? '', f.element ?? '', f.severity, f.accepted ? 'all' : 'none']);
+    expect([r.scenario, r.element, r.element_worst_severity, r.element_findings_accepted]).toEqual([
+      f.scenario ?? '',
+      f.element ?? '',
+      f.severity,
+      f.accepted ? 'all' : 'none',
+    ]);
   }
   const byKey = new Map(doc.findings.map((f) => [f.key, f]));
   for (const r of layerRows) {
     const fs = r.element_findings ? r.element_findings.split(LIST_SEPARATOR).map((k) => byKey.get(k)!) : [];
-    const worst = ['voids-credit', 'needs-justification', 'note'].find((sev) => fs.some((f) => f.severity === sev)) ?? '';
+    const worst =
+      ['voids-credit', 'needs-justification', 'note'].find((sev) => fs.some((f) => f.severity === sev)) ?? '';
     expect(r.element_worst_severity).toBe(worst);
     const accepted = fs.filter((f) => f.accepted).length;
-    expect(r.element_findings_accepted).toBe(fs.length === 0 ? '' : accepted === fs.length ? 'all' : accepted === 0 ? 'none' : 'some');
+    expect(r.element_findings_accepted).toBe(
+      fs.length === 0 ? '' : accepted === fs.length ? 'all' : accepted === 0 ? 'none' : 'some',
+    );
   }
   return rows;
 }
 
 export interface SarifLog {
   runs: {
-    tool: { driver: { rules: { id: string; name: string; shortDescription: { text: string }; fullDescription: { text: string }; help: { text: string } }[] } };
+    tool: {
+      driver: {
+        rules: {
+          id: string;
+          name: string;
+          shortDescription: { text: string };
+          fullDescription: { text: string };
+          help: { text: string };
+        }[];
+      };
+    };
     results: {
       ruleId: string;
       ruleIndex?: number;
       level: string;
       message: { text: string };
       locations: { physicalLocation: { region?: { startLine: number; startColumn: number } } }[];
-      relatedLocations?: { message?: { text: string }; physicalLocation: { region?: { startLine: number; startColumn: number } } }[];
+      relatedLocations?: {
+        message?: { text: string };
+        physicalLocation: { region?: { startLine: number; startColumn: number } };
+      }[];
       suppressions?: { status: string; justification: string }[];
       partialFingerprints: Record<string, string>;
     }[];
@@ -158,14 +194,18 @@ export function checkSarif(text: string, doc: ReportDocument): SarifLog {
   }
   run.results.forEach((r, i) => {
     const f = doc.findings[i]!;
-    if (f.accepted) expect(r.suppressions).toEqual([expect.objectContaining({ status: 'accepted', justification: expect.stringContaining(f.accepted.reason) })]);
+    if (f.accepted)
+      expect(r.suppressions).toEqual([
+        expect.objectContaining({ status: 'accepted', justification: expect.stringContaining(f.accepted.reason) }),
+      ]);
     else expect(r.suppressions).toBeUndefined();
   });
   return log;
 }
 
 const cellsOf = (table: HTMLElement) => table.querySelectorAll('tbody tr').map((tr) => tr.querySelectorAll('th, td'));
-const tableCaptioned = (root: HTMLElement, start: string) => root.querySelectorAll('table').filter((t) => t.querySelector('caption')?.text.startsWith(start));
+const tableCaptioned = (root: HTMLElement, start: string) =>
+  root.querySelectorAll('table').filter((t) => t.querySelector('caption')?.text.startsWith(start));
 
 /**
  * The site-wide section and each scenario's cut sets, read back from the HTML and compared with the JSON
@@ -184,18 +224,30 @@ export function checkSiteWideHtml(root: HTMLElement, doc: ReportDocument): void 
     doc.cutSets.scenarios.map((s) => [
       s.scenario,
       s.layers.length ? s.layers.join(', ') : 'none',
-      ...Array.from({ length: s.maxOrder }, (_, i) => (s.noStartingElement ? '-' : String(s.cutSets.filter((c) => c.elements.length === i + 1).length))),
+      ...Array.from({ length: s.maxOrder }, (_, i) =>
+        s.noStartingElement ? '-' : String(s.cutSets.filter((c) => c.elements.length === i + 1).length),
+      ),
     ]),
   );
 
   const ranking = cellsOf(tableCaptioned(site!, 'Common-cause ranking')[0]!);
   expect(ranking.map((row) => [row[0]!.text, row[1]!.text, row[3]!.text, row[4]!.text, row[5]!.text])).toEqual(
-    doc.commonCauses.elements.map((r) => [String(r.rank), r.element, String(r.layers), r.scenarios.length ? r.scenarios.join(', ') : 'none', `${r.openFindings} of ${r.findings}`]),
+    doc.commonCauses.elements.map((r) => [
+      String(r.rank),
+      r.element,
+      String(r.layers),
+      r.scenarios.length ? r.scenarios.join(', ') : 'none',
+      `${r.openFindings} of ${r.findings}`,
+    ]),
   );
   const perYear = (text: string) => Number(/^([\d.e-]+) \/yr$/.exec(text)![1]);
   ranking.forEach((row, i) => {
     const r = doc.commonCauses!.elements[i]!;
-    for (const [cell, full] of [[row[6]!, r.frequencyCost], [row[7]!, r.gapReduction], [row[8]!, r.frequencyAtStake]] as const) {
+    for (const [cell, full] of [
+      [row[6]!, r.frequencyCost],
+      [row[7]!, r.gapReduction],
+      [row[8]!, r.frequencyAtStake],
+    ] as const) {
       expect(Math.abs(perYear(cell.text) - full)).toBeLessThanOrEqual(Math.abs(full) * 0.05);
     }
   });
@@ -205,10 +257,18 @@ export function checkSiteWideHtml(root: HTMLElement, doc: ReportDocument): void 
   for (const s of doc.cutSets.scenarios) {
     const section = root.querySelector(`section#scenario-${s.scenario}`)!;
     const singles = section.querySelectorAll('li').filter((li) => li.text.startsWith('Single point of failure:'));
-    expect(singles.map((li) => li.querySelector('code')!.text)).toEqual(s.cutSets.filter((c) => c.elements.length === 1).map((c) => c.elements[0]));
+    expect(singles.map((li) => li.querySelector('code')!.text)).toEqual(
+      s.cutSets.filter((c) => c.elements.length === 1).map((c) => c.elements[0]),
+    );
     for (const c of s.cutSets.filter((x) => x.elements.length === 1)) {
-      const items = singles.find((li) => li.querySelector('code')!.text === c.elements[0])!.parentNode!.querySelectorAll('li').map((li) => li.text);
-      for (const p of c.paths) expect(items).toContain(`${p.party === 'cause' ? 'From the cause' : `From layer ${p.party}`}: ${p.path.join(' -> ')}`);
+      const items = singles
+        .find((li) => li.querySelector('code')!.text === c.elements[0])!
+        .parentNode!.querySelectorAll('li')
+        .map((li) => li.text);
+      for (const p of c.paths)
+        expect(items).toContain(
+          `${p.party === 'cause' ? 'From the cause' : `From layer ${p.party}`}: ${p.path.join(' -> ')}`,
+        );
       if (c.findings.length) expect(items).toContain(`Findings about it: ${c.findings.join(', ')}`);
     }
     const grouped = tableCaptioned(section, `Cut sets of ${s.scenario} with more than one element`);
@@ -221,7 +281,9 @@ export function checkSiteWideHtml(root: HTMLElement, doc: ReportDocument): void 
         // The shared member's path from each side, as the JSON report gives them.
         const member = row[0]!.text;
         const paths = s.cutSets.find((c) => c.elements.includes(member))!.paths.filter((p) => p.element === member);
-        expect(row[1]!.text).toBe(paths.map((p) => `${p.party === 'cause' ? 'cause' : 'layer'} ${p.path.join(' -> ')}`).join('; '));
+        expect(row[1]!.text).toBe(
+          paths.map((p) => `${p.party === 'cause' ? 'cause' : 'layer'} ${p.path.join(' -> ')}`).join('; '),
+        );
         return partners.map((p) => [row[0]!.text, ...p.split(' + ')].sort().join(' + '));
       }),
     );

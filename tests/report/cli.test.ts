@@ -67,7 +67,11 @@ describe('--fail-on', () => {
     const file = model('rev-b-unaccepted.bulk', REV_B.replace(ACCEPT_LINE, ''));
     const r = await runCli(['report', file, '--format', 'json', '--fail-on', 'needs-justification']);
     expect(r.code).toBe(1);
-    expect(JSON.parse(r.stdout).findings.some((f: { rule: string; accepted?: unknown }) => f.rule === 'same-make-model' && !f.accepted)).toBe(true);
+    expect(
+      JSON.parse(r.stdout).findings.some(
+        (f: { rule: string; accepted?: unknown }) => f.rule === 'same-make-model' && !f.accepted,
+      ),
+    ).toBe(true);
   });
 
   it('counts notes only at --fail-on note', async () => {
@@ -80,7 +84,10 @@ describe('--fail-on', () => {
   });
 
   it('counts a stale justification at needs-justification, not at voids-credit', async () => {
-    const file = model('rev-b-stale.bulk', `${REV_B}accept shared-bridle:S-101:LIC-101+SIF-101:BR-101 by="C. Reviewer (invented)" date=2026-01-05 reason="revision A"\n`);
+    const file = model(
+      'rev-b-stale.bulk',
+      `${REV_B}accept shared-bridle:S-101:LIC-101+SIF-101:BR-101 by="C. Reviewer (invented)" date=2026-01-05 reason="revision A"\n`,
+    );
     const strict = await runCli(['report', file, '--format', 'sarif', '--fail-on', 'needs-justification']);
     expect(strict.code).toBe(1);
     expect(strict.stdout).toContain('stale-justification:shared-bridle:S-101:LIC-101+SIF-101:BR-101');

@@ -23,7 +23,11 @@ export function sha256(text: string): string {
 }
 
 /** The input the CLI builds for `file`, from `text` (the file's own text unless a test changes it). */
-export function demoInput(file: string, text = readDemo(file), options: { sha?: string; date?: string } = {}): ReportInput {
+export function demoInput(
+  file: string,
+  text = readDemo(file),
+  options: { sha?: string; date?: string } = {},
+): ReportInput {
   const loaded = loadModelText(file, text);
   if (!loaded.model) throw new Error(`${file} does not load: ${JSON.stringify(loaded.diagnostics)}`);
   return {
@@ -48,5 +52,8 @@ export function reorderStatements(text: string): string {
     if (/^\s/.test(line)) statements[statements.length - 1]!.push(line);
     else statements.push([line]);
   }
-  return `${statements.reverse().map((s) => s.join('\n')).join('\n')}\n`;
+  return `${statements
+    .reverse()
+    .map((s) => s.join('\n'))
+    .join('\n')}\n`;
 }

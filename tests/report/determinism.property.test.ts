@@ -8,14 +8,18 @@ import { Random } from '../helpers/random.ts';
 import { DEMO, DEMO_REV_B, demoInput, readDemo } from './demo.ts';
 
 /** List attributes whose items are a set: the order they are written in carries no meaning. */
-const SET_LISTS = /\b(sensors|finals|mounted-on|connected-through|signal-via|housed-in|powered-by|air-from|hydraulic-from)=([^\s"#]+)/g;
+const SET_LISTS =
+  /\b(sensors|finals|mounted-on|connected-through|signal-via|housed-in|powered-by|air-from|hydraulic-from)=([^\s"#]+)/g;
 
 /** The model text with statements, scenario lines and set-like lists in a random order; comments dropped. */
 export function shuffleModel(text: string, random: Random): string {
   const statements: string[][] = [];
   for (const line of text.split('\n')) {
     if (line.trim() === '' || line.trimStart().startsWith('#')) continue;
-    const shuffled = line.replace(SET_LISTS, (_, key: string, list: string) => `${key}=${random.shuffle(list.split(',')).join(',')}`);
+    const shuffled = line.replace(
+      SET_LISTS,
+      (_, key: string, list: string) => `${key}=${random.shuffle(list.split(',')).join(',')}`,
+    );
     if (/^\s/.test(line)) statements[statements.length - 1]!.push(shuffled);
     else statements.push([shuffled]);
   }
@@ -39,24 +43,34 @@ describe.each([DEMO, DEMO_REV_B])('%s under shuffled statements, scenario lines 
   const original = demoInput(file);
   const reports = rendered(original);
   // The analysis lists findings scenario by scenario, in model order; the reports put them in one order.
-  const keysOf = (input: ReportInput) => input.analysis.findings.map((f) => `${f.key} ${f.severity} ${f.accepted ? 'accepted' : 'open'}`).sort();
+  const keysOf = (input: ReportInput) =>
+    input.analysis.findings.map((f) => `${f.key} ${f.severity} ${f.accepted ? 'accepted' : 'open'}`).sort();
   const keys = keysOf(original);
 
   it('the shuffle really moves things (a canary for this test)', () => {
     const text = readDemo(file);
     const shuffled = shuffleModel(text, new Random(1));
     expect(shuffled).not.toBe(text);
-    const layers = (t: string) => t.split('\n').filter((l) => /^\s+layer /.test(l)).join('\n');
-    const moved = [1, 2, 3, 4, 5].some((seed) => layers(shuffleModel(text, new Random(seed))) !== layers(shuffleModel(text, new Random(0))));
+    const layers = (t: string) =>
+      t
+        .split('\n')
+        .filter((l) => /^\s+layer /.test(l))
+        .join('\n');
+    const moved = [1, 2, 3, 4, 5].some(
+      (seed) => layers(shuffleModel(text, new Random(seed))) !== layers(shuffleModel(text, new Random(0))),
+    );
     expect(moved).toBe(true);
   });
 
-  it.each(Array.from({ length: 12 }, (_, i) => i + 1))('seed %i: every format is identical apart from positions, every finding key unchanged', (seed) => {
-    const input = demoInput(file, shuffleModel(readDemo(file), new Random(seed)), { sha: original.sha256 });
-    expect(keysOf(input)).toEqual(keys);
-    const actual = rendered(input);
-    for (const format of REPORT_FORMATS) expect(actual.get(format), format).toBe(reports.get(format));
-  });
+  it.each(Array.from({ length: 12 }, (_, i) => i + 1))(
+    'seed %i: every format is identical apart from positions, every finding key unchanged',
+    (seed) => {
+      const input = demoInput(file, shuffleModel(readDemo(file), new Random(seed)), { sha: original.sha256 });
+      expect(keysOf(input)).toEqual(keys);
+      const actual = rendered(input);
+      for (const format of REPORT_FORMATS) expect(actual.get(format), format).toBe(reports.get(format));
+    },
+  );
 });
 
 describe('revision B with the two layers of S-101 swapped (the case issue 10 reports)', () => {
@@ -70,6 +84,9 @@ describe('revision B with the two layers of S-101 swapped (the case issue 10 rep
     expect(accepted(after)).toEqual(accepted(before));
     expect(accepted(after)).toContain('same-make-model:S-101:LAH-101+SIF-101:LT-102:LT-103');
     expect(after.analysis.findings.some((f) => f.rule === 'stale-justification')).toBe(false);
-    for (const format of REPORT_FORMATS) expect(withoutPositions(format, renderReport(after, format))).toBe(withoutPositions(format, renderReport(before, format)));
+    for (const format of REPORT_FORMATS)
+      expect(withoutPositions(format, renderReport(after, format))).toBe(
+        withoutPositions(format, renderReport(before, format)),
+      );
   });
 });

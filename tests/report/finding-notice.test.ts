@@ -27,7 +27,9 @@ describe('a finding in the notice look', () => {
     const line = text.split('\n').findIndex((l) => l === '  layer SF-1') + 1;
     const bridleLine = text.split('\n').findIndex((l) => l.startsWith('bridle BR-1')) + 1;
     const out = renderOnly(text).split('\n');
-    expect(out[0]).toMatch(/^Credit voided: layer `SF-1` and the failing loop `LC-1` both rely on bridle or manifold `BR-1`/);
+    expect(out[0]).toMatch(
+      /^Credit voided: layer `SF-1` and the failing loop `LC-1` both rely on bridle or manifold `BR-1`/,
+    );
     expect(out[1]).toBe(`  where    site.bulk:${line}:9, the claim of layer SF-1`);
     expect(out[2]).toBe('           ┆   layer SF-1');
     expect(out[3]).toBe('           ┆         ‾‾‾‾');

@@ -16,7 +16,8 @@ function golden(name: string, format: ReportFormat, actual: string): string {
   // name may carry the contents (`marrow-fen.worksheet`); the evidence list has none.
   const path = `${GOLDEN_DIR}${name}.${format}`;
   if (process.env.UPDATE_GOLDEN === '1') writeFileSync(path, actual);
-  if (!existsSync(path)) throw new Error(`golden file ${path} is missing: run with UPDATE_GOLDEN=1, then review it by hand`);
+  if (!existsSync(path))
+    throw new Error(`golden file ${path} is missing: run with UPDATE_GOLDEN=1, then review it by hand`);
   return readFileSync(path, 'utf8');
 }
 
@@ -51,7 +52,12 @@ describe('demo reports, checked as a reader would', () => {
 
   it('HTML has one section per scenario with headed tables', () => {
     const root = checkHtml(renderReport(input, 'html'), doc);
-    expect(root.querySelectorAll('section.scenario').map((s) => s.id)).toEqual(['scenario-S-101', 'scenario-S-102', 'scenario-S-103', 'scenario-S-104']);
+    expect(root.querySelectorAll('section.scenario').map((s) => s.id)).toEqual([
+      'scenario-S-101',
+      'scenario-S-102',
+      'scenario-S-103',
+      'scenario-S-104',
+    ]);
   });
 
   it('HTML shows the minimal cut sets and the common-cause ranking of the JSON report', () => {
@@ -61,15 +67,28 @@ describe('demo reports, checked as a reader would', () => {
     // the cause shares with SIF-101 (bridle BR-101, its nozzles N-101A and N-101B, junction box JB-101) pairs
     // with each of the 12 elements that defeat LAH-101; what it shares with LAH-101 (AI-1-03, BPCS-C1, CAB-1,
     // CKT-11, UPS-1) pairs with the 7 SIF-101 elements not already counted: 4 x 12 + 5 x 7 = 83.
-    const rows = root.querySelectorAll('section#scenario-S-101 table').find((t) => t.querySelector('caption')!.text.startsWith('Cut sets of S-101'))!.querySelectorAll('tbody tr');
+    const rows = root
+      .querySelectorAll('section#scenario-S-101 table')
+      .find((t) => t.querySelector('caption')!.text.startsWith('Cut sets of S-101'))!
+      .querySelectorAll('tbody tr');
     expect(rows.map((tr) => `${tr.querySelector('th')!.text}:${tr.querySelectorAll('td')[2]!.text}`)).toEqual([
-      'BR-101:12', 'JB-101:12', 'N-101A:12', 'N-101B:12', 'AI-1-03:7', 'BPCS-C1:7', 'CAB-1:7', 'CKT-11:7', 'UPS-1:7',
+      'BR-101:12',
+      'JB-101:12',
+      'N-101A:12',
+      'N-101B:12',
+      'AI-1-03:7',
+      'BPCS-C1:7',
+      'CAB-1:7',
+      'CKT-11:7',
+      'UPS-1:7',
     ]);
   });
 
   it('CSV parses back into the JSON report', () => {
     const rows = checkCsvAgainstJson(renderReport(input, 'csv'), doc).filter((r) => r.row_kind !== 'finding');
-    expect(rows.length).toBe(doc.scenarios.reduce((n, s) => n + s.layers.reduce((m, l) => m + Math.max(l.elements.length, 1), 0), 0));
+    expect(rows.length).toBe(
+      doc.scenarios.reduce((n, s) => n + s.layers.reduce((m, l) => m + Math.max(l.elements.length, 1), 0), 0),
+    );
   });
 
   it('SARIF validates against the SARIF 2.1.0 schema and points at the claimed layers', () => {
@@ -96,21 +115,26 @@ describe('demo reports, checked as a reader would', () => {
     const md = renderReport(revB, 'md');
     for (const f of accepted) expect(md).toContain(`**Accepted** by ${f.accepted!.by} on ${f.accepted!.date}`);
     const log = checkSarif(renderReport(revB, 'sarif'), buildReportDocument(revB));
-    expect(log.runs[0]!.results.filter((r) => r.suppressions?.[0]?.status === 'accepted')).toHaveLength(accepted.length);
+    expect(log.runs[0]!.results.filter((r) => r.suppressions?.[0]?.status === 'accepted')).toHaveLength(
+      accepted.length,
+    );
   });
 });
 
 describe('determinism on the demo', () => {
   it('gives byte-identical output across two runs', () => {
-    for (const format of REPORT_FORMATS) expect(renderReport(demoInput(DEMO), format)).toBe(renderReport(demoInput(DEMO), format));
+    for (const format of REPORT_FORMATS)
+      expect(renderReport(demoInput(DEMO), format)).toBe(renderReport(demoInput(DEMO), format));
   });
 
   it('gives byte-identical output when the model statements come in another order', () => {
     const original = demoInput(DEMO);
     const reordered = demoInput(DEMO, reorderStatements(readDemo(DEMO)), { sha: original.sha256 });
     expect(reordered.model.elements[0]!.tag).not.toBe(original.model.elements[0]!.tag);
-    for (const format of ['md', 'html', 'csv', 'json'] as const) expect(renderReport(reordered, format)).toBe(renderReport(original, format));
-    const withoutRegions = (text: string) => JSON.stringify(JSON.parse(text, (k, v) => (k === 'region' ? undefined : v)));
+    for (const format of ['md', 'html', 'csv', 'json'] as const)
+      expect(renderReport(reordered, format)).toBe(renderReport(original, format));
+    const withoutRegions = (text: string) =>
+      JSON.stringify(JSON.parse(text, (k, v) => (k === 'region' ? undefined : v)));
     expect(withoutRegions(renderReport(reordered, 'sarif'))).toBe(withoutRegions(renderReport(original, 'sarif')));
   });
 });
@@ -129,6 +153,9 @@ describe('a stale justification on the demo', () => {
     const log = checkSarif(renderReport(input, 'sarif'), buildReportDocument(input));
     const result = log.runs[0]!.results.find((r) => r.partialFingerprints['bulkheadFindingKey/v1'] === key)!;
     expect(result.level).toBe('warning');
-    expect(result.locations[0]!.physicalLocation.region).toMatchObject({ startLine: text.split('\n').length - 1, startColumn: 8 });
+    expect(result.locations[0]!.physicalLocation.region).toMatchObject({
+      startLine: text.split('\n').length - 1,
+      startColumn: 8,
+    });
   });
 });

@@ -23,7 +23,14 @@ describe.skipIf(!existsSync(CHROMIUM))('HTML report in a browser', () => {
     context = await chromium.launchPersistentContext(join(dir, 'profile'), {
       executablePath: CHROMIUM,
       headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--no-first-run',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+      ],
     });
   }, 60_000);
   afterAll(async () => {

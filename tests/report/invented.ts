@@ -39,7 +39,13 @@ export function loadInvented(text = INVENTED_TEXT): LoadResult & { model: Model 
 const trace = (fn: string, kind: 'loop' | 'sif' | 'device', rows: [string, string, string, string[]][]) => ({
   function: fn,
   kind,
-  elements: rows.map(([tag, k, group, path]) => ({ tag, kind: k, group, path, links: path.slice(1).map(() => 'mountedOn') })),
+  elements: rows.map(([tag, k, group, path]) => ({
+    tag,
+    kind: k,
+    group,
+    path,
+    links: path.slice(1).map(() => 'mountedOn'),
+  })),
   channels: [],
   missing: [],
 });
@@ -50,9 +56,15 @@ const sharedNozzle: Finding = {
   title: 'shared process connection',
   severity: 'voids-credit',
   scenario: 'S-1',
-  parties: [{ role: 'cause', tag: 'LIC-1' }, { role: 'layer', tag: 'SIF-1' }],
+  parties: [
+    { role: 'cause', tag: 'LIC-1' },
+    { role: 'layer', tag: 'SIF-1' },
+  ],
   element: 'N-1',
-  paths: [['LIC-1', 'LT-1', 'N-1'], ['SIF-1', 'LT-2', 'N-1']],
+  paths: [
+    ['LIC-1', 'LT-1', 'N-1'],
+    ['SIF-1', 'LT-2', 'N-1'],
+  ],
   ...say('shared-process-connection/shared', {
     a: { role: 'cause', tag: 'LIC-1', functionKind: 'loop' },
     b: { role: 'layer', tag: 'SIF-1' },
@@ -73,9 +85,15 @@ const sameMake: Finding = {
   title: 'same make and model',
   severity: 'needs-justification',
   scenario: 'S-1',
-  parties: [{ role: 'cause', tag: 'LIC-1' }, { role: 'layer', tag: 'SIF-1' }],
+  parties: [
+    { role: 'cause', tag: 'LIC-1' },
+    { role: 'layer', tag: 'SIF-1' },
+  ],
   element: 'LT-2',
-  paths: [['LIC-1', 'LT-1'], ['SIF-1', 'LT-2']],
+  paths: [
+    ['LIC-1', 'LT-1'],
+    ['SIF-1', 'LT-2'],
+  ],
   ...say('same-make-model/same-device', {
     element: 'LT-2',
     other: 'LT-1',
@@ -109,8 +127,21 @@ export function inventedAnalysis(findings: Finding[] = [sharedNozzle, sameMake])
     ] as Analysis['traces'],
     findings,
     rules: [
-      { id: 'shared-connection', title: 'shared process connection', severity: 'voids-credit', defaultSeverity: 'voids-credit', source: 'invented source for a test' },
-      { id: 'same-make-model', title: 'same make and model', severity: 'needs-justification', defaultSeverity: 'note', source: 'invented source for a test', reason: 'owner wants diversity reviewed' },
+      {
+        id: 'shared-connection',
+        title: 'shared process connection',
+        severity: 'voids-credit',
+        defaultSeverity: 'voids-credit',
+        source: 'invented source for a test',
+      },
+      {
+        id: 'same-make-model',
+        title: 'same make and model',
+        severity: 'needs-justification',
+        defaultSeverity: 'note',
+        source: 'invented source for a test',
+        reason: 'owner wants diversity reviewed',
+      },
     ],
     assessments: [
       {
@@ -125,12 +156,25 @@ export function inventedAnalysis(findings: Finding[] = [sharedNozzle, sameMake])
         modifiers: [],
         layers: [
           {
-            function: 'SIF-1', kind: 'sif', claimedPfd: { value: 0.01, origin: 'model' }, allowedPfd: 0.01,
-            verdict: 'voided', credited: false, creditedIfAccepted: false, findings: [sharedNozzle.key, sameMake.key],
+            function: 'SIF-1',
+            kind: 'sif',
+            claimedPfd: { value: 0.01, origin: 'model' },
+            allowedPfd: 0.01,
+            verdict: 'voided',
+            credited: false,
+            creditedIfAccepted: false,
+            findings: [sharedNozzle.key, sameMake.key],
           },
           {
-            function: 'IPL-PSV-1', kind: 'device', title: 'Relief | valve', claimedPfd: { value: 0.01, origin: 'model', basis: 'invented sizing' },
-            allowedPfd: 0.01, verdict: 'independent', credited: true, creditedIfAccepted: true, findings: [],
+            function: 'IPL-PSV-1',
+            kind: 'device',
+            title: 'Relief | valve',
+            claimedPfd: { value: 0.01, origin: 'model', basis: 'invented sizing' },
+            allowedPfd: 0.01,
+            verdict: 'independent',
+            credited: true,
+            creditedIfAccepted: true,
+            findings: [],
           },
         ],
         mitigatedClaimed: 1e-5,
@@ -139,7 +183,15 @@ export function inventedAnalysis(findings: Finding[] = [sharedNozzle, sameMake])
         gap: 10,
         meetsClaimed: true,
         meetsAfter: false,
-        sif: { function: 'SIF-1', requiredPfd: 0.01, requiredRrf: 100, sil: 2, demandRate: 0.001, mode: 'low-demand', note: 'invented note' },
+        sif: {
+          function: 'SIF-1',
+          requiredPfd: 0.01,
+          requiredRrf: 100,
+          sil: 2,
+          demandRate: 0.001,
+          mode: 'low-demand',
+          note: 'invented note',
+        },
         alternatives: [],
         findings: [sharedNozzle.key, sameMake.key],
       },

@@ -15,7 +15,10 @@ describe('README Reports excerpt', () => {
     expect(quoted.length).toBeGreaterThan(10);
     for (const line of quoted) {
       const text = line.endsWith(', ...') ? line.slice(0, -5) : line;
-      expect([...golden].some((g) => g === text || (line.endsWith(', ...') && g.startsWith(text))), line).toBe(true);
+      expect(
+        [...golden].some((g) => g === text || (line.endsWith(', ...') && g.startsWith(text))),
+        line,
+      ).toBe(true);
     }
   });
 });

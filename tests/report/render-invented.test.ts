@@ -53,10 +53,17 @@ describe('report document (invented data)', () => {
 
   it('should keep accepted findings, marked accepted, and add the stale justification as a finding', () => {
     const accepted = doc.findings.find((f) => f.key === INVENTED_FINDINGS.sameMake.key)!;
-    expect(accepted.accepted).toEqual({ by: 'A. Reviewer', date: '2024-05-01', reason: 'Diverse "firmware" <checked>' });
+    expect(accepted.accepted).toEqual({
+      by: 'A. Reviewer',
+      date: '2024-05-01',
+      reason: 'Diverse "firmware" <checked>',
+    });
     const stale = doc.findings.find((f) => f.rule === 'stale-justification')!;
     expect(stale.key).toBe('stale-justification:no-such-finding:S-9');
-    expect(doc.summary).toMatchObject({ accepted: 1, findings: { 'voids-credit': 1, 'needs-justification': 2, note: 0 } });
+    expect(doc.summary).toMatchObject({
+      accepted: 1,
+      findings: { 'voids-credit': 1, 'needs-justification': 2, note: 0 },
+    });
   });
 
   it('should conform to its own zod schema and to the JSON Schema exported from it', () => {
@@ -72,7 +79,8 @@ describe('report document (invented data)', () => {
 
 describe('determinism (invented data)', () => {
   it('should give byte-identical output across two runs in every format', () => {
-    for (const format of REPORT_FORMATS) expect(renderReport(inventedInput(), format)).toBe(renderReport(inventedInput(), format));
+    for (const format of REPORT_FORMATS)
+      expect(renderReport(inventedInput(), format)).toBe(renderReport(inventedInput(), format));
   });
 
   it('should not depend on the order of statements in the model or of items in the analysis', () => {
@@ -90,9 +98,11 @@ describe('determinism (invented data)', () => {
     };
     const other = inventedInput(reordered, shuffled);
     expect(other.model.elements.map((e) => e.tag)).not.toEqual(input.model.elements.map((e) => e.tag));
-    for (const format of ['md', 'html', 'csv', 'json'] as const) expect(renderReport(other, format)).toBe(renderReport(input, format));
+    for (const format of ['md', 'html', 'csv', 'json'] as const)
+      expect(renderReport(other, format)).toBe(renderReport(input, format));
     // SARIF differs only in where things are in the file: the regions.
-    const withoutRegions = (text: string) => JSON.stringify(JSON.parse(text, (k, v) => (k === 'region' ? undefined : v)));
+    const withoutRegions = (text: string) =>
+      JSON.stringify(JSON.parse(text, (k, v) => (k === 'region' ? undefined : v)));
     expect(withoutRegions(renderReport(other, 'sarif'))).toBe(withoutRegions(renderReport(input, 'sarif')));
     expect(renderReport(other, 'sarif')).not.toBe(renderReport(input, 'sarif'));
   });

@@ -28,7 +28,13 @@ scenario S-1 title="Drum overfills" category=people
 `;
 
 const model = loadModelText('tests/invented/shared-nozzle.bulk', TEXT).model!;
-const input = { model, analysis: analyze(model), file: 'tests/invented/shared-nozzle.bulk', sha256: 'b'.repeat(64), toolVersion: '0.0.0-test' };
+const input = {
+  model,
+  analysis: analyze(model),
+  file: 'tests/invented/shared-nozzle.bulk',
+  sha256: 'b'.repeat(64),
+  toolVersion: '0.0.0-test',
+};
 const doc = buildReportDocument(input);
 
 describe('cut sets and common causes in the evidence list (invented shared nozzle)', () => {
@@ -44,14 +50,23 @@ describe('cut sets and common causes in the evidence list (invented shared nozzl
     checkSiteWideHtml(root, doc);
     // Answer first: the scenario a single element leaves unprotected is named before anything else.
     const site = root.querySelector('section#site-wide')!;
-    expect(site.querySelector('h3 + p')!.text).toBe('1 scenario of 1 can be started and left unprotected by one element: S-1.');
+    expect(site.querySelector('h3 + p')!.text).toBe(
+      '1 scenario of 1 can be started and left unprotected by one element: S-1.',
+    );
     // The site-wide section stands between the front matter and the first scenario.
-    expect(root.querySelectorAll('main > section').map((s) => s.id).slice(0, 3)).toEqual(['front', 'site-wide', 'scenario-S-1']);
+    expect(
+      root
+        .querySelectorAll('main > section')
+        .map((s) => s.id)
+        .slice(0, 3),
+    ).toEqual(['front', 'site-wide', 'scenario-S-1']);
   });
 
   it('Markdown: the single point in full with the path from each side, and its finding', () => {
     const md = renderReport(input, 'md');
-    expect(md).toContain('- **Single point of failure:** `N-1` alone starts the scenario and defeats every claimed layer.');
+    expect(md).toContain(
+      '- **Single point of failure:** `N-1` alone starts the scenario and defeats every claimed layer.',
+    );
     expect(md).toContain('- From the cause: `LIC-1` -> `LT-1` -> `N-1`');
     expect(md).toContain('- From layer `SIF-1`: `SIF-1` -> `LT-2` -> `N-1`');
     expect(md).toContain('- Findings about it: `shared-process-connection:S-1:LIC-1+SIF-1:N-1`');

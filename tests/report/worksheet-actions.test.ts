@@ -16,10 +16,17 @@ const csv = (text: string) => parseCsv(text, { columns: true, record_delimiter: 
 /** A figure as printed (0.05 /yr, 2.5e-5, 3,000) back to a number. */
 const figure = (text: string) => Number(/-?[\d,]*\.?\d+(e-?\d+)?/.exec(text)![0].replace(/,/g, ''));
 /** Two significant figures: a printed figure is within 5 % of the full value. */
-const near = (printed: number, full: number) => expect(Math.abs(printed - full)).toBeLessThanOrEqual(Math.abs(full) * 0.05);
+const near = (printed: number, full: number) =>
+  expect(Math.abs(printed - full)).toBeLessThanOrEqual(Math.abs(full) * 0.05);
 /** A CSV figure: at most six significant digits, and within half a unit of the sixth of the full value. */
 const sixFigures = (printed: string, full: number) => {
-  expect(printed.replace(/e.*$/, '').replace(/^[-0.]+/, '').replace('.', '').length, printed).toBeLessThanOrEqual(6);
+  expect(
+    printed
+      .replace(/e.*$/, '')
+      .replace(/^[-0.]+/, '')
+      .replace('.', '').length,
+    printed,
+  ).toBeLessThanOrEqual(6);
   expect(Math.abs(Number(printed) - full)).toBeLessThanOrEqual(Math.abs(full) * 5e-6);
 };
 
@@ -45,7 +52,9 @@ describe('LOPA worksheet', () => {
     // The element that decides each lost layer is on its row.
     expect(rows.find((r) => r.layer === 'SIF-101')!.decided_by).toMatch(/^BR-101 \(shared-bridle\)/);
     // The hazard-study reference traces each scenario back (demo: invented study MF-100-HS-01).
-    expect(rows.find((r) => r.scenario === 'S-103')!.study_reference).toBe('study MF-100-HS-01 rev 2, node 6, deviation High temperature, recommendations R-21 R-22');
+    expect(rows.find((r) => r.scenario === 'S-103')!.study_reference).toBe(
+      'study MF-100-HS-01 rev 2, node 6, deviation High temperature, recommendations R-21 R-22',
+    );
   });
 
   it('HTML prints the same figures, read back from its table cells', () => {
@@ -82,7 +91,10 @@ describe('actions list', () => {
 
   it('turns every open or voiding finding into exactly one action, with owner and due date to fill', () => {
     expect(Object.keys(rows[0]!)).toEqual([...ACTION_COLUMNS]);
-    const open = doc.findings.filter((f) => !f.accepted && f.severity !== 'note').map((f) => f.key).sort();
+    const open = doc.findings
+      .filter((f) => !f.accepted && f.severity !== 'note')
+      .map((f) => f.key)
+      .sort();
     expect(rows.flatMap((r) => r.findings!.split(' ')).sort()).toEqual(open);
     for (const r of rows) expect([r.owner, r.due_date, r.status]).toEqual(['', '', '']);
     // Voided credit first: it is what the team must change.
@@ -112,8 +124,16 @@ describe('document control of the evidence list', () => {
 
   it('gives number, revision and status from the model, and the command line replaces them', () => {
     const table = root.querySelectorAll('table').find((t) => t.querySelector('caption')?.text === 'Document control')!;
-    const value = (item: string) => table.querySelectorAll('tbody tr').find((tr) => tr.querySelector('th')?.text === item)!.querySelector('td')!.text;
-    expect([value('Document number'), value('Revision'), value('Status')]).toEqual(['MF-100-LOPA-001', 'A', 'for review']);
+    const value = (item: string) =>
+      table
+        .querySelectorAll('tbody tr')
+        .find((tr) => tr.querySelector('th')?.text === item)!
+        .querySelector('td')!.text;
+    expect([value('Document number'), value('Revision'), value('Status')]).toEqual([
+      'MF-100-LOPA-001',
+      'A',
+      'for review',
+    ]);
     expect(value('SHA-256 of the model file')).toBe(doc.model.sha256);
     const given = buildReportDocument({ ...input, control: { revision: 'B', status: 'issued' } });
     expect(given.control).toMatchObject({ document: 'MF-100-LOPA-001', revision: 'B', status: 'issued' });
@@ -121,8 +141,17 @@ describe('document control of the evidence list', () => {
 
   it('has prepared, checked and approved lines, each with a date to fill', () => {
     const sign = root.querySelector('table.sign')!;
-    expect(sign.querySelectorAll('thead th').map((th) => th.text)).toEqual(['Role', 'Name', 'Signature', 'Date (required)']);
-    expect(sign.querySelectorAll('tbody th').map((th) => th.text)).toEqual(['Prepared by', 'Checked by', 'Approved by']);
+    expect(sign.querySelectorAll('thead th').map((th) => th.text)).toEqual([
+      'Role',
+      'Name',
+      'Signature',
+      'Date (required)',
+    ]);
+    expect(sign.querySelectorAll('tbody th').map((th) => th.text)).toEqual([
+      'Prepared by',
+      'Checked by',
+      'Approved by',
+    ]);
   });
 
   it('states its assumptions, and lists each source once with its edition and check', () => {
@@ -132,21 +161,46 @@ describe('document control of the evidence list', () => {
     const appendix = root.querySelector('#appendix-sources')!;
     expect(appendix.querySelectorAll('tbody tr')).toHaveLength(doc.sources!.length);
     // Each rule's sources are cited by reference and the reference is in the appendix.
-    for (const r of doc.rules) for (const s of sourceList([r])) expect(doc.sources!.some((x) => x.work === s.work && x.edition === s.edition)).toBe(true);
+    for (const r of doc.rules)
+      for (const s of sourceList([r]))
+        expect(doc.sources!.some((x) => x.work === s.work && x.edition === s.edition)).toBe(true);
   });
 });
 
 describe('reading a rule source into citations', () => {
   it.each([
-    ['IEC 61511-1:2016 9.4 and 11.2 (physical separation) [from memory for the clauses]', { work: 'IEC 61511-1', edition: '2016', clause: '9.4 and 11.2 (physical separation)', memory: true }],
-    ['CCPS, Layer of Protection Analysis (2001), ch. 6 (human response as an IPL; older allowance)', { work: 'CCPS, Layer of Protection Analysis', edition: '2001', clause: 'ch. 6 (human response as an IPL; older allowance)', memory: false }],
-    ['CCPS LOPA (2001) ch. 6', { work: 'CCPS, Layer of Protection Analysis', edition: '2001', clause: 'ch. 6', memory: false }],
-    ['ANSI/ISA-S84.01-1996 Annex B.1.2', { work: 'ANSI/ISA-S84.01', edition: '1996', clause: 'Annex B.1.2', memory: false }],
-    ['CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory)', { work: 'CCPS, Layer of Protection Analysis', edition: '2001', clause: 'Tables 6.3 to 6.5', memory: true }],
+    [
+      'IEC 61511-1:2016 9.4 and 11.2 (physical separation) [from memory for the clauses]',
+      { work: 'IEC 61511-1', edition: '2016', clause: '9.4 and 11.2 (physical separation)', memory: true },
+    ],
+    [
+      'CCPS, Layer of Protection Analysis (2001), ch. 6 (human response as an IPL; older allowance)',
+      {
+        work: 'CCPS, Layer of Protection Analysis',
+        edition: '2001',
+        clause: 'ch. 6 (human response as an IPL; older allowance)',
+        memory: false,
+      },
+    ],
+    [
+      'CCPS LOPA (2001) ch. 6',
+      { work: 'CCPS, Layer of Protection Analysis', edition: '2001', clause: 'ch. 6', memory: false },
+    ],
+    [
+      'ANSI/ISA-S84.01-1996 Annex B.1.2',
+      { work: 'ANSI/ISA-S84.01', edition: '1996', clause: 'Annex B.1.2', memory: false },
+    ],
+    [
+      'CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory)',
+      { work: 'CCPS, Layer of Protection Analysis', edition: '2001', clause: 'Tables 6.3 to 6.5', memory: true },
+    ],
   ])('%s', (text, expected) => expect(readCitation(text)).toMatchObject(expected));
 
   it('splits on semicolons outside parentheses only', () => {
-    expect(splitCitations('CCPS, LOPA (2001), ch. 6 (a; b); IEC 61511-1:2016 9.4')).toEqual(['CCPS, LOPA (2001), ch. 6 (a; b)', 'IEC 61511-1:2016 9.4']);
+    expect(splitCitations('CCPS, LOPA (2001), ch. 6 (a; b); IEC 61511-1:2016 9.4')).toEqual([
+      'CCPS, LOPA (2001), ch. 6 (a; b)',
+      'IEC 61511-1:2016 9.4',
+    ]);
   });
 
   it('marks a work partly checked when only some of its clauses are from memory', () => {
@@ -154,6 +208,11 @@ describe('reading a rule source into citations', () => {
       { id: 'a', source: 'IEC 61511-1:2016 9.4' },
       { id: 'b', source: 'IEC 61511-1:2016 11.9 [from memory for the clause]' },
     ]);
-    expect(iec).toMatchObject({ id: 'R1', checked: 'partly', clauses: ['9.4', '11.9 [from memory]'], rules: ['a', 'b'] });
+    expect(iec).toMatchObject({
+      id: 'R1',
+      checked: 'partly',
+      clauses: ['9.4', '11.9 [from memory]'],
+      rules: ['a', 'b'],
+    });
   });
 });

@@ -54,7 +54,16 @@ const ROWS: TableRow[] = [
 
 function figures(row: TableRow, lambda: number): GroupFigures {
   const lambdaD = lambda / 2;
-  return { lambdaDu: lambdaD * (1 - row.dc), lambdaDd: lambdaD * row.dc, lambdaSd: 0, t1: row.t1, mttr: 8, mrt: 8, beta: row.beta, betaD: row.beta / 2 };
+  return {
+    lambdaDu: lambdaD * (1 - row.dc),
+    lambdaDd: lambdaD * row.dc,
+    lambdaSd: 0,
+    t1: row.t1,
+    mttr: 8,
+    mrt: 8,
+    beta: row.beta,
+    betaD: row.beta / 2,
+  };
 }
 
 /** Half a unit of the printed table's second significant figure, and a hair for binary fractions. */
@@ -63,18 +72,28 @@ function printedRounding(printed: number): number {
 }
 
 describe('IEC 61508-6:2010 Annex B PFDavg tables (from memory; see the head of this file)', () => {
-  it.each(ROWS.flatMap((row) => LAMBDAS.map((lambda, i) => ({ ...row, lambda, value: row.printed[i]!, name: `${row.vote[0]}oo${row.vote[1]}` }))))(
-    'Table $table, $name, DC $dc, beta $beta, lambda $lambda /h: $value',
-    (row) => {
-      const pfd = groupPfd({ m: row.vote[0], n: row.vote[1] }, figures(row, row.lambda))!;
-      expect(Math.abs(pfd - row.value)).toBeLessThanOrEqual(printedRounding(row.value));
-    },
-  );
+  it.each(
+    ROWS.flatMap((row) =>
+      LAMBDAS.map((lambda, i) => ({ ...row, lambda, value: row.printed[i]!, name: `${row.vote[0]}oo${row.vote[1]}` })),
+    ),
+  )('Table $table, $name, DC $dc, beta $beta, lambda $lambda /h: $value', (row) => {
+    const pfd = groupPfd({ m: row.vote[0], n: row.vote[1] }, figures(row, row.lambda))!;
+    expect(Math.abs(pfd - row.value)).toBeLessThanOrEqual(printedRounding(row.value));
+  });
 });
 
 describe('IEC 61508-6:2010 Annex B PFH, worked by hand from the B.3.3 equations (from memory)', () => {
   // lambda = 1e-6 /h, lambdaD = 5e-7, DC 0, T1 = 1 year, MTTR = MRT = 8 h: tCE = T1/2 + MRT = 4,388 h.
-  const f: GroupFigures = { lambdaDu: 5e-7, lambdaDd: 0, lambdaSd: 0, t1: 8760, mttr: 8, mrt: 8, beta: 0.1, betaD: 0.05 };
+  const f: GroupFigures = {
+    lambdaDu: 5e-7,
+    lambdaDd: 0,
+    lambdaSd: 0,
+    t1: 8760,
+    mttr: 8,
+    mrt: 8,
+    beta: 0.1,
+    betaD: 0.05,
+  };
 
   it('1oo1 is lambdaDU: 5.0e-7 /h', () => {
     expect(groupPfh({ m: 1, n: 1 }, f)).toBe(5e-7);

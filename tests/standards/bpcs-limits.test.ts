@@ -1,7 +1,12 @@
 // The limits IEC 61511-1 puts on the BPCS, as cause and as protection layer, checked on small models:
 // the cap at RRF 10, at most two BPCS layers, one credit per controller, and the bound on a BPCS cause.
 import { describe, expect, it } from 'vitest';
-import { BPCS_CAUSE_LOWEST_FREQUENCY, BPCS_LAYER_BEST_PFD, BPCS_LAYERS_PER_SCENARIO, HOURS_PER_YEAR } from '../../packages/core/src/assess/index.ts';
+import {
+  BPCS_CAUSE_LOWEST_FREQUENCY,
+  BPCS_LAYER_BEST_PFD,
+  BPCS_LAYERS_PER_SCENARIO,
+  HOURS_PER_YEAR,
+} from '../../packages/core/src/assess/index.ts';
 import { assess } from '../core/assess/kit.ts';
 
 const ALARM = (tag: string, controller: string, pfd: number, sensor = 'LT-2') =>
@@ -89,11 +94,17 @@ scenario S-1 category=loc
 
   it('credits one of two BPCS layers in the same controller (IEC 61511 reading, the default)', () => {
     expect(assess(SAME_CONTROLLER('')).assessment.mitigatedAfter).toBeCloseTo(0.1, 15);
-    expect(assess(SAME_CONTROLLER('policy same-controller-layers=one-credit')).assessment.mitigatedAfter).toBeCloseTo(0.1, 15);
+    expect(assess(SAME_CONTROLLER('policy same-controller-layers=one-credit')).assessment.mitigatedAfter).toBeCloseTo(
+      0.1,
+      15,
+    );
   });
 
   it('credits both under the older CCPS practice (policy both)', () => {
-    expect(assess(SAME_CONTROLLER('policy same-controller-layers=both')).assessment.mitigatedAfter).toBeCloseTo(0.01, 15);
+    expect(assess(SAME_CONTROLLER('policy same-controller-layers=both')).assessment.mitigatedAfter).toBeCloseTo(
+      0.01,
+      15,
+    );
   });
 
   it('credits no BPCS layer when a BPCS failure is the cause under the strict owner policy (policy none)', () => {
@@ -122,7 +133,11 @@ describe('a BPCS loop failure as the cause', () => {
   cause function=LIC-1 frequency=0.02 basis="plant records (invented)"
 `);
     expect(out.findings).toHaveLength(1);
-    expect(out.findings[0]).toMatchObject({ key: 'bpcs-cause-frequency-low:S-1:LIC-1', severity: 'needs-justification', source: expect.stringContaining('8.2.2') });
+    expect(out.findings[0]).toMatchObject({
+      key: 'bpcs-cause-frequency-low:S-1:LIC-1',
+      severity: 'needs-justification',
+      source: expect.stringContaining('8.2.2'),
+    });
     expect(out.assessment.mitigatedAfter).toBe(0.1);
     expect(out.assessment.mitigatedIfAccepted).toBe(0.02);
   });

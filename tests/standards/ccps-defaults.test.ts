@@ -71,14 +71,18 @@ scenario S-1 category=loc
   });
 
   it('refuses a piping row without a length, and a length on any other row (the loader test pins the spans)', () => {
-    expect(() => assess(`
+    expect(() =>
+      assess(`
 scenario S-1 category=loc
   cause external="Leak from the transfer line" typical=piping-leak
-`)).toThrow(/BH330/);
-    expect(() => assess(`
+`),
+    ).toThrow(/BH330/);
+    expect(() =>
+      assess(`
 scenario S-1 category=loc
   cause external="Fire" typical=external-fire pipe-metres=100
-`)).toThrow(/BH331/);
+`),
+    ).toThrow(/BH331/);
   });
 });
 
@@ -114,7 +118,9 @@ scenario S-1 category=loc
   layer LSHH-3
   layer SIF-4
 `);
-    const claimed = Object.fromEntries(out.assessment.layers.map((l) => [l.function, [l.claimedPfd.value, l.claimedPfd.origin]]));
+    const claimed = Object.fromEntries(
+      out.assessment.layers.map((l) => [l.function, [l.claimedPfd.value, l.claimedPfd.origin]]),
+    );
     expect(claimed).toEqual({
       'PSV-IPL': [0.01, 'default'],
       'RD-IPL': [0.01, 'default'],
@@ -132,6 +138,10 @@ scenario S-1 category=loc
   cause function=LIC-1 frequency=0.1
   layer PSV-IPL pfd=0.001 basis="Two relief valves, each sized for the full case (invented)"
 `);
-    expect(out.assessment.layers[0]!.claimedPfd).toEqual({ value: 0.001, origin: 'model', basis: 'Two relief valves, each sized for the full case (invented)' });
+    expect(out.assessment.layers[0]!.claimedPfd).toEqual({
+      value: 0.001,
+      origin: 'model',
+      basis: 'Two relief valves, each sized for the full case (invented)',
+    });
   });
 });

@@ -39,7 +39,9 @@ describe('common practice, no source', () => {
 
   it('voiding a layer that shares a bridle with the cause raises the required SIL from 2 to 3', () => {
     // Common practice, no source (docs/design.md section 6): two transmitters on one level bridle share a common cause.
-    const bridle = independenceFinding('S-1', 'shared-connection', [cause('LIC-1'), layer('LAH-2')], { element: 'BR-1' });
+    const bridle = independenceFinding('S-1', 'shared-connection', [cause('LIC-1'), layer('LAH-2')], {
+      element: 'BR-1',
+    });
     const before = assess(LEVEL()).assessment;
     const after = assess(LEVEL(), [bridle]).assessment;
     expect(after.layers.find((l) => l.function === 'LAH-2')).toMatchObject({ verdict: 'voided', credited: false });
@@ -52,7 +54,9 @@ describe('common practice, no source', () => {
   it('credit for presence needs presence under about 10%', () => {
     // Common practice, no source (docs/design.md section 6; docs/rule-basis.md section 3: owner's policy, default 0.1).
     const at = (p: number) =>
-      assess(`scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p} basis="time at the site (invented)"\n`).assessment.mitigatedAfter;
+      assess(
+        `scenario S-1 category=people\n  cause function=LIC-1 frequency=0.1\n  modifier presence probability=${p} basis="time at the site (invented)"\n`,
+      ).assessment.mitigatedAfter;
     expect(at(0.1)).toBeCloseTo(0.01, 15);
     expect(at(0.5)).toBe(0.1);
   });
@@ -129,7 +133,9 @@ describe('edge cases of the arithmetic', () => {
   });
 
   it('reports beyond SIL 4 when one SIF cannot close the gap', () => {
-    const a = assess(`category tiny tolerable=1e-7 harm=people\nscenario S-1 category=tiny\n  cause external="Surge" frequency=1\n`).assessment;
+    const a = assess(
+      `category tiny tolerable=1e-7 harm=people\nscenario S-1 category=tiny\n  cause external="Surge" frequency=1\n`,
+    ).assessment;
     expect(a.sif!.sil).toBe(5);
   });
 
@@ -141,11 +147,16 @@ describe('edge cases of the arithmetic', () => {
     for (let i = 0; i < 25; i++) {
       for (let j = i + 1; j < 25; j++) {
         if ((i * 7 + j * 3) % 4 === 0 || j === i + 1) {
-          conflicts.push(independenceFinding('S-1', 'shared-element', [layer(tags[i]!), layer(tags[j]!)], { element: 'PSV-1' }));
+          conflicts.push(
+            independenceFinding('S-1', 'shared-element', [layer(tags[i]!), layer(tags[j]!)], { element: 'PSV-1' }),
+          );
         }
       }
     }
-    const a = assess(`${devices}\nscenario S-1 category=people\n  cause external="Surge" frequency=1\n${claims}\n`, conflicts).assessment;
+    const a = assess(
+      `${devices}\nscenario S-1 category=people\n  cause external="Surge" frequency=1\n${claims}\n`,
+      conflicts,
+    ).assessment;
     const credited = new Set(a.layers.filter((l) => l.credited).map((l) => l.function));
     expect(credited.size).toBeGreaterThan(1);
     for (const f of conflicts) expect(credited.has(f.parties[0]!.tag!) && credited.has(f.parties[1]!.tag!)).toBe(false);
@@ -162,8 +173,13 @@ scenario S-1 category=people
   cause external="Surge" frequency=1
 ${order.map((t) => `  layer ${t}`).join('\n')}
 `;
-    const conflict = [independenceFinding('S-1', 'shared-operator', [layer('LAH-3'), layer('LAH-2')], { element: 'OP-1' })];
-    for (const order of [['LAH-2', 'LAH-3'], ['LAH-3', 'LAH-2']]) {
+    const conflict = [
+      independenceFinding('S-1', 'shared-operator', [layer('LAH-3'), layer('LAH-2')], { element: 'OP-1' }),
+    ];
+    for (const order of [
+      ['LAH-2', 'LAH-3'],
+      ['LAH-3', 'LAH-2'],
+    ]) {
       const a = assess(model(order), conflict).assessment;
       expect(a.layers.filter((l) => l.credited).map((l) => l.function)).toEqual(['LAH-2']);
       expect(a.alternatives.map((x) => x.layers)).toEqual([['LAH-3']]);

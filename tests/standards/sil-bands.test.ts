@@ -24,7 +24,9 @@ describe('IEC 61511-1:2016 Table 4, low demand', () => {
 
   it('is not printed upside down: the higher SIL has the lower PFD', () => {
     // docs/rule-basis.md section 1 warns of secondary copies that invert the table.
-    expect(LOW_DEMAND_BANDS.find((b) => b.sil === 4)!.high).toBeLessThan(LOW_DEMAND_BANDS.find((b) => b.sil === 1)!.low);
+    expect(LOW_DEMAND_BANDS.find((b) => b.sil === 4)!.high).toBeLessThan(
+      LOW_DEMAND_BANDS.find((b) => b.sil === 1)!.low,
+    );
   });
 
   // IEC 61511-1:2016 Table 4 RRF column (as quoted in docs/rule-basis.md section 1): SIL 1 > 10 to <= 100, SIL 2 > 100

@@ -80,7 +80,9 @@ scenario BV-2 category=loc
   layer PIC-1 pfd=0.1
 `;
   // The independence finding the trace rules would make (hand-built here: the rules are not under test).
-  const sharedController = independenceFinding('BV-1', 'shared-solver', [cause('LIC-1'), layer('PIC-1')], { element: 'C1' });
+  const sharedController = independenceFinding('BV-1', 'shared-solver', [cause('LIC-1'), layer('PIC-1')], {
+    element: 'C1',
+  });
 
   function total(findings: ReturnType<typeof independenceFinding>[]) {
     const model = load(BUFFER);

@@ -15,7 +15,10 @@ describe('parseLink and formatLink', () => {
 
   it.each([
     [{ scenario: 'S-101' }, '#scenario=S-101'],
-    [{ scenario: 'S-101', finding: 'shared-bridle:S-101:LIC-101+SIF-101:BR-101' }, '#scenario=S-101&finding=shared-bridle%3AS-101%3ALIC-101%2BSIF-101%3ABR-101'],
+    [
+      { scenario: 'S-101', finding: 'shared-bridle:S-101:LIC-101+SIF-101:BR-101' },
+      '#scenario=S-101&finding=shared-bridle%3AS-101%3ALIC-101%2BSIF-101%3ABR-101',
+    ],
     [{ scenario: 'S-103', element: 'SIS-1' }, '#scenario=S-103&element=SIS-1'],
     [{ scenario: 'S-103', layer: 'SIF-301' }, '#scenario=S-103&layer=SIF-301'],
     [{ matrix: true }, '#view=matrix'],

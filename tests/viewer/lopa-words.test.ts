@@ -17,11 +17,15 @@ describe('sifNeedWords', () => {
   it("should say an independent SIF is needed when the scenario's own SIF is voided (demo S-101: SIF-101 on the loop's bridle)", () => {
     const sif101 = s101.layers.find((l) => l.function === 'SIF-101')!;
     expect(sif101.credited).toBe(false);
-    expect(sifNeedWords(s101)).toBe(`an independent SIF needs SIL ${s101.sif!.sil} (SIF-101 as drawn has no credit: voided, shares BR-101 with the cause (shared-bridle))`);
+    expect(sifNeedWords(s101)).toBe(
+      `an independent SIF needs SIL ${s101.sif!.sil} (SIF-101 as drawn has no credit: voided, shares BR-101 with the cause (shared-bridle))`,
+    );
   });
 
   it('should name the SIF plainly when it keeps its credit', () => {
-    for (const a of analysis.assessments.filter((x) => x.sif?.function && x.layers.find((l) => l.function === x.sif!.function)?.credited)) {
+    for (const a of analysis.assessments.filter(
+      (x) => x.sif?.function && x.layers.find((l) => l.function === x.sif!.function)?.credited,
+    )) {
       expect(sifNeedWords(a)).toMatch(new RegExp(`^${a.sif!.function} needs (SIL \\d|no SIL|more than SIL 4)$`));
     }
   });
@@ -72,6 +76,8 @@ describe('chainsOf', () => {
 
 describe('acceptStatement', () => {
   it('should write an accept statement with the date of the day given', () => {
-    expect(acceptStatement('k:S-1:A+B:X', new Date(2026, 11, 2))).toBe('accept k:S-1:A+B:X by="NAME" date=2026-12-02 reason="WHY THE TEAM ACCEPTS IT"');
+    expect(acceptStatement('k:S-1:A+B:X', new Date(2026, 11, 2))).toBe(
+      'accept k:S-1:A+B:X by="NAME" date=2026-12-02 reason="WHY THE TEAM ACCEPTS IT"',
+    );
   });
 });

@@ -3,7 +3,13 @@
 import { readFileSync } from 'node:fs';
 import { analyze, loadModelText, SEVERITY_RANK } from '@bulkhead/core';
 import { describe, expect, it } from 'vitest';
-import { focusView, OVERVIEW_FINDINGS_SHOWN, searchTags, SEARCH_LIMIT, summariseSite } from '../../apps/viewer/src/lib/site-view.ts';
+import {
+  focusView,
+  OVERVIEW_FINDINGS_SHOWN,
+  searchTags,
+  SEARCH_LIMIT,
+  summariseSite,
+} from '../../apps/viewer/src/lib/site-view.ts';
 
 const file = new URL('../../fixtures/demo/marrow-fen.bulk', import.meta.url);
 const loaded = loadModelText('marrow-fen.bulk', readFileSync(file));
@@ -18,7 +24,9 @@ describe('summariseSite', () => {
     for (const row of summary.scenarios) {
       const a = analysis.assessments.find((x) => x.scenario === row.id)!;
       expect([row.claimed, row.after]).toEqual([a.meetsClaimed, a.meetsAfter]);
-      expect(row.open).toBe(analysis.findings.filter((f) => f.scenario === row.id && f.severity !== 'note' && !f.accepted).length);
+      expect(row.open).toBe(
+        analysis.findings.filter((f) => f.scenario === row.id && f.severity !== 'note' && !f.accepted).length,
+      );
       expect(row.layers).toEqual((model.scenarios.find((s) => s.id === row.id)!.layers ?? []).map((l) => l.function));
     }
     // The demo's S-101 has open findings (its SIF shares the loop's bridle), so the count is not trivially 0.
@@ -58,8 +66,17 @@ describe('searchTags', () => {
     expect(tags.every((t) => t.toLowerCase().includes('lt-10'))).toBe(true);
     expect(searchTags(model, analysis, 'UPS-1')[0]!.tag).toBe('UPS-1');
     for (const m of matches) {
-      const relying = new Set([m.tag, ...analysis.traces.filter((t) => t.elements.some((e) => e.tag === m.tag)).map((t) => t.function)]);
-      const expected = model.scenarios.filter((s) => [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some((t) => t && relying.has(t))).map((s) => s.id);
+      const relying = new Set([
+        m.tag,
+        ...analysis.traces.filter((t) => t.elements.some((e) => e.tag === m.tag)).map((t) => t.function),
+      ]);
+      const expected = model.scenarios
+        .filter((s) =>
+          [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some(
+            (t) => t && relying.has(t),
+          ),
+        )
+        .map((s) => s.id);
       expect(m.scenarios, m.tag).toEqual(expected);
     }
   });
@@ -70,6 +87,8 @@ describe('searchTags', () => {
   });
 
   it(`should answer at most ${SEARCH_LIMIT} tags`, () => {
-    expect(searchTags(model, analysis, '-').length).toBe(Math.min(SEARCH_LIMIT, [...model.elements, ...model.functions].filter((x) => x.tag.includes('-')).length));
+    expect(searchTags(model, analysis, '-').length).toBe(
+      Math.min(SEARCH_LIMIT, [...model.elements, ...model.functions].filter((x) => x.tag.includes('-')).length),
+    );
   });
 });

@@ -10,7 +10,13 @@ export interface Paint {
 
 const sgr = (open: number, close: number) => (text: string) => `\u001b[${open}m${text}\u001b[${close}m`;
 
-export const COLOUR: Paint = { good: sgr(32, 39), bad: (t) => sgr(1, 22)(sgr(31, 39)(t)), warn: sgr(33, 39), strong: sgr(1, 22), dim: sgr(2, 22) };
+export const COLOUR: Paint = {
+  good: sgr(32, 39),
+  bad: (t) => sgr(1, 22)(sgr(31, 39)(t)),
+  warn: sgr(33, 39),
+  strong: sgr(1, 22),
+  dim: sgr(2, 22),
+};
 const same = (text: string) => text;
 export const PLAIN: Paint = { good: same, bad: same, warn: same, strong: same, dim: same };
 

@@ -165,10 +165,13 @@ Every problem is reported at file, sheet, row and column; with any error nothing
 
 exit codes: 0 written, 2 bad input or usage (nothing written unless --partial)
 `,
-  export: 'usage: bulkhead export FILE --tables DIR [--force]\n\nWrites the model\'s elements, functions and scenarios as CSV tables in DIR, in the column words `bulkhead import` reads.\nSite, policy, categories, rules and accept statements stay in the model file. Existing tables are replaced only with --force.\n',
-  schema: 'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
+  export:
+    "usage: bulkhead export FILE --tables DIR [--force]\n\nWrites the model's elements, functions and scenarios as CSV tables in DIR, in the column words `bulkhead import` reads.\nSite, policy, categories, rules and accept statements stay in the model file. Existing tables are replaced only with --force.\n",
+  schema:
+    'usage: bulkhead schema\n\nPrints the JSON Schema (draft 2020-12) of a model. Name it in "$schema" for completion in an editor.\n',
   fmt: 'usage: bulkhead fmt FILE... [--check]\n\nRewrites each file in canonical form, keeping every comment. --check only reports files that would change (exit 1).\n',
-  convert: 'usage: bulkhead convert FILE --to json|bulk [-o OUT [--force]]\n\nConverts a model between .bulk and JSON without loss (comments included).\nA model split over part files comes out as one file holding them all; stderr says so and names the parts.\n-o never writes over FILE itself; an existing OUT is replaced only with --force (or when it already holds the same text).\n',
+  convert:
+    'usage: bulkhead convert FILE --to json|bulk [-o OUT [--force]]\n\nConverts a model between .bulk and JSON without loss (comments included).\nA model split over part files comes out as one file holding them all; stderr says so and names the parts.\n-o never writes over FILE itself; an existing OUT is replaced only with --force (or when it already holds the same text).\n',
 };
 
 export function commandHelp(command: string): string {

@@ -1,8 +1,28 @@
 // File input and output for the CLI: reads a model with the size and existence checks done before
 // any bytes are decoded, prints diagnostics to stderr, and writes files so a crash never leaves half of one.
-import { chmodSync, existsSync, readFileSync, realpathSync, renameSync, statSync, unlinkSync, writeFileSync } from 'node:fs';
+import {
+  chmodSync,
+  existsSync,
+  readFileSync,
+  realpathSync,
+  renameSync,
+  statSync,
+  unlinkSync,
+  writeFileSync,
+} from 'node:fs';
 import { basename, dirname, join } from 'node:path';
-import { error, loadModelText, MAX_FILE_BYTES, printBulk, printJson, renderDiagnostics, type LoadResult, type Model, type ModelFormat, type PartBytes } from '@bulkhead/core';
+import {
+  error,
+  loadModelText,
+  MAX_FILE_BYTES,
+  printBulk,
+  printJson,
+  renderDiagnostics,
+  type LoadResult,
+  type Model,
+  type ModelFormat,
+  type PartBytes,
+} from '@bulkhead/core';
 
 export class UsageError extends Error {}
 
@@ -40,7 +60,11 @@ export function readModel(file: string): ReadResult {
   if (size > MAX_FILE_BYTES) {
     return {
       format: 'bulk',
-      diagnostics: [error('BH103', `the file is ${(size / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, { help: 'split the site into units, one model file each' })],
+      diagnostics: [
+        error('BH103', `the file is ${(size / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, {
+          help: 'split the site into units, one model file each',
+        }),
+      ],
       spans: new Map(),
       source: { file, lines: [] },
     };
@@ -65,7 +89,8 @@ export function readPartFile(path: string): PartBytes {
   try {
     const stat = statSync(path);
     if (stat.isDirectory()) return { problem: 'it is a directory' };
-    if (stat.size > MAX_FILE_BYTES) return { problem: `it is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
+    if (stat.size > MAX_FILE_BYTES)
+      return { problem: `it is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
     return readFileSync(path);
   } catch (e) {
     return { problem: reason(e) };
@@ -120,6 +145,7 @@ export function printVerified(model: Model, to: ModelFormat, file: string): stri
   if (!back.model || printJson(back.model) !== printJson(expected)) {
     throw new Error(`the ${to} form of \`${file}\` does not read back as the same model, so nothing was written`);
   }
-  if (expected !== model) process.stderr.write(`${file}: note: \`$schema\` is a JSON editor hint with no place in .bulk; it was left out\n`);
+  if (expected !== model)
+    process.stderr.write(`${file}: note: \`$schema\` is a JSON editor hint with no place in .bulk; it was left out\n`);
   return text;
 }

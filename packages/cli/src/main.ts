@@ -56,7 +56,9 @@ try {
     process.stderr.write(`bulkhead: ${(e as Error).message}\nrun \`bulkhead --help\` for the commands and options\n`);
     process.exitCode = 2;
   } else {
-    process.stderr.write(`bulkhead: internal error: ${(e as Error).message}\nthis is a bug in Bulkhead, not in your model; set BULKHEAD_DEBUG=1 for details\n`);
+    process.stderr.write(
+      `bulkhead: internal error: ${(e as Error).message}\nthis is a bug in Bulkhead, not in your model; set BULKHEAD_DEBUG=1 for details\n`,
+    );
     if (process.env.BULKHEAD_DEBUG) process.stderr.write(String((e as Error).stack) + '\n');
     process.exitCode = 3;
   }

@@ -56,7 +56,9 @@ export interface OutputCheck {
 export function checkOutput(out: string, check: OutputCheck): void {
   const input = check.inputs.find((file) => sameFile(file, out));
   if (input !== undefined) {
-    throw new UsageError(`-o \`${out}\` is the model file \`${input}\` itself; writing the ${check.what} there would replace the model. Choose another output file`);
+    throw new UsageError(
+      `-o \`${out}\` is the model file \`${input}\` itself; writing the ${check.what} there would replace the model. Choose another output file`,
+    );
   }
   let stat;
   try {
@@ -67,6 +69,8 @@ export function checkOutput(out: string, check: OutputCheck): void {
   if (stat.isDirectory()) throw new UsageError(`-o \`${out}\` is a directory; name a file`);
   if (check.force || stat.size === 0) return;
   if (!check.replaceable(head(out))) {
-    throw new UsageError(`-o \`${out}\` already exists and ${check.unlike}; nothing was written. Add --force to replace it`);
+    throw new UsageError(
+      `-o \`${out}\` already exists and ${check.unlike}; nothing was written. Add --force to replace it`,
+    );
   }
 }

@@ -35,13 +35,17 @@ export interface DexpiResult {
 function generic(node: XmlElement, name: string): string | undefined {
   for (const set of node.children) {
     if (set.name !== 'GenericAttributes') continue;
-    for (const a of set.children) if (a.name === 'GenericAttribute' && a.attributes.Name === name && a.attributes.Value) return a.attributes.Value.trim();
+    for (const a of set.children)
+      if (a.name === 'GenericAttribute' && a.attributes.Name === name && a.attributes.Value)
+        return a.attributes.Value.trim();
   }
   return undefined;
 }
 
 function associated(node: XmlElement, type: string): string[] {
-  return node.children.filter((c) => c.name === 'Association' && c.attributes.Type === type).map((c) => c.attributes.ItemID ?? '');
+  return node.children
+    .filter((c) => c.name === 'Association' && c.attributes.Type === type)
+    .map((c) => c.attributes.ItemID ?? '');
 }
 
 const EQUIPMENT_KINDS: [RegExp, string][] = [
@@ -54,9 +58,25 @@ const EQUIPMENT_KINDS: [RegExp, string][] = [
 ];
 const SAFETY_VALVE = /SafetyValve|ReliefValve|SafetyRelief|RuptureDisc|BreatherValve/;
 /** DEXPI fail actions (FailActionSpecialization) in the model's words. */
-const FAIL_ACTIONS: Record<string, string> = { FailClose: 'closed', FailOpen: 'open', FailLock: 'in-place', FailSteady: 'in-place', FailLastPosition: 'in-place' };
+const FAIL_ACTIONS: Record<string, string> = {
+  FailClose: 'closed',
+  FailOpen: 'open',
+  FailLock: 'in-place',
+  FailSteady: 'in-place',
+  FailLastPosition: 'in-place',
+};
 /** The measured-variable letter (PIF category) in the model's words; other letters: other. */
-const VARIABLES: Record<string, string> = { L: 'level', P: 'pressure', T: 'temperature', F: 'flow', A: 'analysis', Q: 'analysis', Z: 'position', G: 'position', S: 'speed' };
+const VARIABLES: Record<string, string> = {
+  L: 'level',
+  P: 'pressure',
+  T: 'temperature',
+  F: 'flow',
+  A: 'analysis',
+  Q: 'analysis',
+  Z: 'position',
+  G: 'position',
+  S: 'speed',
+};
 
 function ancestor(node: XmlElement, test: (n: XmlElement) => boolean): XmlElement | undefined {
   for (let n = node.parent; n; n = n.parent) if (test(n)) return n;
@@ -71,13 +91,23 @@ const LOGICAL_LINE_REASON = 'a logical line that names no cable or I/O channel (
  * (card, cable, network) are physical things a P&ID line does not identify, and the link it draws is
  * already in the loop's sensors and final elements; inventing a cable per line would be a guess.
  */
-function countSignalLines(all: XmlElement[], byId: Map<string, XmlElement>, counts: DexpiCounts, skip: (what: string, reason: string, n: XmlElement) => void): void {
+function countSignalLines(
+  all: XmlElement[],
+  byId: Map<string, XmlElement>,
+  counts: DexpiCounts,
+  skip: (what: string, reason: string, n: XmlElement) => void,
+): void {
   for (const flow of all.filter((n) => n.name === 'InformationFlow')) {
     const start = byId.get(associated(flow, 'has logical start')[0] ?? '');
-    const measuring = flow.attributes.ComponentClass === 'MeasuringLineFunction' || start?.name === 'ProcessSignalGeneratingFunction';
+    const measuring =
+      flow.attributes.ComponentClass === 'MeasuringLineFunction' || start?.name === 'ProcessSignalGeneratingFunction';
     if (measuring) counts.measuringLines++;
     else counts.signalLines++;
-    skip(`${measuring ? 'measuring line' : 'signal line'} ${flow.attributes.ID ?? `at line ${flow.line}`}`, LOGICAL_LINE_REASON, flow);
+    skip(
+      `${measuring ? 'measuring line' : 'signal line'} ${flow.attributes.ID ?? `at line ${flow.line}`}`,
+      LOGICAL_LINE_REASON,
+      flow,
+    );
   }
 }
 
@@ -91,8 +121,20 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
   const cell = (value: string, n: XmlElement): CellValue => ({ value, place: place(n) });
   const records: TagRecord[] = [];
   const skipped: DexpiResult['skipped'] = [];
-  const record = (tag: string, kind: string, n: XmlElement, fields: [string, string][], noted: string[] = []): TagRecord => {
-    const r: TagRecord = { tag: cell(tag, n), kind: cell(kind, n), fields: new Map(fields.map(([k, v]) => [k, cell(v, n)])), sources: [`${file} line ${n.line}`], noted };
+  const record = (
+    tag: string,
+    kind: string,
+    n: XmlElement,
+    fields: [string, string][],
+    noted: string[] = [],
+  ): TagRecord => {
+    const r: TagRecord = {
+      tag: cell(tag, n),
+      kind: cell(kind, n),
+      fields: new Map(fields.map(([k, v]) => [k, cell(v, n)])),
+      sources: [`${file} line ${n.line}`],
+      noted,
+    };
     records.push(r);
     return r;
   };
@@ -115,7 +157,11 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
   // parts, not plant items of their own. Nozzles are named after the item they are on.
   const isEquipment = (n: XmlElement) => n.name === 'Equipment' && n.parent?.name !== 'Equipment';
   for (const part of all.filter((n) => n.name === 'Equipment' && n.parent?.name === 'Equipment')) {
-    skipped.push({ what: `${part.attributes.ComponentClass ?? 'part'} ${part.attributes.ID ?? ''}`, reason: 'a part of the equipment around it', place: place(part) });
+    skipped.push({
+      what: `${part.attributes.ComponentClass ?? 'part'} ${part.attributes.ID ?? ''}`,
+      reason: 'a part of the equipment around it',
+      place: place(part),
+    });
   }
   const equipmentTag = new Map<XmlElement, string>();
   const equipment = all.filter(isEquipment);
@@ -124,7 +170,12 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
     const cls = e.attributes.ComponentClass ?? '';
     const kind = EQUIPMENT_KINDS.find(([re]) => re.test(cls))?.[1];
     if (!tag) skipped.push({ what: `equipment ${e.attributes.ID ?? ''}`, reason: 'no tag', place: place(e) });
-    else if (!kind) skipped.push({ what: `equipment ${tag}`, reason: `class ${cls} has no equipment kind in the model`, place: place(e) });
+    else if (!kind)
+      skipped.push({
+        what: `equipment ${tag}`,
+        reason: `class ${cls} has no equipment kind in the model`,
+        place: place(e),
+      });
     if (tag) equipmentTag.set(e, tag);
     if (tag && kind) record(tag, kind, e, [], [`DEXPI ${cls}`]);
   }
@@ -144,7 +195,9 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
   }
 
   // Safety valves: in-line piping components of a safety class.
-  const safetyValves = all.filter((n) => n.name === 'PipingComponent' && SAFETY_VALVE.test(n.attributes.ComponentClass ?? ''));
+  const safetyValves = all.filter(
+    (n) => n.name === 'PipingComponent' && SAFETY_VALVE.test(n.attributes.ComponentClass ?? ''),
+  );
   for (const v of safetyValves) {
     const tag = tagOf(v) ?? generic(v, 'PipingComponentNumberAssignmentClass') ?? v.attributes.ID!;
     const line = lineOf(v);
@@ -170,13 +223,17 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
   for (const pif of all.filter((n) => n.name === 'ProcessInstrumentationFunction')) {
     counts.instrumentFunctions++;
     const category = generic(pif, 'ProcessInstrumentationFunctionCategoryAssignmentClass') ?? '';
-    const letters = generic(pif, 'ProcessInstrumentationFunctionsAssignmentClass') ?? generic(pif, 'ProcessInstrumentationFunctionModifierAssignmentClass') ?? '';
+    const letters =
+      generic(pif, 'ProcessInstrumentationFunctionsAssignmentClass') ??
+      generic(pif, 'ProcessInstrumentationFunctionModifierAssignmentClass') ??
+      '';
     const number = generic(pif, 'ProcessInstrumentationFunctionNumberAssignmentClass') ?? '';
     const tag = `${category}${letters}${number}` || pif.attributes.TagName || pif.attributes.ID!;
     const sensors: string[] = [];
     for (const g of descendants(pif, 'ProcessSignalGeneratingFunction')) {
       counts.sensors++;
-      const sensorTag = generic(g, 'ProcessSignalGeneratingFunctionNumberAssignmentClass') ?? g.attributes.TagName ?? g.attributes.ID!;
+      const sensorTag =
+        generic(g, 'ProcessSignalGeneratingFunctionNumberAssignmentClass') ?? g.attributes.TagName ?? g.attributes.ID!;
       const where = associated(g, 'is located in')[0];
       const location = where ? byId.get(where) : undefined;
       let mountedOn: string | undefined;
@@ -185,20 +242,32 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
         mountedOn = `TP-${where}`;
         if (!locations.has(where!)) {
           const line = lineOf(location);
-          record(mountedOn, 'tapping', location, line ? [['mounted-on', line]] : [], [`DEXPI ${location.attributes.ComponentClass ?? location.name} ${where}`]);
+          record(mountedOn, 'tapping', location, line ? [['mounted-on', line]] : [], [
+            `DEXPI ${location.attributes.ComponentClass ?? location.name} ${where}`,
+          ]);
         }
       }
       if (where && location) locations.add(where);
-      if (!location) issues.push(issue('BH512', `the sensor ${sensorTag} has no sensing location the file resolves`, place(g), { severity: 'warning', help: 'the sensor is imported without `mounted-on`; its process connection stays untraced (unverified)' }));
+      if (!location)
+        issues.push(
+          issue('BH512', `the sensor ${sensorTag} has no sensing location the file resolves`, place(g), {
+            severity: 'warning',
+            help: 'the sensor is imported without `mounted-on`; its process connection stays untraced (unverified)',
+          }),
+        );
       sensors.push(sensorTag);
-      record(sensorTag, 'transmitter', g, [['variable', VARIABLES[category] ?? 'other'], ...(mountedOn ? [['mounted-on', mountedOn] as [string, string]] : [])]);
+      record(sensorTag, 'transmitter', g, [
+        ['variable', VARIABLES[category] ?? 'other'],
+        ...(mountedOn ? [['mounted-on', mountedOn] as [string, string]] : []),
+      ]);
     }
     const finals: string[] = [];
     for (const af of descendants(pif, 'ActuatingFunction')) {
       for (const systemId of associated(af, 'is fulfilled by')) {
         const system = byId.get(systemId);
         if (!system) continue;
-        const systemTag = generic(system, 'ActuatingSystemNumberAssignmentClass') ?? system.attributes.TagName ?? systemId;
+        const systemTag =
+          generic(system, 'ActuatingSystemNumberAssignmentClass') ?? system.attributes.TagName ?? systemId;
         const components = system.children.filter((c) => c.name === 'ActuatingSystemComponent');
         const actuator = components.find((c) => c.attributes.ComponentClass === 'ControlledActuator');
         const failAction = actuator ? generic(actuator, 'FailActionSpecialization') : undefined;
@@ -209,17 +278,50 @@ export function readDexpi(file: string, text: string, issues: ImportIssue[]): De
         if (valve) valves.add(valveId!);
         const line = valve ? lineOf(valve) : undefined;
         const fails = failAction ? FAIL_ACTIONS[failAction] : undefined;
-        if (failAction && !fails) issues.push(issue('BH512', `fail action ${failAction} of ${systemTag} has no word in the model`, place(actuator!), { severity: 'warning', help: 'give the fail position in the instrument index (fails-to)' }));
-        record(systemTag, letters.includes('C') ? 'control-valve' : 'shutdown-valve', system, [...(fails ? [['fails-to', fails] as [string, string]] : []), ...(line ? [['mounted-on', line] as [string, string]] : [])], [
-          ...(valve ? [`drives DEXPI ${valve.attributes.ComponentClass} ${valveId}`] : []),
-        ]);
+        if (failAction && !fails)
+          issues.push(
+            issue('BH512', `fail action ${failAction} of ${systemTag} has no word in the model`, place(actuator!), {
+              severity: 'warning',
+              help: 'give the fail position in the instrument index (fails-to)',
+            }),
+          );
+        record(
+          systemTag,
+          letters.includes('C') ? 'control-valve' : 'shutdown-valve',
+          system,
+          [
+            ...(fails ? [['fails-to', fails] as [string, string]] : []),
+            ...(line ? [['mounted-on', line] as [string, string]] : []),
+          ],
+          [...(valve ? [`drives DEXPI ${valve.attributes.ComponentClass} ${valveId}`] : [])],
+        );
         finals.push(systemTag);
       }
     }
     // One PIF may join control, switch and alarm letters (ICSA): it is one function on one sensor, so
     // only the control function is imported; its trip or alarm is never a separate, independent layer.
-    if (letters.includes('C')) record(tag, 'loop', pif, [...(sensors.length ? [['sensors', sensors.join(',')] as [string, string]] : []), ...(finals.length ? [['finals', finals.join(',')] as [string, string]] : [])], letters.length > 1 ? [`DEXPI letters ${category}${letters}: its other letters are the same function, not separate layers`] : []);
-    else skipped.push({ what: `instrument function ${tag}`, reason: letters === 'I' ? 'indication only: no control or protective action' : `letters ${category}${letters} name no control loop; model its protective use in the loop list`, place: place(pif) });
+    if (letters.includes('C'))
+      record(
+        tag,
+        'loop',
+        pif,
+        [
+          ...(sensors.length ? [['sensors', sensors.join(',')] as [string, string]] : []),
+          ...(finals.length ? [['finals', finals.join(',')] as [string, string]] : []),
+        ],
+        letters.length > 1
+          ? [`DEXPI letters ${category}${letters}: its other letters are the same function, not separate layers`]
+          : [],
+      );
+    else
+      skipped.push({
+        what: `instrument function ${tag}`,
+        reason:
+          letters === 'I'
+            ? 'indication only: no control or protective action'
+            : `letters ${category}${letters} name no control loop; model its protective use in the loop list`,
+        place: place(pif),
+      });
   }
   countSignalLines(all, byId, counts, (what, reason, n) => skipped.push({ what, reason, place: place(n) }));
   counts.sensingLocations = locations.size;

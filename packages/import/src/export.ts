@@ -39,8 +39,12 @@ function cell(value: unknown): string {
 
 function tagTable(items: Item[]): string {
   const columns: string[] = [];
-  for (const item of items) for (const key of Object.keys(item)) if (!SKIP.has(key) && !columns.includes(key)) columns.push(key);
-  return csv([['tag', 'kind', ...columns.map(kebab)], ...items.map((i) => [cell(i.tag), cell(i.kind), ...columns.map((c) => cell(i[c]))])]);
+  for (const item of items)
+    for (const key of Object.keys(item)) if (!SKIP.has(key) && !columns.includes(key)) columns.push(key);
+  return csv([
+    ['tag', 'kind', ...columns.map(kebab)],
+    ...items.map((i) => [cell(i.tag), cell(i.kind), ...columns.map((c) => cell(i[c]))]),
+  ]);
 }
 
 function lopaTable(model: Model): string {
@@ -51,7 +55,9 @@ function lopaTable(model: Model): string {
   };
   const rows: { scenario: Item; line?: string; item?: Item }[] = [];
   for (const s of model.scenarios as unknown as Item[]) {
-    for (const key of Object.keys(s)) if (!['id', 'category', 'cause', 'enablers', 'modifiers', 'layers', ...SKIP].includes(key)) add(scenarioColumns, key);
+    for (const key of Object.keys(s))
+      if (!['id', 'category', 'cause', 'enablers', 'modifiers', 'layers', ...SKIP].includes(key))
+        add(scenarioColumns, key);
     for (const [keyword, spec] of SCENARIO_LINE_SPECS) {
       const value = s[spec.collection];
       for (const item of (spec.single ? [value] : ((value as Item[] | undefined) ?? [])) as (Item | undefined)[]) {
@@ -61,9 +67,21 @@ function lopaTable(model: Model): string {
       }
     }
   }
-  const header = ['scenario', ...scenarioColumns.map((c) => `scenario-${kebab(c)}`), 'category', 'line', ...lineColumns.map(kebab)];
+  const header = [
+    'scenario',
+    ...scenarioColumns.map((c) => `scenario-${kebab(c)}`),
+    'category',
+    'line',
+    ...lineColumns.map(kebab),
+  ];
   const body = rows.map(({ scenario, line, item }) => {
-    return [cell(scenario.id), ...scenarioColumns.map((c) => cell(scenario[c])), cell(scenario.category), line ?? '', ...lineColumns.map((c) => cell(item?.[c]))];
+    return [
+      cell(scenario.id),
+      ...scenarioColumns.map((c) => cell(scenario[c])),
+      cell(scenario.category),
+      line ?? '',
+      ...lineColumns.map((c) => cell(item?.[c])),
+    ];
   });
   return csv([header, ...body]);
 }
@@ -71,7 +89,8 @@ function lopaTable(model: Model): string {
 /** The tables, by file name, in a fixed order. Tables with no rows are left out. */
 export function exportTables(model: Model): Map<string, string> {
   const groupOfKind = new Map<string, keyof typeof ELEMENT_GROUPS>();
-  for (const [group, kinds] of Object.entries(ELEMENT_GROUPS)) for (const k of kinds) groupOfKind.set(k, group as keyof typeof ELEMENT_GROUPS);
+  for (const [group, kinds] of Object.entries(ELEMENT_GROUPS))
+    for (const k of kinds) groupOfKind.set(k, group as keyof typeof ELEMENT_GROUPS);
   const byTable = new Map<string, Item[]>();
   for (const e of model.elements as unknown as Item[]) {
     const table = TABLE_OF_GROUP[groupOfKind.get(String(e.kind))!];

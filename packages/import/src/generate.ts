@@ -60,7 +60,14 @@ class LineBuilder {
 function attribute(line: LineBuilder, key: string, cell: CellValue, types: Map<string, FieldType> | undefined): void {
   const isList = types?.get(camel(key))?.type === 'list';
   // A list cell may separate its tags by commas, semicolons or line breaks.
-  const value = isList ? cell.value.split(/[,;\n]/).map((v) => v.trim()).filter(Boolean).map(word).join(',') : word(cell.value);
+  const value = isList
+    ? cell.value
+        .split(/[,;\n]/)
+        .map((v) => v.trim())
+        .filter(Boolean)
+        .map(word)
+        .join(',')
+    : word(cell.value);
   line.add(`${key}=${value}`, cell.place);
 }
 
@@ -69,7 +76,12 @@ function provenance(sources: string[], extra: string[]): string {
 }
 
 /** The statements, under `preamble` (comment lines, which the first statement keeps above it). */
-export function generate(records: Iterable<TagRecord>, scenarios: LopaScenario[], leaveOut: ReadonlySet<string> = new Set(), preamble: string[] = []): Generated {
+export function generate(
+  records: Iterable<TagRecord>,
+  scenarios: LopaScenario[],
+  leaveOut: ReadonlySet<string> = new Set(),
+  preamble: string[] = [],
+): Generated {
   const out: string[] = [...preamble];
   const lines: GeneratedLine[] = preamble.map(() => ({ owner: '', place: { file: '(generated)' }, segments: [] }));
   const push = (builder: LineBuilder, owner: string, place: Place, comment: string) => {
@@ -78,14 +90,22 @@ export function generate(records: Iterable<TagRecord>, scenarios: LopaScenario[]
   };
   const all = [...records].filter((r) => r.kind && !leaveOut.has(r.tag.value));
   // Elements before functions, as a reader expects: what a function names is defined above it.
-  const ordered = [...all.filter((r) => !FUNCTION_SPECS.has(r.kind!.value)), ...all.filter((r) => FUNCTION_SPECS.has(r.kind!.value))];
+  const ordered = [
+    ...all.filter((r) => !FUNCTION_SPECS.has(r.kind!.value)),
+    ...all.filter((r) => FUNCTION_SPECS.has(r.kind!.value)),
+  ];
   for (const record of ordered) {
     const line = new LineBuilder();
     line.add(word(record.kind!.value), record.kind!.place);
     line.add(word(record.tag.value), record.tag.place);
     const types = fieldTypes(record.kind!.value);
     for (const [key, cell] of record.fields) attribute(line, key, cell, types);
-    const extra = [...record.noted, ...(record.suggested ? [`kind suggested from ISA-5.1 letters ${record.suggested}, not from a column: confirm it`] : [])];
+    const extra = [
+      ...record.noted,
+      ...(record.suggested
+        ? [`kind suggested from ISA-5.1 letters ${record.suggested}, not from a column: confirm it`]
+        : []),
+    ];
     push(line, record.tag.value, record.tag.place, provenance(record.sources, extra));
   }
   for (const scenario of scenarios) {

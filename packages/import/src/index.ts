@@ -7,7 +7,15 @@ export { importTables, GENERATED_MARK, type ImportOptions, type ImportResult } f
 export { exportTables, csvField } from './export.ts';
 export { revisionChanges, staleJustifications, type RevisionChanges } from './revision.ts';
 export { renderReport } from './report.ts';
-export { IMPORT_CODES, renderIssue, describePlace, columnLetters, type ImportIssue, type ImportCode, type Place } from './issues.ts';
+export {
+  IMPORT_CODES,
+  renderIssue,
+  describePlace,
+  columnLetters,
+  type ImportIssue,
+  type ImportCode,
+  type Place,
+} from './issues.ts';
 export type { TableTally } from './records.ts';
 export { readDexpi, type DexpiResult, type DexpiCounts } from './dexpi.ts';
 export { readXml, descendants, type XmlElement } from './xml.ts';

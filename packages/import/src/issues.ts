@@ -73,6 +73,18 @@ export function renderIssue(issue: ImportIssue): string {
   return lines.join('\n');
 }
 
-export function issue(code: ImportCode, message: string, place: Place, more: Partial<Pick<ImportIssue, 'related' | 'help' | 'severity'>> = {}): ImportIssue {
-  return { code, severity: more.severity ?? 'error', message, place, ...(more.related ? { related: more.related } : {}), ...(more.help ? { help: more.help } : {}) };
+export function issue(
+  code: ImportCode,
+  message: string,
+  place: Place,
+  more: Partial<Pick<ImportIssue, 'related' | 'help' | 'severity'>> = {},
+): ImportIssue {
+  return {
+    code,
+    severity: more.severity ?? 'error',
+    message,
+    place,
+    ...(more.related ? { related: more.related } : {}),
+    ...(more.help ? { help: more.help } : {}),
+  };
 }

@@ -32,9 +32,20 @@ const LINE_WORDS: Record<string, LopaLine['keyword']> = {
 };
 
 /** The field a line's first word fills (a layer's function, a modifier's kind, an enabler's title). */
-export const LINE_POSITIONAL: Record<LopaLine['keyword'], string | undefined> = { cause: undefined, layer: 'function', modifier: 'kind', enabler: 'title' };
+export const LINE_POSITIONAL: Record<LopaLine['keyword'], string | undefined> = {
+  cause: undefined,
+  layer: 'function',
+  modifier: 'kind',
+  enabler: 'title',
+};
 
-export function readLopa(table: Table, fields: (string | undefined)[], tally: TableTally, issues: ImportIssue[], name: string): LopaScenario[] {
+export function readLopa(
+  table: Table,
+  fields: (string | undefined)[],
+  tally: TableTally,
+  issues: ImportIssue[],
+  name: string,
+): LopaScenario[] {
   const scenarios: LopaScenario[] = [];
   const byId = new Map<string, LopaScenario>();
   let current: LopaScenario | undefined;
@@ -50,16 +61,23 @@ export function readLopa(table: Table, fields: (string | undefined)[], tally: Ta
       const known = byId.get(id);
       if (known) current = known;
       else {
-        current = { id: { value: id, place: cellPlace(table, row.row, column('scenario')) }, fields: new Map(), lines: [], sources: [] };
+        current = {
+          id: { value: id, place: cellPlace(table, row.row, column('scenario')) },
+          fields: new Map(),
+          lines: [],
+          sources: [],
+        };
         byId.set(id, current);
         scenarios.push(current);
       }
     }
     if (!current) {
       skip(tally, 'no scenario (error)', `row ${row.row}`);
-      issues.push(issue('BH509', 'the row belongs to no scenario', cellPlace(table, row.row, Math.max(column('scenario'), 0)), {
-        help: 'give the scenario id on the first row of each scenario',
-      }));
+      issues.push(
+        issue('BH509', 'the row belongs to no scenario', cellPlace(table, row.row, Math.max(column('scenario'), 0)), {
+          help: 'give the scenario id on the first row of each scenario',
+        }),
+      );
       continue;
     }
     current.sources.push(`${name} row ${row.row}`);
@@ -84,9 +102,18 @@ export function readLopa(table: Table, fields: (string | undefined)[], tally: Ta
     const keyword = LINE_WORDS[lineWord.replace(/[^a-z]+/g, ' ').trim()];
     if (!keyword) {
       skip(tally, 'unknown line (error)', `row ${row.row}`);
-      issues.push(issue('BH509', lineWord === '' ? 'the row has line values but does not say which line it is' : `\`${lineWord}\` is not a scenario line`, linePlace, {
-        help: 'the Line column holds cause, layer, modifier or enabler',
-      }));
+      issues.push(
+        issue(
+          'BH509',
+          lineWord === ''
+            ? 'the row has line values but does not say which line it is'
+            : `\`${lineWord}\` is not a scenario line`,
+          linePlace,
+          {
+            help: 'the Line column holds cause, layer, modifier or enabler',
+          },
+        ),
+      );
       continue;
     }
     tally.imported++;

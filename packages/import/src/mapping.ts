@@ -8,7 +8,10 @@ import { issue, type ImportIssue } from './issues.ts';
 export const ROW_FIELDS = ['tag', 'kind'] as const;
 /** The scenario statement's own attributes a worksheet may carry, as `scenario-<key>` columns (title, hazard-study reference, outcome). */
 export const SCENARIO_COLUMNS: readonly string[] = [...fieldsOf(LIST_SPECS.scenario.schema)]
-  .filter(([name, f]) => !['id', 'category', 'comments', 'trailingComment'].includes(name) && f.type !== 'nested' && f.type !== 'literal')
+  .filter(
+    ([name, f]) =>
+      !['id', 'category', 'comments', 'trailingComment'].includes(name) && f.type !== 'nested' && f.type !== 'literal',
+  )
   .map(([name]) => `scenario-${kebab(name)}`);
 /** A LOPA worksheet row: the scenario it belongs to, its own fields, and which line of it the row is. */
 export const LOPA_FIELDS = ['scenario', ...SCENARIO_COLUMNS, 'category', 'line'] as const;
@@ -18,14 +21,24 @@ export const IGNORE = 'ignore';
 
 /** Header text in one form: lower case, runs of other characters as one space. */
 export function headerWords(header: string): string {
-  return header.toLowerCase().replace(/[^a-z0-9]+/g, ' ').trim();
+  return header
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, ' ')
+    .trim();
 }
 
 function attributeKeys(): Set<string> {
   const keys = new Set<string>();
   for (const spec of [...ELEMENT_SPECS.values(), ...FUNCTION_SPECS.values(), ...SCENARIO_LINE_SPECS.values()]) {
     for (const [name, f] of fieldsOf(spec.schema)) {
-      if (name === 'comments' || name === 'trailingComment' || name === 'tag' || f.type === 'nested' || f.type === 'literal') continue;
+      if (
+        name === 'comments' ||
+        name === 'trailingComment' ||
+        name === 'tag' ||
+        f.type === 'nested' ||
+        f.type === 'literal'
+      )
+        continue;
       keys.add(kebab(name));
     }
   }
@@ -35,7 +48,13 @@ function attributeKeys(): Set<string> {
 }
 
 /** Every field a column may be mapped to. */
-export const KNOWN_FIELDS: ReadonlySet<string> = new Set([...ROW_FIELDS, ...LOPA_FIELDS, ...NOTED_FIELDS, ...attributeKeys(), IGNORE]);
+export const KNOWN_FIELDS: ReadonlySet<string> = new Set([
+  ...ROW_FIELDS,
+  ...LOPA_FIELDS,
+  ...NOTED_FIELDS,
+  ...attributeKeys(),
+  IGNORE,
+]);
 
 /**
  * Common header words (from instrument indexes and I/O lists as the trade writes them; common practice,
@@ -85,15 +104,29 @@ export function readMapping(file: string, text: string, issues: ImportIssue[]): 
     const header = equals === -1 ? '' : line.slice(0, equals).trim();
     const field = equals === -1 ? '' : line.slice(equals + 1).trim();
     if (header === '' || field === '') {
-      issues.push(issue('BH508', 'a mapping line is `Header text = field`', { file, line: i + 1, lineColumn: 1 }, {
-        help: 'for example `Fail Pos. = fails-to`; a line starting with # is a comment',
-      }));
+      issues.push(
+        issue(
+          'BH508',
+          'a mapping line is `Header text = field`',
+          { file, line: i + 1, lineColumn: 1 },
+          {
+            help: 'for example `Fail Pos. = fails-to`; a line starting with # is a comment',
+          },
+        ),
+      );
       return;
     }
     if (!KNOWN_FIELDS.has(field)) {
-      issues.push(issue('BH508', `\`${field}\` is not a field a column can hold`, { file, line: i + 1, lineColumn: line.indexOf(field, equals) + 1 }, {
-        help: `fields: ${[...KNOWN_FIELDS].sort().join(', ')}`,
-      }));
+      issues.push(
+        issue(
+          'BH508',
+          `\`${field}\` is not a field a column can hold`,
+          { file, line: i + 1, lineColumn: line.indexOf(field, equals) + 1 },
+          {
+            help: `fields: ${[...KNOWN_FIELDS].sort().join(', ')}`,
+          },
+        ),
+      );
       return;
     }
     map.set(headerWords(header), field);

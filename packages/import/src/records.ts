@@ -39,30 +39,55 @@ export function tableName(t: Pick<Table, 'file' | 'sheet'>): string {
 }
 
 export function cellPlace(table: Table, row: number, column: number): Place {
-  return { file: table.file, ...(table.sheet !== undefined ? { sheet: table.sheet } : {}), row, column: column + 1, header: table.headers[column] ?? '' };
+  return {
+    file: table.file,
+    ...(table.sheet !== undefined ? { sheet: table.sheet } : {}),
+    row,
+    column: column + 1,
+    header: table.headers[column] ?? '',
+  };
 }
 
 /** The field each column holds (undefined: not read), reporting the columns no mapping knows. */
-export function mapColumns(table: Table, map: HeaderMap, tally: TableTally, issues: ImportIssue[]): (string | undefined)[] {
+export function mapColumns(
+  table: Table,
+  map: HeaderMap,
+  tally: TableTally,
+  issues: ImportIssue[],
+): (string | undefined)[] {
   return table.headers.map((header, column) => {
     if (header === '') {
       const used = table.rows.some((r) => (r.cells[column] ?? '').trim() !== '');
       if (used) {
         tally.unknownColumns.push(`(untitled column ${column + 1})`);
-        issues.push(issue('BH510', 'a column with no header holds values; they were not read', cellPlace(table, table.headerRow, column), {
-          severity: 'warning',
-          help: 'give the column a header, and name its field in the mapping file',
-        }));
+        issues.push(
+          issue(
+            'BH510',
+            'a column with no header holds values; they were not read',
+            cellPlace(table, table.headerRow, column),
+            {
+              severity: 'warning',
+              help: 'give the column a header, and name its field in the mapping file',
+            },
+          ),
+        );
       }
       return undefined;
     }
     const field = map.get(headerWords(header));
     if (field === undefined) {
       tally.unknownColumns.push(header);
-      issues.push(issue('BH510', `the column \`${header}\` is not one the mapping knows; its values were not read`, cellPlace(table, table.headerRow, column), {
-        severity: 'warning',
-        help: `name its field in a mapping file (\`${header} = field\`), or write \`${header} = ignore\` to drop it knowingly`,
-      }));
+      issues.push(
+        issue(
+          'BH510',
+          `the column \`${header}\` is not one the mapping knows; its values were not read`,
+          cellPlace(table, table.headerRow, column),
+          {
+            severity: 'warning',
+            help: `name its field in a mapping file (\`${header} = field\`), or write \`${header} = ignore\` to drop it knowingly`,
+          },
+        ),
+      );
       return undefined;
     }
     return field === IGNORE ? undefined : field;
@@ -79,11 +104,17 @@ export function skip(tally: TableTally, reason: string, where: string): void {
 
 /** Normalises a kind as written in a sheet: "Control Valve" -> control-valve. */
 export function kindWord(text: string): string {
-  return text.trim().toLowerCase().replace(/[\s_]+/g, '-');
+  return text
+    .trim()
+    .toLowerCase()
+    .replace(/[\s_]+/g, '-');
 }
 
 /** Merges the rows of tag tables into records by tag, in the order tags are first seen. */
-export function mergeTagTables(tables: { table: Table; fields: (string | undefined)[]; tally: TableTally }[], issues: ImportIssue[]): Map<string, TagRecord> {
+export function mergeTagTables(
+  tables: { table: Table; fields: (string | undefined)[]; tally: TableTally }[],
+  issues: ImportIssue[],
+): Map<string, TagRecord> {
   const records = new Map<string, TagRecord>();
   for (const { table, fields, tally } of tables) {
     const tagColumn = fields.indexOf('tag');
@@ -97,9 +128,19 @@ export function mergeTagTables(tables: { table: Table; fields: (string | undefin
       const tagText = tagColumn === -1 ? '' : (row.cells[tagColumn] ?? '').trim();
       if (tagText === '') {
         skip(tally, 'no tag (error)', `row ${row.row}`);
-        issues.push(issue('BH503', 'the row has values but no tag', { ...cellPlace(table, row.row, Math.max(tagColumn, 0)) }, {
-          help: tagColumn === -1 ? 'the table needs a tag column (Tag, Tag No., ...); name it in the mapping file' : 'give the row its tag, or clear the row',
-        }));
+        issues.push(
+          issue(
+            'BH503',
+            'the row has values but no tag',
+            { ...cellPlace(table, row.row, Math.max(tagColumn, 0)) },
+            {
+              help:
+                tagColumn === -1
+                  ? 'the table needs a tag column (Tag, Tag No., ...); name it in the mapping file'
+                  : 'give the row its tag, or clear the row',
+            },
+          ),
+        );
         continue;
       }
       if (SPARE.test(tagText)) {
@@ -109,16 +150,23 @@ export function mergeTagTables(tables: { table: Table; fields: (string | undefin
       const earlier = seenHere.get(tagText);
       if (earlier !== undefined) {
         skip(tally, 'tag given twice (error)', `row ${row.row}`);
-        issues.push(issue('BH504', `the tag \`${tagText}\` is given twice in this table`, cellPlace(table, row.row, tagColumn), {
-          related: [{ message: 'first given here', place: cellPlace(table, earlier, tagColumn) }],
-          help: 'a table lists each tag once; merge the two rows',
-        }));
+        issues.push(
+          issue('BH504', `the tag \`${tagText}\` is given twice in this table`, cellPlace(table, row.row, tagColumn), {
+            related: [{ message: 'first given here', place: cellPlace(table, earlier, tagColumn) }],
+            help: 'a table lists each tag once; merge the two rows',
+          }),
+        );
         continue;
       }
       seenHere.set(tagText, row.row);
       let record = records.get(tagText);
       if (!record) {
-        record = { tag: { value: tagText, place: cellPlace(table, row.row, tagColumn) }, fields: new Map(), sources: [], noted: [] };
+        record = {
+          tag: { value: tagText, place: cellPlace(table, row.row, tagColumn) },
+          fields: new Map(),
+          sources: [],
+          noted: [],
+        };
         records.set(tagText, record);
       }
       record.sources.push(`${tableName(table)} row ${row.row}`);
@@ -134,10 +182,17 @@ export function mergeTagTables(tables: { table: Table; fields: (string | undefin
         }
         const held = field === 'kind' ? record.kind : record.fields.get(field);
         if (held && held.value !== cell.value) {
-          issues.push(issue('BH505', `\`${tagText}\` has ${field} \`${held.value}\` in one table and \`${cell.value}\` in another`, cell.place, {
-            related: [{ message: `${field} given as \`${held.value}\` here`, place: held.place }],
-            help: 'correct the table that is out of date; the importer does not choose between them',
-          }));
+          issues.push(
+            issue(
+              'BH505',
+              `\`${tagText}\` has ${field} \`${held.value}\` in one table and \`${cell.value}\` in another`,
+              cell.place,
+              {
+                related: [{ message: `${field} given as \`${held.value}\` here`, place: held.place }],
+                help: 'correct the table that is out of date; the importer does not choose between them',
+              },
+            ),
+          );
           return;
         }
         if (field === 'kind') record.kind = cell;
@@ -157,14 +212,17 @@ export function resolveKinds(records: Map<string, TagRecord>, issues: ImportIssu
     if (record.kind) continue;
     const suggestion = suggestKind(record.tag.value);
     if (!suggestion) {
-      issues.push(issue('BH506', `\`${record.tag.value}\` has no kind, and its tag letters suggest none`, record.tag.place, {
-        help: 'add a Kind column (transmitter, control-valve, io-card, ...) or give the kind in the instrument index',
-      }));
+      issues.push(
+        issue('BH506', `\`${record.tag.value}\` has no kind, and its tag letters suggest none`, record.tag.place, {
+          help: 'add a Kind column (transmitter, control-valve, io-card, ...) or give the kind in the instrument index',
+        }),
+      );
       continue;
     }
     record.kind = { value: suggestion.kind, place: record.tag.place };
     record.suggested = suggestion.letters;
-    if (suggestion.variable && !record.fields.has('variable')) record.fields.set('variable', { value: suggestion.variable, place: record.tag.place });
+    if (suggestion.variable && !record.fields.has('variable'))
+      record.fields.set('variable', { value: suggestion.variable, place: record.tag.place });
   }
 }
 
@@ -173,7 +231,11 @@ export function resolveKinds(records: Map<string, TagRecord>, issues: ImportIssu
  * differently is an error naming both places; the importer does not choose between the sources.
  * Returns the tags each source alone holds, so the user can see what the other one lacks.
  */
-export function mergeRecords(into: Map<string, TagRecord>, extra: readonly TagRecord[], issues: ImportIssue[]): { onlyInExtra: string[]; onlyInTables: string[] } {
+export function mergeRecords(
+  into: Map<string, TagRecord>,
+  extra: readonly TagRecord[],
+  issues: ImportIssue[],
+): { onlyInExtra: string[]; onlyInTables: string[] } {
   const tableTags = new Set(into.keys());
   const extraTags = new Set<string>();
   for (const r of extra) {
@@ -193,12 +255,22 @@ export function mergeRecords(into: Map<string, TagRecord>, extra: readonly TagRe
         if (field === 'kind') held.kind = cell;
         else held.fields.set(field, cell);
       } else if (have.value !== cell.value) {
-        issues.push(issue('BH505', `\`${r.tag.value}\` has ${field} \`${have.value}\` in the tables and \`${cell.value}\` in the P&ID`, cell.place, {
-          related: [{ message: `${field} given as \`${have.value}\` here`, place: have.place }],
-          help: 'correct the source that is out of date; the importer does not choose between them',
-        }));
+        issues.push(
+          issue(
+            'BH505',
+            `\`${r.tag.value}\` has ${field} \`${have.value}\` in the tables and \`${cell.value}\` in the P&ID`,
+            cell.place,
+            {
+              related: [{ message: `${field} given as \`${have.value}\` here`, place: have.place }],
+              help: 'correct the source that is out of date; the importer does not choose between them',
+            },
+          ),
+        );
       }
     }
   }
-  return { onlyInExtra: [...extraTags].filter((t) => !tableTags.has(t)), onlyInTables: [...tableTags].filter((t) => !extraTags.has(t)) };
+  return {
+    onlyInExtra: [...extraTags].filter((t) => !tableTags.has(t)),
+    onlyInTables: [...tableTags].filter((t) => !extraTags.has(t)),
+  };
 }

@@ -12,9 +12,13 @@ export function renderReport(tallies: readonly TableTally[], suggestedKinds: num
   const line = (cells: string[]) => cells.map((c, i) => (i === cells.length - 1 ? c : c.padEnd(widths[i]!))).join('  ');
   const out = [line(head), ...rows.map(line)];
   for (const t of tallies) {
-    if (t.unknownColumns.length) out.push(`${t.table}: columns not read (unknown to the mapping): ${t.unknownColumns.join(', ')}`);
+    if (t.unknownColumns.length)
+      out.push(`${t.table}: columns not read (unknown to the mapping): ${t.unknownColumns.join(', ')}`);
     if (t.skippedRows.length) out.push(`${t.table}: skipped`, ...t.skippedRows.map((r) => `  ${r}`));
   }
-  if (suggestedKinds > 0) out.push(`${suggestedKinds} kind${suggestedKinds === 1 ? '' : 's'} suggested from ISA-5.1 tag letters, marked in the generated file: confirm them`);
+  if (suggestedKinds > 0)
+    out.push(
+      `${suggestedKinds} kind${suggestedKinds === 1 ? '' : 's'} suggested from ISA-5.1 tag letters, marked in the generated file: confirm them`,
+    );
   return out.join('\n') + '\n';
 }

@@ -10,8 +10,12 @@ export interface RevisionChanges {
 }
 
 function statementText(s: Statement): string {
-  const attributes = s.attributes.map((a) => `${a.key.value}=${a.values.map((v) => JSON.stringify(v.value)).join(',')}`);
-  return [s.keyword.value, JSON.stringify(s.name?.value ?? ''), ...attributes, ...s.children.map(statementText)].join(' ');
+  const attributes = s.attributes.map(
+    (a) => `${a.key.value}=${a.values.map((v) => JSON.stringify(v.value)).join(',')}`,
+  );
+  return [s.keyword.value, JSON.stringify(s.name?.value ?? ''), ...attributes, ...s.children.map(statementText)].join(
+    ' ',
+  );
 }
 
 function statements(text: string): Map<string, string> {
@@ -31,7 +35,10 @@ export function revisionChanges(before: string, after: string): RevisionChanges 
 }
 
 /** Justifications whose finding key names a tag among the changed or removed ones. */
-export function staleJustifications(justifications: readonly Justification[], changes: RevisionChanges): Justification[] {
+export function staleJustifications(
+  justifications: readonly Justification[],
+  changes: RevisionChanges,
+): Justification[] {
   const touched = new Set([...changes.changed, ...changes.removed]);
   return justifications.filter((j) => j.finding.split(/[:+]/).some((part) => touched.has(part)));
 }

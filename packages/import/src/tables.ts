@@ -22,13 +22,26 @@ const isBlank = (cells: readonly string[]) => cells.every((c) => c.trim() === ''
 function toTable(file: string, sheet: string | undefined, rows: TableRow[], issues: ImportIssue[]): Table | undefined {
   const headerAt = rows.findIndex((r) => !isBlank(r.cells));
   if (headerAt === -1) {
-    issues.push(issue('BH502', 'the table is empty: no header row', { file, ...(sheet !== undefined ? { sheet } : {}) }, {
-      help: 'the first row that is not blank names the columns: Tag, Kind, Service, ...',
-    }));
+    issues.push(
+      issue(
+        'BH502',
+        'the table is empty: no header row',
+        { file, ...(sheet !== undefined ? { sheet } : {}) },
+        {
+          help: 'the first row that is not blank names the columns: Tag, Kind, Service, ...',
+        },
+      ),
+    );
     return undefined;
   }
   const header = rows[headerAt]!;
-  return { file, ...(sheet !== undefined ? { sheet } : {}), headerRow: header.row, headers: header.cells.map((c) => c.trim()), rows: rows.slice(headerAt + 1) };
+  return {
+    file,
+    ...(sheet !== undefined ? { sheet } : {}),
+    headerRow: header.row,
+    headers: header.cells.map((c) => c.trim()),
+    rows: rows.slice(headerAt + 1),
+  };
 }
 
 export function readCsvTable(file: string, text: string, issues: ImportIssue[]): Table | undefined {
@@ -37,9 +50,16 @@ export function readCsvTable(file: string, text: string, issues: ImportIssue[]):
     records = parse(text, { bom: true, relax_column_count: true, skip_empty_lines: false });
   } catch (e) {
     const err = e as { message: string; lines?: number; code?: string };
-    issues.push(issue('BH501', `the CSV text is malformed: ${err.message.replace(/^Invalid [^:]*: /, '')}`, { file, line: err.lines ?? 1, lineColumn: 1 }, {
-      help: 'save the sheet as CSV (comma-separated, quotes around cells that hold commas, quotes or line breaks)',
-    }));
+    issues.push(
+      issue(
+        'BH501',
+        `the CSV text is malformed: ${err.message.replace(/^Invalid [^:]*: /, '')}`,
+        { file, line: err.lines ?? 1, lineColumn: 1 },
+        {
+          help: 'save the sheet as CSV (comma-separated, quotes around cells that hold commas, quotes or line breaks)',
+        },
+      ),
+    );
     return undefined;
   }
   // A record's row is its number among records (a quoted line break does not start a new row).
@@ -68,9 +88,16 @@ export async function readXlsxTables(file: string, bytes: Uint8Array, issues: Im
   try {
     await workbook.xlsx.load(Buffer.from(bytes) as unknown as ArrayBuffer);
   } catch (e) {
-    issues.push(issue('BH500', `the file is not a readable XLSX workbook: ${(e as Error).message}`, { file }, {
-      help: 'save the workbook as .xlsx (Office Open XML), or export each sheet as CSV',
-    }));
+    issues.push(
+      issue(
+        'BH500',
+        `the file is not a readable XLSX workbook: ${(e as Error).message}`,
+        { file },
+        {
+          help: 'save the workbook as .xlsx (Office Open XML), or export each sheet as CSV',
+        },
+      ),
+    );
     return [];
   }
   const tables: Table[] = [];

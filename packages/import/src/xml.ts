@@ -31,7 +31,14 @@ export function readXml(file: string, text: string, issues: ImportIssue[]): XmlE
       if (!tag.isSelfClosing) skipping++;
       return;
     }
-    const element: XmlElement = { name: tag.name, attributes: tag.attributes as Record<string, string>, line: start.line, column: start.column, children: [], parent: current };
+    const element: XmlElement = {
+      name: tag.name,
+      attributes: tag.attributes as Record<string, string>,
+      line: start.line,
+      column: start.column,
+      children: [],
+      parent: current,
+    };
     current.children.push(element);
     if (!tag.isSelfClosing) current = element;
   });
@@ -45,9 +52,16 @@ export function readXml(file: string, text: string, issues: ImportIssue[]): XmlE
   parser.on('error', (e) => {
     if (failed) return;
     failed = true;
-    issues.push(issue('BH511', `the XML is malformed: ${e.message.replace(/^[^:]*:\d+:\d+: /, '')}`, { file, line: parser.line, lineColumn: parser.column + 1 }, {
-      help: 'export the P&ID again as DEXPI (Proteus XML); the file must be well-formed XML',
-    }));
+    issues.push(
+      issue(
+        'BH511',
+        `the XML is malformed: ${e.message.replace(/^[^:]*:\d+:\d+: /, '')}`,
+        { file, line: parser.line, lineColumn: parser.column + 1 },
+        {
+          help: 'export the P&ID again as DEXPI (Proteus XML); the file must be well-formed XML',
+        },
+      ),
+    );
   });
   try {
     parser.write(text.replace(/^\uFEFF/, '')).close();

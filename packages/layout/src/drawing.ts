@@ -100,7 +100,11 @@ function clip(text: string, max: number): string {
   return text.length <= max ? text : text.slice(0, max - 1) + '\u2026';
 }
 
-const SEVERITY_WORDS: Record<string, string> = { 'voids-credit': 'voids credit', 'needs-justification': 'needs justification', note: 'note' };
+const SEVERITY_WORDS: Record<string, string> = {
+  'voids-credit': 'voids credit',
+  'needs-justification': 'needs justification',
+  note: 'note',
+};
 
 export function bannerText(node: SceneNode): string | undefined {
   if (!node.shared) return undefined;
@@ -110,18 +114,39 @@ export function bannerText(node: SceneNode): string | undefined {
 }
 
 /** The lines of text in a box, each with its CSS class, top to bottom. */
-export function boxLines(node: SceneNode, sides: readonly Side[]): { text: string; className: string; char: number; height: number }[] {
+export function boxLines(
+  node: SceneNode,
+  sides: readonly Side[],
+): { text: string; className: string; char: number; height: number }[] {
   const lines: { text: string; className: string; char: number; height: number }[] = [];
   if (node.role === 'function') {
     const side = sides.find((s) => s.tag === node.tag && node.sides.includes(s.index));
-    if (side) lines.push({ text: (side.role === 'cause' ? 'CAUSE' : `LAYER ${side.index}`) + ` \u00b7 ${node.kind}`, className: 'side-label', char: SMALL_CHAR, height: LINE_SMALL });
+    if (side)
+      lines.push({
+        text: (side.role === 'cause' ? 'CAUSE' : `LAYER ${side.index}`) + ` \u00b7 ${node.kind}`,
+        className: 'side-label',
+        char: SMALL_CHAR,
+        height: LINE_SMALL,
+      });
     lines.push({ text: node.tag, className: 'tag', char: TAG_CHAR, height: LINE_TAG });
   } else {
     lines.push({ text: node.tag, className: 'tag', char: TAG_CHAR, height: LINE_TAG });
-    lines.push({ text: [node.kind, ...node.facts].join(' \u00b7 '), className: 'kind', char: SMALL_CHAR, height: LINE_SMALL });
+    lines.push({
+      text: [node.kind, ...node.facts].join(' \u00b7 '),
+      className: 'kind',
+      char: SMALL_CHAR,
+      height: LINE_SMALL,
+    });
   }
-  if (node.title) lines.push({ text: clip(node.title, MAX_TITLE), className: 'title', char: SMALL_CHAR, height: LINE_SMALL });
-  if (node.findingCount) lines.push({ text: `${node.findingCount} open finding${node.findingCount === 1 ? '' : 's'}`, className: 'count', char: SMALL_CHAR, height: LINE_SMALL });
+  if (node.title)
+    lines.push({ text: clip(node.title, MAX_TITLE), className: 'title', char: SMALL_CHAR, height: LINE_SMALL });
+  if (node.findingCount)
+    lines.push({
+      text: `${node.findingCount} open finding${node.findingCount === 1 ? '' : 's'}`,
+      className: 'count',
+      char: SMALL_CHAR,
+      height: LINE_SMALL,
+    });
   return lines;
 }
 
@@ -129,13 +154,25 @@ export function boxSize(node: SceneNode, sides: readonly Side[]): { width: numbe
   const lines = boxLines(node, sides);
   const banner = bannerText(node);
   const marksWidth = node.role === 'element' ? node.sides.length * (MARK_SIZE + MARK_GAP) : 0;
-  const textWidth = Math.max(...lines.map((l) => l.text.length * l.char), banner ? banner.length * SMALL_CHAR : 0, marksWidth);
-  const height = 8 + lines.reduce((h, l) => h + l.height, 0) + (marksWidth > 0 ? MARK_SIZE + 6 : 2) + (banner ? BANNER_HEIGHT : 0);
+  const textWidth = Math.max(
+    ...lines.map((l) => l.text.length * l.char),
+    banner ? banner.length * SMALL_CHAR : 0,
+    marksWidth,
+  );
+  const height =
+    8 + lines.reduce((h, l) => h + l.height, 0) + (marksWidth > 0 ? MARK_SIZE + 6 : 2) + (banner ? BANNER_HEIGHT : 0);
   return { width: Math.max(MIN_WIDTH, Math.ceil(textWidth + 2 * PAD_X)), height: Math.ceil(height) };
 }
 
 /** Places the texts, banner and side marks of a box laid out at (x, y). */
-export function drawBox(node: SceneNode, sides: readonly Side[], x: number, y: number, width: number, height: number): DrawnBox {
+export function drawBox(
+  node: SceneNode,
+  sides: readonly Side[],
+  x: number,
+  y: number,
+  width: number,
+  height: number,
+): DrawnBox {
   const banner = bannerText(node);
   let cursor = y + 4 + (banner ? BANNER_HEIGHT : 0);
   const texts: DrawnText[] = boxLines(node, sides).map((l) => {
@@ -144,7 +181,13 @@ export function drawBox(node: SceneNode, sides: readonly Side[], x: number, y: n
   });
   const marks: DrawnMark[] =
     node.role === 'element'
-      ? node.sides.map((side, i) => ({ side, letter: sideLetter(side), x: x + PAD_X + i * (MARK_SIZE + MARK_GAP), y: y + height - MARK_SIZE - 5, size: MARK_SIZE }))
+      ? node.sides.map((side, i) => ({
+          side,
+          letter: sideLetter(side),
+          x: x + PAD_X + i * (MARK_SIZE + MARK_GAP),
+          y: y + height - MARK_SIZE - 5,
+          size: MARK_SIZE,
+        }))
       : [];
   const headSide = node.role === 'function' ? node.sides[0] : undefined;
   const classes = [

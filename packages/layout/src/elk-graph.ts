@@ -1,7 +1,17 @@
 // Scene to ELK graph and ELK result to Drawing: the pure half of layout, with no ELK code in it, so
 // the viewer's main bundle can import it while elkjs itself runs only in the worker (or in Node).
 import type { ElkExtendedEdge, ElkNode } from 'elkjs/lib/elk-api.js';
-import { drawBox, boxSize, LANE_GAP, offsetPolyline, round, type DrawnCluster, type DrawnEdge, type Drawing, type Point } from './drawing.ts';
+import {
+  drawBox,
+  boxSize,
+  LANE_GAP,
+  offsetPolyline,
+  round,
+  type DrawnCluster,
+  type DrawnEdge,
+  type Drawing,
+  type Point,
+} from './drawing.ts';
 import type { Scene, SceneNode } from './scene.ts';
 
 /** ELK layout options. Values must be strings (elkjs parses them). */
@@ -55,7 +65,10 @@ export function toElk(scene: Scene): ElkNode {
     .map((e) => {
       const forward = byId.get(e.source)!.partition <= byId.get(e.target)!.partition;
       // Within one column the process side reads from what is relied on to what relies on it.
-      const flip = partitioned ? !forward || (byId.get(e.source)!.partition === byId.get(e.target)!.partition && byId.get(e.source)!.partition <= 3) : false;
+      const flip = partitioned
+        ? !forward ||
+          (byId.get(e.source)!.partition === byId.get(e.target)!.partition && byId.get(e.source)!.partition <= 3)
+        : false;
       return { id: e.id, sources: [flip ? e.target : e.source], targets: [flip ? e.source : e.target] };
     });
   return {
@@ -73,7 +86,10 @@ export function toElk(scene: Scene): ElkNode {
 function endpoints(edge: ElkExtendedEdge): Point[] {
   const section = edge.sections?.[0];
   if (!section) return [];
-  return [section.startPoint, ...(section.bendPoints ?? []), section.endPoint].map((p) => ({ x: round(p.x), y: round(p.y) }));
+  return [section.startPoint, ...(section.bendPoints ?? []), section.endPoint].map((p) => ({
+    x: round(p.x),
+    y: round(p.y),
+  }));
 }
 
 /** Reads ELK's result (coordinates relative to the root, as asked for in toElk) into a Drawing. */
@@ -88,7 +104,15 @@ export function fromElk(scene: Scene, laidOut: ElkNode): Drawing {
       const y = round(child.y ?? 0);
       const node = nodes.get(child.id);
       if (node) boxes.push(drawBox(node, scene.sides, x, y, child.width ?? 0, child.height ?? 0));
-      else if (clusterLabels.has(child.id)) clusters.push({ id: child.id, label: clusterLabels.get(child.id)!, x, y, width: round(child.width ?? 0), height: round(child.height ?? 0) });
+      else if (clusterLabels.has(child.id))
+        clusters.push({
+          id: child.id,
+          label: clusterLabels.get(child.id)!,
+          x,
+          y,
+          width: round(child.width ?? 0),
+          height: round(child.height ?? 0),
+        });
       walk(child);
     }
   };

@@ -7,7 +7,12 @@ import { edgeId, type Scene, type SceneCluster, type SceneEdge, type SceneNode }
 /** Most nodes the overview lays out; beyond it the units with the most findings are kept. */
 export const OVERVIEW_NODE_LIMIT = 250;
 
-const SYSTEM_LABELS: Record<string, string> = { bpcs: 'BPCS', sis: 'SIS', machine: 'Machine panels', relay: 'Relay systems' };
+const SYSTEM_LABELS: Record<string, string> = {
+  bpcs: 'BPCS',
+  sis: 'SIS',
+  machine: 'Machine panels',
+  relay: 'Relay systems',
+};
 
 export function siteOverview(model: Model, analysis: Analysis): Scene {
   const elements = new Map(model.elements.map((e) => [e.tag, e]));
@@ -21,7 +26,9 @@ export function siteOverview(model: Model, analysis: Analysis): Scene {
   };
   for (const trace of analysis.traces) {
     const measured = trace.elements.filter((t) => t.group === 'equipment' && t.links[0] !== 'final');
-    const units = (measured.length > 0 ? measured : trace.elements.filter((t) => t.group === 'equipment')).map((t) => t.tag);
+    const units = (measured.length > 0 ? measured : trace.elements.filter((t) => t.group === 'equipment')).map(
+      (t) => t.tag,
+    );
     const solvers = trace.elements.filter((t) => t.group === 'solver').map((t) => t.tag);
     for (const u of units) add(unitFunctions, u, trace.function);
     for (const s of solvers) add(solverFunctions, s, trace.function);
@@ -30,24 +37,57 @@ export function siteOverview(model: Model, analysis: Analysis): Scene {
 
   const scenariosOf = new Map<string, Set<string>>();
   for (const scenario of model.scenarios) {
-    const tags = [scenario.cause.function, ...(scenario.layers ?? []).map((l) => l.function)].filter((t): t is string => !!t);
+    const tags = [scenario.cause.function, ...(scenario.layers ?? []).map((l) => l.function)].filter(
+      (t): t is string => !!t,
+    );
     for (const [unit, fns] of unitFunctions) if (tags.some((t) => fns.has(t))) add(scenariosOf, unit, scenario.id);
   }
   const countable = analysis.findings.filter((f) => f.severity !== 'note' && !f.accepted);
-  const unitFindings = (unit: string) => countable.filter((f) => f.scenario && scenariosOf.get(unit)?.has(f.scenario)).length;
-  const solverFindings = (solver: string) => countable.filter((f) => f.element === solver || f.paths.some((p) => p.includes(solver))).length;
+  const unitFindings = (unit: string) =>
+    countable.filter((f) => f.scenario && scenariosOf.get(unit)?.has(f.scenario)).length;
+  const solverFindings = (solver: string) =>
+    countable.filter((f) => f.element === solver || f.paths.some((p) => p.includes(solver))).length;
 
-  const node = (tag: string, group: ElementGroup, partition: number, facts: string[], findingCount: number): SceneNode => {
+  const node = (
+    tag: string,
+    group: ElementGroup,
+    partition: number,
+    facts: string[],
+    findingCount: number,
+  ): SceneNode => {
     const e = elements.get(tag);
-    return { id: tag, role: 'area', tag, kind: e?.kind ?? group, group, facts, sides: [], partition, findingCount, ...(e?.title ? { title: e.title } : {}) };
+    return {
+      id: tag,
+      role: 'area',
+      tag,
+      kind: e?.kind ?? group,
+      group,
+      facts,
+      sides: [],
+      partition,
+      findingCount,
+      ...(e?.title ? { title: e.title } : {}),
+    };
   };
   const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
   let units = [...unitFunctions].map(([tag, fns]) =>
-    node(tag, 'equipment', 0, [plural(fns.size, 'function'), plural(scenariosOf.get(tag)?.size ?? 0, 'scenario')], unitFindings(tag)),
+    node(
+      tag,
+      'equipment',
+      0,
+      [plural(fns.size, 'function'), plural(scenariosOf.get(tag)?.size ?? 0, 'scenario')],
+      unitFindings(tag),
+    ),
   );
   const solvers = [...solverFunctions].map(([tag, fns]) => {
     const e = elements.get(tag);
-    return node(tag, e ? groupOf(e.kind as ElementKind) : 'solver', 1, [plural(fns.size, 'function')], solverFindings(tag));
+    return node(
+      tag,
+      e ? groupOf(e.kind as ElementKind) : 'solver',
+      1,
+      [plural(fns.size, 'function')],
+      solverFindings(tag),
+    );
   });
   const notes: string[] = [];
   let shownSolvers = solvers;
@@ -76,7 +116,14 @@ export function siteOverview(model: Model, analysis: Analysis): Scene {
   const keptSolverIds = new Set(shownSolvers.map((s) => s.id));
   const edges: SceneEdge[] = [...pairs.values()]
     .filter((p) => kept.has(p.unit) && keptSolverIds.has(p.solver))
-    .map((p) => ({ id: edgeId(p.unit, p.solver), source: p.unit, target: p.solver, link: 'serves' as const, sides: [], onPath: [] }))
+    .map((p) => ({
+      id: edgeId(p.unit, p.solver),
+      source: p.unit,
+      target: p.solver,
+      link: 'serves' as const,
+      sides: [],
+      onPath: [],
+    }))
     .sort((a, b) => a.id.localeCompare(b.id));
 
   const bySystem = new Map<string, string[]>();
@@ -87,7 +134,11 @@ export function siteOverview(model: Model, analysis: Analysis): Scene {
   }
   const clusters: SceneCluster[] = [...bySystem]
     .sort(([a], [b]) => a.localeCompare(b))
-    .map(([system, children]) => ({ id: `system:${system}`, label: SYSTEM_LABELS[system] ?? system, children: children.sort() }));
+    .map(([system, children]) => ({
+      id: `system:${system}`,
+      label: SYSTEM_LABELS[system] ?? system,
+      children: children.sort(),
+    }));
 
   return {
     view: 'overview',

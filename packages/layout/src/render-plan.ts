@@ -69,16 +69,25 @@ export function renderPlan(drawing: Drawing, view: ViewState = {}): RenderPlan {
       focusNodes.add(n);
       throughNodes.add(n);
     }
-    for (const e of drawing.edges) if (throughEdges.has(e.id)) for (const l of e.lanes) if (l.side !== undefined && finding.sides.includes(l.side)) focusLanes.add(`${e.id}|${l.side}`);
+    for (const e of drawing.edges)
+      if (throughEdges.has(e.id))
+        for (const l of e.lanes)
+          if (l.side !== undefined && finding.sides.includes(l.side)) focusLanes.add(`${e.id}|${l.side}`);
     // A finding about a layer alone has no path: focus the layer's own node.
-    if (finding.steps.length === 0) for (const s of finding.sides) {
-      const tag = drawing.sides[s]?.tag;
-      if (tag) focusNodes.add(tag);
-    }
+    if (finding.steps.length === 0)
+      for (const s of finding.sides) {
+        const tag = drawing.sides[s]?.tag;
+        if (tag) focusNodes.add(tag);
+      }
   }
   const boxes = drawing.boxes.map((b) => ({
     ...b,
-    className: [...b.classes, ...(focusNodes.has(b.id) ? ['in-focus'] : []), ...(throughNodes.has(b.id) ? ['through'] : []), ...(view.selected === b.id ? ['selected'] : [])].join(' '),
+    className: [
+      ...b.classes,
+      ...(focusNodes.has(b.id) ? ['in-focus'] : []),
+      ...(throughNodes.has(b.id) ? ['through'] : []),
+      ...(view.selected === b.id ? ['selected'] : []),
+    ].join(' '),
   }));
   const edges = drawing.edges.map((e) => ({
     ...e,
@@ -94,7 +103,12 @@ export function renderPlan(drawing: Drawing, view: ViewState = {}): RenderPlan {
   if (focused.length > 0) {
     const x = Math.min(...focused.map((b) => b.x));
     const y = Math.min(...focused.map((b) => b.y));
-    focusBounds = { x, y, width: Math.max(...focused.map((b) => b.x + b.width)) - x, height: Math.max(...focused.map((b) => b.y + b.height)) - y };
+    focusBounds = {
+      x,
+      y,
+      width: Math.max(...focused.map((b) => b.x + b.width)) - x,
+      height: Math.max(...focused.map((b) => b.y + b.height)) - y,
+    };
   }
   return {
     className: ['bh-drawing', `view-${drawing.view}`, ...(finding ? ['focusing'] : [])].join(' '),

@@ -1,7 +1,19 @@
 // The focused-scenario scene: which elements to draw for one scenario (the cause's elements and each
 // claimed layer's traced elements, with the links that explain them), which side relies on each, and
 // which are shared. Pure data from the model and the analysis; no geometry yet.
-import type { Analysis, EdgeRole, ElementGroup, ElementKind, Finding, FunctionKind, FunctionTrace, LayerVerdict, Model, SeverityLevel, TracedElement } from '@bulkhead/core';
+import type {
+  Analysis,
+  EdgeRole,
+  ElementGroup,
+  ElementKind,
+  Finding,
+  FunctionKind,
+  FunctionTrace,
+  LayerVerdict,
+  Model,
+  SeverityLevel,
+  TracedElement,
+} from '@bulkhead/core';
 import { groupOf } from '@bulkhead/core';
 import { sideLetter, sideStyle, type SideStyle } from './sides.ts';
 
@@ -164,8 +176,28 @@ class SceneBuilder {
       const element = this.elements.get(tag);
       const fn = this.functions.get(tag);
       const node: SceneNode = element
-        ? { id: tag, role: 'element', tag, kind: element.kind, group: groupOf(element.kind as ElementKind), facts: failFact(element), sides: [], partition: 0, ...(element.title ? { title: element.title } : {}) }
-        : { id: tag, role: 'function', tag, kind: fn?.kind ?? 'function', group: 'function', facts: [], sides: [], partition: PARTITIONS.function, ...(fn?.title ? { title: fn.title } : {}) };
+        ? {
+            id: tag,
+            role: 'element',
+            tag,
+            kind: element.kind,
+            group: groupOf(element.kind as ElementKind),
+            facts: failFact(element),
+            sides: [],
+            partition: 0,
+            ...(element.title ? { title: element.title } : {}),
+          }
+        : {
+            id: tag,
+            role: 'function',
+            tag,
+            kind: fn?.kind ?? 'function',
+            group: 'function',
+            facts: [],
+            sides: [],
+            partition: PARTITIONS.function,
+            ...(fn?.title ? { title: fn.title } : {}),
+          };
       draft = { node, firstRoles: new Set() };
       this.nodes.set(tag, draft);
     }
@@ -201,7 +233,10 @@ class SceneBuilder {
     });
     const edges = [...this.edges.values()];
     for (const e of edges) e.sides.sort((a, b) => a - b);
-    return { nodes: nodes.sort((a, b) => a.id.localeCompare(b.id)), edges: edges.sort((a, b) => a.id.localeCompare(b.id)) };
+    return {
+      nodes: nodes.sort((a, b) => a.id.localeCompare(b.id)),
+      edges: edges.sort((a, b) => a.id.localeCompare(b.id)),
+    };
   }
 }
 
@@ -220,7 +255,11 @@ function partySide(finding: Finding, index: number, sides: Side[]): number | und
 }
 
 /** The elements every one of `sides` reaches through `element`, and the edges below it on those paths. */
-function throughShared(element: string | undefined, sides: number[], sideTraces: Map<number, TracedElement[]>): FindingPath['through'] {
+function throughShared(
+  element: string | undefined,
+  sides: number[],
+  sideTraces: Map<number, TracedElement[]>,
+): FindingPath['through'] {
   if (element === undefined || sides.length < 2) return undefined;
   const perSide = sides.map((side) => {
     const reached = new Map<string, string[]>();
@@ -297,14 +336,20 @@ export function scenarioScene(model: Model, analysis: Analysis, scenarioId: stri
   }
 
   const sideTraces = new Map<number, TracedElement[]>();
-  if (cause.function && traces.get(cause.function)) sideTraces.set(0, narrowCause(traces.get(cause.function)!, cause.only));
+  if (cause.function && traces.get(cause.function))
+    sideTraces.set(0, narrowCause(traces.get(cause.function)!, cause.only));
   for (const side of sides.slice(1)) sideTraces.set(side.index, traces.get(side.tag!)?.elements ?? []);
 
   const findings = analysis.findings.filter((f) => f.scenario === scenarioId);
   const findingPaths: FindingPath[] = [];
   const marks = new Map<string, SharedMark>();
   for (const finding of findings) {
-    const fp: FindingPath = { key: finding.key, sides: [], steps: [], ...(finding.element ? { element: finding.element } : {}) };
+    const fp: FindingPath = {
+      key: finding.key,
+      sides: [],
+      steps: [],
+      ...(finding.element ? { element: finding.element } : {}),
+    };
     finding.paths.forEach((path, i) => {
       const side = partySide(finding, i, sides);
       if (side === undefined) return;
@@ -313,24 +358,38 @@ export function scenarioScene(model: Model, analysis: Analysis, scenarioId: stri
       path.forEach((tag, j) => {
         builder.addNode(tag, side);
         if (j === 0) return;
-        const edge = builder.edges.get(edgeId(path[j - 1]!, tag)) ?? builder.addEdge(path[j - 1]!, tag, 'signalVia', side);
+        const edge =
+          builder.edges.get(edgeId(path[j - 1]!, tag)) ?? builder.addEdge(path[j - 1]!, tag, 'signalVia', side);
         if (!edge.onPath.includes(side)) edge.onPath.push(side);
         step.edges.push(edge.id);
       });
       fp.steps.push(step);
     });
-    const through = throughShared(finding.element, fp.steps.map((st) => st.side), sideTraces);
+    const through = throughShared(
+      finding.element,
+      fp.steps.map((st) => st.side),
+      sideTraces,
+    );
     if (through) fp.through = through;
-    if (fp.sides.length === 0) for (const p of finding.parties) {
-      const side = p.role === 'cause' ? 0 : sides.find((s) => s.tag === p.tag)?.index;
-      if (side !== undefined && !fp.sides.includes(side)) fp.sides.push(side);
-    }
+    if (fp.sides.length === 0)
+      for (const p of finding.parties) {
+        const side = p.role === 'cause' ? 0 : sides.find((s) => s.tag === p.tag)?.index;
+        if (side !== undefined && !fp.sides.includes(side)) fp.sides.push(side);
+      }
     findingPaths.push(fp);
     const ends = [...new Set(finding.paths.map((p) => p[p.length - 1]).filter((t): t is string => t !== undefined))];
     const sharedOne = finding.element !== undefined && ends.every((t) => t === finding.element);
-    const marked = sharedOne ? [finding.element!] : [...new Set([...(finding.element ? [finding.element] : []), ...(ends.length > 1 ? ends : [])])];
+    const marked = sharedOne
+      ? [finding.element!]
+      : [...new Set([...(finding.element ? [finding.element] : []), ...(ends.length > 1 ? ends : [])])];
     for (const tag of marked) {
-      const mark = marks.get(tag) ?? { findings: [], severity: 'note' as SeverityLevel, accepted: true, sides: [], relation: 'alike' as const };
+      const mark = marks.get(tag) ?? {
+        findings: [],
+        severity: 'note' as SeverityLevel,
+        accepted: true,
+        sides: [],
+        relation: 'alike' as const,
+      };
       mark.findings.push(finding.key);
       if (severityRank(finding.severity) > severityRank(mark.severity)) mark.severity = finding.severity;
       mark.accepted &&= finding.accepted !== undefined;

@@ -22,7 +22,14 @@ function sideRules(): string {
 }
 
 /** The arrowhead every lane ends in, pointing at the box relied on; each renderer puts it in its defs. */
-export const ARROW_MARKER = { id: 'bh-arrow', path: 'M0,0 L8,4 L0,8 z', width: 8, height: 8, refX: 7.5, refY: 4 } as const;
+export const ARROW_MARKER = {
+  id: 'bh-arrow',
+  path: 'M0,0 L8,4 L0,8 z',
+  width: 8,
+  height: 8,
+  refX: 7.5,
+  refY: 4,
+} as const;
 
 export const DRAWING_CSS = `
 .bh-drawing{font-family:system-ui,-apple-system,"Segoe UI",sans-serif}

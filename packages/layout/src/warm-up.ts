@@ -6,9 +6,34 @@ export function warmUpScene(size = 60): Scene {
   const nodes: SceneNode[] = [];
   const edges: SceneEdge[] = [];
   for (let i = 0; i < size; i++) {
-    nodes.push({ id: `n${i}`, role: 'element', tag: `N-${i}`, kind: 'transmitter', group: 'sensor', facts: [], sides: [i % 3], partition: i % 12 });
-    if (i > 0) edges.push({ id: `e${i}`, source: `n${Math.floor((i - 1) / 2)}`, target: `n${i}`, link: 'signalVia', sides: [i % 3], onPath: [] });
-    if (i > 3) edges.push({ id: `f${i}`, source: `n${i - 3}`, target: `n${i}`, link: 'mountedOn', sides: [(i + 1) % 3], onPath: [] });
+    nodes.push({
+      id: `n${i}`,
+      role: 'element',
+      tag: `N-${i}`,
+      kind: 'transmitter',
+      group: 'sensor',
+      facts: [],
+      sides: [i % 3],
+      partition: i % 12,
+    });
+    if (i > 0)
+      edges.push({
+        id: `e${i}`,
+        source: `n${Math.floor((i - 1) / 2)}`,
+        target: `n${i}`,
+        link: 'signalVia',
+        sides: [i % 3],
+        onPath: [],
+      });
+    if (i > 3)
+      edges.push({
+        id: `f${i}`,
+        source: `n${i - 3}`,
+        target: `n${i}`,
+        link: 'mountedOn',
+        sides: [(i + 1) % 3],
+        onPath: [],
+      });
   }
   return { view: 'scenario', title: 'warm-up', sides: [], nodes, edges, findings: [], clusters: [], notes: [] };
 }

@@ -11,7 +11,10 @@ const where = (s: { line: number; column: number } | undefined) => (s ? `${s.lin
 describe('finding spans', () => {
   const c = {
     name: 'spans',
-    lines: { 'SF-1': 'sif SF-1 sensors=T-1 solver=S-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01 pfd-basis="test"' },
+    lines: {
+      'SF-1':
+        'sif SF-1 sensors=T-1 solver=S-1 finals=XV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01 pfd-basis="test"',
+    },
     scenario: [
       'scenario SC-1 category=c', // line 25
       '  cause function=LC-1 frequency=0.1', // 26: no basis

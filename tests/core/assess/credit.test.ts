@@ -7,7 +7,8 @@ import { bestCreditableSet, type CreditProblem } from '../../../packages/core/sr
 /** Every feasible subset, scored the same way; the reference the search must agree with. */
 function bruteForce(problem: CreditProblem): { best: string[]; weight: number } {
   const items = problem.candidates.filter((c) => c.pfd > 0 && c.pfd < 1);
-  const conflict = (a: string, b: string) => problem.conflicts.some(([x, y]) => (x === a && y === b) || (x === b && y === a));
+  const conflict = (a: string, b: string) =>
+    problem.conflicts.some(([x, y]) => (x === a && y === b) || (x === b && y === a));
   let best: { tags: string[]; weight: number } | undefined;
   for (let mask = 0; mask < 1 << items.length; mask++) {
     const set = items.filter((_, i) => mask & (1 << i));
@@ -20,7 +21,8 @@ function bruteForce(problem: CreditProblem): { best: string[]; weight: number } 
     const better =
       !best ||
       weight > best.weight + 1e-9 ||
-      (Math.abs(weight - best.weight) <= 1e-9 && (tags.length < best.tags.length || (tags.length === best.tags.length && tags.join() < best.tags.join())));
+      (Math.abs(weight - best.weight) <= 1e-9 &&
+        (tags.length < best.tags.length || (tags.length === best.tags.length && tags.join() < best.tags.join())));
     if (better) best = { tags, weight };
   }
   return { best: best!.tags, weight: best!.weight };
@@ -32,7 +34,13 @@ describe('bestCreditableSet', () => {
   });
 
   it('credits every layer when none conflict, with no alternatives', () => {
-    const r = bestCreditableSet({ candidates: [{ tag: 'B', pfd: 0.1 }, { tag: 'A', pfd: 0.01 }], conflicts: [] });
+    const r = bestCreditableSet({
+      candidates: [
+        { tag: 'B', pfd: 0.1 },
+        { tag: 'A', pfd: 0.01 },
+      ],
+      conflicts: [],
+    });
     expect(r.best).toEqual(['A', 'B']);
     expect(r.pfdProduct).toBeCloseTo(1e-3, 15);
     expect(r.alternatives).toEqual([]);
@@ -43,15 +51,28 @@ describe('bestCreditableSet', () => {
   });
 
   it('chooses the stronger of two conflicting layers and lists the other as the alternative', () => {
-    const r = bestCreditableSet({ candidates: [{ tag: 'ALARM', pfd: 0.1 }, { tag: 'SIF', pfd: 0.005 }], conflicts: [['ALARM', 'SIF']] });
+    const r = bestCreditableSet({
+      candidates: [
+        { tag: 'ALARM', pfd: 0.1 },
+        { tag: 'SIF', pfd: 0.005 },
+      ],
+      conflicts: [['ALARM', 'SIF']],
+    });
     expect(r.best).toEqual(['SIF']);
     expect(r.alternatives).toEqual([{ layers: ['ALARM'], pfdProduct: 0.1 }]);
   });
 
   it('prefers two weaker independent layers over one stronger layer that conflicts with both', () => {
     const r = bestCreditableSet({
-      candidates: [{ tag: 'X', pfd: 0.02 }, { tag: 'Y', pfd: 0.1 }, { tag: 'Z', pfd: 0.1 }],
-      conflicts: [['X', 'Y'], ['X', 'Z']],
+      candidates: [
+        { tag: 'X', pfd: 0.02 },
+        { tag: 'Y', pfd: 0.1 },
+        { tag: 'Z', pfd: 0.1 },
+      ],
+      conflicts: [
+        ['X', 'Y'],
+        ['X', 'Z'],
+      ],
     });
     expect(r.best).toEqual(['Y', 'Z']);
     expect(r.alternatives.map((a) => a.layers)).toEqual([['X']]);
@@ -59,15 +80,28 @@ describe('bestCreditableSet', () => {
 
   it('breaks an exact tie by fewer layers: one layer at 0.01 beats two at 0.1 (0.1 x 0.1 is 0.01 to the tolerance)', () => {
     const r = bestCreditableSet({
-      candidates: [{ tag: 'A', pfd: 0.1 }, { tag: 'B', pfd: 0.1 }, { tag: 'C', pfd: 0.01 }],
-      conflicts: [['A', 'C'], ['B', 'C']],
+      candidates: [
+        { tag: 'A', pfd: 0.1 },
+        { tag: 'B', pfd: 0.1 },
+        { tag: 'C', pfd: 0.01 },
+      ],
+      conflicts: [
+        ['A', 'C'],
+        ['B', 'C'],
+      ],
     });
     expect(r.best).toEqual(['C']);
     expect(r.alternatives.map((a) => a.layers)).toEqual([['A', 'B']]);
   });
 
   it('breaks a tie of equal size by the tags in lexicographic order, whatever the input order', () => {
-    const problem: CreditProblem = { candidates: [{ tag: 'M', pfd: 0.1 }, { tag: 'K', pfd: 0.1 }], conflicts: [['M', 'K']] };
+    const problem: CreditProblem = {
+      candidates: [
+        { tag: 'M', pfd: 0.1 },
+        { tag: 'K', pfd: 0.1 },
+      ],
+      conflicts: [['M', 'K']],
+    };
     expect(bestCreditableSet(problem).best).toEqual(['K']);
     expect(bestCreditableSet({ ...problem, candidates: [...problem.candidates].reverse() }).best).toEqual(['K']);
   });
@@ -92,7 +126,11 @@ describe('bestCreditableSet', () => {
 
   it('lists only maximal sets as alternatives, capped at the number asked for', () => {
     const candidates = ['A', 'B', 'C', 'D', 'E', 'F'].map((tag) => ({ tag, pfd: 0.1 }));
-    const conflicts = [['A', 'B'], ['C', 'D'], ['E', 'F']] as [string, string][];
+    const conflicts = [
+      ['A', 'B'],
+      ['C', 'D'],
+      ['E', 'F'],
+    ] as [string, string][];
     const r = bestCreditableSet({ candidates, conflicts }, 3);
     expect(r.best).toEqual(['A', 'C', 'E']);
     expect(r.alternatives.map((a) => a.layers)).toEqual([
@@ -103,21 +141,25 @@ describe('bestCreditableSet', () => {
   });
 
   it('agrees with brute force on random problems', () => {
-    const problem = fc
-      .integer({ min: 0, max: 10 })
-      .chain((n) =>
-        fc.record({
-          pfds: fc.array(fc.constantFrom(0.5, 0.1, 0.05, 0.02, 0.01, 0.005, 0.001, 1), { minLength: n, maxLength: n }),
-          groups: fc.array(fc.boolean(), { minLength: n, maxLength: n }),
-          edges: fc.array(fc.tuple(fc.nat(Math.max(n - 1, 0)), fc.nat(Math.max(n - 1, 0))), { maxLength: 20 }),
-          limit: fc.integer({ min: 1, max: 3 }),
-        }),
-      );
+    const problem = fc.integer({ min: 0, max: 10 }).chain((n) =>
+      fc.record({
+        pfds: fc.array(fc.constantFrom(0.5, 0.1, 0.05, 0.02, 0.01, 0.005, 0.001, 1), { minLength: n, maxLength: n }),
+        groups: fc.array(fc.boolean(), { minLength: n, maxLength: n }),
+        edges: fc.array(fc.tuple(fc.nat(Math.max(n - 1, 0)), fc.nat(Math.max(n - 1, 0))), { maxLength: 20 }),
+        limit: fc.integer({ min: 1, max: 3 }),
+      }),
+    );
     fc.assert(
       fc.property(problem, ({ pfds, groups, edges, limit }) => {
         const p: CreditProblem = {
-          candidates: pfds.map((pfd, i) => ({ tag: `L${String(i).padStart(2, '0')}`, pfd, ...(groups[i] ? { group: 'bpcs' } : {}) })),
-          conflicts: edges.filter(([a, b]) => a !== b && a < pfds.length && b < pfds.length).map(([a, b]) => [`L${String(a).padStart(2, '0')}`, `L${String(b).padStart(2, '0')}`] as const),
+          candidates: pfds.map((pfd, i) => ({
+            tag: `L${String(i).padStart(2, '0')}`,
+            pfd,
+            ...(groups[i] ? { group: 'bpcs' } : {}),
+          })),
+          conflicts: edges
+            .filter(([a, b]) => a !== b && a < pfds.length && b < pfds.length)
+            .map(([a, b]) => [`L${String(a).padStart(2, '0')}`, `L${String(b).padStart(2, '0')}`] as const),
           groupLimits: { bpcs: limit },
         };
         const got = bestCreditableSet(p);
@@ -134,9 +176,14 @@ describe('bestCreditableSet', () => {
     let seed = 12345;
     const next = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
     const pfds = [0.1, 0.01, 0.05, 0.001, 0.2];
-    const candidates = Array.from({ length: 25 }, (_, i) => ({ tag: `L${String(i).padStart(2, '0')}`, pfd: pfds[i % pfds.length]!, ...(i % 3 === 0 ? { group: 'bpcs' } : {}) }));
+    const candidates = Array.from({ length: 25 }, (_, i) => ({
+      tag: `L${String(i).padStart(2, '0')}`,
+      pfd: pfds[i % pfds.length]!,
+      ...(i % 3 === 0 ? { group: 'bpcs' } : {}),
+    }));
     const conflicts: [string, string][] = [];
-    for (let i = 0; i < 25; i++) for (let j = i + 1; j < 25; j++) if (next() < 0.5) conflicts.push([candidates[i]!.tag, candidates[j]!.tag]);
+    for (let i = 0; i < 25; i++)
+      for (let j = i + 1; j < 25; j++) if (next() < 0.5) conflicts.push([candidates[i]!.tag, candidates[j]!.tag]);
     const r = bestCreditableSet({ candidates, conflicts, groupLimits: { bpcs: 2 } });
     const chosen = new Set(r.best);
     expect(conflicts.some(([a, b]) => chosen.has(a) && chosen.has(b))).toBe(false);

@@ -1,7 +1,15 @@
 // Number formatting for text output: two significant figures, plain digits from 0.01 up to 100,000 and
 // exponent form outside it, with units; ratios in plain digits; gap or margin; the edge convention in words.
 import { describe, expect, it } from 'vitest';
-import { edgeRelation, edgeText, formatFrequency, formatPerHour, formatProbability, formatRatio, gapText } from '../../../packages/core/src/assess/index.ts';
+import {
+  edgeRelation,
+  edgeText,
+  formatFrequency,
+  formatPerHour,
+  formatProbability,
+  formatRatio,
+  gapText,
+} from '../../../packages/core/src/assess/index.ts';
 
 describe('formatting', () => {
   it.each([

@@ -26,8 +26,20 @@ interface Case {
 }
 
 const CASES: Case[] = [
-  { name: 'no findings: both independent', findings: [], verdicts: { 'SIF-1': 'independent', 'LAH-2': 'independent' }, credited: ['SIF-1', 'LAH-2'], creditedIfAccepted: ['SIF-1', 'LAH-2'] },
-  { name: 'voids-credit against the cause: voided', findings: [onAlarm('shared-connection', 'voids-credit')], verdicts: { 'LAH-2': 'voided' }, credited: ['SIF-1'], creditedIfAccepted: ['SIF-1'] },
+  {
+    name: 'no findings: both independent',
+    findings: [],
+    verdicts: { 'SIF-1': 'independent', 'LAH-2': 'independent' },
+    credited: ['SIF-1', 'LAH-2'],
+    creditedIfAccepted: ['SIF-1', 'LAH-2'],
+  },
+  {
+    name: 'voids-credit against the cause: voided',
+    findings: [onAlarm('shared-connection', 'voids-credit')],
+    verdicts: { 'LAH-2': 'voided' },
+    credited: ['SIF-1'],
+    creditedIfAccepted: ['SIF-1'],
+  },
   {
     name: 'voids-credit accepted by a justification: credited, and the verdict says so',
     findings: [onAlarm('shared-connection', 'voids-credit', true)],
@@ -35,9 +47,27 @@ const CASES: Case[] = [
     credited: ['SIF-1', 'LAH-2'],
     creditedIfAccepted: ['SIF-1', 'LAH-2'],
   },
-  { name: 'needs-justification, not accepted: open', findings: [onAlarm('shared-cabinet', 'needs-justification')], verdicts: { 'LAH-2': 'open' }, credited: ['SIF-1'], creditedIfAccepted: ['SIF-1', 'LAH-2'] },
-  { name: 'needs-justification, accepted: credited', findings: [onAlarm('shared-cabinet', 'needs-justification', true)], verdicts: { 'LAH-2': 'accepted' }, credited: ['SIF-1', 'LAH-2'], creditedIfAccepted: ['SIF-1', 'LAH-2'] },
-  { name: 'a note changes nothing', findings: [onAlarm('shared-air-fails-safe', 'note')], verdicts: { 'LAH-2': 'independent' }, credited: ['SIF-1', 'LAH-2'], creditedIfAccepted: ['SIF-1', 'LAH-2'] },
+  {
+    name: 'needs-justification, not accepted: open',
+    findings: [onAlarm('shared-cabinet', 'needs-justification')],
+    verdicts: { 'LAH-2': 'open' },
+    credited: ['SIF-1'],
+    creditedIfAccepted: ['SIF-1', 'LAH-2'],
+  },
+  {
+    name: 'needs-justification, accepted: credited',
+    findings: [onAlarm('shared-cabinet', 'needs-justification', true)],
+    verdicts: { 'LAH-2': 'accepted' },
+    credited: ['SIF-1', 'LAH-2'],
+    creditedIfAccepted: ['SIF-1', 'LAH-2'],
+  },
+  {
+    name: 'a note changes nothing',
+    findings: [onAlarm('shared-air-fails-safe', 'note')],
+    verdicts: { 'LAH-2': 'independent' },
+    credited: ['SIF-1', 'LAH-2'],
+    creditedIfAccepted: ['SIF-1', 'LAH-2'],
+  },
   {
     name: 'incomplete trace: unverified, credited only if accepted',
     findings: [independenceFinding('S-1', 'incomplete-trace', [layer('SIF-1')], { severity: 'needs-justification' })],
@@ -47,14 +77,21 @@ const CASES: Case[] = [
   },
   {
     name: 'incomplete trace accepted: credited',
-    findings: [independenceFinding('S-1', 'incomplete-trace', [layer('SIF-1')], { severity: 'needs-justification', accepted: true })],
+    findings: [
+      independenceFinding('S-1', 'incomplete-trace', [layer('SIF-1')], {
+        severity: 'needs-justification',
+        accepted: true,
+      }),
+    ],
     verdicts: { 'SIF-1': 'accepted' },
     credited: ['SIF-1', 'LAH-2'],
     creditedIfAccepted: ['SIF-1', 'LAH-2'],
   },
   {
     name: 'incomplete trace accepted at voids-credit (its default): credited',
-    findings: [independenceFinding('S-1', 'incomplete-trace', [layer('SIF-1')], { severity: 'voids-credit', accepted: true })],
+    findings: [
+      independenceFinding('S-1', 'incomplete-trace', [layer('SIF-1')], { severity: 'voids-credit', accepted: true }),
+    ],
     verdicts: { 'SIF-1': 'accepted' },
     credited: ['SIF-1', 'LAH-2'],
     creditedIfAccepted: ['SIF-1', 'LAH-2'],
@@ -78,7 +115,12 @@ const CASES: Case[] = [
   },
   {
     name: 'a finding about one layer alone (voted group) acts like one against the cause',
-    findings: [independenceFinding('S-1', 'voted-group-common-cause', [layer('SIF-1')], { severity: 'voids-credit', element: 'TW-1' })],
+    findings: [
+      independenceFinding('S-1', 'voted-group-common-cause', [layer('SIF-1')], {
+        severity: 'voids-credit',
+        element: 'TW-1',
+      }),
+    ],
     verdicts: { 'SIF-1': 'voided' },
     credited: ['LAH-2'],
     creditedIfAccepted: ['LAH-2'],
@@ -92,7 +134,11 @@ const CASES: Case[] = [
   },
   {
     name: 'a layer-layer conflict that needs a justification binds only the headline figure',
-    findings: [independenceFinding('S-1', 'shared-console', [layer('SIF-1'), layer('LAH-2')], { severity: 'needs-justification' })],
+    findings: [
+      independenceFinding('S-1', 'shared-console', [layer('SIF-1'), layer('LAH-2')], {
+        severity: 'needs-justification',
+      }),
+    ],
     verdicts: { 'LAH-2': 'not-selected' },
     credited: ['SIF-1'],
     creditedIfAccepted: ['SIF-1', 'LAH-2'],
@@ -121,12 +167,21 @@ describe('independence findings acting on credit', () => {
     expect(a.mitigatedAfter).toBeCloseTo(5e-4, 15);
     expect(a.mitigatedIfAccepted).toBeCloseTo(5e-5, 15);
     expect(a.layers.find((l) => l.function === 'LAH-2')!.reasons).toEqual([
-      { key: 'shared-cabinet:S-1:LIC-1:LAH-2', rule: 'shared-cabinet', severity: 'needs-justification', effect: 'voids', element: 'X-1', with: 'cause' },
+      {
+        key: 'shared-cabinet:S-1:LIC-1:LAH-2',
+        rule: 'shared-cabinet',
+        severity: 'needs-justification',
+        effect: 'voids',
+        element: 'X-1',
+        with: 'cause',
+      },
     ]);
   });
 
   it('sizes the SIF on the layers still credited when the SIF itself is voided', () => {
-    const voidSif = independenceFinding('S-1', 'shared-connection', [cause('LIC-1'), layer('SIF-1')], { element: 'BR-1' });
+    const voidSif = independenceFinding('S-1', 'shared-connection', [cause('LIC-1'), layer('SIF-1')], {
+      element: 'BR-1',
+    });
     const a = assess(MODEL, [voidSif]).assessment;
     expect(a.mitigatedAfter).toBeCloseTo(0.01, 15);
     // Required PFD = 1e-3 / (0.1 x 0.1) = 0.1: strictly below 0.1 needs SIL 1.

@@ -40,7 +40,9 @@ loop LIC-1 sensors=LT-1 solver=C1 finals=LV-1
 export function load(text: string): Model {
   const result = loadModelText('test.bulk', PREAMBLE + text);
   if (!result.model) {
-    throw new Error(result.diagnostics.map((d) => `${d.code} ${d.span?.line}:${d.span?.column} ${d.message}`).join('\n'));
+    throw new Error(
+      result.diagnostics.map((d) => `${d.code} ${d.span?.line}:${d.span?.column} ${d.message}`).join('\n'),
+    );
   }
   return result.model;
 }

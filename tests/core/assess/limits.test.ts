@@ -43,7 +43,12 @@ const TABLES: Record<string, Case[]> = {
       name: 'a PFD better than the band is credited at the band edge until accepted',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfd=0.002 pfd-basis="SV-1 (invented)"\n${SCENARIO('loc', 'layer SIF-1')}`,
       rules: ['sif-pfd-outside-sil'],
-      says: [{ messageId: 'sif-pfd-outside-sil/better', data: { function: 'SIF-1', claimed: 0.002, sil: 1, low: 0.01, high: 0.1 } }],
+      says: [
+        {
+          messageId: 'sif-pfd-outside-sil/better',
+          data: { function: 'SIF-1', claimed: 0.002, sil: 1, low: 0.01, high: 0.1 },
+        },
+      ],
       verdicts: { 'SIF-1': 'independent' },
       allowed: { 'SIF-1': 0.01 },
     },
@@ -111,7 +116,9 @@ ${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3', 'layer LAH-4')}`,
 trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
 ${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`,
       rules: ['bpcs-same-controller'],
-      says: [{ messageId: 'bpcs-same-controller/one-controller', data: { layers: ['LAH-2', 'LSHH-3'], controller: 'C2' } }],
+      says: [
+        { messageId: 'bpcs-same-controller/one-controller', data: { layers: ['LAH-2', 'LSHH-3'], controller: 'C2' } },
+      ],
       verdicts: { 'LAH-2': 'independent', 'LSHH-3': 'not-selected' },
       credited: ['LAH-2'],
     },
@@ -174,7 +181,9 @@ scenario S-1 category=loc
       name: 'five minutes: no credit',
       model: `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=5 pfd=0.1\n${SCENARIO('loc', 'layer LAH-2')}`,
       rules: ['alarm-response-time'],
-      says: [{ messageId: 'alarm-response-time/too-little-time', data: { function: 'LAH-2', minutes: 5, required: 10 } }],
+      says: [
+        { messageId: 'alarm-response-time/too-little-time', data: { function: 'LAH-2', minutes: 5, required: 10 } },
+      ],
       verdicts: { 'LAH-2': 'voided' },
       allowed: { 'LAH-2': 1 },
       credited: [],
@@ -235,7 +244,12 @@ scenario S-1 category=loc
       name: 'ignition on a loss-of-containment criterion: not applied',
       model: SCENARIO('loc', 'modifier ignition probability=0.5'),
       rules: ['modifier-not-allowed'],
-      says: [{ messageId: 'modifier-not-allowed/not-people', data: { modifier: 'ignition', probability: 0.5, category: 'loc', harm: 'containment' } }],
+      says: [
+        {
+          messageId: 'modifier-not-allowed/not-people',
+          data: { modifier: 'ignition', probability: 0.5, category: 'loc', harm: 'containment' },
+        },
+      ],
     },
     {
       name: 'on an asset criterion: not applied',
@@ -277,7 +291,12 @@ scenario S-1 category=loc
       name: 'a PFH better than the band is credited at the band edge until accepted',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=1 pfh=1e-7 pfh-basis="SV-1 (invented)"\n${HIGH('layer SIF-1')}`,
       rules: ['sif-pfh-outside-sil'],
-      says: [{ messageId: 'sif-pfh-outside-sil/better', data: { function: 'SIF-1', claimed: 1e-07, sil: 1, low: 1e-06, high: 1e-05 } }],
+      says: [
+        {
+          messageId: 'sif-pfh-outside-sil/better',
+          data: { function: 'SIF-1', claimed: 1e-7, sil: 1, low: 1e-6, high: 1e-5 },
+        },
+      ],
       verdicts: { 'SIF-1': 'independent' },
     },
     {
@@ -361,7 +380,9 @@ scenario S-1 category=loc
       name: 'a presence of 0.01 with no basis is not applied until accepted',
       model: SCENARIO('people', 'modifier presence probability=0.01'),
       rules: ['condition-no-basis'],
-      says: [{ messageId: 'condition-no-basis/no-basis', data: { factor: 'modifier', name: 'presence', probability: 0.01 } }],
+      says: [
+        { messageId: 'condition-no-basis/no-basis', data: { factor: 'modifier', name: 'presence', probability: 0.01 } },
+      ],
     },
     {
       name: 'an enabler with no basis is not applied until accepted',
@@ -370,7 +391,11 @@ scenario S-1 category=loc
     },
     {
       name: 'factors with a basis raise nothing',
-      model: SCENARIO('people', 'enabler "Winter operation" probability=0.25 basis="operating records (invented)"', 'modifier ignition probability=0.5 basis="study (invented)"'),
+      model: SCENARIO(
+        'people',
+        'enabler "Winter operation" probability=0.25 basis="operating records (invented)"',
+        'modifier ignition probability=0.5 basis="study (invented)"',
+      ),
       rules: [],
     },
     {
@@ -383,13 +408,21 @@ scenario S-1 category=loc
   'condition-credit-limit': [
     {
       name: 'enabler 0.1 and ignition 0.05 (credit 200) exceed the default 100',
-      model: SCENARIO('people', 'enabler "Startup only" probability=0.1 basis="records (invented)"', 'modifier ignition probability=0.05 basis="study (invented)"'),
+      model: SCENARIO(
+        'people',
+        'enabler "Startup only" probability=0.1 basis="records (invented)"',
+        'modifier ignition probability=0.05 basis="study (invented)"',
+      ),
       rules: ['condition-credit-limit'],
       says: [{ messageId: 'condition-credit-limit/above-limit', data: { product: 0.1 * 0.05, limit: 100 } }],
     },
     {
       name: 'exactly 100 is allowed',
-      model: SCENARIO('people', 'enabler "Startup only" probability=0.1 basis="records (invented)"', 'modifier ignition probability=0.1 basis="study (invented)"'),
+      model: SCENARIO(
+        'people',
+        'enabler "Startup only" probability=0.1 basis="records (invented)"',
+        'modifier ignition probability=0.1 basis="study (invented)"',
+      ),
       rules: [],
     },
     {
@@ -421,7 +454,12 @@ scenario S-1 category=loc
       name: 'a SIL 2 SIF claiming PFD 0.005 with no basis is credited at the SIL 2 edge, 0.01',
       model: `sif SIF-1 sensors=LT-2 solver=SIS-1 finals=XV-1 sil=2 pfd=0.005\n${SCENARIO('loc', 'layer SIF-1')}`,
       rules: ['sif-claim-no-basis'],
-      says: [{ messageId: 'sif-claim-no-basis/at-band-edge', data: { function: 'SIF-1', quantity: 'PFD', claimed: 0.005, sil: 2, edge: 0.01 } }],
+      says: [
+        {
+          messageId: 'sif-claim-no-basis/at-band-edge',
+          data: { function: 'SIF-1', quantity: 'PFD', claimed: 0.005, sil: 2, edge: 0.01 },
+        },
+      ],
       allowed: { 'SIF-1': 0.01 },
     },
     {
@@ -490,11 +528,21 @@ describe('limit rule tables', () => {
           expect(f.key.startsWith(`${f.rule}:S-1`)).toBe(true);
           expect(f.paths).toHaveLength(f.parties.length);
         }
-        if (c.says) expect(out.findings.filter((f) => f.rule === rule).map((f) => ({ messageId: f.messageId, data: f.data }))).toEqual(c.says);
+        if (c.says)
+          expect(
+            out.findings.filter((f) => f.rule === rule).map((f) => ({ messageId: f.messageId, data: f.data })),
+          ).toEqual(c.says);
         if (c.verdicts) expect(verdicts(out)).toMatchObject(c.verdicts);
-        if (c.allowed) expect(Object.fromEntries(out.assessment.layers.map((l) => [l.function, l.allowedPfd]))).toMatchObject(c.allowed);
-        if (c.credited) expect(out.assessment.layers.filter((l) => l.credited).map((l) => l.function)).toEqual(c.credited);
-        if (c.creditedIfAccepted) expect(out.assessment.layers.filter((l) => l.creditedIfAccepted).map((l) => l.function)).toEqual(c.creditedIfAccepted);
+        if (c.allowed)
+          expect(Object.fromEntries(out.assessment.layers.map((l) => [l.function, l.allowedPfd]))).toMatchObject(
+            c.allowed,
+          );
+        if (c.credited)
+          expect(out.assessment.layers.filter((l) => l.credited).map((l) => l.function)).toEqual(c.credited);
+        if (c.creditedIfAccepted)
+          expect(out.assessment.layers.filter((l) => l.creditedIfAccepted).map((l) => l.function)).toEqual(
+            c.creditedIfAccepted,
+          );
       });
     });
   }
@@ -505,7 +553,11 @@ describe('the figures the limit rules change', () => {
     const out = assess(SCENARIO('loc', 'modifier ignition probability=0.5'));
     expect(out.assessment.mitigatedClaimed).toBeCloseTo(0.05, 15);
     expect(out.assessment.mitigatedAfter).toBe(0.1);
-    expect(out.assessment.modifiers[0]).toMatchObject({ allowed: false, allowedIfAccepted: false, finding: 'modifier-not-allowed:S-1:ignition' });
+    expect(out.assessment.modifiers[0]).toMatchObject({
+      allowed: false,
+      allowedIfAccepted: false,
+      finding: 'modifier-not-allowed:S-1:ignition',
+    });
   });
 
   it('applies a presence modifier above the limit only in the "if accepted" figure', () => {
@@ -519,13 +571,23 @@ describe('the figures the limit rules change', () => {
     const out = assess(SCENARIO('people', 'modifier presence probability=0.01'));
     expect(out.assessment.mitigatedAfter).toBe(0.1);
     expect(out.assessment.mitigatedIfAccepted).toBeCloseTo(1e-3, 15);
-    expect(out.assessment.modifiers[0]).toMatchObject({ allowed: false, allowedIfAccepted: true, finding: 'condition-no-basis:S-1:presence' });
+    expect(out.assessment.modifiers[0]).toMatchObject({
+      allowed: false,
+      allowedIfAccepted: true,
+      finding: 'condition-no-basis:S-1:presence',
+    });
   });
 
   it('takes the combined credit of enablers and modifiers down to the policy limit until accepted', () => {
     // Enabler 0.1 x ignition 0.05 = 0.005, a credit of 200 against the default limit of 100 (from memory):
     // after independence 0.1 x 0.01 = 1e-3 /yr; if accepted 0.1 x 0.005 = 5e-4 /yr.
-    const out = assess(SCENARIO('people', 'enabler "Startup only" probability=0.1 basis="records (invented)"', 'modifier ignition probability=0.05 basis="study (invented)"'));
+    const out = assess(
+      SCENARIO(
+        'people',
+        'enabler "Startup only" probability=0.1 basis="records (invented)"',
+        'modifier ignition probability=0.05 basis="study (invented)"',
+      ),
+    );
     expect(out.assessment.mitigatedAfter).toBeCloseTo(1e-3, 15);
     expect(out.assessment.mitigatedIfAccepted).toBeCloseTo(5e-4, 15);
     expect(out.findings.map((f) => f.key)).toEqual(['condition-credit-limit:S-1']);
@@ -536,7 +598,9 @@ describe('the figures the limit rules change', () => {
     expect(out.assessment.cause).toMatchObject({ frequency: { value: 0.01, origin: 'model' }, frequencyAfter: 0.1 });
     expect(out.assessment.mitigatedAfter).toBe(0.1);
     expect(out.assessment.mitigatedIfAccepted).toBe(0.01);
-    const accepted = assess(`scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.01\naccept "bpcs-cause-frequency-low:S-1:LIC-1" by="A. Reviewer" date=2026-01-01 reason="field data (invented)"\n`);
+    const accepted = assess(
+      `scenario S-1 category=loc\n  cause function=LIC-1 frequency=0.01\naccept "bpcs-cause-frequency-low:S-1:LIC-1" by="A. Reviewer" date=2026-01-01 reason="field data (invented)"\n`,
+    );
     expect(accepted.assessment.mitigatedAfter).toBe(0.01);
     expect(accepted.findings[0]!.accepted).toMatchObject({ by: 'A. Reviewer' });
   });
@@ -552,7 +616,13 @@ ${SCENARIO('loc', 'layer LSHH-3', 'layer LAH-2', 'modifier ignition probability=
       'modifier-not-allowed:S-1:ignition-2',
     ]);
     const same = out.findings.find((f) => f.rule === 'bpcs-same-controller')!;
-    expect(same).toMatchObject({ element: 'C2', parties: [{ role: 'layer', tag: 'LAH-2' }, { role: 'layer', tag: 'LSHH-3' }] });
+    expect(same).toMatchObject({
+      element: 'C2',
+      parties: [
+        { role: 'layer', tag: 'LAH-2' },
+        { role: 'layer', tag: 'LSHH-3' },
+      ],
+    });
   });
 });
 
@@ -561,19 +631,26 @@ describe('one fact, one finding', () => {
     const text = `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20 pfd=0.1
 trip LSHH-3 sensors=LT-3 solver=C2 finals=MS-1 pfd=0.1
 ${SCENARIO('loc', 'layer LAH-2', 'layer LSHH-3')}`;
-    const theirs = independenceFinding('S-1', 'shared-logic-solver', [layer('LSHH-3'), layer('LAH-2')], { element: 'C2' });
+    const theirs = independenceFinding('S-1', 'shared-logic-solver', [layer('LSHH-3'), layer('LAH-2')], {
+      element: 'C2',
+    });
     const out = assess(text, [theirs]);
     expect(out.findings).toEqual([]);
     expect(out.assessment.layers.filter((l) => l.credited)).toHaveLength(1);
     // Reported at another element, the pair is still this rule's to report.
-    const elsewhere = independenceFinding('S-1', 'shared-console', [layer('LSHH-3'), layer('LAH-2')], { element: 'CON-1', severity: 'note' });
+    const elsewhere = independenceFinding('S-1', 'shared-console', [layer('LSHH-3'), layer('LAH-2')], {
+      element: 'CON-1',
+      severity: 'note',
+    });
     expect(assess(text, [elsewhere]).findings.map((f) => f.key)).toEqual(['bpcs-same-controller:S-1:LAH-2:LSHH-3']);
   });
 });
 
 describe('the rule set in force', () => {
   it('lists every rule with its default, and the model override with its reason', () => {
-    const model = load('rule alarm-response-time severity=needs-justification reason="site procedure MF-OP-3 (invented)"\n');
+    const model = load(
+      'rule alarm-response-time severity=needs-justification reason="site procedure MF-OP-3 (invented)"\n',
+    );
     const rules = assessRulesInForce(model);
     expect(rules.map((r) => r.id)).toEqual(ASSESS_RULES.map((r) => r.id));
     expect(rules.find((r) => r.id === 'alarm-response-time')).toMatchObject({

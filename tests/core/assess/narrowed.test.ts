@@ -15,7 +15,11 @@ const ACCEPT = `accept "cause-narrowed:S-1:LIC-1:LV-1" by="A. Reviewer (invented
 
 function figures(text: string) {
   const a = analyze(load(text)).assessments[0]!;
-  return { after: a.mitigatedAfter, ifAccepted: a.mitigatedIfAccepted, credited: a.layers.filter((l) => l.credited).map((l) => l.function) };
+  return {
+    after: a.mitigatedAfter,
+    ifAccepted: a.mitigatedIfAccepted,
+    credited: a.layers.filter((l) => l.credited).map((l) => l.function),
+  };
 }
 
 describe('a narrowed cause', () => {

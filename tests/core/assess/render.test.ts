@@ -47,7 +47,9 @@ describe('renderAssessmentText', () => {
   });
 
   it('states the "at most" convention and its relations', () => {
-    const text = renderAssessmentText(assess(DEMO_LIKE.replace('category=people', 'category=people-at-most'), VOIDING).assessment);
+    const text = renderAssessmentText(
+      assess(DEMO_LIKE.replace('category=people', 'category=people-at-most'), VOIDING).assessment,
+    );
     expect(text[1]).toContain('the mitigated frequency may equal it');
     expect(text.find((l) => l.includes('required'))).toContain('PFD <= 2.0e-3, RRF >= 500: SIL 2');
   });
@@ -56,7 +58,9 @@ describe('renderAssessmentText', () => {
     const lines = renderAssessmentText(assess(DEMO_LIKE).assessment);
     expect(lines).toContain('               after independence         2.5e-5 /yr  meets the criterion');
     // Required PFD = 1e-4 / (0.1 x 0.5 x 0.1) = 0.02: SIL 1, verified to 0.02.
-    expect(lines.find((l) => l.includes('required'))).toBe('  required     SIF-1: PFD < 0.02, RRF > 50: SIL 1 (band 0.01 to 0.1); verify PFD < 0.02');
+    expect(lines.find((l) => l.includes('required'))).toBe(
+      '  required     SIF-1: PFD < 0.02, RRF > 50: SIL 1 (band 0.01 to 0.1); verify PFD < 0.02',
+    );
   });
 
   it('marks defaults, shows barred modifiers and open findings, and lists alternatives', () => {
@@ -71,20 +75,30 @@ scenario S-2 category=loc
   layer PSV-IPL
   layer LAH-2
 `,
-        [independenceFinding('S-2', 'shared-console', [layer('PSV-IPL'), layer('LAH-2')], { severity: 'needs-justification' })],
+        [
+          independenceFinding('S-2', 'shared-console', [layer('PSV-IPL'), layer('LAH-2')], {
+            severity: 'needs-justification',
+          }),
+        ],
       ).assessment,
     );
     expect(lines).toContain('  modifier     ignition 0.5, not applied (modifier-not-allowed:S-2:ignition)');
     expect(lines.find((l) => l.includes('PSV-IPL  device'))).toMatch(/0\.01 \(default\)\s+0\.01\s+yes\s+independent/);
     expect(lines.find((l) => l.includes('LAH-2  '))).toMatch(/if accepted\s+not-selected/);
-    expect(lines).toContain('                 - shared-console with PSV-IPL: not credited together, open until accepted');
+    expect(lines).toContain(
+      '                 - shared-console with PSV-IPL: not credited together, open until accepted',
+    );
     expect(lines).toContain('  alternative  LAH-2: PFD product 0.1, mitigated 0.01 /yr');
   });
 
   it('says so when no layer is claimed, and sizes a new SIF', () => {
-    const lines = renderAssessmentText(assess('scenario S-3 category=people\n  cause function=LIC-1 frequency=0.1\n').assessment);
+    const lines = renderAssessmentText(
+      assess('scenario S-3 category=people\n  cause function=LIC-1 frequency=0.1\n').assessment,
+    );
     expect(lines).toContain('  layers       none claimed');
-    expect(lines.find((l) => l.includes('required'))).toBe('  required     a new SIF: PFD < 1.0e-3, RRF > 1,000: SIL 3 (band 1.0e-4 to 1.0e-3)');
+    expect(lines.find((l) => l.includes('required'))).toBe(
+      '  required     a new SIF: PFD < 1.0e-3, RRF > 1,000: SIL 3 (band 1.0e-4 to 1.0e-3)',
+    );
   });
 
   // Issue 9, item 9: the words must follow the verdict under the criterion's edge convention and the tolerance,
@@ -101,13 +115,17 @@ scenario S-2 category=loc
     // Under "at most" the same figure meets the criterion, and then no risk reduction is asked of the SIF.
     const atMost = assess(text.replace('category=people', 'category=people-at-most'), voided).assessment;
     expect(atMost.meetsAfter).toBe(true);
-    expect(renderAssessmentText(atMost).find((l) => l.includes('required'))).toContain('no risk reduction needed from it');
+    expect(renderAssessmentText(atMost).find((l) => l.includes('required'))).toContain(
+      'no risk reduction needed from it',
+    );
   });
 
   it('reads 1e-3 x 0.1 as exactly the tolerable 1e-4 (floating point), so "at most" asks nothing of the SIF', () => {
     // 0.001 * 0.1 = 1.0000000000000002e-4 in doubles: the same figure as 1e-4 within the tolerance.
     const text = `alarm LAH-2 sensors=LT-2 raised-in=C2 operator=OP-1 minutes=20\nsif SIF-1 sensors=LT-3 solver=SIS-1 finals=XV-1 sil=1\nscenario S-1 category=people-at-most\n  cause external="Rare upset" frequency=1e-3 basis="invented"\n  layer SIF-1\n  layer LAH-2 pfd=0.1 basis="20 min"\n`;
-    const a = assess(text, [independenceFinding('S-1', 'shared-connection', [cause(), layer('SIF-1')], { element: 'N-3' })]).assessment;
+    const a = assess(text, [
+      independenceFinding('S-1', 'shared-connection', [cause(), layer('SIF-1')], { element: 'N-3' }),
+    ]).assessment;
     expect(a.sif!.noReductionNeeded).toBe(true);
     expect(renderAssessmentText(a).find((l) => l.includes('required'))).toContain('no risk reduction needed from it');
   });
@@ -120,7 +138,10 @@ scenario S-2 category=loc
     }
     const table = lines.filter((l) => / (sif|alarm|kind) /.test(l));
     // The claimed PFD is the first figure after the `acts` column (5.0e-3 or 0.1: either number form).
-    const column = (l: string) => (l.includes('kind') ? l.indexOf('claimed') : /(?:the SIF|before\*)\s+/.exec(l)!.index + /(?:the SIF|before\*)\s+/.exec(l)![0].length);
+    const column = (l: string) =>
+      l.includes('kind')
+        ? l.indexOf('claimed')
+        : /(?:the SIF|before\*)\s+/.exec(l)!.index + /(?:the SIF|before\*)\s+/.exec(l)![0].length;
     expect(new Set(table.map(column)).size).toBe(1);
   });
 });

@@ -32,7 +32,13 @@ describe('reading .bulk', () => {
     expect(model.site).toEqual({ name: 'Test site' });
     expect(model.categories).toEqual([{ id: 'c1', tolerable: 1e-4, harm: 'people' }]);
     expect(model.elements[2]).toEqual({ kind: 'transmitter', tag: 'LT-1', variable: 'level', mountedOn: ['N-1'] });
-    expect(model.functions[1]).toMatchObject({ kind: 'sif', tag: 'SIF-1', sensors: ['LT-1', 'LT-2'], sensorVoting: '1oo2', pfd: 0.01 });
+    expect(model.functions[1]).toMatchObject({
+      kind: 'sif',
+      tag: 'SIF-1',
+      sensors: ['LT-1', 'LT-2'],
+      sensorVoting: '1oo2',
+      pfd: 0.01,
+    });
     expect(model.scenarios[0]).toEqual({
       id: 'SC-1',
       category: 'c1',
@@ -42,12 +48,21 @@ describe('reading .bulk', () => {
   });
 
   it('continues a statement on indented key=value lines', () => {
-    const model = loadOk(BASE.replace('nozzle N-1 mounted-on=V-1', 'nozzle N-1\n  mounted-on=V-1\n  title="Bridle nozzle"'));
+    const model = loadOk(
+      BASE.replace('nozzle N-1 mounted-on=V-1', 'nozzle N-1\n  mounted-on=V-1\n  title="Bridle nozzle"'),
+    );
     expect(model.elements[1]).toEqual({ kind: 'nozzle', tag: 'N-1', title: 'Bridle nozzle', mountedOn: ['V-1'] });
   });
 
   it('reads the number forms of the language', () => {
-    for (const [written, value] of [['1e-4', 1e-4], ['0.1', 0.1], ['.5', 0.5], ['2.5E-3', 2.5e-3], ['+1', 1], ['1e+0', 1]] as const) {
+    for (const [written, value] of [
+      ['1e-4', 1e-4],
+      ['0.1', 0.1],
+      ['.5', 0.5],
+      ['2.5E-3', 2.5e-3],
+      ['+1', 1],
+      ['1e+0', 1],
+    ] as const) {
       const model = loadOk(BASE.replace('pfd=0.01\nscenario', `pfd=${written}\nscenario`));
       expect(model.functions[1]!.pfd).toBe(value);
     }
@@ -95,7 +110,8 @@ describe('spans', () => {
   });
 
   it('records spans for JSON values and keys too', () => {
-    const json = '{\n  "site": { "name": "J" },\n  "categories": [],\n  "elements": [ { "kind": "vessel", "tag": "V-1" } ],\n  "functions": [],\n  "scenarios": []\n}\n';
+    const json =
+      '{\n  "site": { "name": "J" },\n  "categories": [],\n  "elements": [ { "kind": "vessel", "tag": "V-1" } ],\n  "functions": [],\n  "scenarios": []\n}\n';
     const result = loadModelText('t.json', json);
     expect(result.diagnostics).toEqual([]);
     expect(result.spans.get('elements.0.tag')).toEqual({ line: 4, column: 44, length: 5 });
@@ -182,7 +198,14 @@ scenario SC-1 category=c1 # scenario trailing
   });
 
   it('orders attributes by the schema, whatever order they were written in', () => {
-    const a = printBulk(loadOk(BASE.replace('transmitter LT-1 variable=level mounted-on=N-1', 'transmitter LT-1 mounted-on=N-1 variable=level')));
+    const a = printBulk(
+      loadOk(
+        BASE.replace(
+          'transmitter LT-1 variable=level mounted-on=N-1',
+          'transmitter LT-1 mounted-on=N-1 variable=level',
+        ),
+      ),
+    );
     expect(a).toContain('transmitter LT-1 variable=level mounted-on=N-1\n');
   });
 

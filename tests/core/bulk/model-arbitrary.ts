@@ -42,8 +42,20 @@ const loneSurrogate = fc.integer({ min: 0xd800, max: 0xdfff }).map((c) => String
 /** Free text: anything at all, including what the printer must escape. */
 export const text = fc.oneof(
   fc.string({ unit: 'binary', maxLength: 16 }),
-  fc.string({ unit: fc.constantFrom('"', '\\', '#', ',', '=', ' ', '\t', '\n', '\r', '\u0000', 'é', '🚧', '日', 'a', '\u2028'), maxLength: 12 }),
-  fc.constantFrom('', '"', '\\', 'a "quoted" \\ back\\slash', '#not a comment', 'x=y, z', '\\n is not a line break', 'ünïcödé 🚧 日本'),
+  fc.string({
+    unit: fc.constantFrom('"', '\\', '#', ',', '=', ' ', '\t', '\n', '\r', '\u0000', 'é', '🚧', '日', 'a', '\u2028'),
+    maxLength: 12,
+  }),
+  fc.constantFrom(
+    '',
+    '"',
+    '\\',
+    'a "quoted" \\ back\\slash',
+    '#not a comment',
+    'x=y, z',
+    '\\n is not a line break',
+    'ünïcödé 🚧 日本',
+  ),
   loneSurrogate,
 );
 // eslint-disable-next-line no-control-regex -- matching control characters is the point of this pattern
@@ -56,13 +68,21 @@ export const comment = fc.oneof(
 const comments = fc.option(fc.array(comment, { minLength: 1, maxLength: 3 }), { nil: undefined });
 const trailing = fc.option(comment, { nil: undefined });
 
-const probability = fc.oneof(fc.constantFrom(1e-9, 1e-4, 0.001, 0.01, 0.1, 0.5, 1), fc.double({ min: Number.MIN_VALUE, max: 1, noNaN: true }));
+const probability = fc.oneof(
+  fc.constantFrom(1e-9, 1e-4, 0.001, 0.01, 0.1, 0.5, 1),
+  fc.double({ min: Number.MIN_VALUE, max: 1, noNaN: true }),
+);
 const positive = fc.oneof(
   fc.constantFrom(1e-9, 1e-5, 0.1, 1, 10, 1e21),
   fc.double({ min: Number.MIN_VALUE, max: 1e300, noNaN: true, noDefaultInfinity: true }),
 );
 const prefix = fc.stringMatching(/^[A-Za-z0-9][A-Za-z0-9_\-/+:]{0,12}$/);
-const date = fc.record({ y: fc.integer({ min: 1990, max: 2099 }), m: fc.integer({ min: 1, max: 12 }), d: fc.integer({ min: 1, max: 28 }) })
+const date = fc
+  .record({
+    y: fc.integer({ min: 1990, max: 2099 }),
+    m: fc.integer({ min: 1, max: 12 }),
+    d: fc.integer({ min: 1, max: 28 }),
+  })
   .map(({ y, m, d }) => `${y}-${String(m).padStart(2, '0')}-${String(d).padStart(2, '0')}`);
 
 const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined });
@@ -70,7 +90,19 @@ const optional = <T>(arb: fc.Arbitrary<T>) => fc.option(arb, { nil: undefined })
 // Kinds that functions need come up more often, so most models have loops, SIFs, alarms and devices.
 const elementKind = fc.oneof(
   { arbitrary: fc.constantFrom(...ELEMENT_KINDS), weight: 3 },
-  { arbitrary: fc.constantFrom('transmitter', 'controller', 'logic-solver', 'shutdown-valve', 'solenoid', 'operator', 'console', 'relief-valve'), weight: 2 },
+  {
+    arbitrary: fc.constantFrom(
+      'transmitter',
+      'controller',
+      'logic-solver',
+      'shutdown-valve',
+      'solenoid',
+      'operator',
+      'console',
+      'relief-valve',
+    ),
+    weight: 2,
+  },
 );
 
 const elementSeed = fc.record({
@@ -111,7 +143,14 @@ const functionSeed = fc.record({
   trailing,
 });
 
-const claim = fc.record({ pick: fc.nat(), pfd: optional(probability), basis: optional(text), acts: optional(fc.constantFrom(...ACTS)), comments, trailing });
+const claim = fc.record({
+  pick: fc.nat(),
+  pfd: optional(probability),
+  basis: optional(text),
+  acts: optional(fc.constantFrom(...ACTS)),
+  comments,
+  trailing,
+});
 const scenarioSeed = fc.record({
   prefix,
   title: optional(text),
@@ -120,12 +159,34 @@ const scenarioSeed = fc.record({
   causePick: fc.nat(),
   narrow: fc.boolean(),
   external: text,
-  frequency: fc.oneof(positive.map((f) => ({ frequency: f })), fc.constantFrom(...TYPICAL_CAUSES).map((t) => (PIPING_ROWS.has(t) ? { typical: t, pipeMetres: 150 } : { typical: t }))),
+  frequency: fc.oneof(
+    positive.map((f) => ({ frequency: f })),
+    fc
+      .constantFrom(...TYPICAL_CAUSES)
+      .map((t) => (PIPING_ROWS.has(t) ? { typical: t, pipeMetres: 150 } : { typical: t })),
+  ),
   causeBasis: optional(text),
   causeComments: comments,
   causeTrailing: trailing,
-  enablers: optional(fc.array(fc.record({ title: text, probability, basis: optional(text), comments, trailing }), { minLength: 1, maxLength: 2 })),
-  modifiers: optional(fc.array(fc.record({ kind: fc.constantFrom(...MODIFIER_KINDS), title: optional(text), probability, basis: optional(text), comments, trailing }), { minLength: 1, maxLength: 2 })),
+  enablers: optional(
+    fc.array(fc.record({ title: text, probability, basis: optional(text), comments, trailing }), {
+      minLength: 1,
+      maxLength: 2,
+    }),
+  ),
+  modifiers: optional(
+    fc.array(
+      fc.record({
+        kind: fc.constantFrom(...MODIFIER_KINDS),
+        title: optional(text),
+        probability,
+        basis: optional(text),
+        comments,
+        trailing,
+      }),
+      { minLength: 1, maxLength: 2 },
+    ),
+  ),
   layers: fc.array(claim, { maxLength: 3 }),
   comments,
   trailing,
@@ -143,7 +204,9 @@ const categorySeed = fc.record({
 });
 
 const pick = <T>(list: readonly T[], n: number): T | undefined => (list.length ? list[n % list.length] : undefined);
-const pickMany = <T>(list: readonly T[], picks: readonly number[]): T[] => [...new Set(picks.map((p) => list[p % list.length]!))];
+const pickMany = <T>(list: readonly T[], picks: readonly number[]): T[] => [
+  ...new Set(picks.map((p) => list[p % list.length]!)),
+];
 
 function buildElements(seeds: Seed<typeof elementSeed>[]): Element[] {
   const out: Element[] = [];
@@ -160,7 +223,9 @@ function buildElements(seeds: Seed<typeof elementSeed>[]): Element[] {
       const allowed = LINK_TARGETS[link][group];
       if (!allowed || !(s.linkMask & (1 << k))) return;
       const kinds = SUPPORT_LINK_KINDS[link];
-      const candidates = out.filter((e) => allowed.includes(groupOf(e.kind)) && (!kinds || kinds.includes(e.kind))).map((e) => e.tag);
+      const candidates = out
+        .filter((e) => allowed.includes(groupOf(e.kind)) && (!kinds || kinds.includes(e.kind)))
+        .map((e) => e.tag);
       if (candidates.length) item[link] = pickMany(candidates, s.picks);
     });
     Object.assign(item, { comments: s.comments, trailingComment: s.trailing });
@@ -190,7 +255,12 @@ function buildFunctions(seeds: Seed<typeof functionSeed>[], elements: Element[])
     const claimed = { pfd: s.pfd, pfdBasis: s.pfdBasis };
     const tail = { comments: s.comments, trailingComment: s.trailing };
     let item: Loose | undefined;
-    if ((s.kind === 'loop' || s.kind === 'sif' || s.kind === 'trip') && sensors.length && solvers.length && finals.length) {
+    if (
+      (s.kind === 'loop' || s.kind === 'sif' || s.kind === 'trip') &&
+      sensors.length &&
+      solvers.length &&
+      finals.length
+    ) {
       const ss = pickMany(sensors, s.sensorPicks);
       const ff = pickMany(finals, s.finalPicks);
       item = { kind: s.kind, ...common, sensors: ss, solver: pick(solvers, s.pick), finals: ff };
@@ -218,16 +288,33 @@ function buildFunctions(seeds: Seed<typeof functionSeed>[], elements: Element[])
         ...tail,
       };
     } else if (s.kind === 'device' && devices.length) {
-      item = { kind: 'device', ...common, device: pick(devices, s.pick), creditBasis: s.creditBasis, ...claimed, ...tail };
+      item = {
+        kind: 'device',
+        ...common,
+        device: pick(devices, s.pick),
+        creditBasis: s.creditBasis,
+        ...claimed,
+        ...tail,
+      };
     }
     if (item) out.push(compact(item) as PlantFunction);
   });
   return out;
 }
 
-function buildScenarios(seeds: Seed<typeof scenarioSeed>[], categories: string[], elements: Element[], functions: PlantFunction[]): Scenario[] {
+function buildScenarios(
+  seeds: Seed<typeof scenarioSeed>[],
+  categories: string[],
+  elements: Element[],
+  functions: PlantFunction[],
+): Scenario[] {
   return seeds.map((s, i) => {
-    const cause: Loose = { ...s.frequency, basis: s.causeBasis, comments: s.causeComments, trailingComment: s.causeTrailing };
+    const cause: Loose = {
+      ...s.frequency,
+      basis: s.causeBasis,
+      comments: s.causeComments,
+      trailingComment: s.causeTrailing,
+    };
     let causeFunction: string | undefined;
     if (s.causeKind === 'function' && functions.length) {
       causeFunction = pick(functions, s.causePick)!.tag;
@@ -241,7 +328,14 @@ function buildScenarios(seeds: Seed<typeof scenarioSeed>[], categories: string[]
     const candidates = functions.map((f) => f.tag).filter((t) => t !== causeFunction);
     const layers = candidates.length
       ? [...new Map(s.layers.map((l) => [pick(candidates, l.pick)!, l])).entries()].map(([fn, l]) =>
-          compact({ function: fn, pfd: l.pfd, basis: l.basis, acts: l.acts, comments: l.comments, trailingComment: l.trailing }),
+          compact({
+            function: fn,
+            pfd: l.pfd,
+            basis: l.basis,
+            acts: l.acts,
+            comments: l.comments,
+            trailingComment: l.trailing,
+          }),
         )
       : [];
     return compact({
@@ -249,8 +343,25 @@ function buildScenarios(seeds: Seed<typeof scenarioSeed>[], categories: string[]
       title: s.title,
       category: pick(categories, s.categoryPick)!,
       cause: compact(cause),
-      enablers: s.enablers?.map((e) => compact({ title: e.title, probability: e.probability, basis: e.basis, comments: e.comments, trailingComment: e.trailing })),
-      modifiers: s.modifiers?.map((m) => compact({ kind: m.kind, title: m.title, probability: m.probability, basis: m.basis, comments: m.comments, trailingComment: m.trailing })),
+      enablers: s.enablers?.map((e) =>
+        compact({
+          title: e.title,
+          probability: e.probability,
+          basis: e.basis,
+          comments: e.comments,
+          trailingComment: e.trailing,
+        }),
+      ),
+      modifiers: s.modifiers?.map((m) =>
+        compact({
+          kind: m.kind,
+          title: m.title,
+          probability: m.probability,
+          basis: m.basis,
+          comments: m.comments,
+          trailingComment: m.trailing,
+        }),
+      ),
       layers: layers.length ? layers : undefined,
       comments: s.comments,
       trailingComment: s.trailing,
@@ -263,7 +374,9 @@ export const validModel: fc.Arbitrary<Model> = fc
     site: fc.record({ name: text, description: optional(text), comments, trailing }),
     policy: optional(
       fc.record({
-        sameControllerLayers: optional(fc.constantFrom('one-credit', 'both', 'none') as fc.Arbitrary<'one-credit' | 'both' | 'none'>),
+        sameControllerLayers: optional(
+          fc.constantFrom('one-credit', 'both', 'none') as fc.Arbitrary<'one-credit' | 'both' | 'none'>,
+        ),
         sharedSolver: optional(fc.constantFrom('void', 'allow') as fc.Arbitrary<'void' | 'allow'>),
         minResponseMinutes: optional(positive),
         presenceLimit: optional(probability),
@@ -273,20 +386,46 @@ export const validModel: fc.Arbitrary<Model> = fc
       }),
     ),
     categories: fc.array(categorySeed, { minLength: 1, maxLength: 3 }),
-    rules: optional(fc.array(fc.record({ id: fc.constantFrom(...RULE_IDS), severity: fc.constantFrom(...SEVERITIES), reason: optional(text), comments, trailing }), { minLength: 1, maxLength: 2 })),
+    rules: optional(
+      fc.array(
+        fc.record({
+          id: fc.constantFrom(...RULE_IDS),
+          severity: fc.constantFrom(...SEVERITIES),
+          reason: optional(text),
+          comments,
+          trailing,
+        }),
+        { minLength: 1, maxLength: 2 },
+      ),
+    ),
     elements: fc.array(elementSeed, { minLength: 8, maxLength: 30 }),
     functions: fc.array(functionSeed, { minLength: 2, maxLength: 8 }),
     scenarios: fc.array(scenarioSeed, { maxLength: 4 }),
-    justifications: optional(fc.array(fc.record({ finding: text, by: text, date, reason: text, comments, trailing }), { minLength: 1, maxLength: 2 })),
+    justifications: optional(
+      fc.array(fc.record({ finding: text, by: text, date, reason: text, comments, trailing }), {
+        minLength: 1,
+        maxLength: 2,
+      }),
+    ),
     endComments: comments,
   })
   .map((seed): Model => {
     const elements = buildElements(seed.elements);
     const functions = buildFunctions(seed.functions, elements);
     const categories = seed.categories.map((c, i) =>
-      compact({ id: `${c.prefix}.C${i}`, title: c.title, tolerable: c.tolerable, harm: c.harm, edge: c.edge, basis: c.basis, comments: c.comments, trailingComment: c.trailing }),
+      compact({
+        id: `${c.prefix}.C${i}`,
+        title: c.title,
+        tolerable: c.tolerable,
+        harm: c.harm,
+        edge: c.edge,
+        basis: c.basis,
+        comments: c.comments,
+        trailingComment: c.trailing,
+      }),
     );
-    const trailingAs = <T extends { trailing?: string | undefined }>({ trailing: t, ...rest }: T) => compact({ ...rest, trailingComment: t });
+    const trailingAs = <T extends { trailing?: string | undefined }>({ trailing: t, ...rest }: T) =>
+      compact({ ...rest, trailingComment: t });
     return compact({
       site: trailingAs(seed.site),
       policy: seed.policy && trailingAs(seed.policy),
@@ -294,7 +433,12 @@ export const validModel: fc.Arbitrary<Model> = fc
       rules: seed.rules?.map(trailingAs),
       elements,
       functions,
-      scenarios: buildScenarios(seed.scenarios, categories.map((c) => c.id), elements, functions),
+      scenarios: buildScenarios(
+        seed.scenarios,
+        categories.map((c) => c.id),
+        elements,
+        functions,
+      ),
       justifications: seed.justifications?.map(trailingAs),
       endComments: seed.endComments,
     }) as unknown as Model;

@@ -32,8 +32,11 @@ describe('spans on demand', () => {
   });
 
   // `kind` is the keyword of an element or function statement, comments are not values: neither has a span.
-  const written = leaves({ elements: model.elements, functions: model.functions, scenarios: model.scenarios, categories: model.categories }, [], [])
-    .filter(([path]) => !/\.kind$|comments|trailingComment/.test(path) || /modifiers\.\d+\.kind$/.test(path));
+  const written = leaves(
+    { elements: model.elements, functions: model.functions, scenarios: model.scenarios, categories: model.categories },
+    [],
+    [],
+  ).filter(([path]) => !/\.kind$|comments|trailingComment/.test(path) || /modifiers\.\d+\.kind$/.test(path));
 
   it('point every written value of the demo at its own text', () => {
     expect(written.length).toBeGreaterThan(400);
@@ -57,7 +60,19 @@ describe('spans on demand', () => {
   });
 
   it('give nothing for a path that names nothing', () => {
-    for (const path of ['elements', 'elements.01', 'elements.1e0', `elements.${model.elements.length}`, 'elements.0.nope', 'elements.0.tag.0', 'elements.0.kind', 'site.name#key', 'scenarios.0.layers', 'scenarios.0.layers.9.function', 'nothing.0']) {
+    for (const path of [
+      'elements',
+      'elements.01',
+      'elements.1e0',
+      `elements.${model.elements.length}`,
+      'elements.0.nope',
+      'elements.0.tag.0',
+      'elements.0.kind',
+      'site.name#key',
+      'scenarios.0.layers',
+      'scenarios.0.layers.9.function',
+      'nothing.0',
+    ]) {
       expect(loaded.spans.get(path), path).toBeUndefined();
     }
   });

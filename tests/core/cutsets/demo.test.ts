@@ -8,7 +8,8 @@ function demo(name: string): Model {
   const loaded = loadModelText(name, readFileSync(new URL(`../../../fixtures/demo/${name}`, import.meta.url)));
   return loaded.model!;
 }
-const setsOf = (model: Model, scenario: string, maxOrder = 2) => modelCutSets(model, { maxOrder, findings: analyze(model).findings }).find((s) => s.scenario === scenario)!;
+const setsOf = (model: Model, scenario: string, maxOrder = 2) =>
+  modelCutSets(model, { maxOrder, findings: analyze(model).findings }).find((s) => s.scenario === scenario)!;
 const names = (s: ReturnType<typeof setsOf>) => s.cutSets.map((c) => c.elements.join('+'));
 
 describe('cut sets of demo revision A', () => {

@@ -4,7 +4,14 @@
 // defeat every layer (a layer: its solver's reach, or N-M+1 voted channels' reach), then keeps the
 // minimal sets. Failure direction is kept out of these sites (valves fail in place, no drives-to).
 import { describe, expect, it } from 'vitest';
-import { buildPlantGraph, loadModelText, minimalSets, modelCutSets, Tracer, type Model } from '../../../packages/core/src/index.ts';
+import {
+  buildPlantGraph,
+  loadModelText,
+  minimalSets,
+  modelCutSets,
+  Tracer,
+  type Model,
+} from '../../../packages/core/src/index.ts';
 import { generatedSite } from '../../helpers/generated-site.ts';
 
 /** Minimal sets of at most two elements whose failure starts S-1 and defeats each layer, by trying them all. */
@@ -25,15 +32,26 @@ function bruteForceCutSets(model: Model): string[][] {
     return (
       started &&
       (scenario.layers ?? []).every((claim) => {
-        const f = fns.get(claim.function) as { solver: string; sensors: string[]; finals: string[]; sensorVoting?: string; finalVoting?: string };
-        return hit(f.solver, failed) || defeatedGroup(f.sensors, f.sensorVoting, failed) || defeatedGroup(f.finals, f.finalVoting, failed);
+        const f = fns.get(claim.function) as {
+          solver: string;
+          sensors: string[];
+          finals: string[];
+          sensorVoting?: string;
+          finalVoting?: string;
+        };
+        return (
+          hit(f.solver, failed) ||
+          defeatedGroup(f.sensors, f.sensorVoting, failed) ||
+          defeatedGroup(f.finals, f.finalVoting, failed)
+        );
       })
     );
   };
   const found: string[][] = [];
   for (let i = 0; i < basic.length; i++) {
     if (occurs(new Set([basic[i]!]))) found.push([basic[i]!]);
-    for (let j = i + 1; j < basic.length; j++) if (occurs(new Set([basic[i]!, basic[j]!]))) found.push([basic[i]!, basic[j]!]);
+    for (let j = i + 1; j < basic.length; j++)
+      if (occurs(new Set([basic[i]!, basic[j]!]))) found.push([basic[i]!, basic[j]!]);
   }
   return minimalSets(found);
 }
@@ -48,7 +66,8 @@ describe('cut sets of generated small sites against brute force', () => {
       if (!loaded.model) throw new Error(`seed ${seed}: ${loaded.diagnostics.map((d) => d.message).join('; ')}`);
       const fast = modelCutSets(loaded.model, { maxOrder: 2 })[0]!.cutSets.map((c) => c.elements);
       const slow = bruteForceCutSets(loaded.model);
-      if (JSON.stringify(fast) !== JSON.stringify(slow)) mismatches.push(`seed ${seed}: ${JSON.stringify(fast)} vs ${JSON.stringify(slow)}`);
+      if (JSON.stringify(fast) !== JSON.stringify(slow))
+        mismatches.push(`seed ${seed}: ${JSON.stringify(fast)} vs ${JSON.stringify(slow)}`);
       singles += slow.filter((s) => s.length === 1).length;
       pairs += slow.filter((s) => s.length === 2).length;
     }

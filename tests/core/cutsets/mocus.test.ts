@@ -1,7 +1,17 @@
 // MOCUS against published minimal cut sets and against brute force: every subset of the basic events up
 // to the order, kept when the top event occurs and no smaller kept set is inside it.
 import { describe, expect, it } from 'vitest';
-import { andGate, atLeastGate, basicEvents, event, minimalCutSets, minimalSets, occurs, orGate, type FaultTree } from '../../../packages/core/src/cutsets/index.ts';
+import {
+  andGate,
+  atLeastGate,
+  basicEvents,
+  event,
+  minimalCutSets,
+  minimalSets,
+  occurs,
+  orGate,
+  type FaultTree,
+} from '../../../packages/core/src/cutsets/index.ts';
 import { Random } from '../../helpers/random.ts';
 
 const e = event;
@@ -38,7 +48,11 @@ describe('MOCUS on textbook fault trees', () => {
   it('fails a 2oo3 group on any two channels and a 1oo2 group only on both', () => {
     // IEC 61508-6:2010 Annex B, MooN architectures (from memory): a MooN group acts while M of its N
     // channels work, so N-M+1 dangerous channel failures defeat it.
-    expect(minimalCutSets(atLeastGate(2, [e('A'), e('B'), e('C')]))).toEqual([['A', 'B'], ['A', 'C'], ['B', 'C']]);
+    expect(minimalCutSets(atLeastGate(2, [e('A'), e('B'), e('C')]))).toEqual([
+      ['A', 'B'],
+      ['A', 'C'],
+      ['B', 'C'],
+    ]);
     expect(minimalCutSets(atLeastGate(2, [e('A'), e('B')]))).toEqual([['A', 'B']]);
   });
 
@@ -57,7 +71,8 @@ describe('MOCUS on textbook fault trees', () => {
 /** A random coherent tree in the shape of a scenario: cause OR, layers as ORs with voted channel groups. */
 function randomTree(random: Random, events: string[], depth = 0): FaultTree {
   const pickEvents = (n: number) => random.shuffle(events).slice(0, Math.max(1, n)).map(e);
-  if (depth >= 2 || random.next() < 0.3) return random.next() < 0.5 ? e(random.pick(events)) : orGate(pickEvents(1 + random.int(3)));
+  if (depth >= 2 || random.next() < 0.3)
+    return random.next() < 0.5 ? e(random.pick(events)) : orGate(pickEvents(1 + random.int(3)));
   const children = Array.from({ length: 1 + random.int(3) }, () => randomTree(random, events, depth + 1));
   const kind = random.int(3);
   if (kind === 0) return orGate(children);

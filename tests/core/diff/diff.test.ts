@@ -4,7 +4,14 @@
 // reordering the statements of either side changes nothing.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { diffRevisions, isEmptyDiff, loadModelText, madeWorse, type Model, type RevisionDiff } from '../../../packages/core/src/index.ts';
+import {
+  diffRevisions,
+  isEmptyDiff,
+  loadModelText,
+  madeWorse,
+  type Model,
+  type RevisionDiff,
+} from '../../../packages/core/src/index.ts';
 import { generatedSite } from '../../helpers/generated-site.ts';
 import { Random } from '../../helpers/random.ts';
 
@@ -24,7 +31,9 @@ describe('the demo revisions A -> B, as a reviewer lists them by hand', () => {
   it('lists the elements revision B added and the attributes it changed', () => {
     expect(d.elements.added.map((e) => e.id)).toEqual(['BR-102', 'JB-102', 'N-102A', 'N-102B', 'TW-303']);
     expect(d.elements.removed).toEqual([]);
-    expect(d.elements.changed.flatMap((e) => e.changes.map((c) => `${e.id} ${c.attribute}: ${c.old} -> ${c.new}`))).toEqual([
+    expect(
+      d.elements.changed.flatMap((e) => e.changes.map((c) => `${e.id} ${c.attribute}: ${c.old} -> ${c.new}`)),
+    ).toEqual([
       'LT-102 housed-in: JB-101 -> JB-102',
       'LT-102 mounted-on: BR-101 -> BR-102',
       'LT-103 signal-via: AI-1-03 -> AI-2-01',
@@ -43,7 +52,12 @@ describe('the demo revisions A -> B, as a reviewer lists them by hand', () => {
       'SIF-201 pfh-basis',
       'SIF-301 pfd-basis',
     ]);
-    expect(d.settings.map((c) => c.attribute)).toEqual(['site based-on', 'site description', 'site revision', 'site status']);
+    expect(d.settings.map((c) => c.attribute)).toEqual([
+      'site based-on',
+      'site description',
+      'site revision',
+      'site status',
+    ]);
     expect(d.justifications.added).toEqual(['same-make-model:S-101:SIF-101+LAH-101:LT-103:LT-102']);
     expect(d.scenarios).toEqual({ added: [], removed: [], changed: [] });
     expect(d.renames).toEqual([]);
@@ -66,11 +80,18 @@ describe('the demo revisions A -> B, as a reviewer lists them by hand', () => {
     ]);
     expect(d.appeared).toEqual([]);
     expect(d.severityChanged).toEqual([]);
-    expect(d.acceptanceChanged.map((c) => [c.new.key, c.new.accepted])).toEqual([['same-make-model:S-101:LAH-101+SIF-101:LT-102:LT-103', true]]);
+    expect(d.acceptanceChanged.map((c) => [c.new.key, c.new.accepted])).toEqual([
+      ['same-make-model:S-101:LAH-101+SIF-101:LT-102:LT-103', true],
+    ]);
   });
 
   it('says three scenarios got better and none worse, with the figures before and after', () => {
-    expect(d.verdicts.map((v) => `${v.scenario} ${v.change}`)).toEqual(['S-101 better', 'S-102 same', 'S-103 better', 'S-104 better']);
+    expect(d.verdicts.map((v) => `${v.scenario} ${v.change}`)).toEqual([
+      'S-101 better',
+      'S-102 same',
+      'S-103 better',
+      'S-104 better',
+    ]);
     // S-101 rev B: 0.1/yr x 0.5 ignition x 0.005 x 0.1 = 2.5e-5 /yr (both layers credited), by hand.
     expect(d.verdicts[0]!.after!.mitigatedAfter).toBeCloseTo(2.5e-5, 12);
     // S-101 rev A: no layer credited: 0.1 x 0.5 = 0.05 /yr.
@@ -86,7 +107,14 @@ function mirrored(d: RevisionDiff): unknown {
   const swapItems = (i: RevisionDiff['elements']) => ({
     added: i.removed,
     removed: i.added,
-    changed: i.changed.map((c) => ({ ...c, changes: c.changes.map((x) => ({ attribute: x.attribute, ...(x.new !== undefined ? { old: x.new } : {}), ...(x.old !== undefined ? { new: x.old } : {}) })) })),
+    changed: i.changed.map((c) => ({
+      ...c,
+      changes: c.changes.map((x) => ({
+        attribute: x.attribute,
+        ...(x.new !== undefined ? { old: x.new } : {}),
+        ...(x.old !== undefined ? { new: x.old } : {}),
+      })),
+    })),
   });
   const flip = { worse: 'better', better: 'worse', added: 'removed', removed: 'added', same: 'same' } as const;
   return {
@@ -115,7 +143,10 @@ describe('properties of every diff', () => {
   });
 
   it('diff A B and diff B A are mirror images (demo and 39 pairs of generated sites)', () => {
-    const pairs: [Model, Model][] = [[load(REV_A), load(REV_B)], ...sites.slice(1).map((s, i): [Model, Model] => [sites[i]!, s])];
+    const pairs: [Model, Model][] = [
+      [load(REV_A), load(REV_B)],
+      ...sites.slice(1).map((s, i): [Model, Model] => [sites[i]!, s]),
+    ];
     let nonEmpty = 0;
     for (const [a, b] of pairs) {
       const forward = diff(a, b);
@@ -153,7 +184,10 @@ describe('properties of every diff', () => {
   });
 
   it('a renamed element that also changed is a removal and an addition, not a silent rename', () => {
-    const changed = REV_A.replace(/\bLT-102\b/g, 'LT-902').replace('technology=radar supply=from-signal mounted-on=BR-101 signal-via=AI-S-01', 'technology=dp supply=from-signal mounted-on=BR-101 signal-via=AI-S-01');
+    const changed = REV_A.replace(/\bLT-102\b/g, 'LT-902').replace(
+      'technology=radar supply=from-signal mounted-on=BR-101 signal-via=AI-S-01',
+      'technology=dp supply=from-signal mounted-on=BR-101 signal-via=AI-S-01',
+    );
     const d = diff(load(REV_A), load(changed));
     expect(d.renames).toEqual([]);
     expect(d.elements.removed.map((e) => e.id)).toEqual(['LT-102']);
@@ -162,7 +196,12 @@ describe('properties of every diff', () => {
 
   it('is the same whatever the order of statements on either side', () => {
     const random = new Random(15);
-    const shuffled = (m: Model): Model => ({ ...m, elements: random.shuffle(m.elements), functions: random.shuffle(m.functions), scenarios: random.shuffle(m.scenarios) });
+    const shuffled = (m: Model): Model => ({
+      ...m,
+      elements: random.shuffle(m.elements),
+      functions: random.shuffle(m.functions),
+      scenarios: random.shuffle(m.scenarios),
+    });
     const a = load(REV_A);
     const b = load(REV_B);
     const expected = JSON.stringify(diff(a, b));
@@ -174,10 +213,15 @@ describe('properties of every diff', () => {
 describe('justifications a change makes stale', () => {
   it('reports the acceptance of a finding the change removed, and counts it as worse', () => {
     // Rev B accepts same-make-model for LT-102/LT-103; giving LT-103 another model removes that finding.
-    const remade = REV_B.replace('transmitter LT-103 variable=level make="Orrin" model="GR-7"', 'transmitter LT-103 variable=level make="Orrin" model="GR-9"');
+    const remade = REV_B.replace(
+      'transmitter LT-103 variable=level make="Orrin" model="GR-7"',
+      'transmitter LT-103 variable=level make="Orrin" model="GR-9"',
+    );
     expect(remade).not.toBe(REV_B);
     const d = diff(load(REV_B), load(remade));
-    expect(d.staleJustifications).toEqual([{ finding: 'same-make-model:S-101:SIF-101+LAH-101:LT-103:LT-102', reason: 'it no longer matches any finding' }]);
+    expect(d.staleJustifications).toEqual([
+      { finding: 'same-make-model:S-101:SIF-101+LAH-101:LT-103:LT-102', reason: 'it no longer matches any finding' },
+    ]);
     expect(d.disappeared.map((f) => f.rule)).toEqual(['same-make-model']);
     expect(madeWorse(d)).toBe(true);
   });

@@ -23,13 +23,22 @@ function dump(index: PlantIndex): unknown[] {
   }));
 }
 
-const same = (model: Model) => expect(dump(PlantIndex.ofModel(model))).toEqual(dump(PlantIndex.ofGraph(buildPlantGraph(model))));
+const same = (model: Model) =>
+  expect(dump(PlantIndex.ofModel(model))).toEqual(dump(PlantIndex.ofGraph(buildPlantGraph(model))));
 
 /** Every string of the model that is a tag, renamed (other strings stay). */
 function renamed(model: Model, name: (tag: string) => string): Model {
   const tags = new Set([...model.elements.map((e) => e.tag), ...model.functions.map((f) => f.tag)]);
   const walk = (v: unknown): unknown =>
-    typeof v === 'string' ? (tags.has(v) ? name(v) : v) : Array.isArray(v) ? v.map(walk) : v && typeof v === 'object' ? Object.fromEntries(Object.entries(v).map(([k, x]) => [k, walk(x)])) : v;
+    typeof v === 'string'
+      ? tags.has(v)
+        ? name(v)
+        : v
+      : Array.isArray(v)
+        ? v.map(walk)
+        : v && typeof v === 'object'
+          ? Object.fromEntries(Object.entries(v).map(([k, x]) => [k, walk(x)]))
+          : v;
   return walk(model) as Model;
 }
 
@@ -47,7 +56,9 @@ describe('the plant index', () => {
         same(model);
         // Some tags renamed to numbers: object keys that JavaScript puts first, in numeric order ("9" before "10").
         const tags = [...model.elements.map((e) => e.tag), ...model.functions.map((f) => f.tag)];
-        const names = new Map(tags.map((t, i) => [t, i % 3 === 0 ? String(numbers[i % numbers.length]! * 100 + i) : t]));
+        const names = new Map(
+          tags.map((t, i) => [t, i % 3 === 0 ? String(numbers[i % numbers.length]! * 100 + i) : t]),
+        );
         same(renamed(model, (t) => names.get(t)!));
       }),
       { numRuns: 60 },
@@ -63,25 +74,52 @@ describe('the plant index', () => {
         { kind: 'ups', tag: '9' },
         { kind: 'ups', tag: '10' },
         { kind: 'cabinet', tag: 'CAB-1' },
-        { kind: 'transmitter', tag: 'LT-1', variable: 'level', poweredBy: ['10', 'CAB-1', '9'], housedIn: ['CAB-1', '9'], signalVia: ['NOT-DEFINED'] },
+        {
+          kind: 'transmitter',
+          tag: 'LT-1',
+          variable: 'level',
+          poweredBy: ['10', 'CAB-1', '9'],
+          housedIn: ['CAB-1', '9'],
+          signalVia: ['NOT-DEFINED'],
+        },
       ],
       functions: [{ kind: 'loop', tag: 'LC-1', sensors: ['LT-1'], solver: 'LT-1', finals: ['LT-1'] }],
     } as unknown as Model;
     same(model);
     const edges = dump(PlantIndex.ofModel(model))[3] as { edges: unknown[] };
     // "9" and "10" first in numeric order; per target the role sorted last comes first; unknown tags dropped.
-    expect(edges.edges).toEqual([['9', 'poweredBy', -1], ['9', 'housedIn', -1], ['10', 'poweredBy', -1], ['CAB-1', 'poweredBy', -1], ['CAB-1', 'housedIn', -1]]);
-    expect(new Tracer(PlantIndex.ofModel(model)).traceFunction('LC-1')).toEqual(new Tracer(buildPlantGraph(model)).traceFunction('LC-1'));
+    expect(edges.edges).toEqual([
+      ['9', 'poweredBy', -1],
+      ['9', 'housedIn', -1],
+      ['10', 'poweredBy', -1],
+      ['CAB-1', 'poweredBy', -1],
+      ['CAB-1', 'housedIn', -1],
+    ]);
+    expect(new Tracer(PlantIndex.ofModel(model)).traceFunction('LC-1')).toEqual(
+      new Tracer(buildPlantGraph(model)).traceFunction('LC-1'),
+    );
   });
 
   it('refuses a model with a repeated tag, as the graph does', () => {
-    const model = { site: { name: 'x' }, categories: [], scenarios: [], functions: [], elements: [{ kind: 'ups', tag: 'U' }, { kind: 'ups', tag: 'U' }] } as unknown as Model;
+    const model = {
+      site: { name: 'x' },
+      categories: [],
+      scenarios: [],
+      functions: [],
+      elements: [
+        { kind: 'ups', tag: 'U' },
+        { kind: 'ups', tag: 'U' },
+      ],
+    } as unknown as Model;
     expect(() => buildPlantGraph(model)).toThrow();
     expect(() => PlantIndex.ofModel(model)).toThrow(/two nodes tagged U/);
   });
 
   it('gives the graph it was read from, and builds the graph of a model only when asked', () => {
-    const loaded = loadModelText('marrow-fen.bulk', readFileSync(new URL('../../../fixtures/demo/marrow-fen.bulk', import.meta.url)));
+    const loaded = loadModelText(
+      'marrow-fen.bulk',
+      readFileSync(new URL('../../../fixtures/demo/marrow-fen.bulk', import.meta.url)),
+    );
     const graph = buildPlantGraph(loaded.model!);
     expect(new Tracer(graph).graph).toBe(graph);
     const tracer = Tracer.ofModel(loaded.model!);

@@ -1,7 +1,11 @@
 // applyJustifications: acceptance marks findings and never removes one; a justification that matches no
 // finding is itself a finding at the `accept` statement. The findings below are invented test data.
 import { describe, expect, it } from 'vitest';
-import { applyJustifications, STALE_JUSTIFICATION, DUPLICATE_JUSTIFICATION } from '../../../packages/core/src/justify/index.ts';
+import {
+  applyJustifications,
+  STALE_JUSTIFICATION,
+  DUPLICATE_JUSTIFICATION,
+} from '../../../packages/core/src/justify/index.ts';
 import type { Finding } from '../../../packages/core/src/vocabulary/types.ts';
 import { say } from '../../../packages/core/src/catalogue/catalogue.ts';
 import { loadInvented } from '../../report/invented.ts';
@@ -43,7 +47,10 @@ describe('applyJustifications', () => {
   it('should match keys exactly, not by prefix or case', () => {
     const out = applyJustifications([finding('r:S-1:a')], [accept('r:S-1'), accept('R:S-1:A')]);
     expect(out.findings[0]!.accepted).toBeUndefined();
-    expect(out.stale.map((f) => f.key).sort()).toEqual([`${STALE_JUSTIFICATION}:R:S-1:A`, `${STALE_JUSTIFICATION}:r:S-1`]);
+    expect(out.stale.map((f) => f.key).sort()).toEqual([
+      `${STALE_JUSTIFICATION}:R:S-1:A`,
+      `${STALE_JUSTIFICATION}:r:S-1`,
+    ]);
   });
 
   it('should turn a justification that matches no finding into a needs-justification finding', () => {
@@ -63,24 +70,38 @@ describe('applyJustifications', () => {
     const loaded = loadInvented();
     const out = applyJustifications([], loaded.model.justifications, loaded.spans);
     // The invented model has two accept statements on lines 20 and 21 and no findings here: both are stale.
-    expect(out.stale.map((f) => f.key)).toEqual([`${STALE_JUSTIFICATION}:no-such-finding:S-9`, `${STALE_JUSTIFICATION}:same-make-model:S-1:LIC-1:SIF-1:LT-2`]);
+    expect(out.stale.map((f) => f.key)).toEqual([
+      `${STALE_JUSTIFICATION}:no-such-finding:S-9`,
+      `${STALE_JUSTIFICATION}:same-make-model:S-1:LIC-1:SIF-1:LT-2`,
+    ]);
     expect(out.locations[`${STALE_JUSTIFICATION}:no-such-finding:S-9`]).toMatchObject({ line: 21, column: 8 });
-    expect(out.locations[`${STALE_JUSTIFICATION}:same-make-model:S-1:LIC-1:SIF-1:LT-2`]).toMatchObject({ line: 20, column: 8 });
+    expect(out.locations[`${STALE_JUSTIFICATION}:same-make-model:S-1:LIC-1:SIF-1:LT-2`]).toMatchObject({
+      line: 20,
+      column: 8,
+    });
   });
 
   it('should not let a justification accept a stale finding (it is stale itself)', () => {
     const out = applyJustifications([], [accept('gone'), accept(`${STALE_JUSTIFICATION}:gone`)]);
-    expect(out.stale.map((f) => f.key)).toEqual([`${STALE_JUSTIFICATION}:gone`, `${STALE_JUSTIFICATION}:${STALE_JUSTIFICATION}:gone`]);
+    expect(out.stale.map((f) => f.key)).toEqual([
+      `${STALE_JUSTIFICATION}:gone`,
+      `${STALE_JUSTIFICATION}:${STALE_JUSTIFICATION}:gone`,
+    ]);
   });
 
   it('should keep the most recent of two acceptances, whatever their order, and note the duplicate', () => {
     const older = accept('r:S-1:a', 'A', '2023-01-01', 'old');
     const newer = accept('r:S-1:a', 'B', '2024-01-01', 'new');
-    for (const order of [[older, newer], [newer, older]]) {
+    for (const order of [
+      [older, newer],
+      [newer, older],
+    ]) {
       const out = applyJustifications([finding('r:S-1:a')], order);
       expect(out.findings[0]!.accepted).toEqual({ by: 'B', date: '2024-01-01', reason: 'new' });
       expect(out.stale.map((f) => [f.rule, f.severity])).toEqual([[DUPLICATE_JUSTIFICATION, 'note']]);
-      expect(out.stale.map((f) => [f.messageId, f.data])).toEqual([['duplicate-justification/accepted-again', { key: 'r:S-1:a', count: 2, by: 'B', date: '2024-01-01' }]]);
+      expect(out.stale.map((f) => [f.messageId, f.data])).toEqual([
+        ['duplicate-justification/accepted-again', { key: 'r:S-1:a', count: 2, by: 'B', date: '2024-01-01' }],
+      ]);
     }
   });
 
@@ -88,7 +109,10 @@ describe('applyJustifications', () => {
     const pair = (rule: string, key: string, element: string): Finding => ({
       ...finding(key, 'needs-justification'),
       rule,
-      parties: [{ role: 'layer', tag: 'AL-1' }, { role: 'layer', tag: 'SIF-1' }],
+      parties: [
+        { role: 'layer', tag: 'AL-1' },
+        { role: 'layer', tag: 'SIF-1' },
+      ],
       element,
     });
 
@@ -102,15 +126,29 @@ describe('applyJustifications', () => {
 
     it('still accepts a same-make-model finding, whose two devices swap places too', () => {
       const input = [pair('same-make-model', 'same-make-model:S-1:AL-1+SIF-1:LT-2:LT-1', 'LT-2')];
-      expect(applyJustifications(input, [accept('same-make-model:S-1:SIF-1+AL-1:LT-1:LT-2')]).findings[0]!.accepted).toBeDefined();
+      expect(
+        applyJustifications(input, [accept('same-make-model:S-1:SIF-1+AL-1:LT-1:LT-2')]).findings[0]!.accepted,
+      ).toBeDefined();
       const wrong = applyJustifications(input, [accept('same-make-model:S-1:SIF-1+AL-1:LT-2:LT-1')]);
       expect(wrong.findings[0]!.accepted).toBeUndefined();
       expect(wrong.stale.map((f) => f.rule)).toEqual([STALE_JUSTIFICATION]);
     });
 
     it('does not swap a cause and a layer: the cause is always named first', () => {
-      const input = [{ ...finding('shared-io:S-1:LIC-1+SIF-1:IO-1'), rule: 'shared-io', parties: [{ role: 'cause' as const, tag: 'LIC-1' }, { role: 'layer' as const, tag: 'SIF-1' }], element: 'IO-1' }];
-      expect(applyJustifications(input, [accept('shared-io:S-1:SIF-1+LIC-1:IO-1')]).findings[0]!.accepted).toBeUndefined();
+      const input = [
+        {
+          ...finding('shared-io:S-1:LIC-1+SIF-1:IO-1'),
+          rule: 'shared-io',
+          parties: [
+            { role: 'cause' as const, tag: 'LIC-1' },
+            { role: 'layer' as const, tag: 'SIF-1' },
+          ],
+          element: 'IO-1',
+        },
+      ];
+      expect(
+        applyJustifications(input, [accept('shared-io:S-1:SIF-1+LIC-1:IO-1')]).findings[0]!.accepted,
+      ).toBeUndefined();
     });
   });
 });

@@ -20,7 +20,9 @@ describe('the bad-input corpus', () => {
 
   it('covers every code in the catalogue, or says where that code is tested', () => {
     const shown = new Set(CORPUS.map((r) => r.code));
-    const uncovered = (Object.keys(CODES) as DiagnosticCode[]).filter((code) => !shown.has(code) && !NOT_IN_CORPUS[code]);
+    const uncovered = (Object.keys(CODES) as DiagnosticCode[]).filter(
+      (code) => !shown.has(code) && !NOT_IN_CORPUS[code],
+    );
     expect(uncovered).toEqual([]);
   });
 
@@ -33,12 +35,11 @@ describe('the bad-input corpus', () => {
     expect(first.severity).toBe('error');
   });
 
-  it.each(CORPUS.filter((r) => r.file.endsWith('.bulk') && r.file !== 'empty.bulk' && r.file !== 'whitespace-only.bulk'))(
-    '$file reports its one defect once, with no follow-on diagnostics',
-    ({ file }) => {
-      expect(load(file).diagnostics.map((d) => d.code)).toHaveLength(1);
-    },
-  );
+  it.each(
+    CORPUS.filter((r) => r.file.endsWith('.bulk') && r.file !== 'empty.bulk' && r.file !== 'whitespace-only.bulk'),
+  )('$file reports its one defect once, with no follow-on diagnostics', ({ file }) => {
+    expect(load(file).diagnostics.map((d) => d.code)).toHaveLength(1);
+  });
 
   it('the corpus varies a base that is itself valid', () => {
     // Undo the one defect of a few files and the model must load cleanly, so the defect is the only one.

@@ -5,8 +5,12 @@ import { describe, expect, it } from 'vitest';
 import { loadModelText, printBulk, printJson, type Model } from '@bulkhead/core';
 
 const DEMO = new URL('../../../fixtures/demo/', import.meta.url);
-const bulkFiles = readdirSync(DEMO).filter((f) => f.endsWith('.bulk')).sort();
-const jsonFiles = readdirSync(DEMO).filter((f) => f.endsWith('.json')).sort();
+const bulkFiles = readdirSync(DEMO)
+  .filter((f) => f.endsWith('.bulk'))
+  .sort();
+const jsonFiles = readdirSync(DEMO)
+  .filter((f) => f.endsWith('.json'))
+  .sort();
 
 function load(file: string): { model: Model; text: string } {
   const text = readFileSync(new URL(file, DEMO), 'utf8');

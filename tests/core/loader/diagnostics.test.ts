@@ -37,19 +37,26 @@ describe('one pass reports every problem', () => {
   });
 
   it('goes on after syntax errors to the checks beyond the schema', () => {
-    const text = THREE_DEFECTS.replace('vessel V-1', 'vessel V-1 ;').replace('tolerable=1e-4', 'tolerable=1e-4 harm=people');
+    const text = THREE_DEFECTS.replace('vessel V-1', 'vessel V-1 ;').replace(
+      'tolerable=1e-4',
+      'tolerable=1e-4 harm=people',
+    );
     const codes = loadModelText('t.bulk', text).diagnostics.map((d) => d.code);
     expect(codes).toEqual(['BH117', 'BH111', 'BH300', 'BH311', 'BH304']);
   });
 
   it('reports problems in a JSON model in one pass too', () => {
-    const json = JSON.stringify({
-      site: { name: 'J' },
-      categories: [{ id: 'c', tolerable: 0, harm: 'people' }],
-      elements: [{ kind: 'vessel', tag: 'V-1', mountedOn: ['V-9'] }],
-      functions: [],
-      scenarios: [],
-    }, null, 2);
+    const json = JSON.stringify(
+      {
+        site: { name: 'J' },
+        categories: [{ id: 'c', tolerable: 0, harm: 'people' }],
+        elements: [{ kind: 'vessel', tag: 'V-1', mountedOn: ['V-9'] }],
+        functions: [],
+        scenarios: [],
+      },
+      null,
+      2,
+    );
     expect(loadModelText('t.json', json).diagnostics.map((d) => d.code)).toEqual(['BH305', 'BH300']);
   });
 });
@@ -60,7 +67,9 @@ describe('rendered diagnostics (golden files)', () => {
   });
 
   it('a duplicate with a note pointing at the first definition', async () => {
-    const text = THREE_DEFECTS.replace('sensors=LT-3', 'sensors=LT-2').replace('people-serius', 'people-serious').replace('pfd=1.5', 'pfd=0.05')
+    const text = THREE_DEFECTS.replace('sensors=LT-3', 'sensors=LT-2')
+      .replace('people-serius', 'people-serious')
+      .replace('pfd=1.5', 'pfd=0.05')
       .replace('controller BPCS-1 system=bpcs', 'controller BPCS-1 system=bpcs\nswitch LT-1');
     await expect(render('dup.bulk', text)).toMatchFileSnapshot('./__golden__/duplicate-with-note.txt');
   });
@@ -68,7 +77,9 @@ describe('rendered diagnostics (golden files)', () => {
   it('a JSON trailing comma, a long line cut around the caret, and a tab in the line', async () => {
     const json = '{\n  "site": { "name": "x" },\n\t"categories": [],\n}\n';
     const long = `site "Long"\nvessel ${'V'.repeat(300)} title="t"\nvessel V-1 title="${'x'.repeat(200)}" mounted-on=V-9 # after\n`;
-    await expect(render('trailing.json', json) + '\n' + render('long.bulk', long)).toMatchFileSnapshot('./__golden__/json-and-long-line.txt');
+    await expect(render('trailing.json', json) + '\n' + render('long.bulk', long)).toMatchFileSnapshot(
+      './__golden__/json-and-long-line.txt',
+    );
   });
 
   it('puts the mark under the reported column, counted in characters of the line', () => {

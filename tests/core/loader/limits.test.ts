@@ -9,7 +9,8 @@ import { MAX_JSON_DEPTH } from '../../../packages/core/src/json/reader.ts';
 import { MAX_DEPENDENCY_DEPTH } from '../../../packages/core/src/loader/cycles.ts';
 
 const SITE = 'site "Limits"\ncategory c tolerable=1e-4 harm=people\n';
-const codes = (file: string, text: string) => loadModelText(file, text).diagnostics.map((d) => `${d.code} ${d.span?.line}:${d.span?.column}`);
+const codes = (file: string, text: string) =>
+  loadModelText(file, text).diagnostics.map((d) => `${d.code} ${d.span?.line}:${d.span?.column}`);
 
 /** A chain of `links` links: cable W-0 relies on W-1, ... on W-links. */
 function chain(links: number): string {
@@ -42,7 +43,8 @@ describe('numbers a double holds (IEEE 754 binary64 keeps 15 to 17 significant d
   });
 
   it('a JSON number with too many digits is refused (BH121)', () => {
-    const text = '{ "site": { "name": "J" }, "categories": [{ "id": "c", "tolerable": 0.00500000000000000000001, "harm": "people" }], "elements": [], "functions": [], "scenarios": [] }';
+    const text =
+      '{ "site": { "name": "J" }, "categories": [{ "id": "c", "tolerable": 0.00500000000000000000001, "harm": "people" }], "elements": [], "functions": [], "scenarios": [] }';
     expect(codes('m.json', text)).toEqual(['BH121 1:69']);
   });
 });
@@ -71,7 +73,8 @@ describe('line length (BH105)', () => {
 });
 
 describe('JSON nesting (BH106)', () => {
-  const nested = (depth: number) => `{ "site": { "name": "J" }, "x": ${'['.repeat(depth - 1)}${']'.repeat(depth - 1)} }`;
+  const nested = (depth: number) =>
+    `{ "site": { "name": "J" }, "x": ${'['.repeat(depth - 1)}${']'.repeat(depth - 1)} }`;
 
   it(`nesting of ${MAX_JSON_DEPTH} levels reaches the schema, which names the unknown field`, () => {
     expect(loadModelText('m.json', nested(MAX_JSON_DEPTH)).diagnostics.map((d) => d.code)).toContain('BH203');
@@ -83,7 +86,9 @@ describe('JSON nesting (BH106)', () => {
 
   it('100,000 levels of arrays or of objects are refused, without running out of stack', () => {
     expect(codes('m.json', '['.repeat(100_000) + ']'.repeat(100_000))).toEqual([`BH106 1:${MAX_JSON_DEPTH + 1}`]);
-    expect(codes('m.json', '{"a":'.repeat(100_000) + '1' + '}'.repeat(100_000))).toEqual([`BH106 1:${5 * MAX_JSON_DEPTH + 1}`]);
+    expect(codes('m.json', '{"a":'.repeat(100_000) + '1' + '}'.repeat(100_000))).toEqual([
+      `BH106 1:${5 * MAX_JSON_DEPTH + 1}`,
+    ]);
   });
 
   it('brackets inside strings do not count', () => {

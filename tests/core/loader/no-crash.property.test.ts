@@ -6,7 +6,33 @@ import { describe, expect, it } from 'vitest';
 import { CODES, loadModelText, printBulk, printJson, renderDiagnostics } from '@bulkhead/core';
 import { validModel } from '../bulk/model-arbitrary.ts';
 
-const junk = fc.string({ unit: fc.constantFrom('"', '\\', '#', ',', '=', ' ', '\t', '\n', '\r', '{', '}', '[', ']', ':', 'a', '1', 'e', '-', '.', '\u0000', 'é', '\ufeff'), maxLength: 6 });
+const junk = fc.string({
+  unit: fc.constantFrom(
+    '"',
+    '\\',
+    '#',
+    ',',
+    '=',
+    ' ',
+    '\t',
+    '\n',
+    '\r',
+    '{',
+    '}',
+    '[',
+    ']',
+    ':',
+    'a',
+    '1',
+    'e',
+    '-',
+    '.',
+    '\u0000',
+    'é',
+    '\ufeff',
+  ),
+  maxLength: 6,
+});
 type Edit = typeof edit extends fc.Arbitrary<infer T> ? T : never;
 const edit = fc.oneof(
   fc.record({ op: fc.constant('cut' as const), at: fc.nat(), length: fc.nat({ max: 12 }) }),

@@ -59,7 +59,13 @@ describe('suggestions', () => {
     // The budget counts characters: each call costs the tags' 600 characters plus 100 x (6 + 1) = 1300.
     const suggester = new Suggester(tags, 3000);
     const answers = Array.from({ length: 5 }, () => suggester.didYouMean('LT-1O1'));
-    expect(answers).toEqual(['did you mean `LT-101`?', 'did you mean `LT-101`?', 'did you mean `LT-101`?', undefined, undefined]);
+    expect(answers).toEqual([
+      'did you mean `LT-101`?',
+      'did you mean `LT-101`?',
+      'did you mean `LT-101`?',
+      undefined,
+      undefined,
+    ]);
   });
 
   it('every unknown reference is still counted when suggestions run out, the first 20 shown', () => {

@@ -12,15 +12,22 @@ function demo(file: string): Model {
 }
 
 describe('model lookups', () => {
-  it.each(['marrow-fen.bulk', 'marrow-fen-rev-b.bulk'])('answer as find does for every tag, id and key of %s', (file) => {
-    const model = demo(file);
-    for (const e of model.elements) expect(elementByTag(model, e.tag)).toBe(model.elements.find((x) => x.tag === e.tag));
-    for (const f of model.functions) expect(functionByTag(model, f.tag)).toBe(model.functions.find((x) => x.tag === f.tag));
-    for (const s of model.scenarios) expect(scenarioById(model, s.id)).toBe(model.scenarios.find((x) => x.id === s.id));
-    for (const j of model.justifications ?? []) expect(justificationOf(model, j.finding)).toBe(model.justifications!.find((x) => x.finding === j.finding));
-    expect(elementByTag(model, 'NO-SUCH-TAG')).toBeUndefined();
-    expect(justificationOf({ ...model, justifications: undefined }, 'any:key')).toBeUndefined();
-  });
+  it.each(['marrow-fen.bulk', 'marrow-fen-rev-b.bulk'])(
+    'answer as find does for every tag, id and key of %s',
+    (file) => {
+      const model = demo(file);
+      for (const e of model.elements)
+        expect(elementByTag(model, e.tag)).toBe(model.elements.find((x) => x.tag === e.tag));
+      for (const f of model.functions)
+        expect(functionByTag(model, f.tag)).toBe(model.functions.find((x) => x.tag === f.tag));
+      for (const s of model.scenarios)
+        expect(scenarioById(model, s.id)).toBe(model.scenarios.find((x) => x.id === s.id));
+      for (const j of model.justifications ?? [])
+        expect(justificationOf(model, j.finding)).toBe(model.justifications!.find((x) => x.finding === j.finding));
+      expect(elementByTag(model, 'NO-SUCH-TAG')).toBeUndefined();
+      expect(justificationOf({ ...model, justifications: undefined }, 'any:key')).toBeUndefined();
+    },
+  );
 
   it('keep the first of two entries with one key, and see an entry appended after the first lookup', () => {
     const model = demo('marrow-fen-rev-b.bulk'); // the revision with an accept statement

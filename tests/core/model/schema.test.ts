@@ -7,7 +7,11 @@ import { modelJsonSchema } from '@bulkhead/core';
 import { runCli } from '../../helpers/cli.ts';
 
 const DEMO = new URL('../../../fixtures/demo/', import.meta.url);
-type Json = Record<string, unknown> & { elements: Record<string, unknown>[]; categories: Record<string, unknown>[]; scenarios: Record<string, unknown>[] };
+type Json = Record<string, unknown> & {
+  elements: Record<string, unknown>[];
+  categories: Record<string, unknown>[];
+  scenarios: Record<string, unknown>[];
+};
 
 function demo(file = 'marrow-fen.json'): Json {
   return JSON.parse(readFileSync(new URL(file, DEMO), 'utf8')) as Json;
@@ -39,7 +43,11 @@ describe('the JSON Schema of a model', () => {
     ['an unknown element kind', (m) => (m.elements[0]!.kind = 'vesel'), 'oneOf'],
     ['an unknown field', (m) => (m.elements[0]!.colour = 'red'), 'additionalProperties'],
     ['a number given as text', (m) => (m.categories[0]!.tolerable = '1e-4'), 'type'],
-    ['an empty list of sensors', (m) => ((m as unknown as { functions: { sensors: unknown[] }[] }).functions[0]!.sensors = []), 'minItems'],
+    [
+      'an empty list of sensors',
+      (m) => ((m as unknown as { functions: { sensors: unknown[] }[] }).functions[0]!.sensors = []),
+      'minItems',
+    ],
     ['a comment with a line break', (m) => (m.elements[0]!.comments = ['one\ntwo']), 'pattern'],
     ['no site', (m) => delete m.site, 'required'],
   ];
@@ -67,6 +75,8 @@ describe('the JSON Schema of a model', () => {
   });
 
   it('matches the pinned copy (a zod upgrade that changes the schema must update it on purpose)', async () => {
-    await expect(JSON.stringify(modelJsonSchema(), null, 2) + '\n').toMatchFileSnapshot('./__snapshots__/model.schema.json');
+    await expect(JSON.stringify(modelJsonSchema(), null, 2) + '\n').toMatchFileSnapshot(
+      './__snapshots__/model.schema.json',
+    );
   });
 });

@@ -4,14 +4,35 @@
 // its channels share is counted in its computed PFD (issue 16, item 3), so that finding is a note.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { analyze, loadModelText, rankCommonCauses, RANKING_ORDER, renderCommonCausesCsv } from '../../../packages/core/src/index.ts';
+import {
+  analyze,
+  loadModelText,
+  rankCommonCauses,
+  RANKING_ORDER,
+  renderCommonCausesCsv,
+} from '../../../packages/core/src/index.ts';
 
-const model = loadModelText('marrow-fen.bulk', readFileSync(new URL('../../../fixtures/demo/marrow-fen.bulk', import.meta.url))).model!;
+const model = loadModelText(
+  'marrow-fen.bulk',
+  readFileSync(new URL('../../../fixtures/demo/marrow-fen.bulk', import.meta.url)),
+).model!;
 const ranking = rankCommonCauses(model, analyze(model));
 
 describe('common-cause ranking of demo revision A', () => {
   it('ranks by frequency at stake when no element alone restores a layer, then by layers, then by tag', () => {
-    expect(ranking.map((r) => r.element)).toEqual(['LT-102', 'BR-101', 'JB-101', 'AI-1-03', 'BPCS-C1', 'CAB-1', 'CKT-11', 'AI-S-02', 'IA-1', 'TW-302', 'UPS-1']);
+    expect(ranking.map((r) => r.element)).toEqual([
+      'LT-102',
+      'BR-101',
+      'JB-101',
+      'AI-1-03',
+      'BPCS-C1',
+      'CAB-1',
+      'CKT-11',
+      'AI-S-02',
+      'IA-1',
+      'TW-302',
+      'UPS-1',
+    ]);
     // Every layer in S-101 is voided by more than one element, so none of those costs anything on its own; TW-302
     // no longer withholds SIF-301's credit (counted in its computed PFD), so it costs nothing either.
     expect(ranking.every((r) => r.frequencyCost === 0)).toBe(true);

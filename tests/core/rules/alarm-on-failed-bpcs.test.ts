@@ -23,7 +23,11 @@ const ownIoInC1 = {
 
 ruleTable('alarm-on-failed-bpcs', {
   valid: [
-    { name: 'alarm raised in the SIS solver', lines: { ...people, 'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 operator=OP-1 finals=XV-1 minutes=20' }, scenario: onAlarm },
+    {
+      name: 'alarm raised in the SIS solver',
+      lines: { ...people, 'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 operator=OP-1 finals=XV-1 minutes=20' },
+      scenario: onAlarm,
+    },
     {
       name: 'alarm raised in a second, separate BPCS controller',
       lines: {
@@ -48,41 +52,99 @@ ruleTable('alarm-on-failed-bpcs', {
       source: CCPS,
       lines: { ...people, 'AL-1': 'alarm AL-1 sensors=T-2 raised-in=C-1 operator=OP-1 finals=XV-1 minutes=20' },
       scenario: onAlarm,
-      findings: [{ key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1', messageId: 'alarm-on-failed-bpcs/raised', data: { alarm: 'AL-1', element: 'C-1', kind: 'controller', cause: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, allowedByPolicy: false, beneath: ['UPS-A'] }, at: '29:9', severity: 'voids-credit', element: 'C-1', parties: ['LC-1', 'AL-1'] }],
+      findings: [
+        {
+          key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1',
+          messageId: 'alarm-on-failed-bpcs/raised',
+          data: {
+            alarm: 'AL-1',
+            element: 'C-1',
+            kind: 'controller',
+            cause: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            allowedByPolicy: false,
+            beneath: ['UPS-A'],
+          },
+          at: '29:9',
+          severity: 'voids-credit',
+          element: 'C-1',
+          parties: ['LC-1', 'AL-1'],
+        },
+      ],
     },
     {
       name: 'alarm raised in the SIS but shown only on a console driven by the failing controller',
       source: CCPS,
-      lines: { ...people, 'CON-1': 'console CON-1 signal-via=C-1', 'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 console=CON-1 operator=OP-1 finals=XV-1 minutes=20' },
+      lines: {
+        ...people,
+        'CON-1': 'console CON-1 signal-via=C-1',
+        'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 console=CON-1 operator=OP-1 finals=XV-1 minutes=20',
+      },
       scenario: onAlarm,
-      findings: [{ key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1', messageId: 'alarm-on-failed-bpcs/raised', severity: 'voids-credit', element: 'C-1', parties: ['LC-1', 'AL-1'] }],
+      findings: [
+        {
+          key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1',
+          messageId: 'alarm-on-failed-bpcs/raised',
+          severity: 'voids-credit',
+          element: 'C-1',
+          parties: ['LC-1', 'AL-1'],
+        },
+      ],
     },
     {
       name: 'policy shared-solver=allow: an alarm with its own transmitter and I/O in the failing loop controller, a note',
       source: 'CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance for a shared BPCS controller)',
       lines: { ...people, ...ownIoInC1, policy: 'policy shared-solver=allow' },
       scenario: onAlarm,
-      findings: [{ key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1', messageId: 'alarm-on-failed-bpcs/raised', severity: 'note', element: 'C-1', parties: ['LC-1', 'AL-1'] }],
+      findings: [
+        {
+          key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1',
+          messageId: 'alarm-on-failed-bpcs/raised',
+          severity: 'note',
+          element: 'C-1',
+          parties: ['LC-1', 'AL-1'],
+        },
+      ],
     },
     {
       name: 'the same alarm without the policy switch: voids',
       source: CCPS,
       lines: { ...people, ...ownIoInC1 },
       scenario: onAlarm,
-      findings: [{ key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1', messageId: 'alarm-on-failed-bpcs/raised', severity: 'voids-credit', element: 'C-1', parties: ['LC-1', 'AL-1'] }],
+      findings: [
+        {
+          key: 'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1',
+          messageId: 'alarm-on-failed-bpcs/raised',
+          severity: 'voids-credit',
+          element: 'C-1',
+          parties: ['LC-1', 'AL-1'],
+        },
+      ],
     },
   ],
 });
 
 describe('an alarm in the failing loop controller under shared-solver=allow', () => {
-  it('keeps its credit when its own transmitter and I/O are separate (the help text\'s older practice)', () => {
-    const analysis = analyseCase({ name: 'allowed', lines: { ...people, ...ownIoInC1, policy: 'policy shared-solver=allow' }, scenario: onAlarm });
-    expect(analysis.assessments[0]!.layers[0]).toMatchObject({ function: 'AL-1', verdict: 'independent', credited: true });
+  it("keeps its credit when its own transmitter and I/O are separate (the help text's older practice)", () => {
+    const analysis = analyseCase({
+      name: 'allowed',
+      lines: { ...people, ...ownIoInC1, policy: 'policy shared-solver=allow' },
+      scenario: onAlarm,
+    });
+    expect(analysis.assessments[0]!.layers[0]).toMatchObject({
+      function: 'AL-1',
+      verdict: 'independent',
+      credited: true,
+    });
     expect(analysis.findings[0]!.message).toContain('allowed under policy shared-solver=allow');
   });
 
-  it('is still voided when it shares the loop\'s input card (shared-io is not covered by the switch)', () => {
-    const sharedCard = { ...people, ...ownIoInC1, 'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-1 supply=from-signal', policy: 'policy shared-solver=allow' };
+  it("is still voided when it shares the loop's input card (shared-io is not covered by the switch)", () => {
+    const sharedCard = {
+      ...people,
+      ...ownIoInC1,
+      'T-3': 'transmitter T-3 mounted-on=N-3 signal-via=IO-1 supply=from-signal',
+      policy: 'policy shared-solver=allow',
+    };
     const analysis = analyseCase({ name: 'shared card', lines: sharedCard, scenario: onAlarm });
     expect(analysis.findings.map((f) => [f.rule, f.severity])).toContainEqual(['shared-io', 'voids-credit']);
     expect(analysis.assessments[0]!.layers[0]).toMatchObject({ function: 'AL-1', credited: false });

@@ -3,7 +3,17 @@
 // in it, with the kind of the stage that runs it.
 import { readdirSync, readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { ALL_RULE_IDS, ASSESS_RULES, CATALOGUE, JUSTIFICATION_RULES, RULES, analyze, loadModelText, renderMessage, say } from '@bulkhead/core';
+import {
+  ALL_RULE_IDS,
+  ASSESS_RULES,
+  CATALOGUE,
+  JUSTIFICATION_RULES,
+  RULES,
+  analyze,
+  loadModelText,
+  renderMessage,
+  say,
+} from '@bulkhead/core';
 
 const FOLDER = new URL('../../../packages/core/src/catalogue/', import.meta.url);
 
@@ -18,7 +28,11 @@ describe('the rule catalogue', () => {
   it('keeps each rule in one file named by its id, under the folder of its kind', () => {
     for (const kind of ['independence', 'assessment', 'justification'] as const) {
       const files = readdirSync(new URL(`${kind}/`, FOLDER)).sort();
-      expect(files, kind).toEqual(CATALOGUE.filter((e) => e.kind === kind).map((e) => `${e.id}.ts`).sort());
+      expect(files, kind).toEqual(
+        CATALOGUE.filter((e) => e.kind === kind)
+          .map((e) => `${e.id}.ts`)
+          .sort(),
+      );
       for (const file of files) {
         const text = readFileSync(new URL(`${kind}/${file}`, FOLDER), 'utf8');
         expect(text.match(/\bruleEntry\(/g), `${file} declares one rule`).toHaveLength(1);
@@ -57,14 +71,18 @@ describe('the rule catalogue', () => {
 
   it('renders a message from its id and data alone', () => {
     // The words of rule incomplete-trace, as the rule table tests/core/rules/incomplete-trace.test.ts sees them.
-    expect(renderMessage(say('incomplete-trace/untraced', { function: 'SF-1', missing: ['solver', 'final-element'] }))).toBe(
+    expect(
+      renderMessage(say('incomplete-trace/untraced', { function: 'SF-1', missing: ['solver', 'final-element'] })),
+    ).toBe(
       '`SF-1` cannot be traced: the model gives no controller or logic solver, no final element; its independence is unverified',
     );
   });
 
   it('refuses, at compile time, a message id that does not exist or data of the wrong shape', () => {
     // @ts-expect-error: no such message
-    expect(() => renderMessage(say('incomplete-trace/missing', { function: 'SF-1', missing: [] }))).toThrow(/not in the rule catalogue/);
+    expect(() => renderMessage(say('incomplete-trace/missing', { function: 'SF-1', missing: [] }))).toThrow(
+      /not in the rule catalogue/,
+    );
     // @ts-expect-error: `missing` must list parts
     expect(() => renderMessage(say('incomplete-trace/untraced', { function: 'SF-1' }))).toThrow(TypeError);
   });

@@ -67,7 +67,12 @@ function sharedFor(analysis: Analysis, layer: string): Set<string> {
   return tags;
 }
 
-const siteWithSharings = siteArb.chain((site) => fc.tuple(fc.constant(site), fc.array(sharingArb(site), { maxLength: site.layers.length > 1 || site.cause === 'loop' ? 2 : 0 })));
+const siteWithSharings = siteArb.chain((site) =>
+  fc.tuple(
+    fc.constant(site),
+    fc.array(sharingArb(site), { maxLength: site.layers.length > 1 || site.cause === 'loop' ? 2 : 0 }),
+  ),
+);
 
 describe('deleting one link or support', () => {
   it('never turns unverified into independent, nor voided or open into independent unless the link was the shared one', () => {
@@ -93,10 +98,22 @@ describe('deleting one link or support', () => {
     );
   });
 
-  it('finds deletions that matter: taking out a SIF solver\'s supply leaves it unverified, not independent', () => {
+  it("finds deletions that matter: taking out a SIF solver's supply leaves it unverified, not independent", () => {
     // The converse, so the property cannot pass by never changing a verdict.
-    const loaded = loadModelText('one.bulk', siteText({ cause: 'loop', layers: [{ kind: 'sif', channels: 1, connection: 'nozzle', tripMode: 'energise', failsTo: 'closed', pfd: 0.01 }] }));
+    const loaded = loadModelText(
+      'one.bulk',
+      siteText({
+        cause: 'loop',
+        layers: [
+          { kind: 'sif', channels: 1, connection: 'nozzle', tripMode: 'energise', failsTo: 'closed', pfd: 0.01 },
+        ],
+      }),
+    );
     const cut = deletions(loaded.model!).find((d) => d.what === 'S1.poweredBy=K1')!;
-    expect(analyze(cut.model).assessments[0]!.layers[0]).toMatchObject({ function: 'F1', verdict: 'unverified', credited: false });
+    expect(analyze(cut.model).assessments[0]!.layers[0]).toMatchObject({
+      function: 'F1',
+      verdict: 'unverified',
+      credited: false,
+    });
   });
 });

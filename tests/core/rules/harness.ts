@@ -44,7 +44,11 @@ export const solenoidOnBpcsValve: Readonly<Record<string, string>> = {
   'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=CV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01',
 };
 // The cause states a basis so the assessment's own cause-no-basis finding stays out of the independence tables.
-export const BASE_SCENARIO: readonly string[] = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1 basis="rule table"', '  layer SF-1'];
+export const BASE_SCENARIO: readonly string[] = [
+  'scenario SC-1 category=c',
+  '  cause function=LC-1 frequency=0.1 basis="rule table"',
+  '  layer SF-1',
+];
 
 /** A scenario SC-1 on category c with the given cause line (a basis added when it has none) and layers (`layer X` lines). */
 export function scenario(cause: string, ...layers: string[]): string[] {
@@ -104,7 +108,9 @@ export function modelText(c: Case): string {
 export function analyseCase(c: Case): Analysis {
   const loaded = loadModelText('case.bulk', modelText(c));
   if (!loaded.model || loaded.diagnostics.length > 0) {
-    const said = loaded.diagnostics.map((d) => `${d.code} ${d.severity} ${d.message} at ${d.span?.line}:${d.span?.column}`);
+    const said = loaded.diagnostics.map(
+      (d) => `${d.code} ${d.severity} ${d.message} at ${d.span?.line}:${d.span?.column}`,
+    );
     throw new Error(`case "${c.name}" does not load cleanly: ${said.join('; ') || 'no model'}`);
   }
   return analyze(loaded.model, { spans: loaded.spans });
@@ -146,8 +152,12 @@ export function checkTable(ruleId: string, table: RuleTable): void {
   for (const c of table.invalid) {
     if (c.findings.length === 0) problems.push(`invalid case "${c.name}" lists no finding; make it a valid case`);
     const keys = c.findings.map((f) => f.key);
-    for (const key of keys) if (!key.startsWith(`${ruleId}:`)) problems.push(`case "${c.name}": key \`${key}\` is not a key of rule ${ruleId}`);
-    for (const f of c.findings) if (!f.messageId.startsWith(`${ruleId}/`)) problems.push(`case "${c.name}": message \`${f.messageId}\` is not a message of rule ${ruleId}`);
+    for (const key of keys)
+      if (!key.startsWith(`${ruleId}:`))
+        problems.push(`case "${c.name}": key \`${key}\` is not a key of rule ${ruleId}`);
+    for (const f of c.findings)
+      if (!f.messageId.startsWith(`${ruleId}/`))
+        problems.push(`case "${c.name}": message \`${f.messageId}\` is not a message of rule ${ruleId}`);
     if (new Set(keys).size !== keys.length) problems.push(`case "${c.name}" lists a finding twice`);
   }
   if (problems.length > 0) throw new Error(`table of ${ruleId}: ${problems.join('; ')}`);

@@ -8,12 +8,19 @@ import { canonicalTags, sharingArb, siteArb, siteText, tagArb, type Sharing } fr
 function analysed(text: string): Analysis {
   const loaded = loadModelText('property.bulk', text);
   if (!loaded.model || loaded.diagnostics.length > 0) {
-    throw new Error(`generated site does not load cleanly: ${loaded.diagnostics.map((d) => `${d.code} ${d.message} at ${d.span?.line}`).join('; ')}\n${text}`);
+    throw new Error(
+      `generated site does not load cleanly: ${loaded.diagnostics.map((d) => `${d.code} ${d.message} at ${d.span?.line}`).join('; ')}\n${text}`,
+    );
   }
   return analyze(loaded.model, { spans: loaded.spans });
 }
 
-const siteWithSharings = siteArb.chain((site) => fc.tuple(fc.constant(site), fc.array(sharingArb(site), { maxLength: site.layers.length > 1 || site.cause === 'loop' ? 3 : 0 })));
+const siteWithSharings = siteArb.chain((site) =>
+  fc.tuple(
+    fc.constant(site),
+    fc.array(sharingArb(site), { maxLength: site.layers.length > 1 || site.cause === 'loop' ? 3 : 0 }),
+  ),
+);
 
 describe('independence properties', () => {
   it('adding a shared dependency between two sides never increases the credit they get', () => {
@@ -25,7 +32,9 @@ describe('independence properties', () => {
         for (let k = 1; k <= sharings.length; k++) {
           const after = analysed(siteText(site, sharings.slice(0, k))).assessments[0]!;
           expect(after.mitigatedAfter).toBeGreaterThanOrEqual(before.mitigatedAfter * (1 - 1e-12));
-          expect(after.layers.filter((l) => l.credited).length).toBeLessThanOrEqual(before.layers.filter((l) => l.credited).length);
+          expect(after.layers.filter((l) => l.credited).length).toBeLessThanOrEqual(
+            before.layers.filter((l) => l.credited).length,
+          );
           before = after;
         }
       }),
@@ -52,12 +61,16 @@ describe('independence properties', () => {
     // The converse of the last property, so that it cannot pass by finding nothing anywhere.
     const withLayer = siteArb.filter((s) => s.cause === 'loop' && s.layers.some((l) => l.kind !== 'device'));
     fc.assert(
-      fc.property(withLayer, fc.constantFrom<Sharing['kind']>('tapping', 'sensor-circuit', 'network', 'cabinet'), (site, kind) => {
-        const layer = site.layers.findIndex((l) => l.kind !== 'device') + 1;
-        const analysis = analysed(siteText(site, [{ kind, between: [0, layer] }]));
-        const found = analysis.findings.filter((f) => RULE_IDS.has(f.rule) && f.element === 'SH0');
-        expect(found.map((f) => f.parties.map((p) => p.tag))).toEqual([['LOOP0', `F${layer}`]]);
-      }),
+      fc.property(
+        withLayer,
+        fc.constantFrom<Sharing['kind']>('tapping', 'sensor-circuit', 'network', 'cabinet'),
+        (site, kind) => {
+          const layer = site.layers.findIndex((l) => l.kind !== 'device') + 1;
+          const analysis = analysed(siteText(site, [{ kind, between: [0, layer] }]));
+          const found = analysis.findings.filter((f) => RULE_IDS.has(f.rule) && f.element === 'SH0');
+          expect(found.map((f) => f.parties.map((p) => p.tag))).toEqual([['LOOP0', `F${layer}`]]);
+        },
+      ),
       { numRuns: 40 },
     );
   });
@@ -65,7 +78,11 @@ describe('independence properties', () => {
   it('renaming every tag changes no verdict, credit or figure', () => {
     const renamed = siteWithSharings.chain(([site, sharings]) => {
       const tags = canonicalTags(site, sharings);
-      const names = fc.uniqueArray(tagArb, { minLength: tags.length, maxLength: tags.length, comparator: (a, b) => a.toLowerCase() === b.toLowerCase() });
+      const names = fc.uniqueArray(tagArb, {
+        minLength: tags.length,
+        maxLength: tags.length,
+        comparator: (a, b) => a.toLowerCase() === b.toLowerCase(),
+      });
       return fc.tuple(fc.constant(site), fc.constant(sharings), names);
     });
     fc.assert(
@@ -91,7 +108,11 @@ describe('independence properties', () => {
 function hasTie(a: ScenarioAssessment): boolean {
   return a.layers.some((x) =>
     a.layers.some(
-      (y) => x !== y && ((x.allowedPfd === y.allowedPfd && x.credited !== y.credited) || ((x.allowedPfdIfAccepted ?? x.allowedPfd) === (y.allowedPfdIfAccepted ?? y.allowedPfd) && x.creditedIfAccepted !== y.creditedIfAccepted)),
+      (y) =>
+        x !== y &&
+        ((x.allowedPfd === y.allowedPfd && x.credited !== y.credited) ||
+          ((x.allowedPfdIfAccepted ?? x.allowedPfd) === (y.allowedPfdIfAccepted ?? y.allowedPfd) &&
+            x.creditedIfAccepted !== y.creditedIfAccepted)),
     ),
   );
 }
@@ -104,12 +125,21 @@ function decisions(analysis: Analysis, canonical: (tag: string) => string, tied:
     scenario: canonical(a.scenario),
     figures: [a.mitigatedClaimed, a.mitigatedAfter, a.mitigatedIfAccepted, a.gap].map(figure),
     meets: [a.meetsClaimed, a.meetsAfter, a.meetsIfAccepted],
-    findings: analysis.findings.filter((f) => f.scenario === a.scenario).map((f) => `${f.rule} ${f.severity} ${f.element === undefined ? '-' : canonical(f.element)}`).sort(),
+    findings: analysis.findings
+      .filter((f) => f.scenario === a.scenario)
+      .map((f) => `${f.rule} ${f.severity} ${f.element === undefined ? '-' : canonical(f.element)}`)
+      .sort(),
     ...(tied
       ? {}
       : {
           sil: a.sif?.sil,
-          layers: a.layers.map((l) => ({ fn: canonical(l.function), verdict: l.verdict, credited: l.credited, creditedIfAccepted: l.creditedIfAccepted, allowedPfd: l.allowedPfd })),
+          layers: a.layers.map((l) => ({
+            fn: canonical(l.function),
+            verdict: l.verdict,
+            credited: l.credited,
+            creditedIfAccepted: l.creditedIfAccepted,
+            allowedPfd: l.allowedPfd,
+          })),
         }),
   }));
 }

@@ -6,7 +6,7 @@ import { ELEMENT_GROUPS, RULES, type Element, type SharedElementRule } from '@bu
 import { analyseCase } from './harness.ts';
 
 describe('the independence rule set', () => {
-  it('has a case table file for every rule, which runs that rule\'s table', () => {
+  it("has a case table file for every rule, which runs that rule's table", () => {
     const folder = new URL('.', import.meta.url);
     const files = new Set(readdirSync(folder));
     for (const rule of RULES) {
@@ -23,7 +23,9 @@ describe('the independence rule set', () => {
     for (const rule of RULES) {
       const text = readFileSync(new URL(`${rule.id}.ts`, checks), 'utf8');
       expect(text.match(/\bdefine\w*Rule\(/g), `${rule.id}.ts defines one rule`).toHaveLength(1);
-      expect(text, `${rule.id}.ts takes its data from the catalogue`).toContain(`catalogue/independence/${rule.id}.ts'`);
+      expect(text, `${rule.id}.ts takes its data from the catalogue`).toContain(
+        `catalogue/independence/${rule.id}.ts'`,
+      );
     }
   });
 
@@ -49,7 +51,11 @@ describe('the independence rule set', () => {
       for (const kind of kinds) {
         const element = { kind, tag: 'X-1' } as Element;
         // Rules that need a pair to decide are specific cases; the fallback for the group must not.
-        const claimed = shared.some((r) => r.groups.includes(group as never) && (r.claims === undefined || (r.claims.length < 2 && r.claims(element, {} as never))));
+        const claimed = shared.some(
+          (r) =>
+            r.groups.includes(group as never) &&
+            (r.claims === undefined || (r.claims.length < 2 && r.claims(element, {} as never))),
+        );
         expect(claimed, `${kind} (${group})`).toBe(true);
       }
     }

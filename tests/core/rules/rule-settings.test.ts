@@ -13,9 +13,18 @@ const KEY = 'shared-housing:SC-1:LC-1+SF-1:JB-1';
 
 describe('a rule setting in the model', () => {
   it('raises shared-housing to voids-credit: the finding, the layer and the rule set in force all say so', () => {
-    const analysis = analyseCase({ name: 'raised', lines: oneJunctionBox, extra: ['rule shared-housing severity=voids-credit reason="Owner standard MF-S-4 (invented)"'] });
+    const analysis = analyseCase({
+      name: 'raised',
+      lines: oneJunctionBox,
+      extra: ['rule shared-housing severity=voids-credit reason="Owner standard MF-S-4 (invented)"'],
+    });
     expect(analysis.findings.find((f) => f.key === KEY)?.severity).toBe('voids-credit');
-    expect(analysis.assessments[0]!.layers[0]).toMatchObject({ function: 'SF-1', verdict: 'voided', credited: false, creditedIfAccepted: false });
+    expect(analysis.assessments[0]!.layers[0]).toMatchObject({
+      function: 'SF-1',
+      verdict: 'voided',
+      credited: false,
+      creditedIfAccepted: false,
+    });
     expect(analysis.rules.find((r) => r.id === 'shared-housing')).toEqual({
       id: 'shared-housing',
       title: RULES.find((r) => r.id === 'shared-housing')!.title,
@@ -27,15 +36,30 @@ describe('a rule setting in the model', () => {
   });
 
   it('lowers it to a note: the layer keeps its credit and the note is still listed', () => {
-    const analysis = analyseCase({ name: 'lowered', lines: oneJunctionBox, extra: ['rule shared-housing severity=note reason="Separate glands (invented)"'] });
+    const analysis = analyseCase({
+      name: 'lowered',
+      lines: oneJunctionBox,
+      extra: ['rule shared-housing severity=note reason="Separate glands (invented)"'],
+    });
     expect(analysis.findings.find((f) => f.key === KEY)?.severity).toBe('note');
-    expect(analysis.assessments[0]!.layers[0]).toMatchObject({ function: 'SF-1', verdict: 'independent', credited: true });
-    expect(analysis.rules.find((r) => r.id === 'shared-housing')).toMatchObject({ severity: 'note', defaultSeverity: 'needs-justification' });
+    expect(analysis.assessments[0]!.layers[0]).toMatchObject({
+      function: 'SF-1',
+      verdict: 'independent',
+      credited: true,
+    });
+    expect(analysis.rules.find((r) => r.id === 'shared-housing')).toMatchObject({
+      severity: 'note',
+      defaultSeverity: 'needs-justification',
+    });
   });
 
   it('by default leaves every independence rule at its default severity, with no reason', () => {
     const analysis = analyseCase({ name: 'default', lines: oneJunctionBox });
-    expect(analysis.assessments[0]!.layers[0]).toMatchObject({ verdict: 'open', credited: false, creditedIfAccepted: true });
+    expect(analysis.assessments[0]!.layers[0]).toMatchObject({
+      verdict: 'open',
+      credited: false,
+      creditedIfAccepted: true,
+    });
     for (const rule of RULES) {
       const inForce = analysis.rules.find((r) => r.id === rule.id);
       expect(inForce, rule.id).toMatchObject({ severity: rule.defaultSeverity, defaultSeverity: rule.defaultSeverity });

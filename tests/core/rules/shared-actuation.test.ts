@@ -26,7 +26,24 @@ ruleTable('shared-actuation', {
         'CV-1': 'control-valve CV-1 fails-to=closed mounted-on=L-1 signal-via=XY-1 air-from=IA-A',
         'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=XY-1 air-from=IA-B',
       },
-      findings: [{ key: 'shared-actuation:SC-1:LC-1+SF-1:XY-1', messageId: 'shared-actuation/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'XY-1', kind: 'solenoid', severity: 'voids-credit', beneath: ['IO-4', 'UPS-B'] }, at: '28:9', severity: 'voids-credit', element: 'XY-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-actuation:SC-1:LC-1+SF-1:XY-1',
+          messageId: 'shared-actuation/shared',
+          data: {
+            a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'XY-1',
+            kind: 'solenoid',
+            severity: 'voids-credit',
+            beneath: ['IO-4', 'UPS-B'],
+          },
+          at: '28:9',
+          severity: 'voids-credit',
+          element: 'XY-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'both valves through one positioner',
@@ -37,7 +54,15 @@ ruleTable('shared-actuation', {
         'CV-1': 'control-valve CV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1 air-from=IA-A',
         'XV-1': 'shutdown-valve XV-1 fails-to=closed mounted-on=L-1 signal-via=ZP-1 air-from=IA-B',
       },
-      findings: [{ key: 'shared-actuation:SC-1:LC-1+SF-1:ZP-1', messageId: 'shared-actuation/shared', severity: 'voids-credit', element: 'ZP-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-actuation:SC-1:LC-1+SF-1:ZP-1',
+          messageId: 'shared-actuation/shared',
+          severity: 'voids-credit',
+          element: 'ZP-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
   ],
 });

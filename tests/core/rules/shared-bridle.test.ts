@@ -26,13 +26,38 @@ ruleTable('shared-bridle', {
       name: 'both transmitters on one bridle (its nozzles are listed under it, not again)',
       source: SOURCE,
       lines: { 'BR-1': 'bridle BR-1 mounted-on=N-1,N-2', ...onBoth('BR-1') },
-      findings: [{ key: 'shared-bridle:SC-1:LC-1+SF-1:BR-1', messageId: 'shared-bridle/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'BR-1', kind: 'bridle', severity: 'voids-credit', beneath: ['N-1', 'N-2'] }, at: '28:9', severity: 'voids-credit', element: 'BR-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-bridle:SC-1:LC-1+SF-1:BR-1',
+          messageId: 'shared-bridle/shared',
+          data: {
+            a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'BR-1',
+            kind: 'bridle',
+            severity: 'voids-credit',
+            beneath: ['N-1', 'N-2'],
+          },
+          at: '28:9',
+          severity: 'voids-credit',
+          element: 'BR-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'both on one manifold',
       source: SOURCE,
       lines: { 'MF-1': 'manifold MF-1 mounted-on=N-1', ...onBoth('MF-1') },
-      findings: [{ key: 'shared-bridle:SC-1:LC-1+SF-1:MF-1', messageId: 'shared-bridle/shared', severity: 'voids-credit', element: 'MF-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-bridle:SC-1:LC-1+SF-1:MF-1',
+          messageId: 'shared-bridle/shared',
+          severity: 'voids-credit',
+          element: 'MF-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
   ],
 });

@@ -34,20 +34,53 @@ ruleTable('shared-final-element', {
       name: 'a SIS solenoid on the BPCS control valve: the valve is shared',
       source: SOURCE,
       lines: solenoidOnBpcsValve,
-      findings: [{ key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1', messageId: 'shared-final-element/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'CV-1', kind: 'control-valve', severity: 'voids-credit', beneath: ['IA-A'] }, at: '29:9', severity: 'voids-credit', element: 'CV-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1',
+          messageId: 'shared-final-element/shared',
+          data: {
+            a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'CV-1',
+            kind: 'control-valve',
+            severity: 'voids-credit',
+            beneath: ['IA-A'],
+          },
+          at: '29:9',
+          severity: 'voids-credit',
+          element: 'CV-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'the SIF closes the control valve of the failing loop',
       source: SOURCE,
       lines: { 'SF-1': 'sif SF-1 sensors=T-2 solver=S-1 finals=CV-1 trip=close trip-mode=de-energise sil=2 pfd=0.01' },
-      findings: [{ key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1', messageId: 'shared-final-element/shared', severity: 'voids-credit', element: 'CV-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-final-element:SC-1:LC-1+SF-1:CV-1',
+          messageId: 'shared-final-element/shared',
+          severity: 'voids-credit',
+          element: 'CV-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'two device layers claimed on one relief valve',
       source: 'CCPS, Layer of Protection Analysis (2001), ch. 6',
       lines: { ...reliefDevices, 'D-2': 'device D-2 device=PSV-1' },
       scenario: twoDevices,
-      findings: [{ key: 'shared-final-element:SC-1:D-1+D-2:PSV-1', messageId: 'shared-final-element/shared', severity: 'voids-credit', element: 'PSV-1', parties: ['D-1', 'D-2'] }],
+      findings: [
+        {
+          key: 'shared-final-element:SC-1:D-1+D-2:PSV-1',
+          messageId: 'shared-final-element/shared',
+          severity: 'voids-credit',
+          element: 'PSV-1',
+          parties: ['D-1', 'D-2'],
+        },
+      ],
     },
   ],
 });
@@ -56,7 +89,9 @@ describe('a function relies on an element for the role it uses', () => {
   it('a SIF acting through its own solenoid on a BPCS valve relies on the valve, not on the positioner, its card or controller', () => {
     const analysis = analyseCase({ name: 'solenoid on BPCS valve', lines: solenoidOnBpcsValve });
     // Common practice, no source: the SIS solenoid vents the actuator whatever the positioner does.
-    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([['shared-final-element:SC-1:LC-1+SF-1:CV-1', 'voids-credit']]);
+    expect(analysis.findings.map((f) => [f.key, f.severity])).toEqual([
+      ['shared-final-element:SC-1:LC-1+SF-1:CV-1', 'voids-credit'],
+    ]);
     const sif = analysis.traces.find((t) => t.function === 'SF-1')!;
     const relied = sif.elements.map((e) => e.tag);
     expect(relied).toEqual(expect.arrayContaining(['CV-1', 'XY-1', 'IO-4', 'S-1', 'IA-A']));

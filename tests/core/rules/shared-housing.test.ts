@@ -9,24 +9,60 @@ const oneJunctionBox = {
   'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=IO-1 housed-in=JB-1 supply=from-signal',
   'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-2 housed-in=JB-1 supply=from-signal',
 };
-const inJb1 = { key: 'shared-housing:SC-1:LC-1+SF-1:JB-1', messageId: 'shared-housing/shared' as const, element: 'JB-1', parties: ['LC-1', 'SF-1'] };
+const inJb1 = {
+  key: 'shared-housing:SC-1:LC-1+SF-1:JB-1',
+  messageId: 'shared-housing/shared' as const,
+  element: 'JB-1',
+  parties: ['LC-1', 'SF-1'],
+};
 
 ruleTable('shared-housing', {
   valid: [
     { name: 'no housings modelled' },
     {
       name: 'separate cabinets',
-      lines: { 'CAB-1': 'cabinet CAB-1', 'CAB-2': 'cabinet CAB-2', 'C-1': 'controller C-1 system=bpcs housed-in=CAB-1 powered-by=CK-A', 'S-1': 'logic-solver S-1 system=sis housed-in=CAB-2 powered-by=CK-B' },
+      lines: {
+        'CAB-1': 'cabinet CAB-1',
+        'CAB-2': 'cabinet CAB-2',
+        'C-1': 'controller C-1 system=bpcs housed-in=CAB-1 powered-by=CK-A',
+        'S-1': 'logic-solver S-1 system=sis housed-in=CAB-2 powered-by=CK-B',
+      },
     },
   ],
   invalid: [
     {
       name: 'BPCS controller and SIS logic solver in one cabinet',
       source: SOURCE,
-      lines: { 'CAB-1': 'cabinet CAB-1', 'C-1': 'controller C-1 system=bpcs housed-in=CAB-1 powered-by=CK-A', 'S-1': 'logic-solver S-1 system=sis housed-in=CAB-1 powered-by=CK-B' },
-      findings: [{ key: 'shared-housing:SC-1:LC-1+SF-1:CAB-1', messageId: 'shared-housing/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'CAB-1', kind: 'cabinet', severity: 'needs-justification', beneath: [] }, at: '28:9', severity: 'needs-justification', element: 'CAB-1', parties: ['LC-1', 'SF-1'] }],
+      lines: {
+        'CAB-1': 'cabinet CAB-1',
+        'C-1': 'controller C-1 system=bpcs housed-in=CAB-1 powered-by=CK-A',
+        'S-1': 'logic-solver S-1 system=sis housed-in=CAB-1 powered-by=CK-B',
+      },
+      findings: [
+        {
+          key: 'shared-housing:SC-1:LC-1+SF-1:CAB-1',
+          messageId: 'shared-housing/shared',
+          data: {
+            a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'CAB-1',
+            kind: 'cabinet',
+            severity: 'needs-justification',
+            beneath: [],
+          },
+          at: '28:9',
+          severity: 'needs-justification',
+          element: 'CAB-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
-    { name: 'both transmitters in one junction box', source: SOURCE, lines: oneJunctionBox, findings: [{ ...inJb1, severity: 'needs-justification' }] },
+    {
+      name: 'both transmitters in one junction box',
+      source: SOURCE,
+      lines: oneJunctionBox,
+      findings: [{ ...inJb1, severity: 'needs-justification' }],
+    },
     {
       name: 'both cables along one route',
       source: SOURCE,
@@ -37,7 +73,15 @@ ruleTable('shared-housing', {
         'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=N-1 signal-via=CB-1 supply=from-signal',
         'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=CB-2 supply=from-signal',
       },
-      findings: [{ key: 'shared-housing:SC-1:LC-1+SF-1:RT-1', messageId: 'shared-housing/shared', severity: 'needs-justification', element: 'RT-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-housing:SC-1:LC-1+SF-1:RT-1',
+          messageId: 'shared-housing/shared',
+          severity: 'needs-justification',
+          element: 'RT-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'a model rule setting raises it to voids-credit',
@@ -48,7 +92,9 @@ ruleTable('shared-housing', {
     {
       name: 'accepted by a justification: still listed, marked accepted',
       lines: oneJunctionBox,
-      extra: ['accept shared-housing:SC-1:LC-1+SF-1:JB-1 by="T. Tester (invented)" date=2026-11-01 reason="Fire-rated box (test)"'],
+      extra: [
+        'accept shared-housing:SC-1:LC-1+SF-1:JB-1 by="T. Tester (invented)" date=2026-11-01 reason="Fire-rated box (test)"',
+      ],
       findings: [{ ...inJb1, severity: 'needs-justification', accepted: true }],
     },
   ],

@@ -26,13 +26,38 @@ ruleTable('shared-impulse-line', {
       name: 'both transmitters on one impulse line',
       source: SOURCE,
       lines: { 'IL-1': 'impulse-line IL-1 mounted-on=N-1', ...onBoth('IL-1') },
-      findings: [{ key: 'shared-impulse-line:SC-1:LC-1+SF-1:IL-1', messageId: 'shared-impulse-line/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'IL-1', kind: 'impulse-line', severity: 'voids-credit', beneath: ['N-1'] }, at: '28:9', severity: 'voids-credit', element: 'IL-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-impulse-line:SC-1:LC-1+SF-1:IL-1',
+          messageId: 'shared-impulse-line/shared',
+          data: {
+            a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'IL-1',
+            kind: 'impulse-line',
+            severity: 'voids-credit',
+            beneath: ['N-1'],
+          },
+          at: '28:9',
+          severity: 'voids-credit',
+          element: 'IL-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'both on one capillary',
       source: SOURCE,
       lines: { 'CP-1': 'capillary CP-1 mounted-on=N-2', ...onBoth('CP-1') },
-      findings: [{ key: 'shared-impulse-line:SC-1:LC-1+SF-1:CP-1', messageId: 'shared-impulse-line/shared', severity: 'voids-credit', element: 'CP-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-impulse-line:SC-1:LC-1+SF-1:CP-1',
+          messageId: 'shared-impulse-line/shared',
+          severity: 'voids-credit',
+          element: 'CP-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'own impulse lines joined into one upstream line',
@@ -44,7 +69,15 @@ ruleTable('shared-impulse-line', {
         'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=IL-1 signal-via=IO-1 supply=from-signal',
         'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=IL-2 signal-via=IO-2 supply=from-signal',
       },
-      findings: [{ key: 'shared-impulse-line:SC-1:LC-1+SF-1:IL-0', messageId: 'shared-impulse-line/shared', severity: 'voids-credit', element: 'IL-0', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-impulse-line:SC-1:LC-1+SF-1:IL-0',
+          messageId: 'shared-impulse-line/shared',
+          severity: 'voids-credit',
+          element: 'IL-0',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
   ],
 });

@@ -16,7 +16,11 @@ const twoAlarms = scenario('external="Feed surge" frequency=0.1', 'AL-1', 'AL-2'
 ruleTable('shared-operator', {
   valid: [
     { name: 'two alarms answered by two operators', lines: alarms, scenario: twoAlarms },
-    { name: 'operator error cause, the alarm answered by another operator', lines: alarms, scenario: scenario('element=OP-1 frequency=0.1', 'AL-2') },
+    {
+      name: 'operator error cause, the alarm answered by another operator',
+      lines: alarms,
+      scenario: scenario('element=OP-1 frequency=0.1', 'AL-2'),
+    },
   ],
   invalid: [
     {
@@ -24,14 +28,39 @@ ruleTable('shared-operator', {
       source: SOURCE,
       lines: { ...alarms, 'AL-2': 'alarm AL-2 sensors=T-3 raised-in=S-1 operator=OP-1 finals=XV-1 minutes=20' },
       scenario: twoAlarms,
-      findings: [{ key: 'shared-operator:SC-1:AL-1+AL-2:OP-1', messageId: 'shared-operator/shared', data: { a: { role: 'layer', tag: 'AL-1' }, b: { role: 'layer', tag: 'AL-2' }, element: 'OP-1', kind: 'operator', severity: 'voids-credit', beneath: [] }, at: '34:9', severity: 'voids-credit', element: 'OP-1', parties: ['AL-1', 'AL-2'] }],
+      findings: [
+        {
+          key: 'shared-operator:SC-1:AL-1+AL-2:OP-1',
+          messageId: 'shared-operator/shared',
+          data: {
+            a: { role: 'layer', tag: 'AL-1' },
+            b: { role: 'layer', tag: 'AL-2' },
+            element: 'OP-1',
+            kind: 'operator',
+            severity: 'voids-credit',
+            beneath: [],
+          },
+          at: '34:9',
+          severity: 'voids-credit',
+          element: 'OP-1',
+          parties: ['AL-1', 'AL-2'],
+        },
+      ],
     },
     {
       name: 'the operator whose error is the cause answers the alarm',
       source: SOURCE,
       lines: alarms,
       scenario: scenario('element=OP-1 frequency=0.1', 'AL-1'),
-      findings: [{ key: 'shared-operator:SC-1:OP-1+AL-1:OP-1', messageId: 'shared-operator/shared', severity: 'voids-credit', element: 'OP-1', parties: ['OP-1', 'AL-1'] }],
+      findings: [
+        {
+          key: 'shared-operator:SC-1:OP-1+AL-1:OP-1',
+          messageId: 'shared-operator/shared',
+          severity: 'voids-credit',
+          element: 'OP-1',
+          parties: ['OP-1', 'AL-1'],
+        },
+      ],
     },
   ],
 });

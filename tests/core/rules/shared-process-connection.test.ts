@@ -22,7 +22,24 @@ ruleTable('shared-process-connection', {
       name: 'the SIF transmitter on the loop transmitter nozzle',
       source: SOURCE,
       lines: { 'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-1 signal-via=IO-2 supply=from-signal' },
-      findings: [{ key: 'shared-process-connection:SC-1:LC-1+SF-1:N-1', messageId: 'shared-process-connection/shared', data: { a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' }, b: { role: 'layer', tag: 'SF-1' }, element: 'N-1', kind: 'nozzle', severity: 'voids-credit', beneath: [] }, at: '27:9', severity: 'voids-credit', element: 'N-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-process-connection:SC-1:LC-1+SF-1:N-1',
+          messageId: 'shared-process-connection/shared',
+          data: {
+            a: { role: 'cause', tag: 'LC-1', functionKind: 'loop' },
+            b: { role: 'layer', tag: 'SF-1' },
+            element: 'N-1',
+            kind: 'nozzle',
+            severity: 'voids-credit',
+            beneath: [],
+          },
+          at: '27:9',
+          severity: 'voids-credit',
+          element: 'N-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'own root valves on one tapping: the tapping is shared, not the root valves',
@@ -34,7 +51,15 @@ ruleTable('shared-process-connection', {
         'T-1': 'transmitter T-1 make="Acme" model="A1" mounted-on=RV-1 signal-via=IO-1 supply=from-signal',
         'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=RV-2 signal-via=IO-2 supply=from-signal',
       },
-      findings: [{ key: 'shared-process-connection:SC-1:LC-1+SF-1:TP-1', messageId: 'shared-process-connection/shared', severity: 'voids-credit', element: 'TP-1', parties: ['LC-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-process-connection:SC-1:LC-1+SF-1:TP-1',
+          messageId: 'shared-process-connection/shared',
+          severity: 'voids-credit',
+          element: 'TP-1',
+          parties: ['LC-1', 'SF-1'],
+        },
+      ],
     },
     {
       name: 'two layers on one nozzle, apart from the cause',
@@ -49,7 +74,15 @@ ruleTable('shared-process-connection', {
         'AL-1': 'alarm AL-1 sensors=T-3 raised-in=C-2 operator=OP-1 finals=MS-1 minutes=20',
       },
       scenario: scenario('function=LC-1 frequency=0.1', 'SF-1', 'AL-1'),
-      findings: [{ key: 'shared-process-connection:SC-1:AL-1+SF-1:N-2', messageId: 'shared-process-connection/shared', severity: 'voids-credit', element: 'N-2', parties: ['AL-1', 'SF-1'] }],
+      findings: [
+        {
+          key: 'shared-process-connection:SC-1:AL-1+SF-1:N-2',
+          messageId: 'shared-process-connection/shared',
+          severity: 'voids-credit',
+          element: 'N-2',
+          parties: ['AL-1', 'SF-1'],
+        },
+      ],
     },
   ],
 });

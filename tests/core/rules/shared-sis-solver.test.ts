@@ -15,12 +15,22 @@ const secondSif = (solver: string) => ({
   'SF-2': `sif SF-2 sensors=T-3 solver=${solver} finals=XV-2 trip=close trip-mode=de-energise sil=1 pfd=0.1`,
 });
 const twoSifs = scenario('function=LC-1 frequency=0.1', 'SF-1', 'SF-2');
-const finding = (a: string, b: string) => ({ key: `shared-sis-solver:SC-1:${a}+${b}:S-1`, messageId: 'shared-sis-solver/both-layers' as const, severity: 'needs-justification' as const, element: 'S-1', parties: [a, b] });
+const finding = (a: string, b: string) => ({
+  key: `shared-sis-solver:SC-1:${a}+${b}:S-1`,
+  messageId: 'shared-sis-solver/both-layers' as const,
+  severity: 'needs-justification' as const,
+  element: 'S-1',
+  parties: [a, b],
+});
 
 ruleTable('shared-sis-solver', {
   valid: [
     { name: 'one SIF in the SIS logic solver' },
-    { name: 'two SIFs in two SIS logic solvers', lines: { 'S-2': 'logic-solver S-2 system=sis powered-by=CK-B', ...secondSif('S-2') }, scenario: twoSifs },
+    {
+      name: 'two SIFs in two SIS logic solvers',
+      lines: { 'S-2': 'logic-solver S-2 system=sis powered-by=CK-B', ...secondSif('S-2') },
+      scenario: twoSifs,
+    },
     {
       // A SIF in the failing BPCS controller is shared-logic-solver's case, not this one.
       name: 'a SIF in the BPCS controller of the failing loop',
@@ -34,12 +44,23 @@ ruleTable('shared-sis-solver', {
       lines: secondSif('S-1'),
       scenario: twoSifs,
       // Points at the second layer's claim (the scenario's last line); the solver's power supply is spoken for.
-      findings: [{ ...finding('SF-1', 'SF-2'), data: { layers: ['SF-1', 'SF-2'], element: 'S-1', beneath: ['UPS-B'] }, at: '35:9' }],
+      findings: [
+        {
+          ...finding('SF-1', 'SF-2'),
+          data: { layers: ['SF-1', 'SF-2'], element: 'S-1', beneath: ['UPS-B'] },
+          at: '35:9',
+        },
+      ],
     },
     {
       name: 'an alarm raised in the SIS logic solver that also runs the SIF',
       source: SOURCE,
-      lines: { 'OP-1': 'operator OP-1', 'P-1': 'pump P-1', 'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-4 powered-by=CK-B', 'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 operator=OP-1 finals=MS-1 minutes=20' },
+      lines: {
+        'OP-1': 'operator OP-1',
+        'P-1': 'pump P-1',
+        'MS-1': 'motor-starter MS-1 fails-to=off mounted-on=P-1 signal-via=IO-4 powered-by=CK-B',
+        'AL-1': 'alarm AL-1 sensors=T-2 raised-in=S-1 operator=OP-1 finals=MS-1 minutes=20',
+      },
       scenario: scenario('function=LC-1 frequency=0.1', 'SF-1', 'AL-1'),
       findings: [finding('AL-1', 'SF-1')], // a pair of layers is named in tag order
     },

@@ -24,7 +24,15 @@ export interface SiteSpec {
 /** The parts of a side a sharing can hang on; each names a canonical tag. */
 type Part = 'sensor' | 'card' | 'solver' | 'final' | 'connectionUser';
 
-export const SHARING_KINDS = ['tapping', 'sensor-circuit', 'junction-box', 'network', 'cabinet', 'solver-circuit', 'air'] as const;
+export const SHARING_KINDS = [
+  'tapping',
+  'sensor-circuit',
+  'junction-box',
+  'network',
+  'cabinet',
+  'solver-circuit',
+  'air',
+] as const;
 export type SharingKind = (typeof SHARING_KINDS)[number];
 
 export interface Sharing {
@@ -69,7 +77,10 @@ export function sideCount(site: SiteSpec): number {
 export const sharingArb = (site: SiteSpec): fc.Arbitrary<Sharing> =>
   fc.record({
     kind: fc.constantFrom(...SHARING_KINDS),
-    between: fc.uniqueArray(fc.integer({ min: 0, max: sideCount(site) - 1 }), { minLength: 2, maxLength: 2 }) as fc.Arbitrary<[number, number]>,
+    between: fc.uniqueArray(fc.integer({ min: 0, max: sideCount(site) - 1 }), {
+      minLength: 2,
+      maxLength: 2,
+    }) as fc.Arbitrary<[number, number]>,
   });
 
 const PART_OF: Record<SharingKind, { part: Part; link: string; keyword: string }> = {
@@ -86,7 +97,8 @@ const PART_OF: Record<SharingKind, { part: Part; link: string; keyword: string }
 function build(site: SiteSpec, sharings: readonly Sharing[]) {
   const elements: ElementLine[] = [];
   const functions: string[][] = [];
-  const add = (keyword: string, tag: string, attrs: Record<string, string[]> = {}) => elements.push({ keyword, tag, attrs });
+  const add = (keyword: string, tag: string, attrs: Record<string, string[]> = {}) =>
+    elements.push({ keyword, tag, attrs });
   add('vessel', 'V');
   add('line', 'L');
   add('pump', 'P');
@@ -99,8 +111,19 @@ function build(site: SiteSpec, sharings: readonly Sharing[]) {
     add('nozzle', 'N0', { 'mounted-on': ['V'] });
     add('io-card', 'I0', { 'signal-via': ['C0'], 'powered-by': ['K0'] });
     add('io-card', 'O0', { 'signal-via': ['C0'], 'powered-by': ['K0'] });
-    add('transmitter', 'T0', { make: ['"Make-0"'], model: ['"M"'], supply: ['from-signal'], 'mounted-on': ['N0'], 'signal-via': ['I0'] });
-    add('control-valve', 'CV0', { 'fails-to': ['closed'], 'mounted-on': ['L'], 'signal-via': ['O0'], 'air-from': ['A0'] });
+    add('transmitter', 'T0', {
+      make: ['"Make-0"'],
+      model: ['"M"'],
+      supply: ['from-signal'],
+      'mounted-on': ['N0'],
+      'signal-via': ['I0'],
+    });
+    add('control-valve', 'CV0', {
+      'fails-to': ['closed'],
+      'mounted-on': ['L'],
+      'signal-via': ['O0'],
+      'air-from': ['A0'],
+    });
     functions.push(['loop', 'LOOP0', 'sensors=T0', 'solver=C0', 'finals=CV0']);
     sides.push({ fn: 'LOOP0', parts: { sensor: 'T0', card: 'I0', solver: 'C0', final: 'CV0', connectionUser: 'T0' } });
   }
@@ -117,7 +140,10 @@ function build(site: SiteSpec, sharings: readonly Sharing[]) {
     const solver = layer.kind === 'sif' ? `S${i}` : `C${i}`;
     add('ups', `U${i}`);
     add('circuit', `K${i}`, { 'powered-by': [`U${i}`] });
-    add(layer.kind === 'sif' ? 'logic-solver' : 'controller', solver, { system: [layer.kind === 'sif' ? 'sis' : 'bpcs'], 'powered-by': [`K${i}`] });
+    add(layer.kind === 'sif' ? 'logic-solver' : 'controller', solver, {
+      system: [layer.kind === 'sif' ? 'sis' : 'bpcs'],
+      'powered-by': [`K${i}`],
+    });
     add('io-card', `O${i}`, { 'signal-via': [solver], 'powered-by': [`K${i}`] });
     const channels = layer.kind === 'alarm' ? 1 : layer.channels;
     const sensors: string[] = [];
@@ -130,24 +156,59 @@ function build(site: SiteSpec, sharings: readonly Sharing[]) {
         add(layer.connection, mount, { 'mounted-on': [nozzle] });
       }
       add('io-card', `I${i}-${c}`, { 'signal-via': [solver], 'powered-by': [`K${i}`] });
-      add('transmitter', `T${i}-${c}`, { make: [`"Make-${i}-${c}"`], model: ['"M"'], supply: ['from-signal'], 'mounted-on': [mount], 'signal-via': [`I${i}-${c}`] });
+      add('transmitter', `T${i}-${c}`, {
+        make: [`"Make-${i}-${c}"`],
+        model: ['"M"'],
+        supply: ['from-signal'],
+        'mounted-on': [mount],
+        'signal-via': [`I${i}-${c}`],
+      });
       sensors.push(`T${i}-${c}`);
     }
     const voting = channels === 2 ? ['sensor-voting=1oo2'] : [];
     if (layer.kind === 'alarm') {
       add('console', `CON${i}`, { 'signal-via': [solver], 'powered-by': [`K${i}`] });
       add('operator', `OP${i}`);
-      add('motor-starter', `M${i}`, { 'fails-to': ['off'], 'mounted-on': ['P'], 'signal-via': [`O${i}`], 'powered-by': [`K${i}`] });
-      functions.push(['alarm', fn, `sensors=${sensors[0]}`, `raised-in=${solver}`, `console=CON${i}`, `operator=OP${i}`, `finals=M${i}`, 'minutes=20']);
-      sides.push({ fn, parts: { sensor: sensors[0]!, card: `I${i}-0`, solver, final: `M${i}`, connectionUser: sensors[0]! } });
+      add('motor-starter', `M${i}`, {
+        'fails-to': ['off'],
+        'mounted-on': ['P'],
+        'signal-via': [`O${i}`],
+        'powered-by': [`K${i}`],
+      });
+      functions.push([
+        'alarm',
+        fn,
+        `sensors=${sensors[0]}`,
+        `raised-in=${solver}`,
+        `console=CON${i}`,
+        `operator=OP${i}`,
+        `finals=M${i}`,
+        'minutes=20',
+      ]);
+      sides.push({
+        fn,
+        parts: { sensor: sensors[0]!, card: `I${i}-0`, solver, final: `M${i}`, connectionUser: sensors[0]! },
+      });
       return;
     }
     const failsTo: Record<string, string[]> = layer.failsTo ? { 'fails-to': [layer.failsTo] } : {};
     add('air-header', `A${i}`);
     add('solenoid', `Y${i}`, { ...failsTo, supply: ['from-signal'], 'signal-via': [`O${i}`] });
     add('shutdown-valve', `X${i}`, { ...failsTo, 'mounted-on': ['L'], 'signal-via': [`Y${i}`], 'air-from': [`A${i}`] });
-    functions.push([layer.kind, fn, `sensors=${sensors.join(',')}`, ...voting, `solver=${solver}`, `finals=X${i}`, 'trip=close', `trip-mode=${layer.tripMode}`]);
-    sides.push({ fn, parts: { sensor: sensors[0]!, card: `I${i}-0`, solver, final: `X${i}`, connectionUser: sensors[0]! } });
+    functions.push([
+      layer.kind,
+      fn,
+      `sensors=${sensors.join(',')}`,
+      ...voting,
+      `solver=${solver}`,
+      `finals=X${i}`,
+      'trip=close',
+      `trip-mode=${layer.tripMode}`,
+    ]);
+    sides.push({
+      fn,
+      parts: { sensor: sensors[0]!, card: `I${i}-0`, solver, final: `X${i}`, connectionUser: sensors[0]! },
+    });
   });
   sharings.forEach((sharing, k) => {
     const { part, link, keyword } = PART_OF[sharing.kind];
@@ -170,19 +231,31 @@ export function canonicalTags(site: SiteSpec, sharings: readonly Sharing[] = [])
 }
 
 /** The site as .bulk text, with each canonical tag written as `name(tag)`. */
-export function siteText(site: SiteSpec, sharings: readonly Sharing[] = [], name: (tag: string) => string = (t) => t): string {
+export function siteText(
+  site: SiteSpec,
+  sharings: readonly Sharing[] = [],
+  name: (tag: string) => string = (t) => t,
+): string {
   const { elements, functions } = build(site, sharings);
-  const rename = (word: string) => word.replace(/^([a-z-]+=)(.*)$/, (_m, key: string, list: string) => key + list.split(',').map(name).join(','));
+  const rename = (word: string) =>
+    word.replace(/^([a-z-]+=)(.*)$/, (_m, key: string, list: string) => key + list.split(',').map(name).join(','));
   const attr = (key: string, values: string[]) =>
-    key === 'system' || key === 'fails-to' || key === 'supply' || key === 'make' || key === 'model' ? `${key}=${values.join(',')}` : `${key}=${values.map(name).join(',')}`;
+    key === 'system' || key === 'fails-to' || key === 'supply' || key === 'make' || key === 'model'
+      ? `${key}=${values.join(',')}`
+      : `${key}=${values.map(name).join(',')}`;
   const lines = [
     'site "Property site (invented)"',
     `category ${name('CAT')} tolerable=1e-6 harm=containment`,
     ...elements.map((e) => [e.keyword, name(e.tag), ...Object.entries(e.attrs).map(([k, v]) => attr(k, v))].join(' ')),
     ...functions.map(([keyword, tag, ...attrs]) => [keyword, name(tag!), ...attrs.map(rename)].join(' ')),
     `scenario ${name('SCN')} category=${name('CAT')}`,
-    site.cause === 'loop' ? `  cause function=${name('LOOP0')} frequency=0.1 basis="generated"` : '  cause external="Feed upset" frequency=0.1 basis="generated"',
-    ...site.layers.map((layer, n) => `  layer ${name(`F${n + 1}`)} pfd=${layer.kind === 'trip' || layer.kind === 'alarm' ? 0.1 : layer.pfd} basis="generated"`),
+    site.cause === 'loop'
+      ? `  cause function=${name('LOOP0')} frequency=0.1 basis="generated"`
+      : '  cause external="Feed upset" frequency=0.1 basis="generated"',
+    ...site.layers.map(
+      (layer, n) =>
+        `  layer ${name(`F${n + 1}`)} pfd=${layer.kind === 'trip' || layer.kind === 'alarm' ? 0.1 : layer.pfd} basis="generated"`,
+    ),
   ];
   return lines.join('\n') + '\n';
 }

@@ -16,11 +16,19 @@ const lines = {
   'T-2': 'transmitter T-2 make="Brill" model="B2" mounted-on=N-2 signal-via=IO-5 supply=from-signal',
   'AL-1': 'alarm AL-1 sensors=T-2 raised-in=C-1 operator=OP-1 finals=XV-1 minutes=20',
 };
-const scenario = ['scenario SC-1 category=c', '  cause function=LC-1 frequency=0.1 basis="rule table"', '  layer AL-1 pfd=0.1'];
-const acceptController = 'accept alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1 by="T. Tester (invented)" date=2026-11-01 reason="test"';
+const scenario = [
+  'scenario SC-1 category=c',
+  '  cause function=LC-1 frequency=0.1 basis="rule table"',
+  '  layer AL-1 pfd=0.1',
+];
+const acceptController =
+  'accept alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1 by="T. Tester (invented)" date=2026-11-01 reason="test"';
 
 function run(extra: string[] = [], overrides: Record<string, string> = {}) {
-  const loaded = loadModelText('case.bulk', modelText({ name: 'routes', lines: { ...lines, ...overrides }, scenario, extra }));
+  const loaded = loadModelText(
+    'case.bulk',
+    modelText({ name: 'routes', lines: { ...lines, ...overrides }, scenario, extra }),
+  );
   if (!loaded.model) throw new Error(loaded.diagnostics.map((d) => d.message).join('; '));
   return analyze(loaded.model);
 }
@@ -29,8 +37,22 @@ describe('elements beneath a shared element', () => {
   it('are listed on their own when one side reaches them around it, with the path that shows the route', () => {
     const analysis = run();
     expect(analysis.findings.map((f) => [f.key, f.severity, f.paths])).toEqual([
-      ['alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1', 'voids-credit', [['LC-1', 'C-1'], ['AL-1', 'C-1']]],
-      ['shared-support:SC-1:LC-1+AL-1:CK-A', 'voids-credit', [['LC-1', 'C-1', 'CK-A'], ['AL-1', 'T-2', 'IO-5', 'CK-A']]],
+      [
+        'alarm-on-failed-bpcs:SC-1:LC-1+AL-1:C-1',
+        'voids-credit',
+        [
+          ['LC-1', 'C-1'],
+          ['AL-1', 'C-1'],
+        ],
+      ],
+      [
+        'shared-support:SC-1:LC-1+AL-1:CK-A',
+        'voids-credit',
+        [
+          ['LC-1', 'C-1', 'CK-A'],
+          ['AL-1', 'T-2', 'IO-5', 'CK-A'],
+        ],
+      ],
     ]);
   });
 

@@ -43,7 +43,8 @@ device D-9 device=PSV-9
 
 function load(text: string): Model {
   const loaded = loadModelText('trace.bulk', text);
-  if (!loaded.model || loaded.diagnostics.length > 0) throw new Error(loaded.diagnostics.map((d) => `${d.code} ${d.message}`).join('; '));
+  if (!loaded.model || loaded.diagnostics.length > 0)
+    throw new Error(loaded.diagnostics.map((d) => `${d.code} ${d.message}`).join('; '));
   return loaded.model;
 }
 
@@ -53,7 +54,18 @@ const pathOf = (fn: string, tag: string) => tracer.traceFunction(fn).elements.fi
 
 describe('Tracer.closure', () => {
   it('is the element itself and everything it relies on, by every link', () => {
-    expect(sorted(tracer.closure('LT-1'))).toEqual(['AI-1', 'BR-1', 'C-1', 'CAB-1', 'CK-1', 'LT-1', 'N-1', 'N-2', 'UPS-1', 'V-1']);
+    expect(sorted(tracer.closure('LT-1'))).toEqual([
+      'AI-1',
+      'BR-1',
+      'C-1',
+      'CAB-1',
+      'CK-1',
+      'LT-1',
+      'N-1',
+      'N-2',
+      'UPS-1',
+      'V-1',
+    ]);
   });
 
   it('of an element that relies on nothing is the element alone', () => {
@@ -76,15 +88,39 @@ describe('Tracer.closure', () => {
 
 describe('Tracer.paths and traceFunction', () => {
   it('gives each element the shortest path from the function, with the link taken at each step', () => {
-    expect(pathOf('LC-1', 'N-2')).toMatchObject({ kind: 'nozzle', group: 'connection', path: ['LC-1', 'LT-1', 'BR-1', 'N-2'], links: ['sensor', 'mountedOn', 'mountedOn'] });
+    expect(pathOf('LC-1', 'N-2')).toMatchObject({
+      kind: 'nozzle',
+      group: 'connection',
+      path: ['LC-1', 'LT-1', 'BR-1', 'N-2'],
+      links: ['sensor', 'mountedOn', 'mountedOn'],
+    });
     expect(pathOf('LC-1', 'C-1')).toMatchObject({ path: ['LC-1', 'C-1'], links: ['solver'] });
-    expect(pathOf('LC-1', 'UPS-1')).toMatchObject({ path: ['LC-1', 'C-1', 'CK-1', 'UPS-1'], links: ['solver', 'poweredBy', 'poweredBy'] });
+    expect(pathOf('LC-1', 'UPS-1')).toMatchObject({
+      path: ['LC-1', 'C-1', 'CK-1', 'UPS-1'],
+      links: ['solver', 'poweredBy', 'poweredBy'],
+    });
     expect(pathOf('LC-1', 'IA-1')).toMatchObject({ path: ['LC-1', 'LV-1', 'IA-1'], links: ['final', 'airFrom'] });
   });
 
   it('lists every element once, sorted by tag, and no functions', () => {
     const tags = tracer.traceFunction('SF-1').elements.map((e) => e.tag);
-    expect(tags).toEqual(['AI-2', 'CK-1', 'DO-2', 'IA-1', 'IL-1', 'L-1', 'LT-2', 'LT-3', 'N-1', 'N-2', 'S-1', 'UPS-1', 'V-1', 'XV-1', 'XY-1']);
+    expect(tags).toEqual([
+      'AI-2',
+      'CK-1',
+      'DO-2',
+      'IA-1',
+      'IL-1',
+      'L-1',
+      'LT-2',
+      'LT-3',
+      'N-1',
+      'N-2',
+      'S-1',
+      'UPS-1',
+      'V-1',
+      'XV-1',
+      'XY-1',
+    ]);
   });
 
   it('traces each voting channel on its own, head first', () => {
@@ -143,16 +179,29 @@ describe('missing parts', () => {
 });
 
 describe('Tracer.lacksSupplyRoute', () => {
-  const lines = (extra: string) => load(`${SITE}transmitter LT-7 supply=from-signal mounted-on=N-1 signal-via=AI-1\ntransmitter LT-8 supply=from-signal mounted-on=N-1\npositioner ZP-7 supply=mechanical signal-via=AI-1\n${extra}`);
+  const lines = (extra: string) =>
+    load(
+      `${SITE}transmitter LT-7 supply=from-signal mounted-on=N-1 signal-via=AI-1\ntransmitter LT-8 supply=from-signal mounted-on=N-1\npositioner ZP-7 supply=mechanical signal-via=AI-1\n${extra}`,
+    );
   const t = new Tracer(buildPlantGraph(lines('')));
 
   it('is false for an element with a supply link, and for passive elements and supports', () => {
     expect(['C-1', 'AI-1', 'LV-1', 'XV-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual([]);
-    expect(['N-1', 'BR-1', 'CAB-1', 'UPS-1', 'CK-1', 'IA-1', 'OP-1', 'PSV-1', 'V-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual([]);
+    expect(
+      ['N-1', 'BR-1', 'CAB-1', 'UPS-1', 'CK-1', 'IA-1', 'OP-1', 'PSV-1', 'V-1'].filter((tag) =>
+        t.lacksSupplyRoute(tag),
+      ),
+    ).toEqual([]);
   });
 
   it('is true for an active element that says nothing (a card, a solenoid, a console, a transmitter)', () => {
-    expect(['AI-2', 'DO-2', 'XY-1', 'CON-1', 'LT-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual(['AI-2', 'DO-2', 'XY-1', 'CON-1', 'LT-1']);
+    expect(['AI-2', 'DO-2', 'XY-1', 'CON-1', 'LT-1'].filter((tag) => t.lacksSupplyRoute(tag))).toEqual([
+      'AI-2',
+      'DO-2',
+      'XY-1',
+      'CON-1',
+      'LT-1',
+    ]);
   });
 
   it('accepts supply=mechanical, and supply=from-signal only with a signal link to draw on', () => {
@@ -164,7 +213,13 @@ describe('Tracer.lacksSupplyRoute', () => {
 
 describe('reliance by role', () => {
   // LV-1 takes its signal from the BPCS card AI-1 and from a SIS solenoid XY-7 on card DO-2 (solver S-1).
-  const model = load(SITE.replace('control-valve LV-1 fails-to=closed mounted-on=L-1 signal-via=AI-1 air-from=IA-1', 'control-valve LV-1 fails-to=closed mounted-on=L-1 signal-via=AI-1,XY-7 air-from=IA-1') + 'solenoid XY-7 fails-to=closed signal-via=DO-2\nsif SF-7 sensors=LT-2 solver=S-1 finals=LV-1 trip=close trip-mode=de-energise\n');
+  const model = load(
+    SITE.replace(
+      'control-valve LV-1 fails-to=closed mounted-on=L-1 signal-via=AI-1 air-from=IA-1',
+      'control-valve LV-1 fails-to=closed mounted-on=L-1 signal-via=AI-1,XY-7 air-from=IA-1',
+    ) +
+      'solenoid XY-7 fails-to=closed signal-via=DO-2\nsif SF-7 sensors=LT-2 solver=S-1 finals=LV-1 trip=close trip-mode=de-energise\n',
+  );
   const t = new Tracer(buildPlantGraph(model));
 
   it('a SIF acting on a BPCS valve through its own solenoid does not rely on the BPCS card or controller', () => {

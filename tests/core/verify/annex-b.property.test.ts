@@ -8,23 +8,41 @@ const rate = fc.double({ min: 1e-9, max: 1e-5, noNaN: true });
 const hours = fc.double({ min: 100, max: 100_000, noNaN: true });
 const fraction = fc.double({ min: 0, max: 0.3, noNaN: true });
 
-const figures = fc.record({
-  lambdaDu: rate,
-  lambdaDd: rate,
-  lambdaSd: fc.constant(0),
-  t1: hours,
-  mttr: fc.double({ min: 1, max: 72, noNaN: true }),
-  beta: fraction,
-}).map((f): GroupFigures => ({ ...f, mrt: f.mttr, betaD: f.beta / 2 }));
+const figures = fc
+  .record({
+    lambdaDu: rate,
+    lambdaDd: rate,
+    lambdaSd: fc.constant(0),
+    t1: hours,
+    mttr: fc.double({ min: 1, max: 72, noNaN: true }),
+    beta: fraction,
+  })
+  .map((f): GroupFigures => ({ ...f, mrt: f.mttr, betaD: f.beta / 2 }));
 
-const VOTES: Architecture[] = [{ m: 1, n: 1 }, { m: 1, n: 2 }, { m: 2, n: 2 }, { m: 2, n: 3 }, { m: 1, n: 3 }, { m: 1, n: 2, diagnostic: true }];
+const VOTES: Architecture[] = [
+  { m: 1, n: 1 },
+  { m: 1, n: 2 },
+  { m: 2, n: 2 },
+  { m: 2, n: 3 },
+  { m: 1, n: 3 },
+  { m: 1, n: 2, diagnostic: true },
+];
 const vote = fc.constantFrom(...VOTES);
 
 describe('SIF verification properties', () => {
   it('an element shared by the channels, in series with the group, never lowers the PFD or the PFH', () => {
     fc.assert(
       fc.property(vote, figures, rate, hours, (a, f, sharedRate, sharedT1) => {
-        const shared: GroupFigures = { lambdaDu: sharedRate, lambdaDd: 0, lambdaSd: 0, t1: sharedT1, mttr: 8, mrt: 8, beta: 0, betaD: 0 };
+        const shared: GroupFigures = {
+          lambdaDu: sharedRate,
+          lambdaDd: 0,
+          lambdaSd: 0,
+          t1: sharedT1,
+          mttr: 8,
+          mrt: 8,
+          beta: 0,
+          betaD: 0,
+        };
         const one = { m: 1, n: 1 };
         expect(groupPfd(a, f)! + groupPfd(one, shared)!).toBeGreaterThan(groupPfd(a, f)!);
         expect(groupPfh(a, f)! + groupPfh(one, shared)!).toBeGreaterThan(groupPfh(a, f)!);

@@ -5,19 +5,31 @@
 // credit-model.ts; the models are invented.
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { analyze, loadModelText, renderVerificationText, verifyModel, type Analysis, type Finding, type Model } from '@bulkhead/core';
+import {
+  analyze,
+  loadModelText,
+  renderVerificationText,
+  verifyModel,
+  type Analysis,
+  type Finding,
+  type Model,
+} from '@bulkhead/core';
 import { BETA, COMPUTED, PLANT, ROWS, row, scenario } from './credit-model.ts';
 
 function load(text: string, file = 'test.bulk'): Model {
   const result = loadModelText(file, text);
-  if (!result.model) throw new Error(result.diagnostics.map((d) => `${d.span?.line}:${d.span?.column} ${d.code} ${d.message}`).join('\n'));
+  if (!result.model)
+    throw new Error(
+      result.diagnostics.map((d) => `${d.span?.line}:${d.span?.column} ${d.code} ${d.message}`).join('\n'),
+    );
   return result.model;
 }
 
-const KEY = (scenario: string, sif: string, element: string) => `voted-group-common-cause:${scenario}:${sif}:${element}`;
+const KEY = (scenario: string, sif: string, element: string) =>
+  `voted-group-common-cause:${scenario}:${sif}:${element}`;
 const findingOf = (a: Analysis, key: string): Finding => a.findings.find((f) => f.key === key)!;
-const layerOf = (a: Analysis, scenario: string, tag: string) => a.assessments.find((s) => s.scenario === scenario)!.layers.find((l) => l.function === tag)!;
-
+const layerOf = (a: Analysis, scenario: string, tag: string) =>
+  a.assessments.find((s) => s.scenario === scenario)!.layers.find((l) => l.function === tag)!;
 
 describe('the rule table: a voted-group common cause on a SIF with failure data', () => {
   const complete = PLANT + BETA + ROWS + row('TW-1', 1e-7);
@@ -27,10 +39,19 @@ describe('the rule table: a voted-group common cause on a SIF with failure data'
     const f = findingOf(a, KEY('S-1', 'SIF-1', 'TW-1'));
     expect(f.severity).toBe('note');
     expect(f.messageId).toBe('voted-group-common-cause/counted-within-claim');
-    if (f.messageId === 'voted-group-common-cause/counted-within-claim') expect(f.data.computed).toBeCloseTo(COMPUTED, 8);
-    expect(f.message).toContain('counted in the calculation: PFDavg 9.0e-4 with the shared element in series (bulkhead verify)');
+    if (f.messageId === 'voted-group-common-cause/counted-within-claim')
+      expect(f.data.computed).toBeCloseTo(COMPUTED, 8);
+    expect(f.message).toContain(
+      'counted in the calculation: PFDavg 9.0e-4 with the shared element in series (bulkhead verify)',
+    );
     expect(layerOf(a, 'S-1', 'SIF-1')).toMatchObject({ credited: true, allowedPfd: 0.01 });
-    expect(layerOf(a, 'S-1', 'SIF-1').reasons!.find((r) => r.rule === 'voted-group-common-cause')).toEqual({ key: f.key, rule: f.rule, severity: 'note', effect: 'note', element: 'TW-1' });
+    expect(layerOf(a, 'S-1', 'SIF-1').reasons!.find((r) => r.rule === 'voted-group-common-cause')).toEqual({
+      key: f.key,
+      rule: f.rule,
+      severity: 'note',
+      effect: 'note',
+      element: 'TW-1',
+    });
     // 0.1 /yr x 0.01 = 1e-3 /yr.
     expect(a.assessments[0]!.mitigatedAfter).toBeCloseTo(1e-3, 12);
   });
@@ -46,16 +67,28 @@ describe('the rule table: a voted-group common cause on a SIF with failure data'
     expect(layer.credited).toBe(true);
     expect(layer.allowedPfd).toBeCloseTo(COMPUTED, 8);
     expect(layer.allowedPfdIfAccepted).toBe(5e-4);
-    expect(layer.reasons!.find((r) => r.rule === 'voted-group-common-cause')).toMatchObject({ effect: 'caps', cap: layer.allowedPfd });
+    expect(layer.reasons!.find((r) => r.rule === 'voted-group-common-cause')).toMatchObject({
+      effect: 'caps',
+      cap: layer.allowedPfd,
+    });
     expect(a.assessments[0]!.mitigatedAfter).toBeCloseTo(0.1 * COMPUTED, 10);
   });
 
   const withheld: [string, string][] = [
     ['the shared thermowell has no failure data', PLANT + BETA + ROWS],
-    ['the shared thermowell takes MTTR 8 h by default', PLANT + BETA + ROWS + row('TW-1', 1e-7, 'proof-test-coverage=1')],
-    ['the shared thermowell takes a full proof-test coverage by default', PLANT + BETA + ROWS + row('TW-1', 1e-7, 'mttr-hours=8')],
+    [
+      'the shared thermowell takes MTTR 8 h by default',
+      PLANT + BETA + ROWS + row('TW-1', 1e-7, 'proof-test-coverage=1'),
+    ],
+    [
+      'the shared thermowell takes a full proof-test coverage by default',
+      PLANT + BETA + ROWS + row('TW-1', 1e-7, 'mttr-hours=8'),
+    ],
     ['the group has no common-cause factors (beta by default)', PLANT + ROWS + row('TW-1', 1e-7)],
-    ['the common-cause factors give no basis', PLANT + BETA.replace(' basis="scoring (invented)"', '') + ROWS + row('TW-1', 1e-7)],
+    [
+      'the common-cause factors give no basis',
+      PLANT + BETA.replace(' basis="scoring (invented)"', '') + ROWS + row('TW-1', 1e-7),
+    ],
   ];
   it.each(withheld)('incomplete data (%s): the finding stands and the credit is withheld, as before', (_why, text) => {
     const a = analyze(load(text + scenario(0.01)));
@@ -69,14 +102,19 @@ describe('the rule table: a voted-group common cause on a SIF with failure data'
   it('says in verify which of the two check does', () => {
     const [v] = verifyModel(load(complete + scenario(0.01)));
     expect(v!.complete).toBe(true);
-    expect(renderVerificationText(v!)).toContain('`check` credits the layer at the larger of its claimed and computed PFD');
+    expect(renderVerificationText(v!)).toContain(
+      '`check` credits the layer at the larger of its claimed and computed PFD',
+    );
     const [short] = verifyModel(load(PLANT + ROWS + row('TW-1', 1e-7) + scenario(0.01)));
     expect(renderVerificationText(short!)).toContain('`check` withholds the credit until a justification accepts it');
   });
 });
 
 describe('the demo, S-103: SIF-301 is a 1oo2 pair of TT-302A/B in one thermowell TW-302', () => {
-  const model = load(readFileSync(new URL('../../../fixtures/demo/marrow-fen.bulk', import.meta.url), 'utf8'), 'marrow-fen.bulk');
+  const model = load(
+    readFileSync(new URL('../../../fixtures/demo/marrow-fen.bulk', import.meta.url), 'utf8'),
+    'marrow-fen.bulk',
+  );
   const a = analyze(model);
   const f = findingOf(a, KEY('S-103', 'SIF-301', 'TW-302'));
 
@@ -87,7 +125,8 @@ describe('the demo, S-103: SIF-301 is a 1oo2 pair of TT-302A/B in one thermowell
     // Final elements: XV-301, T1 used 0.95 x 8,760 + 0.05 x 175,200 = 17,082 h: 3e-7 x (8,541 + 8) = 2.5647e-3;
     // XY-301 1e-7 x 4,388 = 4.388e-4; sum 3.0035e-3. Total 4.9343e-4 + 4.4928e-4 + 3.0035e-3 = 3.9462e-3.
     expect(f.severity).toBe('note');
-    if (f.messageId !== 'voted-group-common-cause/counted-within-claim') throw new Error(`unexpected message ${f.messageId}`);
+    if (f.messageId !== 'voted-group-common-cause/counted-within-claim')
+      throw new Error(`unexpected message ${f.messageId}`);
     expect(f.data.computed).toBeCloseTo(3.9462e-3, 7);
     expect(f.data.claimed).toBe(0.05);
   });

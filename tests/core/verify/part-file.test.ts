@@ -46,7 +46,10 @@ describe('failure data in a part file', () => {
 
   it('points a problem in a row at the part file, its line and column', () => {
     // Line 3 of the part: FD-TT-2, with a proof-test coverage below 1 and no mission time (BH344).
-    const bad = DATA.replace(`${row('TT-2', 1e-7)}`, row('TT-2', 1e-7).replace('proof-test-coverage=1', 'proof-test-coverage=0.9'));
+    const bad = DATA.replace(
+      `${row('TT-2', 1e-7)}`,
+      row('TT-2', 1e-7).replace('proof-test-coverage=1', 'proof-test-coverage=0.9'),
+    );
     const result = loadModelText('site/main.bulk', MAIN, { readPart: reader({ 'site/data/failure-data.bulk': bad }) });
     expect(result.model).toBeUndefined();
     const problem = result.diagnostics.find((d) => d.code === 'BH344')!;

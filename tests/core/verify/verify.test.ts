@@ -8,7 +8,10 @@ import { loadModelText, verifyModel, type Model, type SifVerification } from '@b
 
 function load(text: string, file = 'test.bulk'): Model {
   const result = loadModelText(file, text);
-  if (!result.model) throw new Error(result.diagnostics.map((d) => `${d.span?.line}:${d.span?.column} ${d.code} ${d.message}`).join('\n'));
+  if (!result.model)
+    throw new Error(
+      result.diagnostics.map((d) => `${d.span?.line}:${d.span?.column} ${d.code} ${d.message}`).join('\n'),
+    );
   return result.model;
 }
 
@@ -50,7 +53,10 @@ describe('the demo, revision A: SIF-301 is a 1oo2 pair of TT-302A/B in one therm
   });
 
   it('adds the subsystems into the total, with shares that sum to one', () => {
-    expect(v.pfd).toBeCloseTo(v.subsystems.reduce((s, r) => s + r.pfd!, 0), 15);
+    expect(v.pfd).toBeCloseTo(
+      v.subsystems.reduce((s, r) => s + r.pfd!, 0),
+      15,
+    );
     expect(v.shares!.reduce((s, x) => s + x, 0)).toBeCloseTo(1, 12);
   });
 
@@ -95,7 +101,9 @@ failure-data FD-XV element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760
 
 describe('a 1oo2D pair (IEC 61508-6:2010 B.3.2.2.4, from memory)', () => {
   it('is accepted as a vote and computed by the 1oo2D equation', () => {
-    const text = BASE + 'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=1oo2D solver=LS-1 finals=XV-1\ncommon-cause SIF-1 group=sensors beta=0.05 basis="scoring (invented)"\n';
+    const text =
+      BASE +
+      'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=1oo2D solver=LS-1 finals=XV-1\ncommon-cause SIF-1 group=sensors beta=0.05 basis="scoring (invented)"\n';
     const sensors = sub(only(load(text), 'SIF-1'), 'sensors');
     expect(sensors.equation?.architecture).toBe('1oo2D');
     expect(sensors.hft).toBe(1);
@@ -105,7 +113,10 @@ describe('a 1oo2D pair (IEC 61508-6:2010 B.3.2.2.4, from memory)', () => {
   });
 
   it('refuses a D suffix on any vote but 1oo2', () => {
-    const result = loadModelText('t.bulk', BASE + 'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=2oo2D solver=LS-1 finals=XV-1\n');
+    const result = loadModelText(
+      't.bulk',
+      BASE + 'sif SIF-1 sensors=TT-1,TT-2 sensor-voting=2oo2D solver=LS-1 finals=XV-1\n',
+    );
     expect(result.diagnostics.map((d) => d.code)).toEqual(['BH306']);
   });
 });
@@ -120,13 +131,19 @@ describe('findings on the inputs', () => {
   });
 
   it('marks a shared element with no failure data as incomplete: the figure cannot be trusted', () => {
-    const v = only(load(BASE + pair + 'common-cause SIF-1 group=sensors beta=0.05 basis="scoring (invented)"\n'), 'SIF-1');
+    const v = only(
+      load(BASE + pair + 'common-cause SIF-1 group=sensors beta=0.05 basis="scoring (invented)"\n'),
+      'SIF-1',
+    );
     expect(v.sharedInSeries).toEqual([{ subsystem: 'sensors', tags: [], withoutData: ['TW-1'] }]);
     expect(v.findings.filter((f) => f.code === 'incomplete').map((f) => f.subject)).toEqual(['TW-1']);
   });
 
   it('reports a row with no basis, once per row', () => {
-    const text = BASE.replace('failure-data FD-XV element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760 basis="vendor (invented)"', 'failure-data FD-XV element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760');
+    const text = BASE.replace(
+      'failure-data FD-XV element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760 basis="vendor (invented)"',
+      'failure-data FD-XV element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760',
+    );
     const v = only(load(text + 'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1\n'), 'SIF-1');
     expect(v.findings.filter((f) => f.code === 'no-basis').map((f) => f.subject)).toEqual(['FD-XV']);
   });
@@ -139,21 +156,32 @@ describe('findings on the inputs', () => {
   });
 
   it('does not compute an element with a dangerous undetected rate and no proof-test interval', () => {
-    const text = BASE.replace('element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760', 'element=XV-1 lambda-du=1e-7 lambda-dd=0');
+    const text = BASE.replace(
+      'element=XV-1 lambda-du=1e-7 lambda-dd=0 proof-test-hours=8760',
+      'element=XV-1 lambda-du=1e-7 lambda-dd=0',
+    );
     const v = only(load(text + 'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1\n'), 'SIF-1');
-    expect(sub(v, 'finals').missing).toEqual([{ tag: 'XV-1', why: 'gives a dangerous undetected rate but no proof-test interval' }]);
+    expect(sub(v, 'finals').missing).toEqual([
+      { tag: 'XV-1', why: 'gives a dangerous undetected rate but no proof-test interval' },
+    ]);
   });
 });
 
 describe('the SIF target across scenarios (CCPS LOPA 2001 practice, from memory)', () => {
   // The alarm has its own sensor, thermowell, controller and valve, so it keeps its credit beside the SIF.
-  const sif = 'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1 sil=2\noperator OP-1\ncontroller C-1 system=bpcs supply=self-contained\n' +
+  const sif =
+    'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1 sil=2\noperator OP-1\ncontroller C-1 system=bpcs supply=self-contained\n' +
     'control-valve CV-2 fails-to=closed mounted-on=L-1 signal-via=C-1 supply=self-contained\nalarm TAH-1 sensors=TT-3 raised-in=C-1 operator=OP-1 finals=CV-2 minutes=30\n';
   const scenario = (id: string, frequency: number, outcome: string, layers: string[]) =>
     `scenario ${id} category=people${outcome ? ` outcome=${outcome}` : ''}\n  cause external="Upset ${id}" frequency=${frequency} basis="history (invented)"\n${layers.map((l) => `  layer ${l}\n`).join('')}`;
 
   it('takes the most demanding scenario when the scenarios lead to different consequences', () => {
-    const m = load(BASE + sif + scenario('S-1', 0.1, '', ['SIF-1']) + scenario('S-2', 0.05, '', ['SIF-1', 'TAH-1 pfd=0.1 basis="30 min"']));
+    const m = load(
+      BASE +
+        sif +
+        scenario('S-1', 0.1, '', ['SIF-1']) +
+        scenario('S-2', 0.05, '', ['SIF-1', 'TAH-1 pfd=0.1 basis="30 min"']),
+    );
     const t = only(m, 'SIF-1').target;
     // S-1: 1e-4 / 0.1 = 1e-3. S-2: 1e-4 / (0.05 x 0.1) = 2e-2.
     expect(t.candidates.map((c) => c.requiredPfd)).toEqual([expect.closeTo(1e-3, 15), expect.closeTo(2e-2, 15)]);
@@ -161,15 +189,25 @@ describe('the SIF target across scenarios (CCPS LOPA 2001 practice, from memory)
   });
 
   it('sums scenarios with the same outcome against one tolerable frequency', () => {
-    const m = load(BASE + sif + scenario('S-1', 0.1, 'fire', ['SIF-1']) + scenario('S-2', 0.05, 'fire', ['SIF-1', 'TAH-1 pfd=0.1 basis="30 min"']));
+    const m = load(
+      BASE +
+        sif +
+        scenario('S-1', 0.1, 'fire', ['SIF-1']) +
+        scenario('S-2', 0.05, 'fire', ['SIF-1', 'TAH-1 pfd=0.1 basis="30 min"']),
+    );
     const t = only(m, 'SIF-1').target;
     // 1e-4 / (0.1 + 0.05 x 0.1) = 1e-4 / 0.105 = 9.5238e-4: stricter than S-1 alone.
     expect(t.governingPfd).toMatchObject({ outcome: 'fire', scenarios: ['S-1', 'S-2'] });
     expect(t.governingPfd!.requiredPfd).toBeCloseTo(9.5238e-4, 8);
   });
 
-  it('leaves to the SIF only what the outcome\'s other scenarios do not already use', () => {
-    const m = load(BASE + sif + scenario('S-1', 0.1, 'fire', ['SIF-1']) + scenario('S-2', 0.5, 'fire', ['TAH-1 pfd=0.1 basis="30 min"']));
+  it("leaves to the SIF only what the outcome's other scenarios do not already use", () => {
+    const m = load(
+      BASE +
+        sif +
+        scenario('S-1', 0.1, 'fire', ['SIF-1']) +
+        scenario('S-2', 0.5, 'fire', ['TAH-1 pfd=0.1 basis="30 min"']),
+    );
     const t = only(m, 'SIF-1').target;
     // S-2 alone: 0.5 x 0.1 = 0.05 /yr, far above 1e-4: nothing is left for S-1, the requirement cannot be met.
     expect(t.governingPfd!.requiredPfd).toBeLessThan(0);
@@ -179,7 +217,10 @@ describe('the SIF target across scenarios (CCPS LOPA 2001 practice, from memory)
 
 describe('common-cause factors for the logic solver', () => {
   it('are refused: the solver is one element, its redundancy is the hft= of its failure data (BH345)', () => {
-    const result = loadModelText('t.bulk', BASE + 'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1\ncommon-cause SIF-1 group=solver beta=0.02 basis="x"\n');
+    const result = loadModelText(
+      't.bulk',
+      BASE + 'sif SIF-1 sensors=TT-1 solver=LS-1 finals=XV-1\ncommon-cause SIF-1 group=solver beta=0.02 basis="x"\n',
+    );
     expect(result.diagnostics.map((d) => [d.code, d.span?.line])).toEqual([['BH345', 18]]);
   });
 });

@@ -4,7 +4,13 @@
 import { analyze, loadModelText, type Analysis, type Model } from '@bulkhead/core';
 import { detailsOf } from './details.ts';
 import { focusView, rankingView, searchTags, summariseSite, type RankingView } from './site-view.ts';
-import type { AnalysisReply, AnalysisRequest, CompareOutcome, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
+import type {
+  AnalysisReply,
+  AnalysisRequest,
+  CompareOutcome,
+  LoadOutcome,
+  WhatIfOutcome,
+} from './analysis-protocol.ts';
 import { applyWhatIf, isWhatIf, statementsToPaste, type WhatIf } from './what-if.ts';
 import { isoDate } from './sheet.ts';
 import type { ServedParts } from './live.ts';
@@ -27,7 +33,11 @@ function compare(file: { fileName: string; bytes: Uint8Array } | null): CompareO
     const result = loadModelText(file.fileName, file.bytes);
     const errors = result.diagnostics.filter((d) => d.severity === 'error');
     if (!result.model || errors.length > 0) return { diagnostics: errors };
-    earlier = { model: result.model, analysis: analyze(result.model, { spans: result.spans }), fileName: file.fileName };
+    earlier = {
+      model: result.model,
+      analysis: analyze(result.model, { spans: result.spans }),
+      fileName: file.fileName,
+    };
   }
   if (!earlier) return { diagnostics: [] };
   return { diagnostics: [], view: compareView(earlier, { ...current, fileName: currentFileName }) };
@@ -58,13 +68,25 @@ function load(id: number, fileName: string, bytes: Uint8Array, parts: ServedPart
   reply({ id, progress: `reading ${fileName}${files} (${Math.ceil((bytes.length + partBytes) / 1024)} kB)` });
   // Served parts are all the model can name: the server found them by the same reading of the same file.
   const served = parts ? new Map(parts) : undefined;
-  const result = loadModelText(fileName, bytes, served ? { readPart: (path) => served.get(path) ?? { problem: 'the view server had not sent it yet; the page reloads on the next save' } } : {});
+  const result = loadModelText(
+    fileName,
+    bytes,
+    served
+      ? {
+          readPart: (path) =>
+            served.get(path) ?? { problem: 'the view server had not sent it yet; the page reloads on the next save' },
+        }
+      : {},
+  );
   const failed = result.diagnostics.some((d) => d.severity === 'error');
   // The file's lines are needed only to show the errors' excerpts.
   const source = failed ? result.source : { file: result.source.file, lines: [] };
   const base = { format: result.format, diagnostics: result.diagnostics, source };
   if (!result.model) return base;
-  reply({ id, progress: `analysing ${result.model.elements.length} elements, ${result.model.functions.length} functions, ${result.model.scenarios.length} scenarios` });
+  reply({
+    id,
+    progress: `analysing ${result.model.elements.length} elements, ${result.model.functions.length} functions, ${result.model.scenarios.length} scenarios`,
+  });
   try {
     const analysis = analyze(result.model, { spans: result.spans });
     fromFile = { model: result.model, analysis };
@@ -80,7 +102,10 @@ self.onmessage = (ev: MessageEvent<AnalysisRequest>) => {
   const request = ev.data;
   try {
     if ('load' in request) {
-      reply({ id: request.id, loaded: load(request.id, request.load.fileName, request.load.bytes, request.load.parts) });
+      reply({
+        id: request.id,
+        loaded: load(request.id, request.load.fileName, request.load.bytes, request.load.parts),
+      });
     } else if ('focus' in request) {
       if (!current) throw new Error('no model is loaded');
       reply({ id: request.id, view: focusView(current.model, current.analysis, request.focus ?? undefined) });

@@ -43,8 +43,14 @@ const SEVERITY_ORDER = { note: 0, 'needs-justification': 1, 'voids-credit': 2 } 
 /** An accepted finding, or a note, costs no credit: a change towards either is for the better. */
 const weight = (f: FindingRef) => (f.accepted ? 0 : SEVERITY_ORDER[f.severity]);
 
-export function compareView(old: { model: Model; analysis: Analysis; fileName: string }, now: { model: Model; analysis: Analysis; fileName: string }): CompareView {
-  const diff = diffRevisions({ model: old.model, analysis: old.analysis, label: old.fileName }, { model: now.model, analysis: now.analysis, label: now.fileName });
+export function compareView(
+  old: { model: Model; analysis: Analysis; fileName: string },
+  now: { model: Model; analysis: Analysis; fileName: string },
+): CompareView {
+  const diff = diffRevisions(
+    { model: old.model, analysis: old.analysis, label: old.fileName },
+    { model: now.model, analysis: now.analysis, label: now.fileName },
+  );
   const ref = (f: FindingRef, change: FindingChange, oldRef?: FindingRef): ChangedFinding => ({
     change,
     key: f.key,
@@ -57,10 +63,16 @@ export function compareView(old: { model: Model; analysis: Analysis; fileName: s
   });
   const direction = (o: FindingRef, n: FindingRef): FindingChange =>
     (weight(n) - weight(o) || SEVERITY_ORDER[n.severity] - SEVERITY_ORDER[o.severity]) > 0 ? 'worse' : 'better';
-  const changed = [...diff.severityChanged, ...diff.acceptanceChanged].map((c) => ref(c.new, direction(c.old, c.new), c.old));
+  const changed = [...diff.severityChanged, ...diff.acceptanceChanged].map((c) =>
+    ref(c.new, direction(c.old, c.new), c.old),
+  );
   return {
     old: old.fileName,
-    scenarios: diff.verdicts.map((v) => ({ scenario: v.scenario, change: v.change, ...(v.why !== undefined ? { why: v.why } : {}) })),
+    scenarios: diff.verdicts.map((v) => ({
+      scenario: v.scenario,
+      change: v.change,
+      ...(v.why !== undefined ? { why: v.why } : {}),
+    })),
     findings: [...diff.appeared.map((f) => ref(f, 'new')), ...diff.disappeared.map((f) => ref(f, 'gone')), ...changed],
   };
 }
@@ -69,7 +81,10 @@ export function compareView(old: { model: Model; analysis: Analysis; fileName: s
 const SHOWN_FIRST: FindingChange[] = ['worse', 'new', 'better', 'gone'];
 
 /** The elements of one scenario whose findings changed, each with the change to show on its box. */
-export function changedElements(view: CompareView, scenario: string | undefined): Map<string, { change: FindingChange; mark: string; words: string }> {
+export function changedElements(
+  view: CompareView,
+  scenario: string | undefined,
+): Map<string, { change: FindingChange; mark: string; words: string }> {
   const shown = new Map<string, { change: FindingChange; mark: string; words: string }>();
   for (const change of SHOWN_FIRST) {
     for (const f of view.findings) {

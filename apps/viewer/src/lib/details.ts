@@ -44,7 +44,15 @@ export function detailsOf(model: Model, analysis: Analysis, tag: string): Detail
     const hit = t.elements.find((e) => e.tag === tag);
     if (!hit) return [];
     const fn = model.functions.find((f) => f.tag === t.function);
-    return [{ function: t.function, kind: t.kind, path: hit.path, scenarios: scenariosOf(model, t.function), ...(fn?.title ? { title: fn.title } : {}) }];
+    return [
+      {
+        function: t.function,
+        kind: t.kind,
+        path: hit.path,
+        scenarios: scenariosOf(model, t.function),
+        ...(fn?.title ? { title: fn.title } : {}),
+      },
+    ];
   });
   const element = model.elements.find((e) => e.tag === tag);
   if (element) {
@@ -52,7 +60,10 @@ export function detailsOf(model: Model, analysis: Analysis, tag: string): Detail
     const facts: Details['facts'] = [{ label: 'group', value: group }];
     if (FAIL_GROUPS.has(group)) {
       const failsTo = 'failsTo' in element ? element.failsTo : undefined;
-      facts.push({ label: 'fail action', value: failsTo ? `fails ${failsTo} on loss of power, signal or air` : 'not stated: taken as the worst case' });
+      facts.push({
+        label: 'fail action',
+        value: failsTo ? `fails ${failsTo} on loss of power, signal or air` : 'not stated: taken as the worst case',
+      });
     }
     if ('supply' in element && element.supply) facts.push({ label: 'supply', value: SUPPLY_WORDS[element.supply] });
     if ('system' in element) facts.push({ label: 'system', value: element.system });
@@ -65,20 +76,37 @@ export function detailsOf(model: Model, analysis: Analysis, tag: string): Detail
       const targets = element[field];
       return targets && targets.length > 0 ? [{ words: LINK_WORDS[field] ?? field, targets: [...targets] }] : [];
     });
-    return { tag, what: 'element', kind: element.kind, facts, links, reliedOnBy, ...(element.title ? { title: element.title } : {}) };
+    return {
+      tag,
+      what: 'element',
+      kind: element.kind,
+      facts,
+      links,
+      reliedOnBy,
+      ...(element.title ? { title: element.title } : {}),
+    };
   }
   const fn = model.functions.find((f) => f.tag === tag);
   if (fn) {
     const facts: Details['facts'] = [];
     const links: Details['links'] = [];
-    if ('sensors' in fn) links.push({ words: `sensors${'sensorVoting' in fn && fn.sensorVoting ? ' (' + fn.sensorVoting + ')' : ''}`, targets: fn.sensors });
+    if ('sensors' in fn)
+      links.push({
+        words: `sensors${'sensorVoting' in fn && fn.sensorVoting ? ' (' + fn.sensorVoting + ')' : ''}`,
+        targets: fn.sensors,
+      });
     if ('solver' in fn) links.push({ words: 'logic solver', targets: [fn.solver] });
     if ('raisedIn' in fn) links.push({ words: 'alarm raised in', targets: [fn.raisedIn] });
     if ('console' in fn && fn.console) links.push({ words: 'console', targets: [fn.console] });
     if ('operator' in fn) links.push({ words: 'operator', targets: [fn.operator] });
-    if ('finals' in fn && fn.finals) links.push({ words: `final elements${'finalVoting' in fn && fn.finalVoting ? ' (' + fn.finalVoting + ')' : ''}`, targets: fn.finals });
+    if ('finals' in fn && fn.finals)
+      links.push({
+        words: `final elements${'finalVoting' in fn && fn.finalVoting ? ' (' + fn.finalVoting + ')' : ''}`,
+        targets: fn.finals,
+      });
     if ('device' in fn) links.push({ words: 'device', targets: [fn.device] });
-    if ('trip' in fn && fn.trip) facts.push({ label: 'trip action', value: `${fn.trip}${fn.tripMode ? ', ' + fn.tripMode + ' to trip' : ''}` });
+    if ('trip' in fn && fn.trip)
+      facts.push({ label: 'trip action', value: `${fn.trip}${fn.tripMode ? ', ' + fn.tripMode + ' to trip' : ''}` });
     if ('sil' in fn && fn.sil !== undefined) facts.push({ label: 'SIL claimed', value: String(fn.sil) });
     if (fn.pfd !== undefined) facts.push({ label: 'PFD claimed', value: String(fn.pfd) });
     if ('minutes' in fn) facts.push({ label: 'time to respond', value: `${fn.minutes} min` });
@@ -94,7 +122,9 @@ export function detailsOf(model: Model, analysis: Analysis, tag: string): Detail
       kind: fn.kind,
       facts,
       links,
-      reliedOnBy: [{ function: tag, kind: fn.kind, path: [tag], scenarios: usedIn, ...(fn.title ? { title: fn.title } : {}) }],
+      reliedOnBy: [
+        { function: tag, kind: fn.kind, path: [tag], scenarios: usedIn, ...(fn.title ? { title: fn.title } : {}) },
+      ],
       ...(fn.title ? { title: fn.title } : {}),
     };
   }

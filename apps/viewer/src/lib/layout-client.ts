@@ -12,7 +12,10 @@ export interface LayoutAnswer {
 type Reply = { id: number; drawing: Drawing; ms: number } | { id: number; error: string } | { id: number; pong: true };
 
 export class LayoutClient {
-  private readonly requests = new WorkerRequests<Reply>(new Worker(new URL('./layout.worker.ts', import.meta.url), { type: 'module' }), 'layout');
+  private readonly requests = new WorkerRequests<Reply>(
+    new Worker(new URL('./layout.worker.ts', import.meta.url), { type: 'module' }),
+    'layout',
+  );
 
   /** Resolves once the worker has started and answered: the canary that the worker runs at all. */
   ping(): Promise<void> {
@@ -21,7 +24,11 @@ export class LayoutClient {
 
   /** `scene` must be plain data: callers pass `$state.snapshot(...)` of anything reactive. */
   layout(scene: Scene): Promise<LayoutAnswer> {
-    return this.requests.send({ scene }, (r) => ('drawing' in r ? { value: { drawing: r.drawing, ms: r.ms } } : undefined), { channel: 'layout' });
+    return this.requests.send(
+      { scene },
+      (r) => ('drawing' in r ? { value: { drawing: r.drawing, ms: r.ms } } : undefined),
+      { channel: 'layout' },
+    );
   }
 
   terminate(): void {

@@ -11,7 +11,8 @@ export const MISSING_HEADER = 'x-bulkhead-missing';
 export type ServedParts = [path: string, part: PartBytes][];
 
 /** The served file's bytes and its parts, or why there are none just now; the file name either way. */
-export type ServedModel = { fileName: string; bytes: Uint8Array; parts: ServedParts } | { fileName: string; missing: string };
+export type ServedModel =
+  { fileName: string; bytes: Uint8Array; parts: ServedParts } | { fileName: string; missing: string };
 
 /** One part as the server sends it: the bytes as latin1 text (one char per byte), or why it was not read. */
 type SentPart = { path: string; text: string } | { path: string; missing: string };
@@ -36,7 +37,11 @@ export async function fetchServedModel(): Promise<ServedModel | undefined> {
     const fileName = response.headers.get(MODEL_FILE_HEADER);
     if (fileName === null) return undefined;
     const missing = response.headers.get(MISSING_HEADER);
-    if (!response.ok) return { fileName: decodeURIComponent(fileName), missing: missing !== null ? decodeURIComponent(missing) : `the server answered ${response.status}` };
+    if (!response.ok)
+      return {
+        fileName: decodeURIComponent(fileName),
+        missing: missing !== null ? decodeURIComponent(missing) : `the server answered ${response.status}`,
+      };
     const [bytes, parts] = await Promise.all([response.arrayBuffer(), fetchServedParts()]);
     return { fileName: decodeURIComponent(fileName), bytes: new Uint8Array(bytes), parts };
   } catch {

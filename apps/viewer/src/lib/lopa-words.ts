@@ -71,10 +71,19 @@ export interface FindingGroup {
  * those about the cause or the scenario as a whole. Order inside a group is the list's own.
  */
 export function groupByLayer(findings: readonly Finding[], layers: readonly string[]): FindingGroup[] {
-  const groups: FindingGroup[] = layers.map((tag, i) => ({ layer: tag, heading: `Layer ${i + 1}: ${tag}`, findings: [] }));
+  const groups: FindingGroup[] = layers.map((tag, i) => ({
+    layer: tag,
+    heading: `Layer ${i + 1}: ${tag}`,
+    findings: [],
+  }));
   const rest: FindingGroup = { heading: 'Cause and scenario', findings: [] };
   for (const f of findings) {
-    const index = Math.min(...f.parties.filter((p) => p.role === 'layer').map((p) => layers.indexOf(p.tag ?? '')).filter((i) => i >= 0));
+    const index = Math.min(
+      ...f.parties
+        .filter((p) => p.role === 'layer')
+        .map((p) => layers.indexOf(p.tag ?? ''))
+        .filter((i) => i >= 0),
+    );
     (Number.isFinite(index) ? groups[index]! : rest).findings.push(f);
   }
   return [...groups, rest].filter((g) => g.findings.length > 0);

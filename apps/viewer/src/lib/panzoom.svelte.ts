@@ -34,7 +34,9 @@ export class PanZoom {
 
   fit(content: Bounds, margin = 24): void {
     if (this.width === 0 || this.height === 0 || content.width === 0) return;
-    const k = clamp(Math.min((this.width - 2 * margin) / content.width, (this.height - 2 * margin) / content.height, 1.2));
+    const k = clamp(
+      Math.min((this.width - 2 * margin) / content.width, (this.height - 2 * margin) / content.height, 1.2),
+    );
     this.k = k;
     this.x = (this.width - content.width * k) / 2 - content.x * k;
     this.y = Math.max(margin, (this.height - content.height * k) / 2) - content.y * k;
@@ -63,7 +65,12 @@ export class PanZoom {
    */
   centre(b: Bounds, keep?: Bounds): void {
     if (this.width === 0) return;
-    const k = clamp(Math.max(READABLE_SCALE, Math.min((this.width * 0.85) / Math.max(b.width, 1), (this.height * 0.85) / Math.max(b.height, 1), 1.1)));
+    const k = clamp(
+      Math.max(
+        READABLE_SCALE,
+        Math.min((this.width * 0.85) / Math.max(b.width, 1), (this.height * 0.85) / Math.max(b.height, 1), 1.1),
+      ),
+    );
     this.k = k;
     this.x = this.width / 2 - (b.x + b.width / 2) * k;
     this.y = this.height / 2 - (b.y + b.height / 2) * k;
@@ -128,7 +135,8 @@ export class PanZoom {
     const dx = e.clientX - d.px;
     const dy = e.clientY - d.py;
     // Only a real drag captures the pointer, so a plain click still reaches the box under it.
-    if (Math.abs(dx) + Math.abs(dy) > 3 && !target.hasPointerCapture(e.pointerId)) target.setPointerCapture(e.pointerId);
+    if (Math.abs(dx) + Math.abs(dy) > 3 && !target.hasPointerCapture(e.pointerId))
+      target.setPointerCapture(e.pointerId);
     this.x = d.x + dx;
     this.y = d.y + dy;
   }

@@ -22,17 +22,23 @@ export interface Proof {
 }
 
 function sideOf(party: Finding['parties'][number], sides: readonly Side[]): Side | undefined {
-  return party.role === 'cause' ? sides.find((s) => s.role === 'cause') : sides.find((s) => s.role === 'layer' && s.tag === party.tag);
+  return party.role === 'cause'
+    ? sides.find((s) => s.role === 'cause')
+    : sides.find((s) => s.role === 'layer' && s.tag === party.tag);
 }
 
 export function chainsOf(finding: Finding, sides: readonly Side[], through: readonly string[] = []): Proof {
   const ends = new Set(finding.paths.map((p) => p.at(-1)));
-  const meeting = finding.element !== undefined && ends.size === 1 && ends.has(finding.element) ? finding.element : undefined;
+  const meeting =
+    finding.element !== undefined && ends.size === 1 && ends.has(finding.element) ? finding.element : undefined;
   const chains = finding.paths.map((path, i): ProofChain => {
     const party = finding.parties[i];
     const side = party ? sideOf(party, sides) : undefined;
     const style = sideStyle(side?.index ?? 6);
-    const role = party?.role === 'cause' ? `Cause ${party.tag ?? ''}`.trim() : `Layer ${side?.index ?? '?'} ${party?.tag ?? ''}`.trim();
+    const role =
+      party?.role === 'cause'
+        ? `Cause ${party.tag ?? ''}`.trim()
+        : `Layer ${side?.index ?? '?'} ${party?.tag ?? ''}`.trim();
     return {
       role,
       letter: side?.letter ?? '?',

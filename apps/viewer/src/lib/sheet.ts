@@ -30,7 +30,11 @@ export function revisionMark(source: SheetSource): string {
   return source.revision ?? `sha-${source.sha256.slice(0, 12)}`;
 }
 
-export function titleRows(source: SheetSource, day: Date, shown: { title: string; assessment?: ScenarioAssessment; finding?: Finding }): TitleRow[] {
+export function titleRows(
+  source: SheetSource,
+  day: Date,
+  shown: { title: string; assessment?: ScenarioAssessment; finding?: Finding },
+): TitleRow[] {
   const rows: TitleRow[] = [
     { label: 'site', value: source.siteName },
     { label: 'sheet', value: shown.title },
@@ -43,8 +47,14 @@ export function titleRows(source: SheetSource, day: Date, shown: { title: string
   const a = shown.assessment;
   if (a) {
     rows.push(
-      { label: 'LOPA per year', value: `as claimed ${formatFigure(a.mitigatedClaimed)}, after independence ${formatFigure(a.mitigatedAfter)}, tolerable ${formatFigure(a.tolerable)}` },
-      { label: 'verdict', value: `${a.meetsAfter ? 'meets' : 'falls short'} after independence, gap ${formatTimes(a.gap)}x` },
+      {
+        label: 'LOPA per year',
+        value: `as claimed ${formatFigure(a.mitigatedClaimed)}, after independence ${formatFigure(a.mitigatedAfter)}, tolerable ${formatFigure(a.tolerable)}`,
+      },
+      {
+        label: 'verdict',
+        value: `${a.meetsAfter ? 'meets' : 'falls short'} after independence, gap ${formatTimes(a.gap)}x`,
+      },
     );
     const need = sifNeedWords(a);
     if (need) rows.push({ label: 'SIF', value: need });

@@ -2,7 +2,17 @@
 // the site and, per focus, the scene to lay out with its assessment and findings. The model and the
 // analysis stay in the worker; only these small pieces cross to the page, so a large site never makes
 // the page copy or walk all of it.
-import { rankCommonCauses, RANKING_ORDER, SEVERITY_RANK, type Analysis, type Finding, type LayerVerdict, type Model, type RankedCommonCause, type ScenarioAssessment } from '@bulkhead/core';
+import {
+  rankCommonCauses,
+  RANKING_ORDER,
+  SEVERITY_RANK,
+  type Analysis,
+  type Finding,
+  type LayerVerdict,
+  type Model,
+  type RankedCommonCause,
+  type ScenarioAssessment,
+} from '@bulkhead/core';
 import { scenarioScene, siteOverview, type Scene } from '@bulkhead/layout';
 
 export interface ScenarioRow {
@@ -62,7 +72,8 @@ const isOpen = (f: Finding) => f.severity !== 'note' && !f.accepted;
 export function summariseSite(model: Model, analysis: Analysis): SiteSummary {
   const assessments = new Map(analysis.assessments.map((a) => [a.scenario, a]));
   const open = new Map<string, number>();
-  for (const f of analysis.findings) if (f.scenario !== undefined && isOpen(f)) open.set(f.scenario, (open.get(f.scenario) ?? 0) + 1);
+  for (const f of analysis.findings)
+    if (f.scenario !== undefined && isOpen(f)) open.set(f.scenario, (open.get(f.scenario) ?? 0) + 1);
   return {
     siteName: model.site.name,
     elements: model.elements.length,
@@ -76,7 +87,9 @@ export function summariseSite(model: Model, analysis: Analysis): SiteSummary {
         ...(a ? { claimed: a.meetsClaimed, after: a.meetsAfter } : {}),
         open: open.get(s.id) ?? 0,
         layers: (s.layers ?? []).map((l) => l.function),
-        verdicts: (s.layers ?? []).map((l) => a?.layers.find((x) => x.function === l.function)?.verdict ?? 'unverified'),
+        verdicts: (s.layers ?? []).map(
+          (l) => a?.layers.find((x) => x.function === l.function)?.verdict ?? 'unverified',
+        ),
         category: s.category,
         ...(a ? { gap: a.gap, ...(a.sif ? { sil: a.sif.sil } : {}) } : {}),
       };
@@ -88,10 +101,18 @@ export function focusView(model: Model, analysis: Analysis, focus: string | unde
   if (focus !== undefined && model.scenarios.some((s) => s.id === focus)) {
     const findings = analysis.findings.filter((f) => f.scenario === focus);
     const assessment = analysis.assessments.find((a) => a.scenario === focus);
-    return { focus, scene: scenarioScene(model, analysis, focus), ...(assessment ? { assessment } : {}), findings, findingTotal: findings.length };
+    return {
+      focus,
+      scene: scenarioScene(model, analysis, focus),
+      ...(assessment ? { assessment } : {}),
+      findings,
+      findingTotal: findings.length,
+    };
   }
   // The most severe first across the site; the sort is stable, so scenario order holds within a severity.
-  const shown = [...analysis.findings].sort((a, b) => SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity]).slice(0, OVERVIEW_FINDINGS_SHOWN);
+  const shown = [...analysis.findings]
+    .sort((a, b) => SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity])
+    .slice(0, OVERVIEW_FINDINGS_SHOWN);
   return {
     scene: siteOverview(model, analysis),
     findings: shown,
@@ -112,7 +133,9 @@ export function searchTags(model: Model, analysis: Analysis, query: string): Tag
     ...model.functions.map((f) => ({ tag: f.tag, what: 'function' as const, kind: f.kind, title: f.title })),
   ]
     .filter((h) => h.tag.toLowerCase().includes(q))
-    .sort((a, b) => Number(b.tag.toLowerCase() === q) - Number(a.tag.toLowerCase() === q) || natural.compare(a.tag, b.tag))
+    .sort(
+      (a, b) => Number(b.tag.toLowerCase() === q) - Number(a.tag.toLowerCase() === q) || natural.compare(a.tag, b.tag),
+    )
     .slice(0, SEARCH_LIMIT);
   const relying = new Map<string, Set<string>>();
   for (const h of hits) relying.set(h.tag, new Set([h.tag]));
@@ -120,7 +143,11 @@ export function searchTags(model: Model, analysis: Analysis, query: string): Tag
   return hits.map((h) => {
     const fns = relying.get(h.tag)!;
     const scenarios = model.scenarios
-      .filter((s) => [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some((t) => t !== undefined && fns.has(t)))
+      .filter((s) =>
+        [s.cause.function ?? s.cause.element, ...(s.layers ?? []).map((l) => l.function)].some(
+          (t) => t !== undefined && fns.has(t),
+        ),
+      )
       .map((s) => s.id);
     return { tag: h.tag, what: h.what, kind: h.kind, ...(h.title ? { title: h.title } : {}), scenarios };
   });

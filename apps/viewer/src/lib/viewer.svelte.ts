@@ -74,9 +74,15 @@ export class Viewer {
   assessment = $derived(this.current?.assessment);
   findings: Finding[] = $derived(this.current?.findings ?? []);
   /** The finding whose proof is shown, once the view that holds it is in. */
-  focusedFinding: Finding | undefined = $derived(this.finding === undefined ? undefined : this.findings.find((f) => f.key === this.finding));
+  focusedFinding: Finding | undefined = $derived(
+    this.finding === undefined ? undefined : this.findings.find((f) => f.key === this.finding),
+  );
   /** A large site's overview: too many areas to draw, so the page shows them as a table. */
-  overviewTable = $derived(this.current !== undefined && this.current.focus === undefined && this.current.scene.nodes.length > OVERVIEW_GRAPH_LIMIT);
+  overviewTable = $derived(
+    this.current !== undefined &&
+      this.current.focus === undefined &&
+      this.current.scene.nodes.length > OVERVIEW_GRAPH_LIMIT,
+  );
 
   /** The served file is gone or unreadable: keep the last good view, marked stale, until it returns. */
   markMissing(fileName: string, reason: string): void {
@@ -86,12 +92,21 @@ export class Viewer {
   }
 
   /** Reads and analyses a file in the worker; on errors the diagnostics show and the last good view stays. */
-  async load(client: AnalysisClient, fileName: string, bytes: Uint8Array, origin: Origin, parts?: ServedParts): Promise<void> {
+  async load(
+    client: AnalysisClient,
+    fileName: string,
+    bytes: Uint8Array,
+    origin: Origin,
+    parts?: ServedParts,
+  ): Promise<void> {
     this.progress = `reading ${fileName}`;
     let outcome: LoadOutcome;
     let sha256: string;
     try {
-      [outcome, sha256] = await Promise.all([client.load(fileName, bytes, parts, (stage) => (this.progress = stage)), sha256Hex(bytes)]);
+      [outcome, sha256] = await Promise.all([
+        client.load(fileName, bytes, parts, (stage) => (this.progress = stage)),
+        sha256Hex(bytes),
+      ]);
     } catch (e) {
       this.analysisError = e instanceof Error ? e.message : String(e);
       this.progress = undefined;

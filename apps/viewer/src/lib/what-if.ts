@@ -27,7 +27,15 @@ export function isWhatIf(w: WhatIf): boolean {
 
 /** Function fields that name the elements (or functions) a function relies on. */
 const FUNCTION_LINKS = ['sensors', 'solver', 'finals', 'raisedIn', 'console', 'operator', 'device'] as const;
-const ELEMENT_LINKS = ['mountedOn', 'connectedThrough', 'signalVia', 'housedIn', 'poweredBy', 'airFrom', 'hydraulicFrom'] as const;
+const ELEMENT_LINKS = [
+  'mountedOn',
+  'connectedThrough',
+  'signalVia',
+  'housedIn',
+  'poweredBy',
+  'airFrom',
+  'hydraulicFrom',
+] as const;
 
 /** A tag for the copy that no element or function has: BR-101-TWIN, then BR-101-TWIN2, ... */
 export function twinTag(model: Model, element: string): string {
@@ -57,14 +65,20 @@ export function applyWhatIf(model: Model, whatIf: WhatIf, today: string): Model 
   const next = structuredClone(model);
   const rejected = new Set(whatIf.reject);
   const kept = (next.justifications ?? []).filter((j) => !rejected.has(j.finding));
-  const added = whatIf.accept.map((key) => ({ finding: key, by: 'WHAT-IF', date: today, reason: 'What-if in the viewer: the team has not decided this' }));
+  const added = whatIf.accept.map((key) => ({
+    finding: key,
+    by: 'WHAT-IF',
+    date: today,
+    reason: 'What-if in the viewer: the team has not decided this',
+  }));
   const justifications = [...kept, ...added];
   if (justifications.length > 0) next.justifications = justifications as Model['justifications'];
   else delete next.justifications;
   for (const twin of whatIf.twins) {
     const original = next.elements.find((e) => e.tag === twin.element);
     if (!original) continue;
-    const relier = next.elements.find((e) => e.tag === twin.relier) ?? next.functions.find((f) => f.tag === twin.relier);
+    const relier =
+      next.elements.find((e) => e.tag === twin.relier) ?? next.functions.find((f) => f.tag === twin.relier);
     if (!relier) continue;
     const tag = twinTag(next, twin.element);
     const fields = next.elements.includes(relier as Model['elements'][number]) ? ELEMENT_LINKS : FUNCTION_LINKS;
@@ -84,5 +98,8 @@ export function statementsToPaste(original: Model, changed: Model): { add: strin
   const had = new Set(before);
   const has = new Set(after);
   const meaningful = (line: string) => line.trim() !== '' && !line.trimStart().startsWith('#');
-  return { add: after.filter((l) => !had.has(l) && meaningful(l)), remove: before.filter((l) => !has.has(l) && meaningful(l)) };
+  return {
+    add: after.filter((l) => !had.has(l) && meaningful(l)),
+    remove: before.filter((l) => !has.has(l) && meaningful(l)),
+  };
 }

@@ -19,7 +19,10 @@ export class WorkerRequests<Reply extends { id: number }> {
   private readonly pending = new Map<number, Waiting<Reply>>();
   private readonly newest = new Map<string, number>();
 
-  constructor(private readonly worker: Worker, name: string) {
+  constructor(
+    private readonly worker: Worker,
+    name: string,
+  ) {
     worker.onmessage = (ev: MessageEvent<Reply>) => {
       const reply = ev.data;
       const waiting = this.pending.get(reply.id);
@@ -39,7 +42,11 @@ export class WorkerRequests<Reply extends { id: number }> {
   }
 
   /** Posts `message` with a fresh id; resolves with `pick(reply)`, which returns undefined for a reply of the wrong kind. */
-  send<R>(message: object, pick: (reply: Reply) => { value: R } | undefined, options: { channel?: string; progress?: (stage: string) => void } = {}): Promise<R> {
+  send<R>(
+    message: object,
+    pick: (reply: Reply) => { value: R } | undefined,
+    options: { channel?: string; progress?: (stage: string) => void } = {},
+  ): Promise<R> {
     const id = this.next++;
     if (options.channel !== undefined) {
       const older = this.newest.get(options.channel);

@@ -35,7 +35,10 @@ function findingText(f: Finding, result: LoadResult, locate: ModelLocator): stri
   const notice = findingNotice(f, locate);
   // The rationale is printed once per rule in the legend at the end, not under every finding.
   const facts = notice.facts.filter((fact) => fact.label !== 'why');
-  return renderNotice({ ...notice, facts, reference: { label: 'key', text: `${f.key} (rule ${f.rule}, see the rules at the end)` } }, result.source);
+  return renderNotice(
+    { ...notice, facts, reference: { label: 'key', text: `${f.key} (rule ${f.rule}, see the rules at the end)` } },
+    result.source,
+  );
 }
 
 interface Group {
@@ -50,7 +53,20 @@ function groupByLayer(a: ScenarioAssessment | undefined, findings: readonly Find
   const groupOf = (layer: string | undefined): Group => {
     const key = layer !== undefined && order.includes(layer) ? layer : undefined;
     let g = groups.get(key);
-    if (!g) groups.set(key, (g = { title: key !== undefined ? `findings on layer ${key}` : a ? `findings on ${a.scenario} itself (cause, enablers, modifiers)` : 'model-wide findings', shown: [], notes: 0 }));
+    if (!g)
+      groups.set(
+        key,
+        (g = {
+          title:
+            key !== undefined
+              ? `findings on layer ${key}`
+              : a
+                ? `findings on ${a.scenario} itself (cause, enablers, modifiers)`
+                : 'model-wide findings',
+          shown: [],
+          notes: 0,
+        }),
+      );
     return g;
   };
   for (const f of findings) {
@@ -83,7 +99,11 @@ function legend(findings: readonly Finding[], paint: Paint): string[] {
   return out;
 }
 
-export function renderCheck(result: LoadResult & { model: Model }, analysis: Analysis, options: CheckTextOptions = {}): string {
+export function renderCheck(
+  result: LoadResult & { model: Model },
+  analysis: Analysis,
+  options: CheckTextOptions = {},
+): string {
   const parts: string[] = [];
   writeCheck(result, analysis, options, (text) => parts.push(text));
   return parts.join('');
@@ -93,13 +113,19 @@ export function renderCheck(result: LoadResult & { model: Model }, analysis: Ana
  * The same text as renderCheck, handed to `write` a scenario at a time, so a large site's report (tens of
  * megabytes) is never held whole, once as lines and again as one string, at the peak of a run.
  */
-export function writeCheck(result: LoadResult & { model: Model }, analysis: Analysis, options: CheckTextOptions, write: (text: string) => void): void {
+export function writeCheck(
+  result: LoadResult & { model: Model },
+  analysis: Analysis,
+  options: CheckTextOptions,
+  write: (text: string) => void,
+): void {
   const paint = options.paint ?? PLAIN;
   const verbose = options.verbose ?? false;
   const locate = new ModelLocator(result.model, result.spans);
   // Grouped once: filtering every finding for each scenario would grow with scenarios times findings.
   const byScenario = new Map<string | undefined, Finding[]>();
-  for (const f of analysis.findings) (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
+  for (const f of analysis.findings)
+    (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
   const counts = { 'voids-credit': 0, 'needs-justification': 0, note: 0, accepted: 0 };
   for (const f of analysis.findings) counts[f.accepted ? 'accepted' : f.severity]++;
   const meeting = analysis.assessments.filter((a) => a.meetsAfter).length;
@@ -107,7 +133,9 @@ export function writeCheck(result: LoadResult & { model: Model }, analysis: Anal
 
   const out = new LineWriter(write);
   out.push(
-    paint.strong(`${result.source.file}: ${plural(total, 'scenario')}, ${meeting} meeting ${meeting === 1 ? 'its' : 'their'} criterion after independence, ${total - meeting} falling short`),
+    paint.strong(
+      `${result.source.file}: ${plural(total, 'scenario')}, ${meeting} meeting ${meeting === 1 ? 'its' : 'their'} criterion after independence, ${total - meeting} falling short`,
+    ),
     '',
   );
   for (const a of analysis.assessments) out.push(...scenarioSummary(a, paint), '');
@@ -117,11 +145,21 @@ export function writeCheck(result: LoadResult & { model: Model }, analysis: Anal
     '',
   );
   for (const a of analysis.assessments) {
-    out.push(paint.strong(`== ${a.scenario}${a.title ? `: ${a.title}` : ''} ==`), '', ...renderAssessmentText(a).slice(1), '');
+    out.push(
+      paint.strong(`== ${a.scenario}${a.title ? `: ${a.title}` : ''} ==`),
+      '',
+      ...renderAssessmentText(a).slice(1),
+      '',
+    );
     out.push(...groupLines(groupByLayer(a, byScenario.get(a.scenario) ?? [], verbose), result, locate, paint));
   }
   const loose = byScenario.get(undefined) ?? [];
-  if (loose.length) out.push(paint.strong('== model =='), '', ...groupLines(groupByLayer(undefined, loose, verbose), result, locate, paint));
+  if (loose.length)
+    out.push(
+      paint.strong('== model =='),
+      '',
+      ...groupLines(groupByLayer(undefined, loose, verbose), result, locate, paint),
+    );
   out.push(...legend(verbose ? analysis.findings : analysis.findings.filter((f) => f.severity !== 'note'), paint));
   out.end();
 }

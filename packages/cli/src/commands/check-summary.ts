@@ -21,13 +21,18 @@ const more = (text: string) => `  ${' '.repeat(LABEL_WIDTH)}${text}`;
 export function requirementText(a: ScenarioAssessment): string | undefined {
   const sif = a.sif;
   if (!sif) return undefined;
-  if (sif.noReductionNeeded) return `${sif.function ?? 'a SIF'}: no risk reduction needed (the other credited layers meet the criterion)`;
+  if (sif.noReductionNeeded)
+    return `${sif.function ?? 'a SIF'}: no risk reduction needed (the other credited layers meet the criterion)`;
   const layer = a.layers.find((l) => l.function === sif.function);
   const lost = layer && !layer.credited ? ` (${layer.function} as drawn is ${layer.verdict})` : '';
   const who = sif.function && !lost ? sif.function : 'an independent SIF';
-  const pfh = sif.mode === 'high-demand' && sif.requiredPfh !== undefined && sif.sil > 0 && sif.sil <= 4 ? `, high demand: PFH ${edgeRelation(a.edge)} ${formatPerHour(sif.requiredPfh)}` : '';
+  const pfh =
+    sif.mode === 'high-demand' && sif.requiredPfh !== undefined && sif.sil > 0 && sif.sil <= 4
+      ? `, high demand: PFH ${edgeRelation(a.edge)} ${formatPerHour(sif.requiredPfh)}`
+      : '';
   if (sif.sil === 0) return `${who}: RRF of 10 or less, below SIL 1${lost}`;
-  if (sif.sil > 4) return `beyond what one SIF can give (more than SIL 4): add independent layers or change the design${lost}`;
+  if (sif.sil > 4)
+    return `beyond what one SIF can give (more than SIL 4): add independent layers or change the design${lost}`;
   return `${who} needs SIL ${sif.sil}${pfh}${lost}`;
 }
 
@@ -57,14 +62,24 @@ export function scenarioSummary(a: ScenarioAssessment, paint: Paint): string[] {
   const gap = gapParts(a.gap);
   const verdict = a.meetsAfter ? paint.good('MEETS') : paint.bad('FALLS SHORT');
   const lines = [paint.strong(`${a.scenario}${a.title ? `  ${a.title}` : ''}`)];
-  lines.push(row('answer', `${verdict} after independence: ${after} against ${tolerable} tolerable, ${gap.word} ${gap.figure.replace(/ \(.*\)$/, '')}`));
+  lines.push(
+    row(
+      'answer',
+      `${verdict} after independence: ${after} against ${tolerable} tolerable, ${gap.word} ${gap.figure.replace(/ \(.*\)$/, '')}`,
+    ),
+  );
   const required = requirementText(a);
   if (required) lines.push(row('SIF', required));
   const lost = a.layers.filter((l) => !l.credited);
   lost.forEach((l, i) => lines.push(i === 0 ? row('lost credit', lostCreditText(l)) : more(lostCreditText(l))));
   if (!a.meetsAfter && a.meetsIfAccepted) {
     const open = a.layers.filter((l) => l.verdict === 'open').map((l) => l.function);
-    lines.push(row('if accepted', `meets it (${formatFrequency(a.mitigatedIfAccepted)}) once the open findings${open.length ? ` on ${open.join(', ')}` : ''} are resolved or accepted`));
+    lines.push(
+      row(
+        'if accepted',
+        `meets it (${formatFrequency(a.mitigatedIfAccepted)}) once the open findings${open.length ? ` on ${open.join(', ')}` : ''} are resolved or accepted`,
+      ),
+    );
   } else if (!a.meetsAfter && a.meetsClaimed) {
     lines.push(row('as claimed', `meets it only as claimed (${formatFrequency(a.mitigatedClaimed)})`));
   }

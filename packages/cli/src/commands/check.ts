@@ -18,6 +18,8 @@ export function checkCommand(file: string, options: { failOn?: string | undefine
   if (result.diagnostics.length) process.stderr.write(`${renderDiagnostics(result.diagnostics, result.source)}\n\n`);
   const analysis = analyze(result.model, { spans: result.spans });
   const paint = wantsColour(process.stdout, process.env) ? COLOUR : PLAIN;
-  writeCheck({ ...result, model: result.model }, analysis, { verbose: options.verbose ?? false, paint }, (text) => process.stdout.write(text));
+  writeCheck({ ...result, model: result.model }, analysis, { verbose: options.verbose ?? false, paint }, (text) =>
+    process.stdout.write(text),
+  );
   return gate(file, analysis.findings);
 }

@@ -6,7 +6,9 @@ import { checkOutput } from '../output.ts';
 
 export function convertCommand(file: string, to: string | undefined, out: string | undefined, force = false): number {
   if (to !== 'json' && to !== 'bulk') {
-    throw new UsageError(to === undefined ? 'convert needs --to json or --to bulk' : `convert --to takes json or bulk, not \`${to}\``);
+    throw new UsageError(
+      to === undefined ? 'convert needs --to json or --to bulk' : `convert --to takes json or bulk, not \`${to}\``,
+    );
   }
   const what = `${to} model`;
   const unlike = 'holds something else';
@@ -20,7 +22,8 @@ export function convertCommand(file: string, to: string | undefined, out: string
   const text = printVerified(result.model, to, file);
   // A model cannot be told from one the user wrote, so an existing file is replaced only with --force
   // or when it already holds exactly this text.
-  if (out) checkOutput(out, { inputs: [file], force, replaceable: () => readFileSync(out, 'utf8') === text, what, unlike });
+  if (out)
+    checkOutput(out, { inputs: [file], force, replaceable: () => readFileSync(out, 'utf8') === text, what, unlike });
   if (out) writeFileAtomic(out, text);
   else process.stdout.write(text);
   // A split model comes out as one file: that is what was asked, but never done unsaid.

@@ -3,7 +3,16 @@
 import { execFileSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { basename, dirname } from 'node:path';
-import { analyze, diffRevisions, loadModelText, madeWorse, renderDiffMarkdown, renderDiffSarif, renderDiffText, type LoadResult } from '@bulkhead/core';
+import {
+  analyze,
+  diffRevisions,
+  loadModelText,
+  madeWorse,
+  renderDiffMarkdown,
+  renderDiffSarif,
+  renderDiffText,
+  type LoadResult,
+} from '@bulkhead/core';
 import { printDiagnostics, readModel, UsageError, type ReadResult } from '../io.ts';
 import { cliVersion } from '../version.ts';
 
@@ -20,9 +29,15 @@ function readAtRevision(file: string, rev: string): ReadResult {
   if (rev.startsWith('-')) throw new UsageError(`--git takes a revision; found \`${rev}\``);
   let bytes: Buffer;
   try {
-    bytes = execFileSync('git', ['show', `${rev}:./${basename(file)}`], { cwd: dirname(file), stdio: ['ignore', 'pipe', 'pipe'], maxBuffer: 64 * 1024 * 1024 });
+    bytes = execFileSync('git', ['show', `${rev}:./${basename(file)}`], {
+      cwd: dirname(file),
+      stdio: ['ignore', 'pipe', 'pipe'],
+      maxBuffer: 64 * 1024 * 1024,
+    });
   } catch (e) {
-    const said = String((e as { stderr?: Buffer }).stderr ?? '').trim().split('\n')[0];
+    const said = String((e as { stderr?: Buffer }).stderr ?? '')
+      .trim()
+      .split('\n')[0];
     throw new UsageError(`cannot read \`${file}\` at git revision \`${rev}\`${said ? `: ${said}` : ''}`);
   }
   return { ...loadModelText(`${file}@${rev}`, bytes), bytes };
@@ -36,10 +51,16 @@ function loadedOrNull(result: LoadResult): boolean {
 
 export function diffCommand(files: string[], options: DiffOptions): number {
   const format = options.format ?? 'text';
-  if (!(DIFF_FORMATS as readonly string[]).includes(format)) throw new UsageError(`--format takes ${DIFF_FORMATS.join(', ')}; found \`${format}\``);
-  if (options.failOn !== undefined && options.failOn !== 'worse') throw new UsageError(`--fail-on takes \`worse\` for diff; found \`${options.failOn}\``);
+  if (!(DIFF_FORMATS as readonly string[]).includes(format))
+    throw new UsageError(`--format takes ${DIFF_FORMATS.join(', ')}; found \`${format}\``);
+  if (options.failOn !== undefined && options.failOn !== 'worse')
+    throw new UsageError(`--fail-on takes \`worse\` for diff; found \`${options.failOn}\``);
   if (options.git !== undefined ? files.length !== 1 : files.length !== 2) {
-    throw new UsageError(options.git !== undefined ? '`bulkhead diff FILE --git REV` takes one file' : '`bulkhead diff` needs two model files, OLD and NEW (or one file and --git REV)');
+    throw new UsageError(
+      options.git !== undefined
+        ? '`bulkhead diff FILE --git REV` takes one file'
+        : '`bulkhead diff` needs two model files, OLD and NEW (or one file and --git REV)',
+    );
   }
   const newFile = files[files.length - 1]!;
   const oldRead = options.git !== undefined ? readAtRevision(newFile, options.git) : readModel(files[0]!);
@@ -49,13 +70,27 @@ export function diffCommand(files: string[], options: DiffOptions): number {
   if (!oldOk || !newOk) return 2;
   const oldLabel = options.git !== undefined ? `${newFile}@${options.git}` : files[0]!;
   const newAnalysis = analyze(newRead.model!, { spans: newRead.spans });
-  const diff = diffRevisions({ model: oldRead.model!, label: oldLabel }, { model: newRead.model!, label: newFile, analysis: newAnalysis });
+  const diff = diffRevisions(
+    { model: oldRead.model!, label: oldLabel },
+    { model: newRead.model!, label: newFile, analysis: newAnalysis },
+  );
   if (format === 'json') process.stdout.write(`${JSON.stringify(diff, null, 2)}\n`);
   else if (format === 'md') process.stdout.write(renderDiffMarkdown(diff));
   else if (format === 'text') process.stdout.write(renderDiffText(diff));
   else {
-    const sha256 = createHash('sha256').update(newRead.bytes ?? '').digest('hex');
-    process.stdout.write(renderDiffSarif(diff, { model: newRead.model!, analysis: newAnalysis, file: newFile, sha256, toolVersion: cliVersion(), spans: newRead.spans }));
+    const sha256 = createHash('sha256')
+      .update(newRead.bytes ?? '')
+      .digest('hex');
+    process.stdout.write(
+      renderDiffSarif(diff, {
+        model: newRead.model!,
+        analysis: newAnalysis,
+        file: newFile,
+        sha256,
+        toolVersion: cliVersion(),
+        spans: newRead.spans,
+      }),
+    );
   }
   if (options.failOn === 'worse' && madeWorse(diff)) {
     process.stderr.write(`${newFile}: the change made independence worse than ${oldLabel}\n`);

@@ -15,7 +15,8 @@ export function exportCommand(file: string, dir: string | undefined, force: bool
   const tables = exportTables(result.model);
   mkdirSync(dir, { recursive: true });
   const existing = [...tables.keys()].filter((name) => existsSync(join(dir, name)));
-  if (existing.length && !force) throw new UsageError(`\`${dir}\` already holds ${existing.join(', ')} (use --force to replace them)`);
+  if (existing.length && !force)
+    throw new UsageError(`\`${dir}\` already holds ${existing.join(', ')} (use --force to replace them)`);
   for (const [name, text] of tables) writeFileAtomic(join(dir, name), text);
   process.stdout.write(`${dir}: ${[...tables.keys()].join(', ')}\n`);
   return 0;

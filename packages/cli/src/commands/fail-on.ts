@@ -10,7 +10,8 @@ export const FAIL_ON_WORDS = [...SEVERITIES, 'none'] as const;
 
 /** A severity named on the command line (or `none`), refused with a usage error when it is not one. */
 export function parseFailOn(level: string): SeverityLevel | 'none' {
-  if (!(FAIL_ON_WORDS as readonly string[]).includes(level)) throw new UsageError(`--fail-on takes ${FAIL_ON_WORDS.join(', ')}; found \`${level}\``);
+  if (!(FAIL_ON_WORDS as readonly string[]).includes(level))
+    throw new UsageError(`--fail-on takes ${FAIL_ON_WORDS.join(', ')}; found \`${level}\``);
   return level as SeverityLevel | 'none';
 }
 
@@ -25,13 +26,18 @@ export function failingFindings(findings: readonly Finding[], failOn: SeverityLe
  * Parses the option before any work (a bad level is a usage error, exit 2) and returns the gate: it says on
  * standard error why the run fails, and gives the exit code.
  */
-export function gateFindings(option: string | undefined, written?: string): (file: string, findings: readonly Finding[]) => number {
+export function gateFindings(
+  option: string | undefined,
+  written?: string,
+): (file: string, findings: readonly Finding[]) => number {
   const level = option === undefined ? DEFAULT_FAIL_ON : parseFailOn(option);
   return (file, findings) => {
     const failing = failingFindings(findings, level);
     if (failing.length === 0) return 0;
     const count = `${failing.length} unaccepted finding${failing.length === 1 ? '' : 's'}`;
-    process.stderr.write(`${file}: ${count} at or above ${level}${option === undefined ? ' (the default --fail-on)' : ''}${written ? `; report written to ${written}` : ''}\n`);
+    process.stderr.write(
+      `${file}: ${count} at or above ${level}${option === undefined ? ' (the default --fail-on)' : ''}${written ? `; report written to ${written}` : ''}\n`,
+    );
     return 1;
   };
 }

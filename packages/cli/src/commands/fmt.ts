@@ -8,12 +8,19 @@ import { printDiagnostics, printVerified, readModel, writeFileAtomic, type ReadR
  * The files to rewrite and their canonical text. A model split over part files is formatted file by
  * file, each keeping its own statements; the model as a whole has already loaded clean.
  */
-function canonicalTexts(file: string, result: ReadResult & { bytes: Uint8Array }): { file: string; bytes: Uint8Array; text: string }[] {
-  if (!result.parts?.length || !result.model) return [{ file, bytes: result.bytes, text: printVerified(result.model!, result.format, file) }];
+function canonicalTexts(
+  file: string,
+  result: ReadResult & { bytes: Uint8Array },
+): { file: string; bytes: Uint8Array; text: string }[] {
+  if (!result.parts?.length || !result.model)
+    return [{ file, bytes: result.bytes, text: printVerified(result.model!, result.format, file) }];
   return [file, ...result.parts].map((path) => {
     const bytes = path === file ? result.bytes : readFileSync(path);
     const text = formatModelFile(Buffer.from(bytes).toString('utf8'));
-    if (text === undefined) throw new Error(`the canonical form of \`${path}\` does not read back as the same statements, so nothing was written`);
+    if (text === undefined)
+      throw new Error(
+        `the canonical form of \`${path}\` does not read back as the same statements, so nothing was written`,
+      );
     return { file: path, bytes, text };
   });
 }

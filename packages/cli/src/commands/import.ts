@@ -35,11 +35,21 @@ export interface ImportCommandOptions {
 function readBytes(file: string, issues: ImportIssue[]): Uint8Array | undefined {
   const got = readPartFile(file);
   if (got instanceof Uint8Array) return got;
-  issues.push({ code: 'BH500', severity: 'error', message: `cannot read \`${file}\`: ${got.problem}`, place: { file }, help: 'check the path' });
+  issues.push({
+    code: 'BH500',
+    severity: 'error',
+    message: `cannot read \`${file}\`: ${got.problem}`,
+    place: { file },
+    help: 'check the path',
+  });
   return undefined;
 }
 
-async function readTables(files: string[], issues: ImportIssue[], pids: { file: string; result: DexpiResult }[]): Promise<Table[]> {
+async function readTables(
+  files: string[],
+  issues: ImportIssue[],
+  pids: { file: string; result: DexpiResult }[],
+): Promise<Table[]> {
   const tables: Table[] = [];
   for (const file of files) {
     const bytes = readBytes(file, issues);
@@ -80,44 +90,75 @@ export async function importCommand(files: string[], options: ImportCommandOptio
   if (!/\.bulk$/i.test(out)) throw new UsageError('import writes a .bulk part file: give -o a name ending in .bulk');
   const before = existsSync(out) ? readFileSync(out, 'utf8') : undefined;
   if (before !== undefined && !before.startsWith(GENERATED_MARK) && !options.force) {
-    throw new UsageError(`\`${out}\` was not written by \`bulkhead import\`; it may hold hand-written statements (use --force to replace it)`);
+    throw new UsageError(
+      `\`${out}\` was not written by \`bulkhead import\`; it may hold hand-written statements (use --force to replace it)`,
+    );
   }
   const issues: ImportIssue[] = [];
   const progress = progressLine();
-  const map = options.mapping ? readMapping(options.mapping, readFileSync(options.mapping, 'utf8'), issues) : defaultHeaderMap();
+  const map = options.mapping
+    ? readMapping(options.mapping, readFileSync(options.mapping, 'utf8'), issues)
+    : defaultHeaderMap();
   const pids: { file: string; result: DexpiResult }[] = [];
   const tables = await readTables(files, issues, pids);
-  const model = options.model ? { file: options.model, text: readFileSync(options.model, 'utf8'), readPart: readPartFile } : undefined;
-  const result = importTables(tables, map, { generatedPath: normalPath(out), ...(model ? { model } : {}), partial: options.partial, progress: progress.tick, pids }, issues);
+  const model = options.model
+    ? { file: options.model, text: readFileSync(options.model, 'utf8'), readPart: readPartFile }
+    : undefined;
+  const result = importTables(
+    tables,
+    map,
+    {
+      generatedPath: normalPath(out),
+      ...(model ? { model } : {}),
+      partial: options.partial,
+      progress: progress.tick,
+      pids,
+    },
+    issues,
+  );
   progress.done();
   for (const i of result.issues) process.stderr.write(renderIssue(i) + '\n\n');
   for (const p of result.modelProblems) process.stderr.write(p + '\n\n');
   if (options.report) process.stdout.write(renderReport(result.tallies, result.suggestedKinds));
   if (result.onlyIn) {
-    process.stdout.write(`instruments, valves and loops only in the P&ID (${result.onlyIn.pid.length}): ${result.onlyIn.pid.join(', ') || '-'}\n`);
-    process.stdout.write(`instruments, valves and loops only in the tables (${result.onlyIn.tables.length}): ${result.onlyIn.tables.join(', ') || '-'}\n`);
+    process.stdout.write(
+      `instruments, valves and loops only in the P&ID (${result.onlyIn.pid.length}): ${result.onlyIn.pid.join(', ') || '-'}\n`,
+    );
+    process.stdout.write(
+      `instruments, valves and loops only in the tables (${result.onlyIn.tables.length}): ${result.onlyIn.tables.join(', ') || '-'}\n`,
+    );
   }
   const errors = result.issues.filter((i) => i.severity === 'error').length + result.modelProblems.length;
   if (result.text === undefined) {
-    process.stderr.write(`${errors} error${errors === 1 ? '' : 's'}; nothing was written (--partial writes the rows without errors)\n`);
+    process.stderr.write(
+      `${errors} error${errors === 1 ? '' : 's'}; nothing was written (--partial writes the rows without errors)\n`,
+    );
     return 2;
   }
-  if (!model) process.stderr.write('note: references between tables and to hand-written statements are checked only with --model MAIN.bulk\n');
+  if (!model)
+    process.stderr.write(
+      'note: references between tables and to hand-written statements are checked only with --model MAIN.bulk\n',
+    );
   mkdirSync(dirname(out), { recursive: true });
   writeFileAtomic(out, result.text);
-  const sources = [`${tables.length} table${tables.length === 1 ? '' : 's'}`, ...(pids.length ? [`${pids.length} P&ID${pids.length === 1 ? '' : 's'}`] : [])];
+  const sources = [
+    `${tables.length} table${tables.length === 1 ? '' : 's'}`,
+    ...(pids.length ? [`${pids.length} P&ID${pids.length === 1 ? '' : 's'}`] : []),
+  ];
   process.stdout.write(`${out}: ${result.statements} statements from ${sources.join(' and ')}\n`);
   if (result.leftOut.length) process.stdout.write(`left out for errors (--partial): ${result.leftOut.join(', ')}\n`);
   if (before !== undefined) {
     const changes = revisionChanges(before, result.text);
-    const list = (what: string, tags: string[]) => process.stdout.write(`${what} (${tags.length}): ${tags.length ? tags.join(', ') : '-'}\n`);
+    const list = (what: string, tags: string[]) =>
+      process.stdout.write(`${what} (${tags.length}): ${tags.length ? tags.join(', ') : '-'}\n`);
     list('added', changes.added);
     list('removed', changes.removed);
     list('changed', changes.changed);
     if (model) {
       const loaded = loadModelText(model.file, model.text, { readPart: readPartFile });
       const stale = staleJustifications(loaded.model?.justifications ?? [], changes);
-      for (const j of stale) process.stdout.write(`accept ${j.finding}: names an element that changed or went; review it\n`);
+      for (const j of stale)
+        process.stdout.write(`accept ${j.finding}: names an element that changed or went; review it\n`);
     }
   }
   return errors > 0 ? 2 : 0;

@@ -42,7 +42,6 @@ function checkDate(date: string): string {
   return date;
 }
 
-
 export function reportCommand(file: string | undefined, options: ReportOptions): number {
   if (options.jsonSchema) {
     process.stdout.write(`${JSON.stringify(reportJsonSchema(), null, 2)}\n`);
@@ -53,16 +52,28 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
   if (format === undefined) throw new UsageError(`\`bulkhead report\` needs --format ${REPORT_FORMATS.join('|')}`);
   if (!isReportFormat(format)) throw new UsageError(`--format takes ${REPORT_FORMATS.join(', ')}; found \`${format}\``);
   const contents = options.contents ?? 'evidence';
-  if (!isReportContents(contents)) throw new UsageError(`--contents takes ${REPORT_CONTENTS.join(', ')}; found \`${contents}\``);
+  if (!isReportContents(contents))
+    throw new UsageError(`--contents takes ${REPORT_CONTENTS.join(', ')}; found \`${contents}\``);
   if (!FORMATS_OF[contents].includes(format)) {
     throw new UsageError(`the ${contents} report comes as ${FORMATS_OF[contents].join(', ')}, not \`${format}\``);
   }
-  for (const [name, value] of [['document', options.document], ['revision', options.revision], ['status', options.status]] as const) {
+  for (const [name, value] of [
+    ['document', options.document],
+    ['revision', options.revision],
+    ['status', options.status],
+  ] as const) {
     if (value !== undefined && value.trim() === '') throw new UsageError(`--${name} needs a value`);
   }
   const date = options.date === undefined ? undefined : checkDate(options.date);
   const gate = gateFindings(options.failOn, options.out);
-  if (options.out) checkOutput(options.out, { inputs: [file], force: options.force ?? false, replaceable: isReportText, what: 'report', unlike: 'is not a Bulkhead report' });
+  if (options.out)
+    checkOutput(options.out, {
+      inputs: [file],
+      force: options.force ?? false,
+      replaceable: isReportText,
+      what: 'report',
+      unlike: 'is not a Bulkhead report',
+    });
   const result = readModel(file);
   if (!result.model || !result.bytes) {
     printDiagnostics(result);
@@ -75,7 +86,14 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
       analysis,
       file,
       sha256: createHash('sha256').update(result.bytes).digest('hex'),
-      ...(result.partBytes ? { parts: [...result.partBytes].map(([part, bytes]) => ({ file: part, sha256: createHash('sha256').update(bytes).digest('hex') })) } : {}),
+      ...(result.partBytes
+        ? {
+            parts: [...result.partBytes].map(([part, bytes]) => ({
+              file: part,
+              sha256: createHash('sha256').update(bytes).digest('hex'),
+            })),
+          }
+        : {}),
       toolVersion: cliVersion(),
       ...(date ? { date } : {}),
       spans: result.spans,

@@ -37,7 +37,14 @@ export const COMMANDS = new Map<string, CommandSpec>([
       run: (v, [file]) => checkCommand(file!, { failOn: str(v['fail-on']), verbose: v.verbose === true }),
     },
   ],
-  ['trace', { options: {}, positionals: { min: 1, max: 2, what: 'a model file and a function or element tag' }, run: (_v, [file, tag]) => traceCommand(file!, tag) }],
+  [
+    'trace',
+    {
+      options: {},
+      positionals: { min: 1, max: 2, what: 'a model file and a function or element tag' },
+      run: (_v, [file, tag]) => traceCommand(file!, tag),
+    },
+  ],
   ['schema', { options: {}, positionals: { min: 0, max: 0, what: 'no file' }, run: () => schemaCommand() }],
   [
     'fmt',
@@ -103,7 +110,14 @@ export const COMMANDS = new Map<string, CommandSpec>([
       run: (v, files) => diffCommand(files, { git: str(v.git), format: str(v.format), failOn: str(v['fail-on']) }),
     },
   ],
-  ['common-causes', { options: { format: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => commonCausesCommand(file!, str(v.format)) }],
+  [
+    'common-causes',
+    {
+      options: { format: { type: 'string' } },
+      positionals: { min: 1, max: 1, what: 'a model file' },
+      run: (v, [file]) => commonCausesCommand(file!, str(v.format)),
+    },
+  ],
   [
     'verify',
     {
@@ -125,7 +139,14 @@ export const COMMANDS = new Map<string, CommandSpec>([
       },
       positionals: { min: 1, max: Infinity, what: 'at least one table (.csv or .xlsx)' },
       run: (v, files) =>
-        importCommand(files, { out: str(v.out), model: str(v.model), mapping: str(v.mapping), report: v.report === true, partial: v.partial === true, force: v.force === true }),
+        importCommand(files, {
+          out: str(v.out),
+          model: str(v.model),
+          mapping: str(v.mapping),
+          report: v.report === true,
+          partial: v.partial === true,
+          force: v.force === true,
+        }),
     },
   ],
   [
@@ -136,7 +157,14 @@ export const COMMANDS = new Map<string, CommandSpec>([
       run: (v, [file]) => exportCommand(file!, str(v.tables), v.force === true),
     },
   ],
-  ['view', { options: { port: { type: 'string' } }, positionals: { min: 1, max: 1, what: 'a model file' }, run: (v, [file]) => viewCommand(file!, str(v.port)) }],
+  [
+    'view',
+    {
+      options: { port: { type: 'string' } },
+      positionals: { min: 1, max: 1, what: 'a model file' },
+      run: (v, [file]) => viewCommand(file!, str(v.port)),
+    },
+  ],
 ]);
 
 /** Every option any command takes, so a misplaced one can be named with the command it belongs to. */
@@ -161,6 +189,8 @@ export function checkPositionals(command: string, spec: CommandSpec, positionals
   const { min, max, what } = spec.positionals;
   if (positionals.length < min) throw new UsageError(`\`bulkhead ${command}\` needs ${what}`);
   if (positionals.length > max) {
-    throw new UsageError(`\`bulkhead ${command}\` takes ${what}; found ${positionals.map((p) => `\`${p}\``).join(' ')}`);
+    throw new UsageError(
+      `\`bulkhead ${command}\` takes ${what}; found ${positionals.map((p) => `\`${p}\``).join(' ')}`,
+    );
   }
 }

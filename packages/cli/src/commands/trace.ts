@@ -17,7 +17,9 @@ export function renderTree(start: string, elements: readonly TracedElement[], mo
     const parent = e.path[e.path.length - 2]!;
     (children.get(parent) ?? children.set(parent, []).get(parent)!).push(e);
   }
-  const titles = new Map<string, string | undefined>([...model.elements, ...model.functions].map((x) => [x.tag, x.title]));
+  const titles = new Map<string, string | undefined>(
+    [...model.elements, ...model.functions].map((x) => [x.tag, x.title]),
+  );
   const lines: string[] = [];
   const walk = (tag: string, prefix: string) => {
     const kids = children.get(tag) ?? [];
@@ -25,7 +27,9 @@ export function renderTree(start: string, elements: readonly TracedElement[], mo
       const last = i === kids.length - 1;
       const title = titles.get(child.tag);
       const stop = child.group === 'equipment' ? ' [process equipment: not traced further]' : '';
-      lines.push(`${prefix}${last ? '└─' : '├─'} ${roleWord(child.links[child.links.length - 1]!)} ${child.tag} (${child.kind})${title ? ` ${title}` : ''}${stop}`);
+      lines.push(
+        `${prefix}${last ? '└─' : '├─'} ${roleWord(child.links[child.links.length - 1]!)} ${child.tag} (${child.kind})${title ? ` ${title}` : ''}${stop}`,
+      );
       walk(child.tag, prefix + (last ? '   ' : '│  '));
     });
   };
@@ -36,7 +40,8 @@ export function renderTree(start: string, elements: readonly TracedElement[], mo
 function summary(trace: FunctionTrace): string[] {
   const out = [`${trace.elements.length} elements relied on`];
   for (const c of trace.channels) out.push(`${c.role} channel ${c.head}: ${c.elements.join(', ')}`);
-  if (trace.missing.length) out.push(`incomplete: the model gives no ${trace.missing.join(', ')}; independence cannot be verified`);
+  if (trace.missing.length)
+    out.push(`incomplete: the model gives no ${trace.missing.join(', ')}; independence cannot be verified`);
   return out;
 }
 
@@ -55,11 +60,15 @@ export function traceCommand(file: string, tag: string | undefined): number {
     process.stderr.write(`bulkhead: no function or element \`${tag}\` in ${file}${didYouMeanTag(tag, model)}\n`);
     return 2;
   }
-  const head = fn ? `${tag} (${fn.kind})${fn.title ? ` ${fn.title}` : ''}` : `${tag} (${element!.kind})${element!.title ? ` ${element!.title}` : ''}`;
+  const head = fn
+    ? `${tag} (${fn.kind})${fn.title ? ` ${fn.title}` : ''}`
+    : `${tag} (${element!.kind})${element!.title ? ` ${element!.title}` : ''}`;
   const elements = fn ? tracer.traceFunction(tag).elements : tracer.paths(tag);
   const lines = [head, ...renderTree(tag, elements, model), ''];
   if (fn) lines.push(...summary(tracer.traceFunction(tag)).map((l) => `  ${l}`), '');
-  const users = model.functions.filter((f) => f.tag !== tag && tracer.traceFunction(f.tag).elements.some((e) => e.tag === tag)).map((f) => f.tag);
+  const users = model.functions
+    .filter((f) => f.tag !== tag && tracer.traceFunction(f.tag).elements.some((e) => e.tag === tag))
+    .map((f) => f.tag);
   if (element) lines.push(`  functions that rely on ${tag}: ${users.length ? users.join(', ') : 'none'}`, '');
   process.stdout.write(lines.join('\n'));
   return 0;

@@ -14,7 +14,8 @@ function passes(v: SifVerification): boolean {
 }
 
 export function verifyCommand(file: string, sif: string | undefined, format = 'text'): number {
-  if (!(VERIFY_FORMATS as readonly string[]).includes(format)) throw new UsageError(`\`--format ${format}\` is not one of ${VERIFY_FORMATS.join(', ')}`);
+  if (!(VERIFY_FORMATS as readonly string[]).includes(format))
+    throw new UsageError(`\`--format ${format}\` is not one of ${VERIFY_FORMATS.join(', ')}`);
   const result = readModel(file);
   if (!result.model) {
     printDiagnostics(result);
@@ -24,7 +25,10 @@ export function verifyCommand(file: string, sif: string | undefined, format = 't
   if (sif !== undefined) {
     const fn = model.functions.find((f) => f.tag === sif);
     if (fn === undefined || fn.kind !== 'sif') {
-      const what = fn === undefined ? `no SIF \`${sif}\` in ${file}${didYouMeanTag(sif, model)}` : `\`${sif}\` is a ${fn.kind} function, not a SIF`;
+      const what =
+        fn === undefined
+          ? `no SIF \`${sif}\` in ${file}${didYouMeanTag(sif, model)}`
+          : `\`${sif}\` is a ${fn.kind} function, not a SIF`;
       process.stderr.write(`bulkhead: ${what}\n`);
       return 2;
     }
@@ -34,7 +38,10 @@ export function verifyCommand(file: string, sif: string | undefined, format = 't
     process.stdout.write(`${file}: the model has no SIF to verify\n`);
     return 0;
   }
-  if (format === 'json') process.stdout.write(`${JSON.stringify({ bulkheadVerify: 1, caution: VERIFY_CAUTION, sifs: verifications }, null, 2)}\n`);
+  if (format === 'json')
+    process.stdout.write(
+      `${JSON.stringify({ bulkheadVerify: 1, caution: VERIFY_CAUTION, sifs: verifications }, null, 2)}\n`,
+    );
   else process.stdout.write(renderVerificationsText(verifications));
   return verifications.every(passes) ? 0 : 1;
 }

@@ -13,7 +13,8 @@ export const VIEWER_DIST = repositoryPath('apps/viewer/dist/');
 
 export function parsePort(text: string | undefined): number | undefined {
   if (text === undefined) return undefined;
-  if (!/^\d{1,5}$/.test(text) || Number(text) > 65535) throw new UsageError(`--port takes a number from 0 to 65535 (0: any free port); found \`${text}\``);
+  if (!/^\d{1,5}$/.test(text) || Number(text) > 65535)
+    throw new UsageError(`--port takes a number from 0 to 65535 (0: any free port); found \`${text}\``);
   return Number(text);
 }
 
@@ -53,7 +54,10 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
   }
   // The terminal gets the same analysis as `bulkhead check`, so the URL comes with the verdicts.
   const initial = readModel(file);
-  if (initial.model) process.stdout.write(renderCheck({ ...initial, model: initial.model }, analyze(initial.model, { spans: initial.spans })) + '\n');
+  if (initial.model)
+    process.stdout.write(
+      renderCheck({ ...initial, model: initial.model }, analyze(initial.model, { spans: initial.spans })) + '\n',
+    );
   else printDiagnostics(initial);
   const start = (port: number, fallback: boolean): void => {
     startViewServer({
@@ -61,17 +65,23 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
       distDir,
       port,
       onChange: (state, changed) =>
-        process.stdout.write(`${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(file, changed)}${file} ${describe(file, state)}\n`),
+        process.stdout.write(
+          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(file, changed)}${file} ${describe(file, state)}\n`,
+        ),
     }).then(
       (server) => {
-        process.stdout.write(`bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`);
+        process.stdout.write(
+          `bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`,
+        );
         const stop = () => void server.close().then(() => process.exit(0));
         process.once('SIGINT', stop);
         process.once('SIGTERM', stop);
       },
       (e: NodeJS.ErrnoException) => {
         if (e.code === 'EADDRINUSE' && fallback) return start(0, false);
-        process.stderr.write(`bulkhead view: cannot listen on 127.0.0.1:${port}: ${e.code ?? e.message}${e.code === 'EADDRINUSE' ? ' (choose another with --port N, or --port 0 for any free port)' : ''}\n`);
+        process.stderr.write(
+          `bulkhead view: cannot listen on 127.0.0.1:${port}: ${e.code ?? e.message}${e.code === 'EADDRINUSE' ? ' (choose another with --port N, or --port 0 for any free port)' : ''}\n`,
+        );
         process.exit(2);
       },
     );

@@ -6,7 +6,16 @@ import { unwatchFile, watch, watchFile, type FSWatcher } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { readAssets, type Asset } from './assets.ts';
-import { partOnDisk, partsBody, readSiteFiles, readState, sameSite, sameState, type FileState, type SiteFiles } from './site-files.ts';
+import {
+  partOnDisk,
+  partsBody,
+  readSiteFiles,
+  readState,
+  sameSite,
+  sameState,
+  type FileState,
+  type SiteFiles,
+} from './site-files.ts';
 
 export { readState, type FileState } from './site-files.ts';
 
@@ -52,8 +61,20 @@ const MISSING_GRACE_MS = 300;
 const POLL_MS = 250;
 const KEEPALIVE_MS = 20_000;
 
-function send(res: ServerResponse, status: number, type: string, body: Buffer | string, extra: Record<string, string> = {}, head = false): void {
-  res.writeHead(status, { ...SECURITY_HEADERS, 'Content-Type': type, 'Content-Length': String(Buffer.byteLength(body)), ...extra });
+function send(
+  res: ServerResponse,
+  status: number,
+  type: string,
+  body: Buffer | string,
+  extra: Record<string, string> = {},
+  head = false,
+): void {
+  res.writeHead(status, {
+    ...SECURITY_HEADERS,
+    'Content-Type': type,
+    'Content-Length': String(Buffer.byteLength(body)),
+    ...extra,
+  });
   res.end(head ? undefined : body);
 }
 
@@ -99,18 +120,44 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
       const named = { 'Cache-Control': 'no-store', [MODEL_FILE_HEADER]: encodeURIComponent(fileName) };
       const state = readState(options.file);
       // The bytes go as they are (latin1 keeps every byte), so the page's loader judges them, not us.
-      if ('text' in state) return send(res, 200, 'application/octet-stream', Buffer.from(state.text, 'latin1'), named, head);
-      return send(res, 404, 'text/plain; charset=utf-8', `${state.missing}\n`, { ...named, [MISSING_HEADER]: encodeURIComponent(state.missing) }, head);
+      if ('text' in state)
+        return send(res, 200, 'application/octet-stream', Buffer.from(state.text, 'latin1'), named, head);
+      return send(
+        res,
+        404,
+        'text/plain; charset=utf-8',
+        `${state.missing}\n`,
+        { ...named, [MISSING_HEADER]: encodeURIComponent(state.missing) },
+        head,
+      );
     }
     if (path === '/parts') {
       // Read afresh like /model; the page loads the model with exactly these files.
-      return send(res, 200, 'application/json; charset=utf-8', partsBody(readSiteFiles(options.file).parts), { 'Cache-Control': 'no-store' }, head);
+      return send(
+        res,
+        200,
+        'application/json; charset=utf-8',
+        partsBody(readSiteFiles(options.file).parts),
+        { 'Cache-Control': 'no-store' },
+        head,
+      );
     }
     if (path === '/events') {
       if (clients.size >= MAX_EVENT_CLIENTS) {
-        return send(res, 503, 'text/plain; charset=utf-8', `too many live pages (${MAX_EVENT_CLIENTS}); close other viewer tabs\n`, { 'Cache-Control': 'no-store', 'Retry-After': '5' });
+        return send(
+          res,
+          503,
+          'text/plain; charset=utf-8',
+          `too many live pages (${MAX_EVENT_CLIENTS}); close other viewer tabs\n`,
+          { 'Cache-Control': 'no-store', 'Retry-After': '5' },
+        );
       }
-      res.writeHead(200, { ...SECURITY_HEADERS, 'Content-Type': 'text/event-stream; charset=utf-8', 'Cache-Control': 'no-store', Connection: 'keep-alive' });
+      res.writeHead(200, {
+        ...SECURITY_HEADERS,
+        'Content-Type': 'text/event-stream; charset=utf-8',
+        'Cache-Control': 'no-store',
+        Connection: 'keep-alive',
+      });
       res.write(`retry: 1000\nevent: hello\ndata: ${JSON.stringify({ revision })}\n\n`);
       clients.add(res);
       req.on('close', () => clients.delete(res));
@@ -118,7 +165,14 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     }
     const asset = assets.get(path);
     if (!asset) return notFound(res);
-    return send(res, 200, asset.type, asset.body, { 'Cache-Control': asset.immutable ? 'public, max-age=31536000, immutable' : 'no-store' }, head);
+    return send(
+      res,
+      200,
+      asset.type,
+      asset.body,
+      { 'Cache-Control': asset.immutable ? 'public, max-age=31536000, immutable' : 'no-store' },
+      head,
+    );
   }
 
   function push(): void {
@@ -167,7 +221,10 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
   const polled = new Set<string>();
   const watchers = new Map<string, FSWatcher>();
   function follow(site: SiteFiles): void {
-    const wanted = new Set([resolve(options.file), ...[...site.parts.keys()].map((part) => partOnDisk(options.file, part))]);
+    const wanted = new Set([
+      resolve(options.file),
+      ...[...site.parts.keys()].map((part) => partOnDisk(options.file, part)),
+    ]);
     for (const file of polled) {
       if (wanted.has(file)) continue;
       unwatchFile(file, changed);

@@ -23,11 +23,17 @@ export function readState(file: string): FileState {
     const stat = statSync(file);
     if (stat.isDirectory()) return { missing: 'the path is now a directory, not a file' };
     if (!stat.isFile()) return { missing: 'the path is not a regular file' };
-    if (stat.size > MAX_FILE_BYTES) return { missing: `the file is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
+    if (stat.size > MAX_FILE_BYTES)
+      return { missing: `the file is ${(stat.size / 1048576).toFixed(1)} MB; the limit is 50 MB` };
     return { text: readFileSync(file, 'latin1') };
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
-    return { missing: code === 'ENOENT' ? 'the file is missing (deleted or renamed)' : `the file cannot be read (${code ?? 'read error'})` };
+    return {
+      missing:
+        code === 'ENOENT'
+          ? 'the file is missing (deleted or renamed)'
+          : `the file cannot be read (${code ?? 'read error'})`,
+    };
   }
 }
 

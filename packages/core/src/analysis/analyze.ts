@@ -2,7 +2,13 @@
 // -> assessment per scenario. Pure and deterministic: the same model always gives the same analysis.
 import { assessRulesInForce, assessScenario, bpcsFactsOf, resolvedPolicy, rulesInForce } from '../assess/index.ts';
 import { INDEPENDENCE_ENTRIES } from '../catalogue/catalogue.ts';
-import { acceptancesOf, acceptFindings, applyJustifications, JUSTIFICATION_RULES, type Acceptances } from '../justify/index.ts';
+import {
+  acceptancesOf,
+  acceptFindings,
+  applyJustifications,
+  JUSTIFICATION_RULES,
+  type Acceptances,
+} from '../justify/index.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { findingSpans, ModelLocator } from '../loader/locate.ts';
 import type { Model, Scenario, SeverityLevel } from '../model/schema.ts';
@@ -23,7 +29,11 @@ export function independenceRulesInForce(model: Model): RuleInForce[] {
 }
 
 /** What the rules read besides the scenario: lookups, policy and severities in force, built once per model. */
-export function ruleEnvironment(model: Model, tracer: Tracer, independence = independenceRulesInForce(model)): RuleEnvironment {
+export function ruleEnvironment(
+  model: Model,
+  tracer: Tracer,
+  independence = independenceRulesInForce(model),
+): RuleEnvironment {
   const severities = new Map(independence.map((r) => [r.id, r.severity]));
   return {
     model,
@@ -53,8 +63,17 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
   const acceptances = acceptancesOf(model.justifications);
   const narrowedEnv = environmentOnceNarrowed(env);
   const assessed = model.scenarios.map((scenario) => {
-    const narrowed = findingsOnceNarrowed(env, narrowedEnv, scenario, acceptances, (fs) => countSharedInCalculation(model, tracer, fs, bpcs));
-    return assessScenario({ model, scenario, findings: byScenario.get(scenario.id) ?? [], bpcs, functions: env.functions, ...(narrowed ? { findingsIfAccepted: narrowed } : {}) });
+    const narrowed = findingsOnceNarrowed(env, narrowedEnv, scenario, acceptances, (fs) =>
+      countSharedInCalculation(model, tracer, fs, bpcs),
+    );
+    return assessScenario({
+      model,
+      scenario,
+      findings: byScenario.get(scenario.id) ?? [],
+      bpcs,
+      functions: env.functions,
+      ...(narrowed ? { findingsIfAccepted: narrowed } : {}),
+    });
   });
   const all = [...independent, ...assessed.flatMap((a) => a.findings)];
   const { stale } = applyJustifications(all, model.justifications, options.spans);
@@ -63,7 +82,11 @@ export function analyze(model: Model, options: AnalyzeOptions = {}): Analysis {
     traces,
     findings: options.spans ? withSpans(findings, new ModelLocator(model, options.spans)) : findings,
     assessments: assessed.map((a, i) => withCauseElements(a.assessment, env, model.scenarios[i]!)),
-    rules: [...independence, ...assessRulesInForce(model), ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule)],
+    rules: [
+      ...independence,
+      ...assessRulesInForce(model),
+      ...JUSTIFICATION_RULES.map(({ rationale: _r, ...rule }) => rule),
+    ],
   };
 }
 
@@ -76,7 +99,11 @@ function withSpans(findings: Finding[], locate: ModelLocator): Finding[] {
 }
 
 /** The cause's element set travels with the assessment, so reports show what the rules compared. */
-function withCauseElements(assessment: ScenarioAssessment, env: RuleEnvironment, scenario: Scenario): ScenarioAssessment {
+function withCauseElements(
+  assessment: ScenarioAssessment,
+  env: RuleEnvironment,
+  scenario: Scenario,
+): ScenarioAssessment {
   const elements = [...causeSide(env, scenario).elements.keys()].sort();
   return { ...assessment, cause: { ...assessment.cause, elements } };
 }
@@ -94,7 +121,9 @@ function narrowingKey(scenario: Scenario): string | undefined {
  * justifications.
  */
 function environmentOnceNarrowed(env: RuleEnvironment): RuleEnvironment {
-  const keys = env.model.scenarios.map(narrowingKey).filter((k): k is string => k !== undefined && !env.acceptedKeys.has(k));
+  const keys = env.model.scenarios
+    .map(narrowingKey)
+    .filter((k): k is string => k !== undefined && !env.acceptedKeys.has(k));
   return keys.length ? { ...env, acceptedKeys: new Set([...env.acceptedKeys, ...keys]) } : env;
 }
 
@@ -125,6 +154,11 @@ function sortByScenario(model: Model, findings: Finding[]): Finding[] {
   const rank: Record<SeverityLevel, number> = { 'voids-credit': 0, 'needs-justification': 1, note: 2 };
   return findings
     .map((f, i) => ({ f, i }))
-    .sort((a, b) => (order.get(a.f.scenario ?? '') ?? 1e9) - (order.get(b.f.scenario ?? '') ?? 1e9) || rank[a.f.severity] - rank[b.f.severity] || a.i - b.i)
+    .sort(
+      (a, b) =>
+        (order.get(a.f.scenario ?? '') ?? 1e9) - (order.get(b.f.scenario ?? '') ?? 1e9) ||
+        rank[a.f.severity] - rank[b.f.severity] ||
+        a.i - b.i,
+    )
     .map((x) => x.f);
 }

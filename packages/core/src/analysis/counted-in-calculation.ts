@@ -11,16 +11,21 @@ import { FailureDataIndex } from '../reliability/figures.ts';
 import type { Tracer } from '../trace/trace.ts';
 import type { Finding } from '../vocabulary/types.ts';
 
-
 type Sif = FunctionKindOf<'sif'>;
 
-export function countSharedInCalculation(model: Model, tracer: Tracer, findings: readonly Finding[], facts: BpcsFacts): Finding[] {
+export function countSharedInCalculation(
+  model: Model,
+  tracer: Tracer,
+  findings: readonly Finding[],
+  facts: BpcsFacts,
+): Finding[] {
   if (!findings.some((f) => f.messageId === 'voted-group-common-cause/shared-in-group')) return [...findings];
   const data = new FailureDataIndex(model);
   const functions = new Map(model.functions.map((f) => [f.tag, f]));
   const scenarios = new Map(model.scenarios.map((s) => [s.id, s]));
   const calculations = new Map<string, SifCalculation>();
-  const calculationOf = (sif: Sif): SifCalculation => calculations.get(sif.tag) ?? calculations.set(sif.tag, computeSif(tracer, data, sif)).get(sif.tag)!;
+  const calculationOf = (sif: Sif): SifCalculation =>
+    calculations.get(sif.tag) ?? calculations.set(sif.tag, computeSif(tracer, data, sif)).get(sif.tag)!;
   return findings.map((f) => {
     if (f.messageId !== 'voted-group-common-cause/shared-in-group') return f;
     const fn = functions.get(f.data.function);
@@ -30,11 +35,19 @@ export function countSharedInCalculation(model: Model, tracer: Tracer, findings:
     if (!verificationComplete(calc)) return f;
     const claimed = claimedPfdOf(claim, fn, facts).claimed.value;
     const claimedPfh = claimedPfhOf(fn)?.value;
-    const counted = { ...f.data, computed: calc.pfd, claimed, computedPfh: calc.pfh, ...(claimedPfh !== undefined ? { claimedPfh } : {}) };
+    const counted = {
+      ...f.data,
+      computed: calc.pfd,
+      claimed,
+      computedPfh: calc.pfh,
+      ...(claimedPfh !== undefined ? { claimedPfh } : {}),
+    };
     // A figure within the claim leaves nothing to justify; a figure above it caps the credit until the claim is
     // justified. The PFH counts too: the scenario may judge the SIF in high demand.
     const within = calc.pfd <= claimed && (claimedPfh === undefined || calc.pfh <= claimedPfh);
-    const says = within ? say('voted-group-common-cause/counted-within-claim', counted) : say('voted-group-common-cause/counted-claim-missed', counted);
+    const says = within
+      ? say('voted-group-common-cause/counted-within-claim', counted)
+      : say('voted-group-common-cause/counted-claim-missed', counted);
     return { ...f, ...says, message: renderMessage(says), ...(within ? { severity: 'note' as const } : {}) };
   });
 }

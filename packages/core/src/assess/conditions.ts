@@ -34,7 +34,14 @@ function bar<T extends { allowed: boolean; allowedIfAccepted?: boolean; finding?
   return entry;
 }
 
-function noBasis(model: Model, scenario: Scenario, tag: string, factor: 'enabler' | 'modifier', name: string, probability: number): Finding {
+function noBasis(
+  model: Model,
+  scenario: Scenario,
+  tag: string,
+  factor: 'enabler' | 'modifier',
+  name: string,
+  probability: number,
+): Finding {
   return limitFinding(model, scenario.id, {
     tags: [tag],
     parties: [],
@@ -45,7 +52,12 @@ function noBasis(model: Model, scenario: Scenario, tag: string, factor: 'enabler
 export function assessConditions(model: Model, scenario: Scenario, harm: string, mine: Finding[]): Conditions {
   const policy = resolvedPolicy(model);
   const enablers = (scenario.enablers ?? []).map((e, i): EnablerEntry => {
-    const entry: EnablerEntry = { title: e.title, probability: e.probability, ...(e.basis !== undefined ? { basis: e.basis } : {}), allowed: true };
+    const entry: EnablerEntry = {
+      title: e.title,
+      probability: e.probability,
+      ...(e.basis !== undefined ? { basis: e.basis } : {}),
+      allowed: true,
+    };
     if (e.basis === undefined) {
       const f = noBasis(model, scenario, `enabler-${i + 1}`, 'enabler', e.title, e.probability);
       mine.push(f);
@@ -67,18 +79,27 @@ export function assessConditions(model: Model, scenario: Scenario, harm: string,
     };
     const found: Finding[] = [];
     if (harm !== 'people') {
-      found.push(limitFinding(model, scenario.id, {
-        tags: [tag],
-        parties: [],
-        says: say('modifier-not-allowed/not-people', { modifier: m.kind, probability: m.probability, category: scenario.category, harm }),
-      }));
-    } else {
-      if (m.kind === 'presence' && above(m.probability, policy.presenceLimit)) {
-        found.push(limitFinding(model, scenario.id, {
+      found.push(
+        limitFinding(model, scenario.id, {
           tags: [tag],
           parties: [],
-          says: say('presence-above-limit/above-limit', { probability: m.probability, limit: policy.presenceLimit }),
-        }));
+          says: say('modifier-not-allowed/not-people', {
+            modifier: m.kind,
+            probability: m.probability,
+            category: scenario.category,
+            harm,
+          }),
+        }),
+      );
+    } else {
+      if (m.kind === 'presence' && above(m.probability, policy.presenceLimit)) {
+        found.push(
+          limitFinding(model, scenario.id, {
+            tags: [tag],
+            parties: [],
+            says: say('presence-above-limit/above-limit', { probability: m.probability, limit: policy.presenceLimit }),
+          }),
+        );
       }
       if (m.basis === undefined) found.push(noBasis(model, scenario, tag, 'modifier', m.kind, m.probability));
     }
@@ -89,8 +110,10 @@ export function assessConditions(model: Model, scenario: Scenario, harm: string,
     return entry;
   });
 
-  const rawEnablers = (figure: Figure | 'claimed') => product(enablers.filter((e) => applied(e, figure)).map((e) => e.probability));
-  const rawModifiers = (figure: Figure | 'claimed') => product(modifiers.filter((m) => applied(m, figure)).map((m) => m.probability));
+  const rawEnablers = (figure: Figure | 'claimed') =>
+    product(enablers.filter((e) => applied(e, figure)).map((e) => e.probability));
+  const rawModifiers = (figure: Figure | 'claimed') =>
+    product(modifiers.filter((m) => applied(m, figure)).map((m) => m.probability));
   // The owner's limit on the combined credit: judged on the factors the "if accepted" figure would apply (a superset
   // of the headline figure's), so accepting the other findings cannot take the credit past the limit unseen.
   const floor = 1 / policy.conditionCreditLimit;

@@ -12,8 +12,7 @@ export interface TypicalCauseRow {
   source: string;
 }
 
-const TABLE_5_1 =
-  'CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)';
+const TABLE_5_1 = 'CCPS, Layer of Protection Analysis (2001), Table 5.1, company value (row label from memory)';
 
 /** Typical initiating-event frequencies, per year (CCPS 2001 Table 5.1 as docs/rule-basis.md section 3 quotes it). */
 export const TYPICAL_CAUSE_FREQUENCIES: Readonly<Record<TypicalCause, TypicalCauseRow>> = {
@@ -55,12 +54,17 @@ export interface LayerDefaultRow {
   source: string;
 }
 
-const TABLES_6 = 'CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as docs/rule-basis.md section 3 lists it)';
+const TABLES_6 =
+  'CCPS, Layer of Protection Analysis (2001), Tables 6.3 to 6.5 (from memory, as docs/rule-basis.md section 3 lists it)';
 
 /** Typical IPL PFDs by kind of layer. A SIF's default comes from its SIL band (sifDefaultPfd). */
 export const TYPICAL_LAYER_PFDS: Readonly<Record<LayerDefaultKey, LayerDefaultRow>> = {
   'bpcs-layer': { title: 'BPCS function not part of the cause', pfd: 0.1, source: TABLES_6 },
-  'human-response': { title: 'Operator response to an alarm, at least 10 minutes available', pfd: 0.1, source: TABLES_6 },
+  'human-response': {
+    title: 'Operator response to an alarm, at least 10 minutes available',
+    pfd: 0.1,
+    source: TABLES_6,
+  },
   'relief-valve': { title: 'Relief valve', pfd: 0.01, source: TABLES_6 },
   'rupture-disc': { title: 'Rupture disc', pfd: 0.01, source: TABLES_6 },
   'check-valve': { title: 'Single check valve: little or no credit', pfd: undefined, source: TABLES_6 },

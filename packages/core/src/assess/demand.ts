@@ -47,6 +47,10 @@ export function mitigatedFigure(input: FigureInput): FigureResult {
   const withoutSif = product([input.cause, input.enablers, input.modifiers, ...others.map((l) => l.pfd)]);
   // With no PFH the SIF earns nothing at this demand (the caller records why).
   if (input.sif.pfh === undefined) return { mitigated: withoutSif, demand, highDemand: true };
-  const hazard = product([input.sif.pfh * HOURS_PER_YEAR, ...acting(others, 'after').map((l) => l.pfd), input.modifiers]);
+  const hazard = product([
+    input.sif.pfh * HOURS_PER_YEAR,
+    ...acting(others, 'after').map((l) => l.pfd),
+    input.modifiers,
+  ]);
   return { mitigated: Math.min(hazard, withoutSif), demand, highDemand: true };
 }

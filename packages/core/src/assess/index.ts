@@ -28,7 +28,17 @@ export {
   type LayerDefaultKey,
   type LayerDefaultRow,
 } from './defaults.ts';
-export { ASSESS_RULES, assessRulesInForce, rulesInForce, severityInForce, findingKey, inForce, type AssessRule, type AssessRuleId, type Figure } from './limits.ts';
+export {
+  ASSESS_RULES,
+  assessRulesInForce,
+  rulesInForce,
+  severityInForce,
+  findingKey,
+  inForce,
+  type AssessRule,
+  type AssessRuleId,
+  type Figure,
+} from './limits.ts';
 export {
   POLICY_DEFAULTS,
   BPCS_LAYER_BEST_PFD,
@@ -38,7 +48,14 @@ export {
   resolvedPolicy,
   type ResolvedPolicy,
 } from '../vocabulary/policy.ts';
-export { bpcsFactsOf, isBpcsLayer, causeIsBpcsFailure, causeIsBpcsLoopFailure, type BpcsFacts, type FunctionFacts } from './facts.ts';
+export {
+  bpcsFactsOf,
+  isBpcsLayer,
+  causeIsBpcsFailure,
+  causeIsBpcsLoopFailure,
+  type BpcsFacts,
+  type FunctionFacts,
+} from './facts.ts';
 export { bestCreditableSet, type CreditCandidate, type CreditProblem, type CreditChoice } from './credit.ts';
 export { sifRequirement, type RequirementInput, type ScenarioSifRequirement } from './requirement.ts';
 export { RELATIVE_TOLERANCE, sameFigure, decadeLog10, meetsCriterion, type Edge } from './numbers.ts';

@@ -43,7 +43,8 @@ export const PFH_BAND_SOURCE = 'IEC 61511-1:2016 Table 5, conservative edge of t
 /** The PFH a SIF in high demand is judged by: its own pfh=, else the conservative edge of its SIL's Table 5 band. */
 export function claimedPfhOf(fn: PlantFunction): Sourced | undefined {
   if (fn.kind !== 'sif') return undefined;
-  if (fn.pfh !== undefined) return { value: fn.pfh, origin: 'model', ...(fn.pfhBasis !== undefined ? { basis: fn.pfhBasis } : {}) };
+  if (fn.pfh !== undefined)
+    return { value: fn.pfh, origin: 'model', ...(fn.pfhBasis !== undefined ? { basis: fn.pfhBasis } : {}) };
   const band = fn.sil !== undefined ? highDemandBand(fn.sil) : undefined;
   return band ? { value: band.high, origin: 'sil-band', basis: `SIL ${fn.sil}: ${PFH_BAND_SOURCE}` } : undefined;
 }
@@ -59,21 +60,30 @@ function defaultKeyOf(fn: PlantFunction, facts: BpcsFacts): LayerDefaultKey | un
 }
 
 /** The claimed PFD and where it came from: the scenario's claim, the function, the SIL band, or the defaults. */
-export function claimedPfdOf(claim: LayerClaim, fn: PlantFunction, facts: BpcsFacts): { claimed: Sourced; hasPfd: boolean } {
+export function claimedPfdOf(
+  claim: LayerClaim,
+  fn: PlantFunction,
+  facts: BpcsFacts,
+): { claimed: Sourced; hasPfd: boolean } {
   if (claim.pfd !== undefined) {
     const basis = claim.basis ?? fn.pfdBasis;
     return { claimed: { value: claim.pfd, origin: 'model', ...(basis !== undefined ? { basis } : {}) }, hasPfd: true };
   }
   if (fn.pfd !== undefined) {
-    return { claimed: { value: fn.pfd, origin: 'model', ...(fn.pfdBasis !== undefined ? { basis: fn.pfdBasis } : {}) }, hasPfd: true };
+    return {
+      claimed: { value: fn.pfd, origin: 'model', ...(fn.pfdBasis !== undefined ? { basis: fn.pfdBasis } : {}) },
+      hasPfd: true,
+    };
   }
   if (fn.kind === 'sif' && fn.sil !== undefined) {
     const pfd = sifDefaultPfd(fn.sil);
-    if (pfd !== undefined) return { claimed: { value: pfd, origin: 'sil-band', basis: `SIL ${fn.sil}: ${SIF_BAND_SOURCE}` }, hasPfd: true };
+    if (pfd !== undefined)
+      return { claimed: { value: pfd, origin: 'sil-band', basis: `SIL ${fn.sil}: ${SIF_BAND_SOURCE}` }, hasPfd: true };
   }
   const key = defaultKeyOf(fn, facts);
   const row = key !== undefined ? TYPICAL_LAYER_PFDS[key] : undefined;
-  if (row?.pfd !== undefined) return { claimed: { value: row.pfd, origin: 'default', basis: `${row.title}: ${row.source}` }, hasPfd: true };
+  if (row?.pfd !== undefined)
+    return { claimed: { value: row.pfd, origin: 'default', basis: `${row.title}: ${row.source}` }, hasPfd: true };
   const basis = row ? `${row.title}: ${row.source}` : 'no PFD given and no default applies';
   return { claimed: { value: 1, origin: 'default', basis }, hasPfd: false };
 }
@@ -88,7 +98,11 @@ interface LayerContext {
 
 class LayerBuilder {
   readonly work: LayerWork;
-  constructor(private readonly ctx: LayerContext, claim: LayerClaim, fn: PlantFunction) {
+  constructor(
+    private readonly ctx: LayerContext,
+    claim: LayerClaim,
+    fn: PlantFunction,
+  ) {
     const { claimed, hasPfd } = claimedPfdOf(claim, fn, ctx.facts);
     this.work = {
       claim,
@@ -106,7 +120,11 @@ class LayerBuilder {
 
   private finding(says: AssessmentMessage): Finding {
     const tag = this.work.fn.tag;
-    const f = limitFinding(this.ctx.model, this.ctx.scenario.id, { tags: [tag], parties: [{ role: 'layer', tag }], says });
+    const f = limitFinding(this.ctx.model, this.ctx.scenario.id, {
+      tags: [tag],
+      parties: [{ role: 'layer', tag }],
+      says,
+    });
     this.work.findings.push(f);
     return f;
   }
@@ -125,7 +143,8 @@ class LayerBuilder {
   cap(limit: number, says: AssessmentMessage): void {
     const f = this.finding(says);
     this.reason(f, 'caps', limit);
-    for (const figure of FIGURES) if (inForce(f, figure)) this.work.pfd[figure] = Math.max(this.work.pfd[figure], limit);
+    for (const figure of FIGURES)
+      if (inForce(f, figure)) this.work.pfd[figure] = Math.max(this.work.pfd[figure], limit);
   }
 
   void(says: AssessmentMessage): void {
@@ -199,18 +218,31 @@ export function assessLayerLimits(ctx: LayerContext, claim: LayerClaim, fn: Plan
   }
   if (fn.kind === 'sif') unverifiedClaim(b, fn, highDemand);
   // The human floor applies wherever the alarm is raised; when it caps, the BPCS cap would say the same again.
-  const humanCapped = fn.kind === 'alarm' && fn.hraBasis === undefined && w.hasPfd && below(value, HUMAN_RESPONSE_BEST_PFD);
+  const humanCapped =
+    fn.kind === 'alarm' && fn.hraBasis === undefined && w.hasPfd && below(value, HUMAN_RESPONSE_BEST_PFD);
   if (humanCapped) {
-    b.cap(HUMAN_RESPONSE_BEST_PFD, say('human-response-floor/capped', { function: fn.tag, claimed: value, best: HUMAN_RESPONSE_BEST_PFD }));
+    b.cap(
+      HUMAN_RESPONSE_BEST_PFD,
+      say('human-response-floor/capped', { function: fn.tag, claimed: value, best: HUMAN_RESPONSE_BEST_PFD }),
+    );
   }
   if (w.bpcs && w.hasPfd && !humanCapped && below(value, BPCS_LAYER_BEST_PFD)) {
-    b.cap(BPCS_LAYER_BEST_PFD, say('bpcs-layer-cap/capped', { function: fn.tag, claimed: value, best: BPCS_LAYER_BEST_PFD }));
+    b.cap(
+      BPCS_LAYER_BEST_PFD,
+      say('bpcs-layer-cap/capped', { function: fn.tag, claimed: value, best: BPCS_LAYER_BEST_PFD }),
+    );
   }
   if (w.bpcs && policy.sameControllerLayers === 'none' && causeIsBpcsFailure(ctx.model, ctx.scenario, ctx.facts)) {
     b.void(say('bpcs-layer-with-bpcs-cause/no-credit', { function: fn.tag }));
   }
   if (fn.kind === 'alarm' && below(fn.minutes, policy.minResponseMinutes)) {
-    b.void(say('alarm-response-time/too-little-time', { function: fn.tag, minutes: fn.minutes, required: policy.minResponseMinutes }));
+    b.void(
+      say('alarm-response-time/too-little-time', {
+        function: fn.tag,
+        minutes: fn.minutes,
+        required: policy.minResponseMinutes,
+      }),
+    );
   }
   const isCheckValve = fn.kind === 'device' && ctx.facts[fn.tag]?.deviceKind === 'check-valve';
   if (isCheckValve && fn.kind === 'device' && fn.creditBasis === undefined) {

@@ -3,7 +3,14 @@
 import type { Finding, RuleInForce } from '../vocabulary/types.ts';
 import type { Model, SeverityLevel } from '../model/schema.ts';
 import { justificationOf } from '../model/lookup.ts';
-import { ASSESSMENT_ENTRIES, catalogueEntry, renderMessage, ruleIdOf, type AssessmentRuleId as AssessRuleId, type FindingMessage } from '../catalogue/catalogue.ts';
+import {
+  ASSESSMENT_ENTRIES,
+  catalogueEntry,
+  renderMessage,
+  ruleIdOf,
+  type AssessmentRuleId as AssessRuleId,
+  type FindingMessage,
+} from '../catalogue/catalogue.ts';
 import type { RuleEntry } from '../catalogue/define.ts';
 
 /** An assessment rule as the catalogue gives it (catalogue/assessment/<id>.ts). */
@@ -77,7 +84,9 @@ export function limitFinding(model: Model, scenario: string, input: LimitFinding
     message: renderMessage(input.says),
     rationale: rule.rationale,
     source: rule.source,
-    ...(justification ? { accepted: { by: justification.by, date: justification.date, reason: justification.reason } } : {}),
+    ...(justification
+      ? { accepted: { by: justification.by, date: justification.date, reason: justification.reason } }
+      : {}),
   };
 }
 

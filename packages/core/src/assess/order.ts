@@ -45,8 +45,12 @@ export function acting(layers: readonly OrderedLayer[], side: 'before' | 'after'
 
 /** The order used, in words, for the output: "before SIF-1: LAH-1; after: PSV-1; order unknown: SIF-2". */
 export function orderText(sif: string, layers: readonly { tag: string; acts: Acts; stated?: boolean }[]): string {
-  const names = (acts: Acts) => layers.filter((l) => l.acts === acts).map((l) => `${l.tag}${l.stated ? ' (stated)' : ''}`);
-  const parts = [`acting before ${sif}: ${names('before').join(', ') || 'none'}`, `after it: ${names('after').join(', ') || 'none'}`];
+  const names = (acts: Acts) =>
+    layers.filter((l) => l.acts === acts).map((l) => `${l.tag}${l.stated ? ' (stated)' : ''}`);
+  const parts = [
+    `acting before ${sif}: ${names('before').join(', ') || 'none'}`,
+    `after it: ${names('after').join(', ') || 'none'}`,
+  ];
   const unknown = names('unknown');
   if (unknown.length > 0) parts.push(`order unknown, taken the conservative way: ${unknown.join(', ')}`);
   return parts.join('; ');

@@ -1,6 +1,13 @@
 // assessScenario: one scenario's LOPA after independence. Applies the PFD and BPCS limits, then the independence
 // findings, then picks the best creditable set, and computes the figures, the gap and the SIF requirement.
-import type { CreditAlternative, Finding, LayerAssessment, LayerReason, ScenarioAssessment, Sourced } from '../vocabulary/types.ts';
+import type {
+  CreditAlternative,
+  Finding,
+  LayerAssessment,
+  LayerReason,
+  ScenarioAssessment,
+  Sourced,
+} from '../vocabulary/types.ts';
 import type { Model, PlantFunction, Scenario } from '../model/schema.ts';
 import { assessConditions } from './conditions.ts';
 import { bestCreditableSet, type CreditProblem } from './credit.ts';
@@ -50,7 +57,13 @@ interface CauseWork {
   perFigure: PerFigure<number>;
 }
 
-function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functions: ReadonlyMap<string, PlantFunction>, mine: Finding[]): CauseWork {
+function assessCause(
+  model: Model,
+  scenario: Scenario,
+  facts: BpcsFacts,
+  functions: ReadonlyMap<string, PlantFunction>,
+  mine: Finding[],
+): CauseWork {
   const cause = scenario.cause;
   const fn = cause.function !== undefined ? functions.get(cause.function) : undefined;
   const label =
@@ -61,13 +74,21 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
         : (cause.external ?? 'unnamed cause');
   let frequency: Sourced;
   if (cause.frequency !== undefined) {
-    frequency = { value: cause.frequency, origin: 'model', ...(cause.basis !== undefined ? { basis: cause.basis } : {}) };
+    frequency = {
+      value: cause.frequency,
+      origin: 'model',
+      ...(cause.basis !== undefined ? { basis: cause.basis } : {}),
+    };
   } else if (cause.typical !== undefined) {
     const row = TYPICAL_CAUSE_FREQUENCIES[cause.typical];
     if (PER_100_M_ROWS.has(cause.typical) && cause.pipeMetres !== undefined) {
       // The row is per 100 m of pipe (CCPS 2001 Table 5.1); the loader refuses a piping row without a length.
       const value = (row.frequency * cause.pipeMetres) / PER_ROW_METRES;
-      frequency = { value, origin: 'default', basis: `${row.title} x ${cause.pipeMetres} m / ${PER_ROW_METRES} m: ${row.source}` };
+      frequency = {
+        value,
+        origin: 'default',
+        basis: `${row.title} x ${cause.pipeMetres} m / ${PER_ROW_METRES} m: ${row.source}`,
+      };
     } else {
       frequency = { value: row.frequency, origin: 'default', basis: `${row.title}: ${row.source}` };
     }
@@ -76,17 +97,35 @@ function assessCause(model: Model, scenario: Scenario, facts: BpcsFacts, functio
   }
   const perFigure = { after: frequency.value, 'if-accepted': frequency.value };
   if (frequency.origin === 'model' && frequency.basis === undefined) {
-    mine.push(limitFinding(model, scenario.id, {
-      tags: [],
-      parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : cause.element !== undefined ? { tag: cause.element } : {}) }],
-      says: say('cause-no-basis/no-basis', { frequency: frequency.value }),
-    }));
+    mine.push(
+      limitFinding(model, scenario.id, {
+        tags: [],
+        parties: [
+          {
+            role: 'cause',
+            ...(cause.function !== undefined
+              ? { tag: cause.function }
+              : cause.element !== undefined
+                ? { tag: cause.element }
+                : {}),
+          },
+        ],
+        says: say('cause-no-basis/no-basis', { frequency: frequency.value }),
+      }),
+    );
   }
-  if (frequency.origin === 'model' && causeIsBpcsLoopFailure(model, scenario, facts) && below(frequency.value, BPCS_CAUSE_LOWEST_FREQUENCY)) {
+  if (
+    frequency.origin === 'model' &&
+    causeIsBpcsLoopFailure(model, scenario, facts) &&
+    below(frequency.value, BPCS_CAUSE_LOWEST_FREQUENCY)
+  ) {
     const f = limitFinding(model, scenario.id, {
       tags: cause.function !== undefined ? [cause.function] : [],
       parties: [{ role: 'cause', ...(cause.function !== undefined ? { tag: cause.function } : {}) }],
-      says: say('bpcs-cause-frequency-low/below-floor', { frequency: frequency.value, lowest: BPCS_CAUSE_LOWEST_FREQUENCY }),
+      says: say('bpcs-cause-frequency-low/below-floor', {
+        frequency: frequency.value,
+        lowest: BPCS_CAUSE_LOWEST_FREQUENCY,
+      }),
     });
     mine.push(f);
     for (const figure of FIGURES) if (inForce(f, figure)) perFigure[figure] = BPCS_CAUSE_LOWEST_FREQUENCY;
@@ -116,7 +155,14 @@ function reportedPair(findings: readonly Finding[], x: string, y: string, elemen
  * The BPCS limits that bind layers together: at most two BPCS layers, at most one per controller. A pair the
  * trace rules already report at the same controller is left to them, so one fact makes one finding.
  */
-function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[], facts: BpcsFacts, reported: readonly Finding[], mine: Finding[]) {
+function bpcsGroupFindings(
+  model: Model,
+  scenario: Scenario,
+  works: LayerWork[],
+  facts: BpcsFacts,
+  reported: readonly Finding[],
+  mine: Finding[],
+) {
   const bpcs = works.filter((w) => w.bpcs);
   const conflicts: Conflict[] = [];
   let countFinding: Finding | undefined;
@@ -133,7 +179,8 @@ function bpcsGroupFindings(model: Model, scenario: Scenario, works: LayerWork[],
       for (let j = i + 1; j < bpcs.length; j++) {
         const [x, y] = [bpcs[i]!.fn.tag, bpcs[j]!.fn.tag].sort() as [string, string];
         const controller = facts[x]?.solver;
-        if (controller === undefined || controller !== facts[y]?.solver || reportedPair(reported, x, y, controller)) continue;
+        if (controller === undefined || controller !== facts[y]?.solver || reportedPair(reported, x, y, controller))
+          continue;
         const f = limitFinding(model, scenario.id, {
           tags: [x, y],
           parties: [
@@ -172,7 +219,11 @@ function reasonOf(f: Finding, effect: LayerReason['effect'], other?: string): La
  * the computed PFD and PFH where it is in force, and never removes the credit.
  */
 function countedFigures(f: Finding): { pfd: number; pfh: number } | undefined {
-  if (f.messageId !== 'voted-group-common-cause/counted-within-claim' && f.messageId !== 'voted-group-common-cause/counted-claim-missed') return undefined;
+  if (
+    f.messageId !== 'voted-group-common-cause/counted-within-claim' &&
+    f.messageId !== 'voted-group-common-cause/counted-claim-missed'
+  )
+    return undefined;
   return { pfd: f.data.computed, pfh: f.data.computedPfh };
 }
 
@@ -187,10 +238,16 @@ function capAtCounted(w: LayerWork, f: Finding, counted: { pfd: number; pfh: num
 }
 
 /** Sorts the independence findings into single-layer effects and layer-layer conflicts. */
-function applyIndependence(findings: readonly Finding[], works: Map<string, LayerWork>, conflicts: Conflict[]): Map<string, Finding[]> {
+function applyIndependence(
+  findings: readonly Finding[],
+  works: Map<string, LayerWork>,
+  conflicts: Conflict[],
+): Map<string, Finding[]> {
   const againstLayer = new Map<string, Finding[]>();
   for (const f of findings) {
-    const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    const layers = f.parties
+      .filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag))
+      .map((p) => p.tag!);
     const counted = countedFigures(f);
     if (counted && layers.length === 1) {
       capAtCounted(works.get(layers[0]!)!, f, counted);
@@ -213,11 +270,16 @@ function applyIndependence(findings: readonly Finding[], works: Map<string, Laye
 }
 
 /** The same sorting as applyIndependence, without touching the layers' reasons: for the "if accepted" figure. */
-function independenceEffects(findings: readonly Finding[], works: Map<string, LayerWork>): { conflicts: Conflict[]; againstLayer: Map<string, Finding[]> } {
+function independenceEffects(
+  findings: readonly Finding[],
+  works: Map<string, LayerWork>,
+): { conflicts: Conflict[]; againstLayer: Map<string, Finding[]> } {
   const conflicts: Conflict[] = [];
   const againstLayer = new Map<string, Finding[]>();
   for (const f of findings) {
-    const layers = f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag)).map((p) => p.tag!);
+    const layers = f.parties
+      .filter((p) => p.role === 'layer' && p.tag !== undefined && works.has(p.tag))
+      .map((p) => p.tag!);
     // Its cap is already on the layer, from the same finding in the headline figure.
     if (countedFigures(f)) continue;
     if (layers.length === 2 && layers[0] !== layers[1]) conflicts.push({ a: layers[0]!, b: layers[1]!, finding: f });
@@ -252,7 +314,10 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
   const { model, scenario } = input;
   const facts = input.bpcs ?? bpcsFactsOf(model);
   const category = model.categories.find((c) => c.id === scenario.category);
-  if (!category) throw new Error(`scenario ${scenario.id}: unknown category ${scenario.category} (the loader should have refused the model)`);
+  if (!category)
+    throw new Error(
+      `scenario ${scenario.id}: unknown category ${scenario.category} (the loader should have refused the model)`,
+    );
   const edge = category.edge ?? 'below';
   const mine: Finding[] = [];
 
@@ -264,7 +329,14 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
   const works: LayerWork[] = [];
   for (const claim of scenario.layers ?? []) {
     const fn = functions.get(claim.function);
-    if (fn) works.push(assessLayerLimits({ model, scenario, facts, ...(highDemandSif !== undefined ? { highDemandSif } : {}) }, claim, fn));
+    if (fn)
+      works.push(
+        assessLayerLimits(
+          { model, scenario, facts, ...(highDemandSif !== undefined ? { highDemandSif } : {}) },
+          claim,
+          fn,
+        ),
+      );
   }
   for (const w of works) mine.push(...w.findings);
   const byTag = new Map(works.map((w) => [w.fn.tag, w]));
@@ -277,15 +349,25 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
   if (countFinding) for (const w of works.filter((x) => x.bpcs)) w.reasons.push(reasonOf(countFinding, 'conflict'));
   const groupConflicts = [...conflicts];
   const againstLayer = applyIndependence(scenarioFindings, byTag, conflicts);
-  const narrowed = input.findingsIfAccepted ? independenceEffects(input.findingsIfAccepted.filter((f) => f.scenario === scenario.id), byTag) : undefined;
-  const conflictsFor = (figure: Figure) => (figure === 'if-accepted' && narrowed ? [...groupConflicts, ...narrowed.conflicts] : conflicts);
+  const narrowed = input.findingsIfAccepted
+    ? independenceEffects(
+        input.findingsIfAccepted.filter((f) => f.scenario === scenario.id),
+        byTag,
+      )
+    : undefined;
+  const conflictsFor = (figure: Figure) =>
+    figure === 'if-accepted' && narrowed ? [...groupConflicts, ...narrowed.conflicts] : conflicts;
   const againstFor = (figure: Figure) => (figure === 'if-accepted' && narrowed ? narrowed.againstLayer : againstLayer);
 
   const eligible = (w: LayerWork, figure: Figure) =>
     !w.noCredit[figure] && !(againstFor(figure).get(w.fn.tag) ?? []).some((f) => inForce(f, figure));
   const problemFor = (figure: Figure): CreditProblem => ({
-    candidates: works.filter((w) => eligible(w, figure)).map((w) => ({ tag: w.fn.tag, pfd: w.pfd[figure], ...(w.bpcs ? { group: 'bpcs' } : {}) })),
-    conflicts: conflictsFor(figure).filter((c) => inForce(c.finding, figure)).map((c) => [c.a, c.b] as const),
+    candidates: works
+      .filter((w) => eligible(w, figure))
+      .map((w) => ({ tag: w.fn.tag, pfd: w.pfd[figure], ...(w.bpcs ? { group: 'bpcs' } : {}) })),
+    conflicts: conflictsFor(figure)
+      .filter((c) => inForce(c.finding, figure))
+      .map((c) => [c.a, c.b] as const),
     ...(countFinding && inForce(countFinding, figure) ? { groupLimits: { bpcs: BPCS_LAYERS_PER_SCENARIO } } : {}),
   });
   const after = bestCreditableSet(problemFor('after'), input.alternatives ?? 5);
@@ -295,11 +377,17 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
 
   const enablerProduct = conditions.enablerProduct;
   // The SIF the scenario is judged by: the first credited one, else the first claimed.
-  const sifWork = works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag)) ?? works.find((w) => w.fn.kind === 'sif');
+  const sifWork =
+    works.find((w) => w.fn.kind === 'sif' && selectedAfter.has(w.fn.tag)) ?? works.find((w) => w.fn.kind === 'sif');
   const ordered = (w: LayerWork, pfd: number): OrderedLayer => ({ tag: w.fn.tag, pfd, acts: w.order.acts });
   const figureOf = (figure: Figure | 'claimed', credited: readonly LayerWork[], cause: number) => {
     const hasSif = sifWork !== undefined && credited.includes(sifWork);
-    const pfh = sifWork === undefined ? undefined : figure === 'claimed' ? claimedPfhOf(sifWork.fn)?.value : (sifWork.pfh?.[figure] ?? claimedPfhOf(sifWork.fn)?.value);
+    const pfh =
+      sifWork === undefined
+        ? undefined
+        : figure === 'claimed'
+          ? claimedPfhOf(sifWork.fn)?.value
+          : (sifWork.pfh?.[figure] ?? claimedPfhOf(sifWork.fn)?.value);
     return mitigatedFigure({
       cause,
       enablers: enablerProduct(figure),
@@ -309,8 +397,16 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
     }).mitigated;
   };
   const mitigatedClaimed = figureOf('claimed', works, cause.frequency.value);
-  const mitigatedAfter = figureOf('after', works.filter((w) => selectedAfter.has(w.fn.tag)), cause.perFigure.after);
-  const mitigatedIfAccepted = figureOf('if-accepted', works.filter((w) => selectedIfAccepted.has(w.fn.tag)), cause.perFigure['if-accepted']);
+  const mitigatedAfter = figureOf(
+    'after',
+    works.filter((w) => selectedAfter.has(w.fn.tag)),
+    cause.perFigure.after,
+  );
+  const mitigatedIfAccepted = figureOf(
+    'if-accepted',
+    works.filter((w) => selectedIfAccepted.has(w.fn.tag)),
+    cause.perFigure['if-accepted'],
+  );
   const meetsAfter = meetsCriterion(mitigatedAfter, category.tolerable, edge);
 
   const layers: LayerAssessment[] = works.map((w) => {
@@ -325,7 +421,9 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
       credited: selectedAfter.has(w.fn.tag),
       creditedIfAccepted: selectedIfAccepted.has(w.fn.tag),
       findings: [...new Set(w.reasons.filter((r) => r.effect !== 'note').map((r) => r.key))],
-      ...(!w.noCredit['if-accepted'] && w.pfd['if-accepted'] !== (w.noCredit.after ? 1 : w.pfd.after) ? { allowedPfdIfAccepted: w.pfd['if-accepted'] } : {}),
+      ...(!w.noCredit['if-accepted'] && w.pfd['if-accepted'] !== (w.noCredit.after ? 1 : w.pfd.after)
+        ? { allowedPfdIfAccepted: w.pfd['if-accepted'] }
+        : {}),
       ...(f?.solver !== undefined ? { solver: f.solver } : {}),
       ...(f?.system !== undefined ? { system: f.system } : {}),
       reasons: w.reasons,
@@ -345,14 +443,24 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
     modifiers: modifierProduct('after'),
     credited: works
       .filter((w) => selectedAfter.has(w.fn.tag))
-      .map((w) => ({ tag: w.fn.tag, kind: w.fn.kind, pfd: w.pfd.after, acts: w.order.acts, ...(w.order.stated ? { stated: true } : {}) })),
+      .map((w) => ({
+        tag: w.fn.tag,
+        kind: w.fn.kind,
+        pfd: w.pfd.after,
+        acts: w.order.acts,
+        ...(w.order.stated ? { stated: true } : {}),
+      })),
     ...(sifTag !== undefined ? { sif: sifTag } : {}),
     meets: meetsAfter,
   });
 
   const alternatives: CreditAlternative[] = after.alternatives.map((a) => ({
     ...a,
-    mitigated: figureOf('after', works.filter((w) => a.layers.includes(w.fn.tag)), cause.perFigure.after),
+    mitigated: figureOf(
+      'after',
+      works.filter((w) => a.layers.includes(w.fn.tag)),
+      cause.perFigure.after,
+    ),
   }));
   mine.sort((a, b) => (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
   const assessment: ScenarioAssessment = {
@@ -366,7 +474,9 @@ function assessOnce(input: AssessInput, highDemandSif: string | undefined): Asse
       label: cause.label,
       frequency: cause.frequency,
       ...(cause.perFigure.after !== cause.frequency.value ? { frequencyAfter: cause.perFigure.after } : {}),
-      ...(cause.perFigure['if-accepted'] !== cause.frequency.value ? { frequencyIfAccepted: cause.perFigure['if-accepted'] } : {}),
+      ...(cause.perFigure['if-accepted'] !== cause.frequency.value
+        ? { frequencyIfAccepted: cause.perFigure['if-accepted'] }
+        : {}),
     },
     enablers,
     modifiers,

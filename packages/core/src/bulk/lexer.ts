@@ -80,9 +80,14 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
         const escaped = next === undefined ? undefined : ESCAPES[next];
         if (escaped === undefined) {
           diagnostics.push(
-            error('BH110', `unknown escape \`\\${next ?? ''}\` in string`, { line, column: j + 1, length: 2 }, {
-              help: 'inside quotes write \\" for a quote, \\\\ for a backslash, \\n for a new line, \\t for a tab, \\u{e9} for any character by its code',
-            }),
+            error(
+              'BH110',
+              `unknown escape \`\\${next ?? ''}\` in string`,
+              { line, column: j + 1, length: 2 },
+              {
+                help: 'inside quotes write \\" for a quote, \\\\ for a backslash, \\n for a new line, \\t for a tab, \\u{e9} for any character by its code',
+              },
+            ),
           );
           j += 2;
           continue;
@@ -92,9 +97,14 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
       }
       if (!closed) {
         diagnostics.push(
-          error('BH110', 'unterminated string', { line, column, length: text.length - i }, {
-            help: 'close the string with `"` on the same line; write \\n for a line break inside it',
-          }),
+          error(
+            'BH110',
+            'unterminated string',
+            { line, column, length: text.length - i },
+            {
+              help: 'close the string with `"` on the same line; write \\n for a line break inside it',
+            },
+          ),
         );
         tokens.push({ type: 'string', value, line, column, length: text.length - i });
         result.truncated = true;
@@ -110,9 +120,14 @@ export function lexLine(text: string, line: number, diagnostics: Diagnostic[]): 
     } else {
       const shown = ch.codePointAt(0)! < 0x20 ? `U+${ch.codePointAt(0)!.toString(16).padStart(4, '0')}` : ch;
       diagnostics.push(
-        error('BH111', `unexpected character \`${shown}\``, { line, column, length: 1 }, {
-          help: 'tags and words use letters, digits and _ . - / + : ; put other text in double quotes',
-        }),
+        error(
+          'BH111',
+          `unexpected character \`${shown}\``,
+          { line, column, length: 1 },
+          {
+            help: 'tags and words use letters, digits and _ . - / + : ; put other text in double quotes',
+          },
+        ),
       );
       i++;
     }

@@ -54,9 +54,11 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): LineParse
     // An attribute line: the caller decides whether it continues a statement.
     keyword = { ...first, value: '', length: 0 };
   } else {
-    diagnostics.push(error('BH116', 'a statement starts with a keyword', tokenSpan(first), {
-      help: 'start the line with a keyword such as `transmitter`, `sif` or `scenario`',
-    }));
+    diagnostics.push(
+      error('BH116', 'a statement starts with a keyword', tokenSpan(first), {
+        help: 'start the line with a keyword such as `transmitter`, `sif` or `scenario`',
+      }),
+    );
     return undefined;
   }
   let name: Token | undefined;
@@ -71,9 +73,11 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): LineParse
   while (i < tokens.length) {
     const key = tokens[i]!;
     if (key.type !== 'word' || tokens[i + 1]?.type !== 'equals') {
-      diagnostics.push(error('BH116', `expected \`key=value\`, found \`${key.value}\``, tokenSpan(key), {
-        help: 'write attributes as key=value; quote text that contains spaces',
-      }));
+      diagnostics.push(
+        error('BH116', `expected \`key=value\`, found \`${key.value}\``, tokenSpan(key), {
+          help: 'write attributes as key=value; quote text that contains spaces',
+        }),
+      );
       return { keyword, ...(name ? { name } : {}), attributes, incomplete: true };
     }
     const equals = tokens[i + 1]!;
@@ -82,9 +86,16 @@ function parseLineTokens(lexed: LexedLine, diagnostics: Diagnostic[]): LineParse
     for (;;) {
       const value = tokens[i];
       if (!value || (value.type !== 'word' && value.type !== 'string') || tokens[i + 1]?.type === 'equals') {
-        diagnostics.push(error('BH116', `missing value after \`${key.value}=\``, tokenSpan(value && value.type !== 'word' ? value : equals), {
-          help: 'give a value right after `=`, such as level, 0.1 or "text in quotes"',
-        }));
+        diagnostics.push(
+          error(
+            'BH116',
+            `missing value after \`${key.value}=\``,
+            tokenSpan(value && value.type !== 'word' ? value : equals),
+            {
+              help: 'give a value right after `=`, such as level, 0.1 or "text in quotes"',
+            },
+          ),
+        );
         return { keyword, ...(name ? { name } : {}), attributes, incomplete: true };
       }
       values.push(value);
@@ -108,7 +119,11 @@ export const MAX_LINE_LENGTH = 10_000;
  * (the next one starts, or the file ends) and keeps none, so a large file's tokens need not all be held at
  * once; the result's `statements` is then empty.
  */
-export function parseBulk(text: string, diagnostics: Diagnostic[], onStatement?: (statement: Statement) => void): ParsedFile {
+export function parseBulk(
+  text: string,
+  diagnostics: Diagnostic[],
+  onStatement?: (statement: Statement) => void,
+): ParsedFile {
   const lines = splitLines(text);
   const statements: Statement[] = [];
   let pending: string[] = [];
@@ -120,9 +135,16 @@ export function parseBulk(text: string, diagnostics: Diagnostic[], onStatement?:
     if (rawLine.length > MAX_LINE_LENGTH && !/^[ \t]*#/.test(rawLine)) {
       // Not read at all: what a line this long holds is not a statement, and reading it would only
       // give thousands of diagnostics about one mistake.
-      diagnostics.push(error('BH105', `line is ${rawLine.length} characters long; the limit is ${MAX_LINE_LENGTH}`, { line: lineNo, column: MAX_LINE_LENGTH + 1, length: 1 }, {
-        help: 'split the statement over indented continuation lines, or put very long text in a separate document and refer to it',
-      }));
+      diagnostics.push(
+        error(
+          'BH105',
+          `line is ${rawLine.length} characters long; the limit is ${MAX_LINE_LENGTH}`,
+          { line: lineNo, column: MAX_LINE_LENGTH + 1, length: 1 },
+          {
+            help: 'split the statement over indented continuation lines, or put very long text in a separate document and refer to it',
+          },
+        ),
+      );
       if (current && /^[ \t]/.test(rawLine)) current.incomplete = true;
       return;
     }
@@ -136,9 +158,16 @@ export function parseBulk(text: string, diagnostics: Diagnostic[], onStatement?:
       const mixed = lexed.indent.includes(' ') && lexed.indent.includes('\t');
       const style = lexed.indent[0] as ' ' | '\t';
       if (mixed || (indentStyle !== undefined && style !== indentStyle)) {
-        diagnostics.push(error('BH113', 'indentation mixes tabs and spaces', { line: lineNo, column: 1, length: lexed.indent.length }, {
-          help: 'indent continuation lines with spaces only (or tabs only) throughout the file',
-        }));
+        diagnostics.push(
+          error(
+            'BH113',
+            'indentation mixes tabs and spaces',
+            { line: lineNo, column: 1, length: lexed.indent.length },
+            {
+              help: 'indent continuation lines with spaces only (or tabs only) throughout the file',
+            },
+          ),
+        );
       }
       indentStyle ??= style;
     }
@@ -147,17 +176,21 @@ export function parseBulk(text: string, diagnostics: Diagnostic[], onStatement?:
     if (lexed.truncated) parsed.incomplete = true;
     const isAttributeLine = parsed.keyword.value === '';
     if (indented && !current) {
-      diagnostics.push(error('BH114', 'indented line with no statement above it to continue', tokenSpan(lexed.tokens[0]!), {
-        help: 'remove the indentation, or put this line under the statement it belongs to',
-      }));
+      diagnostics.push(
+        error('BH114', 'indented line with no statement above it to continue', tokenSpan(lexed.tokens[0]!), {
+          help: 'remove the indentation, or put this line under the statement it belongs to',
+        }),
+      );
       if (isAttributeLine) return;
       // Read it as the statement it plainly is, so the one mistake is not followed by "missing" ones.
       indented = false;
     }
     if (!indented && isAttributeLine) {
-      diagnostics.push(error('BH116', 'a statement starts with a keyword', tokenSpan(lexed.tokens[0]!), {
-        help: 'indent this line to continue the statement above, or start it with a keyword',
-      }));
+      diagnostics.push(
+        error('BH116', 'a statement starts with a keyword', tokenSpan(lexed.tokens[0]!), {
+          help: 'indent this line to continue the statement above, or start it with a keyword',
+        }),
+      );
       return;
     }
     if (isAttributeLine) {

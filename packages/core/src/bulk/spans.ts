@@ -91,7 +91,9 @@ export class StatementSpans implements SpanMap {
     this.push(0);
     if (place.parent === undefined) {
       if (place.index === undefined) this.singles.set(place.collection, id);
-      else ((this.lists.get(place.collection) ?? this.lists.set(place.collection, []).get(place.collection)!)[place.index] = id);
+      else
+        (this.lists.get(place.collection) ?? this.lists.set(place.collection, []).get(place.collection)!)[place.index] =
+          id;
     } else {
       const own = this.children.get(place.parent) ?? this.children.set(place.parent, new Map()).get(place.parent)!;
       if (place.index === undefined) own.set(place.collection, id);
@@ -130,7 +132,8 @@ export class StatementSpans implements SpanMap {
       if (at === undefined) return undefined;
       if (i === parts.length) return this.spanAt(this.starts[at]! + ITEM, at);
       const own = this.children.get(at)?.get(parts[i]!);
-      if (own === undefined) return this.fieldSpan(at, parts[i]!, parts.length - i === 2 ? parts[i + 1] : undefined, parts.length - i);
+      if (own === undefined)
+        return this.fieldSpan(at, parts[i]!, parts.length - i === 2 ? parts[i + 1] : undefined, parts.length - i);
       if (typeof own === 'number') {
         at = own;
         i += 1;
@@ -146,7 +149,8 @@ export class StatementSpans implements SpanMap {
     if (depth > 2) return undefined;
     const start = this.starts[at]!;
     const table = this.tables[at]!;
-    if (depth === 1 && field === table.positional) return this.data[start + POSITIONAL] ? this.spanAt(start + POSITIONAL, at) : undefined;
+    if (depth === 1 && field === table.positional)
+      return this.data[start + POSITIONAL] ? this.spanAt(start + POSITIONAL, at) : undefined;
     const number = table.number.get(field);
     if (number === undefined) return undefined;
     let p = start + FIRST_ATTRIBUTE;

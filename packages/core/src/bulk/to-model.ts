@@ -55,14 +55,23 @@ function layoutOf(spec: StatementSpec): StatementLayout {
     // `kind` is the statement's keyword, never an attribute: `vessel V-1 kind=pump` must not make a pump.
     const allowed = [...fields.entries()].filter(
       ([name, f]) =>
-        name !== spec.positional && name !== 'kind' && !COMMENT_FIELDS.has(name) && f.type !== 'literal' && f.type !== 'nested' && name !== '$schema',
+        name !== spec.positional &&
+        name !== 'kind' &&
+        !COMMENT_FIELDS.has(name) &&
+        f.type !== 'literal' &&
+        f.type !== 'nested' &&
+        name !== '$schema',
     );
     const table: FieldTable = {
       number: new Map(allowed.map(([name], number) => [name, number])),
       isList: allowed.map(([, f]) => f.type === 'list'),
       ...(spec.positional !== undefined ? { positional: spec.positional } : {}),
     };
-    layout = { fields, allowedKeys: new Map(allowed.map(([name, f], number) => [kebab(name), { name, f, number }])), table };
+    layout = {
+      fields,
+      allowedKeys: new Map(allowed.map(([name, f], number) => [kebab(name), { name, f, number }])),
+      table,
+    };
     layouts.set(spec, layout);
   }
   return layout;
@@ -86,13 +95,21 @@ class StatementReader {
     }
     this.reportedPaths.add(path);
     if (token.type === 'word' && /^[+-]?[\d.]/.test(token.value)) {
-      this.diagnostics.push(error('BH112', `malformed number \`${token.value}\``, tokenSpan(token), {
-        help: 'write numbers like 0.1, 1e-4 or 2.5E-3 (an exponent needs digits after the e)',
-      }));
+      this.diagnostics.push(
+        error('BH112', `malformed number \`${token.value}\``, tokenSpan(token), {
+          help: 'write numbers like 0.1, 1e-4 or 2.5E-3 (an exponent needs digits after the e)',
+        }),
+      );
       return undefined;
     }
-    this.diagnostics.push(error('BH201', `\`${key}\` takes a number, found \`${token.value}\``, tokenSpan(token),
-      token.type === 'string' ? { help: 'write the number without quotes' } : {}));
+    this.diagnostics.push(
+      error(
+        'BH201',
+        `\`${key}\` takes a number, found \`${token.value}\``,
+        tokenSpan(token),
+        token.type === 'string' ? { help: 'write the number without quotes' } : {},
+      ),
+    );
     return undefined;
   }
 
@@ -101,7 +118,14 @@ class StatementReader {
    * `place`); the item itself points at `itemToken`, by default its name or else its keyword. Returns the
    * statement's number in the spans, under which its own indented lines are filed.
    */
-  read(statement: Statement, spec: StatementSpec, path: string, target: Raw, place: StatementPlace, itemToken?: Token): number {
+  read(
+    statement: Statement,
+    spec: StatementSpec,
+    path: string,
+    target: Raw,
+    place: StatementPlace,
+    itemToken?: Token,
+  ): number {
     const { fields, allowedKeys, table } = layoutOf(spec);
     const id = this.spans.open(table, itemToken ?? statement.name ?? statement.keyword, statement.name, place);
     if (statement.incomplete) this.incompletePaths.add(path);
@@ -109,7 +133,13 @@ class StatementReader {
     if (statement.trailingComment !== undefined) target.trailingComment = statement.trailingComment;
     if (statement.name) {
       if (!spec.positional) {
-        this.diagnostics.push(error('BH116', `\`${statement.keyword.value}\` takes no name, only key=value attributes`, tokenSpan(statement.name)));
+        this.diagnostics.push(
+          error(
+            'BH116',
+            `\`${statement.keyword.value}\` takes no name, only key=value attributes`,
+            tokenSpan(statement.name),
+          ),
+        );
       } else {
         const field = fields.get(spec.positional)!;
         const value = this.convert(statement.name, field, spec.positional, `${path}.${spec.positional}`);
@@ -127,16 +157,21 @@ class StatementReader {
             : undefined;
         this.diagnostics.push(
           error('BH118', `unknown attribute \`${key}\` for \`${statement.keyword.value}\``, tokenSpan(attribute.key), {
-            help: positionalHint ?? didYouMean(key, allowedKeys.keys()) ?? `allowed here: ${[...allowedKeys.keys()].join(', ')}`,
+            help:
+              positionalHint ??
+              didYouMean(key, allowedKeys.keys()) ??
+              `allowed here: ${[...allowedKeys.keys()].join(', ')}`,
           }),
         );
         continue;
       }
       const earlier = seen.get(key);
       if (earlier) {
-        this.diagnostics.push(error('BH117', `attribute \`${key}\` given twice`, tokenSpan(attribute.key), {
-          related: [{ message: 'first given here', span: tokenSpan(earlier) }],
-        }));
+        this.diagnostics.push(
+          error('BH117', `attribute \`${key}\` given twice`, tokenSpan(attribute.key), {
+            related: [{ message: 'first given here', span: tokenSpan(earlier) }],
+          }),
+        );
         continue;
       }
       seen.set(key, attribute.key);
@@ -145,9 +180,11 @@ class StatementReader {
         target[entry.name] = attribute.values.map((token) => token.value);
       } else if (attribute.values.length > 1) {
         this.reportedPaths.add(`${path}.${entry.name}`);
-        this.diagnostics.push(error('BH201', `\`${key}\` takes one value, found a list`, tokenSpan(attribute.values[1]!), {
-          help: 'quote text that contains a comma: key="a, b"',
-        }));
+        this.diagnostics.push(
+          error('BH201', `\`${key}\` takes one value, found a list`, tokenSpan(attribute.values[1]!), {
+            help: 'quote text that contains a comma: key="a, b"',
+          }),
+        );
       } else {
         const value = this.convert(attribute.values[0]!, entry.f, key, `${path}.${entry.name}`);
         if (value !== undefined) target[entry.name] = value;
@@ -200,10 +237,12 @@ export class RawModelBuilder {
     if (single) {
       const earlier = this.firstSeen.get(keyword);
       if (earlier) {
-        diagnostics.push(error('BH120', `\`${keyword}\` given twice`, tokenSpan(statement.keyword), {
-          related: [{ message: 'first given here', span: tokenSpan(earlier) }],
-          help: `a model has one \`${keyword}\` statement; continue it on indented lines instead`,
-        }));
+        diagnostics.push(
+          error('BH120', `\`${keyword}\` given twice`, tokenSpan(statement.keyword), {
+            related: [{ message: 'first given here', span: tokenSpan(earlier) }],
+            help: `a model has one \`${keyword}\` statement; continue it on indented lines instead`,
+          }),
+        );
         return;
       }
       this.firstSeen.set(keyword, statement.keyword);
@@ -212,8 +251,12 @@ export class RawModelBuilder {
     } else if (listed) {
       const spec = listed;
       const index = this.push(spec.collection, item);
-      const id = reader.read(statement, spec, `${spec.collection}.${index}`, item, { collection: spec.collection, index });
-      if (keyword === 'scenario') readScenarioLines(statement, `${spec.collection}.${index}`, id, item, reader, diagnostics);
+      const id = reader.read(statement, spec, `${spec.collection}.${index}`, item, {
+        collection: spec.collection,
+        index,
+      });
+      if (keyword === 'scenario')
+        readScenarioLines(statement, `${spec.collection}.${index}`, id, item, reader, diagnostics);
     } else if (ELEMENT_SPECS.has(keyword)) {
       item.kind = keyword;
       const index = this.push('elements', item);
@@ -221,11 +264,18 @@ export class RawModelBuilder {
     } else if (FUNCTION_SPECS.has(keyword)) {
       item.kind = keyword;
       const index = this.push('functions', item);
-      reader.read(statement, FUNCTION_SPECS.get(keyword)!, `functions.${index}`, item, { collection: 'functions', index });
+      reader.read(statement, FUNCTION_SPECS.get(keyword)!, `functions.${index}`, item, {
+        collection: 'functions',
+        index,
+      });
     } else {
-      diagnostics.push(error('BH115', `unknown statement \`${keyword}\``, tokenSpan(statement.keyword), {
-        help: didYouMean(keyword, TOP_KEYWORDS) ?? 'see `bulkhead --help` and the README for the statements of the language',
-      }));
+      diagnostics.push(
+        error('BH115', `unknown statement \`${keyword}\``, tokenSpan(statement.keyword), {
+          help:
+            didYouMean(keyword, TOP_KEYWORDS) ??
+            'see `bulkhead --help` and the README for the statements of the language',
+        }),
+      );
       if (statement.name) this.unknownNames.add(statement.name.value);
       return;
     }
@@ -234,47 +284,84 @@ export class RawModelBuilder {
 
   finish(endComments: string[]): RawModel {
     if (endComments.length) this.raw.endComments = endComments;
-    return { raw: this.raw, spans: this.spans, reportedPaths: this.reportedPaths, unknownNames: this.unknownNames, incompletePaths: this.incompletePaths };
+    return {
+      raw: this.raw,
+      spans: this.spans,
+      reportedPaths: this.reportedPaths,
+      unknownNames: this.unknownNames,
+      incompletePaths: this.incompletePaths,
+    };
   }
 }
 
 function rejectChildren(statement: Statement, diagnostics: Diagnostic[]): void {
   for (const child of statement.children) {
-    diagnostics.push(error('BH114', `\`${child.keyword.value}\` lines belong under a scenario, not \`${statement.keyword.value}\``, tokenSpan(child.keyword), {
-      help: 'indented lines under an element or function may only continue it with key=value attributes',
-    }));
+    diagnostics.push(
+      error(
+        'BH114',
+        `\`${child.keyword.value}\` lines belong under a scenario, not \`${statement.keyword.value}\``,
+        tokenSpan(child.keyword),
+        {
+          help: 'indented lines under an element or function may only continue it with key=value attributes',
+        },
+      ),
+    );
   }
 }
 
 /** A scenario's indented lines, filed in the spans under the scenario's statement (`parent`). */
-function readScenarioLines(statement: Statement, path: string, parent: number, scenario: Raw, reader: StatementReader, diagnostics: Diagnostic[]): void {
+function readScenarioLines(
+  statement: Statement,
+  path: string,
+  parent: number,
+  scenario: Raw,
+  reader: StatementReader,
+  diagnostics: Diagnostic[],
+): void {
   let causeToken: Token | undefined;
   for (const child of statement.children) {
     const keyword = child.keyword.value;
     const spec = SCENARIO_LINE_SPECS.get(keyword);
     if (!spec) {
-      diagnostics.push(error('BH115', `unknown scenario line \`${keyword}\``, tokenSpan(child.keyword), {
-        help: didYouMean(keyword, SCENARIO_LINE_SPECS.keys()) ?? `a scenario's lines are ${[...SCENARIO_LINE_SPECS.keys()].join(', ')}`,
-      }));
+      diagnostics.push(
+        error('BH115', `unknown scenario line \`${keyword}\``, tokenSpan(child.keyword), {
+          help:
+            didYouMean(keyword, SCENARIO_LINE_SPECS.keys()) ??
+            `a scenario's lines are ${[...SCENARIO_LINE_SPECS.keys()].join(', ')}`,
+        }),
+      );
       continue;
     }
     const item: Raw = {};
     if (spec.single) {
       if (causeToken) {
-        diagnostics.push(error('BH120', 'a scenario has one `cause` line', tokenSpan(child.keyword), {
-          related: [{ message: 'first cause here', span: tokenSpan(causeToken) }],
-          help: 'split scenarios with different causes into separate scenarios',
-        }));
+        diagnostics.push(
+          error('BH120', 'a scenario has one `cause` line', tokenSpan(child.keyword), {
+            related: [{ message: 'first cause here', span: tokenSpan(causeToken) }],
+            help: 'split scenarios with different causes into separate scenarios',
+          }),
+        );
         continue;
       }
       causeToken = child.keyword;
       scenario[spec.collection] = item;
       // The line itself points at its keyword: a cause has no name.
-      reader.read(child, spec, `${path}.${spec.collection}`, item, { collection: spec.collection, parent }, child.keyword);
+      reader.read(
+        child,
+        spec,
+        `${path}.${spec.collection}`,
+        item,
+        { collection: spec.collection, parent },
+        child.keyword,
+      );
     } else {
       const list = (scenario[spec.collection] ??= []) as Raw[];
       list.push(item);
-      reader.read(child, spec, `${path}.${spec.collection}.${list.length - 1}`, item, { collection: spec.collection, index: list.length - 1, parent });
+      reader.read(child, spec, `${path}.${spec.collection}.${list.length - 1}`, item, {
+        collection: spec.collection,
+        index: list.length - 1,
+        parent,
+      });
     }
   }
 }

@@ -89,10 +89,7 @@ export const ASSESSMENT_ENTRIES = [
   bpcsCauseFrequencyLow,
 ] as const;
 
-export const JUSTIFICATION_ENTRIES = [
-  duplicateJustification,
-  staleJustification,
-] as const;
+export const JUSTIFICATION_ENTRIES = [duplicateJustification, staleJustification] as const;
 
 export const CATALOGUE = [...INDEPENDENCE_ENTRIES, ...ASSESSMENT_ENTRIES, ...JUSTIFICATION_ENTRIES] as const;
 
@@ -106,7 +103,11 @@ export const ALL_RULE_IDS: ReadonlySet<string> = new Set<string>(CATALOGUE.map((
 
 type MessagesOf<E> =
   E extends RuleEntry<infer Id, infer Messages>
-    ? { [Name in keyof Messages & string as `${Id}/${Name}`]: Messages[Name] extends MessageWords<infer Data> ? Data : never }
+    ? {
+        [Name in keyof Messages & string as `${Id}/${Name}`]: Messages[Name] extends MessageWords<infer Data>
+          ? Data
+          : never;
+      }
     : never;
 type Intersection<U> = (U extends unknown ? (x: U) => void : never) extends (x: infer I) => void ? I : never;
 

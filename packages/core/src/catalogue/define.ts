@@ -12,7 +12,10 @@ export type MessageWords<Data> = (data: Data) => string;
 // `never` accepts the words of any data shape (a parameter is read the other way round).
 type AnyWords = MessageWords<never>;
 
-export interface RuleEntry<Id extends string = string, Messages extends Record<string, AnyWords> = Record<string, AnyWords>> {
+export interface RuleEntry<
+  Id extends string = string,
+  Messages extends Record<string, AnyWords> = Record<string, AnyWords>,
+> {
   id: Id;
   kind: RuleKind;
   title: string;
@@ -24,7 +27,9 @@ export interface RuleEntry<Id extends string = string, Messages extends Record<s
 }
 
 /** Keeps the id and each message's data type exact, so the catalogue's message map is typed from the entries. */
-export function ruleEntry<const Id extends string, const Messages extends Record<string, AnyWords>>(entry: RuleEntry<Id, Messages>): RuleEntry<Id, Messages> {
+export function ruleEntry<const Id extends string, const Messages extends Record<string, AnyWords>>(
+  entry: RuleEntry<Id, Messages>,
+): RuleEntry<Id, Messages> {
   return entry;
 }
 

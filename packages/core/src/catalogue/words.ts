@@ -61,7 +61,13 @@ export type CauseReason =
   | { reason: 'not-judged'; cause?: string }
   | { reason: 'other-route'; cause?: string }
   | { reason: 'final-unstated'; head: string }
-  | { reason: 'moves-dangerous' | 'moves-away'; heads: string[]; positions: string[]; cause?: string; direction: string };
+  | {
+      reason: 'moves-dangerous' | 'moves-away';
+      heads: string[];
+      positions: string[];
+      cause?: string;
+      direction: string;
+    };
 
 function causeWords(cause: string | undefined): string {
   return cause !== undefined ? `\`${cause}\`` : 'the cause';
@@ -107,7 +113,8 @@ export function supportWords(d: SupportData): string {
   const both = `${sideWords(d.b)} and ${sideWords(d.a)} both rely on ${d.kind} \`${d.element}\``;
   const causeSide = d.cause ? `; cause side: ${causeReasonWords(d.cause.why)}` : '';
   let said: string;
-  if (d.safeLayer !== undefined) said = `${both}: shared, fails safe for \`${d.safeLayer}\` (layer side: its loss drives it to the trip position${causeSide})`;
+  if (d.safeLayer !== undefined)
+    said = `${both}: shared, fails safe for \`${d.safeLayer}\` (layer side: its loss drives it to the trip position${causeSide})`;
   else if (d.cause?.dangerous === false) {
     said = `${both}: shared, not a dangerous common cause (cause side: ${causeReasonWords(d.cause.why)}; layer side: its loss does not drive \`${d.b.tag}\` to a safe state)`;
   } else said = `${both}: not independent (layer side: its loss does not drive the layer to a safe state${causeSide})`;

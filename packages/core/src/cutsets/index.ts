@@ -9,7 +9,17 @@ import type { Finding } from '../vocabulary/types.ts';
 import { minimalCutSets } from './mocus.ts';
 import { scenarioTree } from './scenario-tree.ts';
 
-export { minimalCutSets, minimalSets, occurs, basicEvents, orGate, andGate, atLeastGate, event, type FaultTree } from './mocus.ts';
+export {
+  minimalCutSets,
+  minimalSets,
+  occurs,
+  basicEvents,
+  orGate,
+  andGate,
+  atLeastGate,
+  event,
+  type FaultTree,
+} from './mocus.ts';
 export { scenarioTree, layerTree, votingOf, type ScenarioTree } from './scenario-tree.ts';
 
 /** The order used when the user gives none: single points of failure and pairs. */
@@ -58,7 +68,9 @@ export function modelCutSets(model: Model, options: CutSetOptions = {}): Scenari
   const maxOrder = options.maxOrder ?? DEFAULT_CUT_SET_ORDER;
   const env = ruleEnvironment(model, options.tracer ?? new Tracer(buildPlantGraph(model)));
   const byScenario = new Map<string, Finding[]>();
-  for (const f of options.findings ?? []) if (f.scenario !== undefined && f.element !== undefined) (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
+  for (const f of options.findings ?? [])
+    if (f.scenario !== undefined && f.element !== undefined)
+      (byScenario.get(f.scenario) ?? byScenario.set(f.scenario, []).get(f.scenario)!).push(f);
   return model.scenarios.map((scenario) => {
     const built = scenarioTree(env, scenario);
     const sets = built.tree ? minimalCutSets(built.tree, maxOrder) : [];

@@ -78,7 +78,11 @@ function compareSets(a: readonly string[], b: readonly string[]): number {
 }
 
 /** Whether some proper subset of `set` (sorted) is already kept: by lookup of each subset while sets are small. */
-function containsKept(set: readonly string[], kept: ReadonlySet<string>, keptSets: readonly ReadonlySet<string>[]): boolean {
+function containsKept(
+  set: readonly string[],
+  kept: ReadonlySet<string>,
+  keptSets: readonly ReadonlySet<string>[],
+): boolean {
   if (set.length > 12) return keptSets.some((k) => k.size < set.length && [...k].every((e) => set.includes(e)));
   for (let mask = 1; mask < (1 << set.length) - 1; mask++) {
     if (kept.has(JSON.stringify(set.filter((_, i) => mask & (1 << i))))) return true;
@@ -131,7 +135,8 @@ export function minimalCutSets(tree: FaultTree, maxOrder = Infinity): string[][]
     let pick = 0;
     for (let i = 1; i < open.length; i++) if (alternatives[i]!.length < alternatives[pick]!.length) pick = i;
     const rest = open.filter((_, i) => i !== pick);
-    for (const alternative of alternatives[pick]!) rows.push({ events: new Set(row.events), pending: [...alternative, ...rest] });
+    for (const alternative of alternatives[pick]!)
+      rows.push({ events: new Set(row.events), pending: [...alternative, ...rest] });
   }
   return minimalSets(found);
 }

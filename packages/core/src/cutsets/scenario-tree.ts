@@ -38,7 +38,11 @@ const isBasic = (tracer: Tracer, tag: string) => tracer.group(tag) !== 'equipmen
  * What defeats one layer, with the elements it relies on outside its channels. `failsSafe` names the
  * elements whose loss drives this layer to its trip position: they do not defeat it.
  */
-export function layerTree(tracer: Tracer, fn: PlantFunction, failsSafe: (tag: string) => boolean = () => false): FaultTree {
+export function layerTree(
+  tracer: Tracer,
+  fn: PlantFunction,
+  failsSafe: (tag: string) => boolean = () => false,
+): FaultTree {
   const anyOf = (tags: Iterable<string>): FaultTree[] => {
     const out: FaultTree[] = [];
     for (const tag of tags) if (isBasic(tracer, tag) && !failsSafe(tag)) out.push(event(tag));
@@ -57,7 +61,16 @@ export function layerTree(tracer: Tracer, fn: PlantFunction, failsSafe: (tag: st
   for (const role of ['sensor', 'final'] as const) {
     const channels = trace.channels.filter((c) => c.role === role);
     if (channels.length === 0) continue;
-    const voting = votingOf(role === 'sensor' ? ('sensorVoting' in fn ? fn.sensorVoting : undefined) : 'finalVoting' in fn ? fn.finalVoting : undefined, channels.length);
+    const voting = votingOf(
+      role === 'sensor'
+        ? 'sensorVoting' in fn
+          ? fn.sensorVoting
+          : undefined
+        : 'finalVoting' in fn
+          ? fn.finalVoting
+          : undefined,
+      channels.length,
+    );
     const channelTrees = channels.map((c) => orGate(anyOf(c.elements.filter((t) => !common.has(t)))));
     // A channel that relies only on common elements is an empty OR: it never fails on its own.
     inputs.push(atLeastGate(voting.n - voting.m + 1, channelTrees));
@@ -74,7 +87,8 @@ export function scenarioTree(env: RuleEnvironment, scenario: Scenario): Scenario
   const causePaths = new Map<string, readonly string[]>();
   for (const [tag, traced] of ctx.cause.elements) {
     if (!isBasic(tracer, tag)) continue;
-    if (isSupport(tag) && tag !== ctx.cause.party.tag && !judgeCauseSide(ctx.cause, tag, power(tag), ctx).dangerous) continue;
+    if (isSupport(tag) && tag !== ctx.cause.party.tag && !judgeCauseSide(ctx.cause, tag, power(tag), ctx).dangerous)
+      continue;
     causePaths.set(tag, traced.path);
   }
   const layerPaths = new Map<string, ReadonlyMap<string, readonly string[]>>();
@@ -89,7 +103,10 @@ export function scenarioTree(env: RuleEnvironment, scenario: Scenario): Scenario
     }
     if (tracer.traceFunction(fn.tag).missing.length) incompleteLayers.push(fn.tag);
     const failsSafe = (tag: string) => isSupport(tag) && failsSafeWhenLost(side, tag, power(tag), ctx);
-    layerPaths.set(fn.tag, new Map([...side.elements].filter(([tag]) => !failsSafe(tag)).map(([tag, e]) => [tag, e.path])));
+    layerPaths.set(
+      fn.tag,
+      new Map([...side.elements].filter(([tag]) => !failsSafe(tag)).map(([tag, e]) => [tag, e.path])),
+    );
     layers.push(layerTree(tracer, fn, failsSafe));
   }
   const starts = [...causePaths.keys()].sort().map(event);

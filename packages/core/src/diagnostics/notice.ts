@@ -54,7 +54,8 @@ export function markedExcerpt(source: SourceText, span: Span): [string, string] 
   // so each excerpt costs the same however long the line is.
   if (raw.length > MAX_EXCERPT) {
     const start = Math.max(0, column - 1 - 20);
-    text = (start > 0 ? '…' : '') + raw.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < raw.length ? '…' : '');
+    text =
+      (start > 0 ? '…' : '') + raw.slice(start, start + MAX_EXCERPT) + (start + MAX_EXCERPT < raw.length ? '…' : '');
     column = column - start + (start > 0 ? 1 : 0);
   }
   text = visible(text.replace(/\t/g, ' '));

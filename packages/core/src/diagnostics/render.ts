@@ -12,10 +12,20 @@ export function splitLines(text: string): string[] {
 const KINDS = { error: 'Model error', warning: 'Model warning' } as const;
 
 export function diagnosticNotice(d: Diagnostic): Notice {
-  const facts: NoticeFact[] = (d.related ?? []).map((r) => ({ label: 'see also', text: `${place(r.span)}: ${r.message}`, span: r.span }));
+  const facts: NoticeFact[] = (d.related ?? []).map((r) => ({
+    label: 'see also',
+    text: `${place(r.span)}: ${r.message}`,
+    span: r.span,
+  }));
   if (d.help) facts.push({ label: 'to fix', text: d.help });
   if (d.more) facts.push({ label: 'and', text: `${d.more} more like this (${d.code}), not shown` });
-  return { kind: KINDS[d.severity], headline: d.message, ...(d.span ? { span: d.span } : {}), facts, reference: { label: 'code', text: `${d.code} (${CODES[d.code]})` } };
+  return {
+    kind: KINDS[d.severity],
+    headline: d.message,
+    ...(d.span ? { span: d.span } : {}),
+    facts,
+    reference: { label: 'code', text: `${d.code} (${CODES[d.code]})` },
+  };
 }
 
 export function renderDiagnostic(d: Diagnostic, source: SourceText): string {

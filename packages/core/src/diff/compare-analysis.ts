@@ -77,7 +77,11 @@ function identity(f: Finding, rename: (tag: string | undefined) => string | unde
   return JSON.stringify([f.rule, rename(f.scenario) ?? '', parties, rename(f.element) ?? '']);
 }
 
-export function compareFindings(before: readonly Finding[], after: readonly Finding[], renames: readonly Rename[]): FindingChanges & { matched: [Finding, Finding][] } {
+export function compareFindings(
+  before: readonly Finding[],
+  after: readonly Finding[],
+  renames: readonly Rename[],
+): FindingChanges & { matched: [Finding, Finding][] } {
   const map = new Map(renames.map((r) => [r.old, r.new]));
   const rename = (tag: string | undefined) => (tag === undefined ? undefined : (map.get(tag) ?? tag));
   const same = (tag: string | undefined) => tag;
@@ -93,7 +97,9 @@ export function compareFindings(before: readonly Finding[], after: readonly Find
     } else unmatched.push(f);
   }
   const byIdentity = new Map<string, Finding[]>();
-  for (const f of after) if (!taken.has(f)) (byIdentity.get(identity(f, same)) ?? byIdentity.set(identity(f, same), []).get(identity(f, same))!).push(f);
+  for (const f of after)
+    if (!taken.has(f))
+      (byIdentity.get(identity(f, same)) ?? byIdentity.set(identity(f, same), []).get(identity(f, same))!).push(f);
   const disappeared: Finding[] = [];
   for (const f of unmatched) {
     const twin = byIdentity.get(identity(f, rename))?.find((x) => !taken.has(x));
@@ -103,7 +109,10 @@ export function compareFindings(before: readonly Finding[], after: readonly Find
     } else disappeared.push(f);
   }
   return {
-    appeared: after.filter((f) => !taken.has(f)).map(reference).sort(compareKeys),
+    appeared: after
+      .filter((f) => !taken.has(f))
+      .map(reference)
+      .sort(compareKeys),
     disappeared: disappeared.map(reference).sort(compareKeys),
     severityChanged: matched
       .filter(([a, b]) => a.severity !== b.severity)
@@ -118,22 +127,36 @@ export function compareFindings(before: readonly Finding[], after: readonly Find
 }
 
 function figures(a: ScenarioAssessment): ScenarioFigures {
-  return { meets: a.meetsAfter, mitigatedAfter: a.mitigatedAfter, gap: a.gap, ...(a.sif ? { requiredSil: a.sif.sil } : {}) };
+  return {
+    meets: a.meetsAfter,
+    mitigatedAfter: a.mitigatedAfter,
+    gap: a.gap,
+    ...(a.sif ? { requiredSil: a.sif.sil } : {}),
+  };
 }
 
 /** Worse or better: the verdict first, then the mitigated frequency after independence, then the SIL asked of the SIF. */
 function judge(before: ScenarioFigures, after: ScenarioFigures): { change: VerdictChange; why?: string } {
-  if (before.meets !== after.meets) return after.meets ? { change: 'better', why: 'now meets its criterion' } : { change: 'worse', why: 'no longer meets its criterion' };
+  if (before.meets !== after.meets)
+    return after.meets
+      ? { change: 'better', why: 'now meets its criterion' }
+      : { change: 'worse', why: 'no longer meets its criterion' };
   if (!sameFigure(before.mitigatedAfter, after.mitigatedAfter)) {
-    return after.mitigatedAfter > before.mitigatedAfter ? { change: 'worse', why: 'mitigated frequency after independence rose' } : { change: 'better', why: 'mitigated frequency after independence fell' };
+    return after.mitigatedAfter > before.mitigatedAfter
+      ? { change: 'worse', why: 'mitigated frequency after independence rose' }
+      : { change: 'better', why: 'mitigated frequency after independence fell' };
   }
   const silBefore = before.requiredSil ?? 0;
   const silAfter = after.requiredSil ?? 0;
-  if (silBefore !== silAfter) return silAfter > silBefore ? { change: 'worse', why: 'its SIF must now reach a higher SIL' } : { change: 'better', why: 'its SIF may now be of a lower SIL' };
+  if (silBefore !== silAfter)
+    return silAfter > silBefore
+      ? { change: 'worse', why: 'its SIF must now reach a higher SIL' }
+      : { change: 'better', why: 'its SIF may now be of a lower SIL' };
   return { change: 'same' };
 }
 
-const compareIds = (a: { scenario: string }, b: { scenario: string }) => (a.scenario < b.scenario ? -1 : a.scenario > b.scenario ? 1 : 0);
+const compareIds = (a: { scenario: string }, b: { scenario: string }) =>
+  a.scenario < b.scenario ? -1 : a.scenario > b.scenario ? 1 : 0;
 
 export function compareVerdicts(before: Analysis, after: Analysis, renames: readonly Rename[]): ScenarioVerdict[] {
   const map = new Map(renames.filter((r) => r.kind === 'scenario').map((r) => [r.old, r.new]));
@@ -149,9 +172,16 @@ export function compareVerdicts(before: Analysis, after: Analysis, renames: read
     }
     seen.add(id);
     const verdict = judge(figures(a), figures(twin));
-    out.push({ scenario: id, ...(id !== a.scenario ? { oldId: a.scenario } : {}), ...verdict, before: figures(a), after: figures(twin) });
+    out.push({
+      scenario: id,
+      ...(id !== a.scenario ? { oldId: a.scenario } : {}),
+      ...verdict,
+      before: figures(a),
+      after: figures(twin),
+    });
   }
-  for (const a of after.assessments) if (!seen.has(a.scenario)) out.push({ scenario: a.scenario, change: 'added', after: figures(a) });
+  for (const a of after.assessments)
+    if (!seen.has(a.scenario)) out.push({ scenario: a.scenario, change: 'added', after: figures(a) });
   return out.sort(compareIds);
 }
 
@@ -159,13 +189,24 @@ export function compareVerdicts(before: Analysis, after: Analysis, renames: read
  * Justifications the change made stale: stale now and not before, or accepting a finding whose paths
  * or message changed (the reason written for the old finding may no longer hold).
  */
-export function staleJustifications(before: Analysis, after: Analysis, matched: readonly [Finding, Finding][]): StaleJustification[] {
-  const staleKeys = (a: Analysis) => new Set(a.findings.filter((f) => f.rule === STALE_JUSTIFICATION).map((f) => justifiedKeyOf(f)!));
+export function staleJustifications(
+  before: Analysis,
+  after: Analysis,
+  matched: readonly [Finding, Finding][],
+): StaleJustification[] {
+  const staleKeys = (a: Analysis) =>
+    new Set(a.findings.filter((f) => f.rule === STALE_JUSTIFICATION).map((f) => justifiedKeyOf(f)!));
   const was = staleKeys(before);
-  const out: StaleJustification[] = [...staleKeys(after)].filter((k) => !was.has(k)).map((finding) => ({ finding, reason: 'it no longer matches any finding' }));
+  const out: StaleJustification[] = [...staleKeys(after)]
+    .filter((k) => !was.has(k))
+    .map((finding) => ({ finding, reason: 'it no longer matches any finding' }));
   for (const [a, b] of matched) {
     if (!b.accepted || !a.accepted) continue;
-    if (JSON.stringify(a.paths) !== JSON.stringify(b.paths) || a.message !== b.message) out.push({ finding: b.key, reason: 'the finding it accepts changed (paths or wording): check the reason still holds' });
+    if (JSON.stringify(a.paths) !== JSON.stringify(b.paths) || a.message !== b.message)
+      out.push({
+        finding: b.key,
+        reason: 'the finding it accepts changed (paths or wording): check the reason still holds',
+      });
   }
   return out.sort((x, y) => (x.finding < y.finding ? -1 : x.finding > y.finding ? 1 : 0));
 }

@@ -47,14 +47,21 @@ function normalised(value: unknown, renames: ReadonlyMap<string, string>): unkno
   if (Array.isArray(value)) return value.map((v) => normalised(v, renames));
   if (value !== null && typeof value === 'object') {
     const out: Plain = {};
-    for (const key of Object.keys(value).sort()) if (!COMMENT_KEYS.has(key)) out[key] = normalised((value as Plain)[key], renames);
+    for (const key of Object.keys(value).sort())
+      if (!COMMENT_KEYS.has(key)) out[key] = normalised((value as Plain)[key], renames);
     return out;
   }
   return value;
 }
 
 const text = (value: unknown): string | undefined =>
-  value === undefined ? undefined : typeof value === 'string' ? value : Array.isArray(value) && value.every((v) => typeof v !== 'object') ? value.join(',') : JSON.stringify(value);
+  value === undefined
+    ? undefined
+    : typeof value === 'string'
+      ? value
+      : Array.isArray(value) && value.every((v) => typeof v !== 'object')
+        ? value.join(',')
+        : JSON.stringify(value);
 
 const compareText = (a: string, b: string) => (a < b ? -1 : a > b ? 1 : 0);
 
@@ -71,7 +78,11 @@ function attributeChanges(before: Plain, after: Plain, prefix = ''): AttributeCh
     } else if (isPlain(a) && isPlain(b)) {
       out.push(...attributeChanges(a, b, `${name} `));
     } else {
-      out.push({ attribute: name, ...(a !== undefined ? { old: text(a) } : {}), ...(b !== undefined ? { new: text(b) } : {}) });
+      out.push({
+        attribute: name,
+        ...(a !== undefined ? { old: text(a) } : {}),
+        ...(b !== undefined ? { new: text(b) } : {}),
+      });
     }
   }
   return out;
@@ -103,7 +114,11 @@ interface Item {
 
 function itemsOf(model: Model, kind: ItemKind): Item[] {
   const list: Plain[] = kind === 'element' ? model.elements : kind === 'function' ? model.functions : model.scenarios;
-  return list.map((item) => ({ id: String(kind === 'scenario' ? item.id : item.tag), kind: kind === 'scenario' ? 'scenario' : String(item.kind), body: item }));
+  return list.map((item) => ({
+    id: String(kind === 'scenario' ? item.id : item.tag),
+    kind: kind === 'scenario' ? 'scenario' : String(item.kind),
+    body: item,
+  }));
 }
 
 /** The item's content without its own name, as text, so two items compare by one string. */
@@ -117,7 +132,7 @@ function findRenames(before: Model, after: Model): Rename[] {
   const renames = new Map<string, string>();
   const found: Rename[] = [];
   const kinds: ItemKind[] = ['element', 'function', 'scenario'];
-  for (let progress = true; progress; ) {
+  for (let progress = true; progress;) {
     progress = false;
     for (const kind of kinds) {
       const oldItems = itemsOf(before, kind);
@@ -134,7 +149,9 @@ function findRenames(before: Model, after: Model): Rename[] {
         (arrived.get(sig) ?? arrived.set(sig, []).get(sig)!).push(item.id);
       }
       for (const item of left.sort((x, y) => compareText(x.id, y.id))) {
-        const candidates = (arrived.get(signature(item, renames)) ?? []).filter((id) => !taken.has(id)).sort(compareText);
+        const candidates = (arrived.get(signature(item, renames)) ?? [])
+          .filter((id) => !taken.has(id))
+          .sort(compareText);
         if (candidates.length === 0) continue;
         renames.set(item.id, candidates[0]!);
         taken.add(candidates[0]!);
@@ -173,11 +190,15 @@ function compareItems(before: Model, after: Model, kind: ItemKind, renames: Read
 /** Site, policy, categories (by id) and rule settings (by id), as attribute changes. */
 function settingsOf(model: Model, renames: ReadonlyMap<string, string>): Plain {
   const byId = (list: { id: string }[] | undefined) => Object.fromEntries((list ?? []).map((x) => [x.id, x]));
-  return normalised({ site: model.site, policy: model.policy ?? {}, category: byId(model.categories), rule: byId(model.rules) }, renames) as Plain;
+  return normalised(
+    { site: model.site, policy: model.policy ?? {}, category: byId(model.categories), rule: byId(model.rules) },
+    renames,
+  ) as Plain;
 }
 
 function compareJustifications(before: Model, after: Model): ModelChanges['justifications'] {
-  const byKey = (m: Model) => new Map((m.justifications ?? []).map((j) => [j.finding, normalised(j, new Map()) as Plain]));
+  const byKey = (m: Model) =>
+    new Map((m.justifications ?? []).map((j) => [j.finding, normalised(j, new Map()) as Plain]));
   const a = byKey(before);
   const b = byKey(after);
   const changed = [...a]

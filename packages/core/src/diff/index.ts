@@ -5,11 +5,25 @@ import type { Model } from '../model/schema.ts';
 import { buildReportDocument, type ReportInput } from '../report/build.ts';
 import { renderSarif } from '../report/sarif.ts';
 import type { Analysis } from '../vocabulary/types.ts';
-import { compareFindings, compareVerdicts, staleJustifications, type FindingChanges, type ScenarioVerdict, type StaleJustification } from './compare-analysis.ts';
+import {
+  compareFindings,
+  compareVerdicts,
+  staleJustifications,
+  type FindingChanges,
+  type ScenarioVerdict,
+  type StaleJustification,
+} from './compare-analysis.ts';
 import { compareModels, type ModelChanges } from './compare-model.ts';
 
 export type { AttributeChange, ItemChanges, ItemKind, ModelChanges, Rename } from './compare-model.ts';
-export type { FindingChanges, FindingRef, ScenarioFigures, ScenarioVerdict, StaleJustification, VerdictChange } from './compare-analysis.ts';
+export type {
+  FindingChanges,
+  FindingRef,
+  ScenarioFigures,
+  ScenarioVerdict,
+  StaleJustification,
+  VerdictChange,
+} from './compare-analysis.ts';
 export { renderDiffText, renderDiffMarkdown } from './render.ts';
 
 /** The version of the JSON diff; it changes only when a field changes meaning or goes away. */

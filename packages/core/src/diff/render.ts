@@ -12,12 +12,18 @@ const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 export function diffHeadline(diff: RevisionDiff): string {
   const s = diff.summary;
   const parts = [`${plural(s.worse, 'scenario')} got worse, ${s.better} better`];
-  if (s.addedScenarios) parts.push(`${s.addedScenarios} added${s.addedFallingShort ? ` (${s.addedFallingShort} falling short)` : ''}`);
+  if (s.addedScenarios)
+    parts.push(`${s.addedScenarios} added${s.addedFallingShort ? ` (${s.addedFallingShort} falling short)` : ''}`);
   if (s.removedScenarios) parts.push(`${s.removedScenarios} removed`);
-  parts.push(`${plural(s.findingsAppeared, 'finding')} appeared, ${s.findingsDisappeared} disappeared, ${s.severityChanged} changed severity`);
+  parts.push(
+    `${plural(s.findingsAppeared, 'finding')} appeared, ${s.findingsDisappeared} disappeared, ${s.severityChanged} changed severity`,
+  );
   if (s.acceptanceChanged) parts.push(`${plural(s.acceptanceChanged, 'finding')} changed acceptance`);
   if (s.staleJustifications) parts.push(`${plural(s.staleJustifications, 'justification')} made stale`);
-  return s.modelChanges === 0 && s.findingsAppeared + s.findingsDisappeared + s.severityChanged + s.acceptanceChanged === 0 ? 'No change to the model or its independence.' : `${parts.join('; ')}.`;
+  return s.modelChanges === 0 &&
+    s.findingsAppeared + s.findingsDisappeared + s.severityChanged + s.acceptanceChanged === 0
+    ? 'No change to the model or its independence.'
+    : `${parts.join('; ')}.`;
 }
 
 function figuresText(f: ScenarioFigures | undefined): string {
@@ -42,7 +48,11 @@ export function renderDiffText(diff: RevisionDiff): string {
     out.push('Scenarios (after independence: verdict, mitigated frequency, gap, SIL required of the SIF):');
     for (const v of changed) {
       const name = v.oldId ? `${v.oldId} -> ${v.scenario}` : v.scenario;
-      out.push(`  ${v.change.toUpperCase()} ${name}${v.why ? `: ${v.why}` : ''}`, `      before ${figuresText(v.before)}`, `      after  ${figuresText(v.after)}`);
+      out.push(
+        `  ${v.change.toUpperCase()} ${name}${v.why ? `: ${v.why}` : ''}`,
+        `      before ${figuresText(v.before)}`,
+        `      after  ${figuresText(v.after)}`,
+      );
     }
     out.push('');
   }
@@ -51,7 +61,8 @@ export function renderDiffText(diff: RevisionDiff): string {
     for (const f of diff.appeared) out.push(`  + ${findingText(f)}`, `      ${f.message}`);
     for (const f of diff.disappeared) out.push(`  - ${findingText(f)}`);
     for (const c of diff.severityChanged) out.push(`  ~ ${c.new.key}: ${c.old.severity} -> ${c.new.severity}`);
-    for (const c of diff.acceptanceChanged) out.push(`  ~ ${c.new.key}: ${c.new.accepted ? 'now accepted' : 'no longer accepted'}`);
+    for (const c of diff.acceptanceChanged)
+      out.push(`  ~ ${c.new.key}: ${c.new.accepted ? 'now accepted' : 'no longer accepted'}`);
     out.push('');
   }
   if (diff.staleJustifications.length) {
@@ -75,29 +86,44 @@ function modelChangeLines(diff: RevisionDiff): string[] {
   for (const c of diff.settings) out.push(`~ ${changeText(c)}`);
   for (const k of diff.justifications.added) out.push(`+ justification ${k}`);
   for (const k of diff.justifications.removed) out.push(`- justification ${k}`);
-  for (const j of diff.justifications.changed) for (const c of j.changes) out.push(`~ justification ${j.finding} ${changeText(c)}`);
+  for (const j of diff.justifications.changed)
+    for (const c of j.changes) out.push(`~ justification ${j.finding} ${changeText(c)}`);
   return out;
 }
 
 const code = (text: string) => `\`${text.replace(/`/g, "'")}\``;
 
 export function renderDiffMarkdown(diff: RevisionDiff): string {
-  const out = [`# Revision diff`, '', `**${escapeMarkdown(diffHeadline(diff))}**`, '', `From ${code(diff.old)} to ${code(diff.new)}.`, ''];
+  const out = [
+    `# Revision diff`,
+    '',
+    `**${escapeMarkdown(diffHeadline(diff))}**`,
+    '',
+    `From ${code(diff.old)} to ${code(diff.new)}.`,
+    '',
+  ];
   const changed = diff.verdicts.filter((v) => v.change !== 'same');
   if (changed.length) {
     out.push('## Scenarios', '', '| Scenario | Change | Before | After |', '| --- | --- | --- | --- |');
     for (const v of changed) {
       const name = v.oldId ? `${v.oldId} → ${v.scenario}` : v.scenario;
-      out.push(`| ${escapeMarkdown(name)} | ${v.change}${v.why ? `: ${escapeMarkdown(v.why)}` : ''} | ${escapeMarkdown(figuresText(v.before))} | ${escapeMarkdown(figuresText(v.after))} |`);
+      out.push(
+        `| ${escapeMarkdown(name)} | ${v.change}${v.why ? `: ${escapeMarkdown(v.why)}` : ''} | ${escapeMarkdown(figuresText(v.before))} | ${escapeMarkdown(figuresText(v.after))} |`,
+      );
     }
     out.push('');
   }
   if (diff.appeared.length + diff.disappeared.length + diff.severityChanged.length + diff.acceptanceChanged.length) {
     out.push('## Findings', '');
-    for (const f of diff.appeared) out.push(`- appeared: ${f.severity} ${code(f.key)}${f.accepted ? ' (accepted)' : ''}: ${escapeMarkdown(f.message)}`);
+    for (const f of diff.appeared)
+      out.push(
+        `- appeared: ${f.severity} ${code(f.key)}${f.accepted ? ' (accepted)' : ''}: ${escapeMarkdown(f.message)}`,
+      );
     for (const f of diff.disappeared) out.push(`- disappeared: ${f.severity} ${code(f.key)}`);
-    for (const c of diff.severityChanged) out.push(`- severity: ${code(c.new.key)} ${c.old.severity} → ${c.new.severity}`);
-    for (const c of diff.acceptanceChanged) out.push(`- ${c.new.accepted ? 'now accepted' : 'no longer accepted'}: ${code(c.new.key)}`);
+    for (const c of diff.severityChanged)
+      out.push(`- severity: ${code(c.new.key)} ${c.old.severity} → ${c.new.severity}`);
+    for (const c of diff.acceptanceChanged)
+      out.push(`- ${c.new.accepted ? 'now accepted' : 'no longer accepted'}: ${code(c.new.key)}`);
     out.push('');
   }
   if (diff.staleJustifications.length) {

@@ -48,7 +48,12 @@ export function buildPlantGraph(model: Model): PlantGraph {
   const graph: PlantGraph = new MultiDirectedGraph<NodeAttributes, EdgeAttributes>();
   for (const element of model.elements) {
     const supply = 'supply' in element ? element.supply : undefined;
-    graph.addNode(element.tag, { type: 'element', kind: element.kind, group: groupOf(element.kind), ...(supply ? { supply } : {}) });
+    graph.addNode(element.tag, {
+      type: 'element',
+      kind: element.kind,
+      group: groupOf(element.kind),
+      ...(supply ? { supply } : {}),
+    });
   }
   for (const fn of model.functions) graph.addNode(fn.tag, { type: 'function', kind: fn.kind });
   for (const element of model.elements) addLinks(graph, element);
@@ -65,7 +70,9 @@ export function buildPlantGraph(model: Model): PlantGraph {
  * in this order, so the path shown when two are equally short does not change when a list is reordered.
  */
 function inTagOrder<T extends { tag: string; role: string }>(edges: T[]): T[] {
-  return edges.sort((x, y) => (x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : x.role < y.role ? -1 : x.role > y.role ? 1 : 0));
+  return edges.sort((x, y) =>
+    x.tag < y.tag ? -1 : x.tag > y.tag ? 1 : x.role < y.role ? -1 : x.role > y.role ? 1 : 0,
+  );
 }
 
 function addLinks(graph: PlantGraph, element: Element): void {

@@ -48,7 +48,8 @@ export class PlantIndex {
   /** Reads the model's elements, their links and the functions' roles, as buildPlantGraph does. */
   static ofModel(model: Model): PlantIndex {
     const index = new PlantIndex(model);
-    for (const element of model.elements) index.node(element.tag, element.kind, groupOf(element.kind), 'supply' in element ? element.supply : undefined);
+    for (const element of model.elements)
+      index.node(element.tag, element.kind, groupOf(element.kind), 'supply' in element ? element.supply : undefined);
     for (const fn of model.functions) index.node(fn.tag, fn.kind, undefined, undefined);
     index.edgeStart = new Int32Array(index.size + 1);
     const links: Edge[] = [];
@@ -59,7 +60,9 @@ export class PlantIndex {
       }
       index.out(n, inWalkOrder(links));
     });
-    model.functions.forEach((fn, n) => index.out(model.elements.length + n, inWalkOrder(roleTargets(fn).filter((edge) => index.ids.has(edge.tag)))));
+    model.functions.forEach((fn, n) =>
+      index.out(model.elements.length + n, inWalkOrder(roleTargets(fn).filter((edge) => index.ids.has(edge.tag)))),
+    );
     return index.done();
   }
 
@@ -75,14 +78,23 @@ export class PlantIndex {
     graph.forEachNode((tag) => {
       edges.length = 0;
       graph.forEachOutEdge(tag, (_edge, attributes, _source, target) => {
-        edges.push({ tag: target, role: attributes.role, ...(attributes.channel !== undefined ? { channel: attributes.channel } : {}) });
+        edges.push({
+          tag: target,
+          role: attributes.role,
+          ...(attributes.channel !== undefined ? { channel: attributes.channel } : {}),
+        });
       });
       index.out(index.ids.get(tag)!, edges);
     });
     return index.done();
   }
 
-  private node(tag: string, kind: ElementKind | FunctionKind, group: ElementGroup | undefined, supply: SupplyExemption | undefined): void {
+  private node(
+    tag: string,
+    kind: ElementKind | FunctionKind,
+    group: ElementGroup | undefined,
+    supply: SupplyExemption | undefined,
+  ): void {
     // As adding a node twice to the graph would: a model that passed the loader has no repeated tag.
     if (this.ids.has(tag)) throw new Error(`the plant has two nodes tagged ${tag}`);
     this.ids.set(tag, this.tags.length);

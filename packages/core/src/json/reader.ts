@@ -51,8 +51,17 @@ const MESSAGES: Record<string, string> = {
 function describe(e: ParseError, text: string): { message: string; offset: number; length: number; help?: string } {
   const name = printParseErrorCode(e.error);
   const before = text.slice(0, e.offset).trimEnd();
-  if ((name === 'ValueExpected' || name === 'PropertyNameExpected') && before.endsWith(',') && /^\s*[}\]]/.test(text.slice(e.offset))) {
-    return { message: 'trailing comma', offset: before.length - 1, length: 1, help: 'JSON allows no comma after the last item; remove it' };
+  if (
+    (name === 'ValueExpected' || name === 'PropertyNameExpected') &&
+    before.endsWith(',') &&
+    /^\s*[}\]]/.test(text.slice(e.offset))
+  ) {
+    return {
+      message: 'trailing comma',
+      offset: before.length - 1,
+      length: 1,
+      help: 'JSON allows no comma after the last item; remove it',
+    };
   }
   return { message: MESSAGES[name] ?? name, offset: e.offset, length: e.length };
 }
@@ -85,7 +94,14 @@ function tooDeepAt(text: string, limit: number): number {
   return -1;
 }
 
-function toValue(node: Node, path: string, spans: Map<string, Span>, index: LineIndex, diagnostics: Diagnostic[], text: string): unknown {
+function toValue(
+  node: Node,
+  path: string,
+  spans: Map<string, Span>,
+  index: LineIndex,
+  diagnostics: Diagnostic[],
+  text: string,
+): unknown {
   spans.set(path, index.span(node.offset, node.type === 'object' || node.type === 'array' ? 1 : node.length));
   switch (node.type) {
     case 'object': {
@@ -99,23 +115,28 @@ function toValue(node: Node, path: string, spans: Map<string, Span>, index: Line
         // JSON.parse would keep the last of two equal keys without a word; the user must choose.
         const first = spans.get(`${childPath}#key`);
         if (first && Object.prototype.hasOwnProperty.call(out, key)) {
-          diagnostics.push(error('BH117', `field \`${key}\` given twice`, keySpan, {
-            related: [{ message: 'first given here', span: first }],
-            help: 'keep one of them',
-          }));
+          diagnostics.push(
+            error('BH117', `field \`${key}\` given twice`, keySpan, {
+              related: [{ message: 'first given here', span: first }],
+              help: 'keep one of them',
+            }),
+          );
           continue;
         }
         spans.set(`${childPath}#key`, keySpan);
         const value = toValue(valueNode, childPath, spans, index, diagnostics, text);
         // A plain assignment to `__proto__` would set the prototype; define it as an own key instead,
         // so the schema sees it and rejects it. `constructor` and the like are ordinary own keys.
-        if (key === '__proto__') Object.defineProperty(out, key, { value, enumerable: true, writable: true, configurable: true });
+        if (key === '__proto__')
+          Object.defineProperty(out, key, { value, enumerable: true, writable: true, configurable: true });
         else out[key] = value;
       }
       return out;
     }
     case 'array':
-      return (node.children ?? []).map((child, i) => toValue(child, path === '' ? String(i) : `${path}.${i}`, spans, index, diagnostics, text));
+      return (node.children ?? []).map((child, i) =>
+        toValue(child, path === '' ? String(i) : `${path}.${i}`, spans, index, diagnostics, text),
+      );
     case 'number': {
       const literal = text.slice(node.offset, node.offset + node.length);
       if (!heldExactly(literal)) diagnostics.push(tooPrecise(literal, index.span(node.offset, node.length)));
@@ -126,14 +147,19 @@ function toValue(node: Node, path: string, spans: Map<string, Span>, index: Line
   }
 }
 
-export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknown; spans: Map<string, Span> } | undefined {
+export function readJson(
+  text: string,
+  diagnostics: Diagnostic[],
+): { raw: unknown; spans: Map<string, Span> } | undefined {
   const index = new LineIndex(text);
   // The parser and the reader below recurse per level: refuse deep nesting before either sees it.
   const deep = tooDeepAt(text, MAX_JSON_DEPTH);
   if (deep !== -1) {
-    diagnostics.push(error('BH106', `the JSON is nested more than ${MAX_JSON_DEPTH} levels deep here`, index.span(deep, 1), {
-      help: 'a model nests about five levels (model, scenarios, a scenario, its layers, a layer); is this a model file?',
-    }));
+    diagnostics.push(
+      error('BH106', `the JSON is nested more than ${MAX_JSON_DEPTH} levels deep here`, index.span(deep, 1), {
+        help: 'a model nests about five levels (model, scenarios, a scenario, its layers, a layer); is this a model file?',
+      }),
+    );
     return undefined;
   }
   const errors: ParseError[] = [];
@@ -143,9 +169,11 @@ export function readJson(text: string, diagnostics: Diagnostic[]): { raw: unknow
   } catch (e) {
     // Should the scan above and the parser ever disagree on what nests, the stack still must not show.
     if (!(e instanceof RangeError)) throw e;
-    diagnostics.push(error('BH106', 'the JSON is nested too deeply to read', index.span(0, 1), {
-      help: 'a model nests about five levels (model, scenarios, a scenario, its layers, a layer); is this a model file?',
-    }));
+    diagnostics.push(
+      error('BH106', 'the JSON is nested too deeply to read', index.span(0, 1), {
+        help: 'a model nests about five levels (model, scenarios, a scenario, its layers, a layer); is this a model file?',
+      }),
+    );
     return undefined;
   }
   if (errors.length) {

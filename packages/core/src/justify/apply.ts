@@ -6,7 +6,15 @@ import type { SpanMap } from '../bulk/to-model.ts';
 import type { Justification } from '../model/schema.ts';
 import { spanAt } from '../loader/schema-issues.ts';
 import { mirroredKeyOf } from '../rules/define.ts';
-import { catalogueEntry, JUSTIFICATION_ENTRIES, renderMessage, ruleIdOf, say, type FindingMessage, type JustificationRuleId } from '../catalogue/catalogue.ts';
+import {
+  catalogueEntry,
+  JUSTIFICATION_ENTRIES,
+  renderMessage,
+  ruleIdOf,
+  say,
+  type FindingMessage,
+  type JustificationRuleId,
+} from '../catalogue/catalogue.ts';
 
 export const STALE_JUSTIFICATION = 'stale-justification';
 export const DUPLICATE_JUSTIFICATION = 'duplicate-justification';
@@ -98,7 +106,10 @@ export function acceptancesOf(justifications: readonly Justification[] | undefin
  * The findings, in their order, each marked accepted when a justification names its key, and the mirrored key
  * of each finding that has one. Costs what the findings cost, whatever the number of justifications.
  */
-export function acceptFindings(findings: readonly Finding[], byKey: Acceptances): { findings: Finding[]; mirrored: Map<string, string> } {
+export function acceptFindings(
+  findings: readonly Finding[],
+  byKey: Acceptances,
+): { findings: Finding[]; mirrored: Map<string, string> } {
   // A justification written against a key with the two layers the other way round (keys once followed
   // list order) still accepts its finding; the finding keeps its own key.
   const mirrored = new Map<string, string>();
@@ -130,10 +141,17 @@ export function applyJustifications(
     const j = byKey.get(key)!;
     const raised: Finding[] = [];
     if (!known.has(key)) {
-      raised.push(metaFinding(key, say('stale-justification/matches-nothing', { key, by: j.chosen.by, date: j.chosen.date })));
+      raised.push(
+        metaFinding(key, say('stale-justification/matches-nothing', { key, by: j.chosen.by, date: j.chosen.date })),
+      );
     }
     if (j.count > 1) {
-      raised.push(metaFinding(key, say('duplicate-justification/accepted-again', { key, count: j.count, by: j.chosen.by, date: j.chosen.date })));
+      raised.push(
+        metaFinding(
+          key,
+          say('duplicate-justification/accepted-again', { key, count: j.count, by: j.chosen.by, date: j.chosen.date }),
+        ),
+      );
     }
     for (const f of raised) {
       stale.push(f);

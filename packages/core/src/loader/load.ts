@@ -45,33 +45,57 @@ export function detectFormat(file: string, text: string): ModelFormat {
 /** Decodes bytes as UTF-8, refusing what is not text. */
 export function decode(bytes: Uint8Array, diagnostics: Diagnostic[]): string | undefined {
   if (bytes.length > MAX_FILE_BYTES) {
-    diagnostics.push(error('BH103', `the file is ${(bytes.length / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, {
-      help: 'split the site into units, one model file each',
-    }));
+    diagnostics.push(
+      error('BH103', `the file is ${(bytes.length / 1048576).toFixed(1)} MB; the limit is 50 MB`, undefined, {
+        help: 'split the site into units, one model file each',
+      }),
+    );
     return undefined;
   }
   if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf) {
-    diagnostics.push(error('BH101', 'the file starts with a UTF-8 byte-order mark', { line: 1, column: 1, length: 1 }, { help: BOM_HELP }));
+    diagnostics.push(
+      error(
+        'BH101',
+        'the file starts with a UTF-8 byte-order mark',
+        { line: 1, column: 1, length: 1 },
+        { help: BOM_HELP },
+      ),
+    );
     return undefined;
   }
   // The first of a NUL byte or a broken UTF-8 sequence is reported, at its own line and column.
   const invalid = firstInvalidUtf8(bytes);
   const nul = bytes.indexOf(0);
   if (nul !== -1 && (invalid === -1 || nul < invalid)) {
-    diagnostics.push(error('BH102', 'the file holds a NUL byte, so it is binary, not text', { ...positionOfByte(bytes, nul), length: 1 }, { help: NOT_TEXT_HELP }));
+    diagnostics.push(
+      error(
+        'BH102',
+        'the file holds a NUL byte, so it is binary, not text',
+        { ...positionOfByte(bytes, nul), length: 1 },
+        { help: NOT_TEXT_HELP },
+      ),
+    );
     return undefined;
   }
   if (invalid !== -1) {
     const byte = bytes[invalid]!.toString(16).toUpperCase().padStart(2, '0');
-    diagnostics.push(error('BH102', `the file is not UTF-8 text (byte 0x${byte} at offset ${invalid})`, { ...positionOfByte(bytes, invalid), length: 1 }, {
-      help: `${NOT_TEXT_HELP}; a file saved in a legacy code page must be re-saved as UTF-8`,
-    }));
+    diagnostics.push(
+      error(
+        'BH102',
+        `the file is not UTF-8 text (byte 0x${byte} at offset ${invalid})`,
+        { ...positionOfByte(bytes, invalid), length: 1 },
+        {
+          help: `${NOT_TEXT_HELP}; a file saved in a legacy code page must be re-saved as UTF-8`,
+        },
+      ),
+    );
     return undefined;
   }
   return new TextDecoder('utf-8').decode(bytes);
 }
 
-const BOM_HELP = 'save the file as UTF-8 without BOM; Bulkhead does not strip it for you so that nothing changes unseen';
+const BOM_HELP =
+  'save the file as UTF-8 without BOM; Bulkhead does not strip it for you so that nothing changes unseen';
 const NOT_TEXT_HELP = 'is this a model file? models are UTF-8 text (.bulk) or JSON';
 
 const COLLECTIONS = [
@@ -82,12 +106,21 @@ const COLLECTIONS = [
 ] as const;
 
 /** When the model as a whole fails the schema, keeps the items that pass so later checks still run. */
-function salvage(raw: unknown, brokenTags: Set<string>): { model: Model; origins: Origins; brokenTags: Set<string>; brokenCategories: Set<string> } | undefined {
+function salvage(
+  raw: unknown,
+  brokenTags: Set<string>,
+): { model: Model; origins: Origins; brokenTags: Set<string>; brokenCategories: Set<string> } | undefined {
   if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) return undefined;
   const top = raw as Record<string, unknown>;
   const origins: Origins = { elements: [], functions: [], scenarios: [], categories: [] };
   const brokenCategories = new Set<string>();
-  const out: Record<string, unknown> = { site: { name: '' }, categories: [], elements: [], functions: [], scenarios: [] };
+  const out: Record<string, unknown> = {
+    site: { name: '' },
+    categories: [],
+    elements: [],
+    functions: [],
+    scenarios: [],
+  };
   for (const [collection, schema] of COLLECTIONS) {
     const items = Array.isArray(top[collection]) ? (top[collection] as unknown[]) : [];
     const kept: unknown[] = [];
@@ -150,11 +183,20 @@ export function loadModelText(file: string, bytes: Uint8Array | string, options:
   });
   if (text === undefined) return done();
   if (typeof bytes === 'string' && text.charCodeAt(0) === 0xfeff) {
-    diagnostics.push(error('BH101', 'the text starts with a byte-order mark', { line: 1, column: 1, length: 1 }, { help: BOM_HELP }));
+    diagnostics.push(
+      error('BH101', 'the text starts with a byte-order mark', { line: 1, column: 1, length: 1 }, { help: BOM_HELP }),
+    );
     return done();
   }
   if (text.trim() === '') {
-    diagnostics.push(error('BH100', 'the file is empty', { line: 1, column: 1, length: 1 }, { help: 'a model needs at least a `site` statement' }));
+    diagnostics.push(
+      error(
+        'BH100',
+        'the file is empty',
+        { line: 1, column: 1, length: 1 },
+        { help: 'a model needs at least a `site` statement' },
+      ),
+    );
     return done();
   }
   let raw: unknown;
@@ -196,13 +238,22 @@ export function loadModelText(file: string, bytes: Uint8Array | string, options:
   if (parsed.success) {
     const identity = (list: unknown[]) => list.map((_, i) => i);
     const m = parsed.data;
-    const origins: Origins = { elements: identity(m.elements), functions: identity(m.functions), scenarios: identity(m.scenarios), categories: identity(m.categories) };
+    const origins: Origins = {
+      elements: identity(m.elements),
+      functions: identity(m.functions),
+      scenarios: identity(m.scenarios),
+      categories: identity(m.categories),
+    };
     diagnostics.push(...validateModel({ model: m, spans, name, origins, brokenTags, brokenCategories: new Set() }));
     return done(m);
   }
   for (const issue of parsed.error.issues) {
     if (reportedPaths.has(issue.path.map(String).join('.'))) continue;
-    if (isMissing(issue) && issue.path.some((_, n) => incompletePaths.has(issue.path.slice(0, n).map(String).join('.')))) continue;
+    if (
+      isMissing(issue) &&
+      issue.path.some((_, n) => incompletePaths.has(issue.path.slice(0, n).map(String).join('.')))
+    )
+      continue;
     diagnostics.push(...issueToDiagnostics(issue, spans, name, raw));
   }
   const salvaged = salvage(raw, brokenTags);

@@ -8,7 +8,11 @@ import { spanAt } from './schema-issues.ts';
 import type { Model } from '../model/schema.ts';
 
 /** Findings about one enabler or modifier: outputs point at its line, not at the cause. */
-export const FACTOR_RULES: ReadonlySet<string> = new Set(['condition-no-basis', 'modifier-not-allowed', 'presence-above-limit']);
+export const FACTOR_RULES: ReadonlySet<string> = new Set([
+  'condition-no-basis',
+  'modifier-not-allowed',
+  'presence-above-limit',
+]);
 
 export class ModelLocator {
   private readonly scenarioIndex: Map<string, number>;
@@ -59,7 +63,14 @@ export class ModelLocator {
     const i = this.scenarioIndex.get(scenario);
     if (i === undefined) return undefined;
     const cause = this.model.scenarios[i]!.cause;
-    const field = cause.only !== undefined ? 'only' : cause.function !== undefined ? 'function' : cause.element !== undefined ? 'element' : 'external';
+    const field =
+      cause.only !== undefined
+        ? 'only'
+        : cause.function !== undefined
+          ? 'function'
+          : cause.element !== undefined
+            ? 'element'
+            : 'external';
     return this.at(['scenarios', i, 'cause', field]);
   }
 
@@ -73,7 +84,10 @@ export class ModelLocator {
     const tag = findingKey.slice(findingKey.lastIndexOf(':') + 1);
     const s = this.model.scenarios[i]!;
     const enabler = /^enabler-(\d+)$/.exec(tag);
-    if (enabler) return s.enablers?.[Number(enabler[1]) - 1] ? this.at(['scenarios', i, 'enablers', Number(enabler[1]) - 1, 'title']) : undefined;
+    if (enabler)
+      return s.enablers?.[Number(enabler[1]) - 1]
+        ? this.at(['scenarios', i, 'enablers', Number(enabler[1]) - 1, 'title'])
+        : undefined;
     const [, kind, nth] = /^([a-z]+)(?:-(\d+))?$/.exec(tag) ?? [];
     let seen = 0;
     const j = (s.modifiers ?? []).findIndex((m) => m.kind === kind && ++seen === Number(nth ?? 1));
@@ -126,7 +140,8 @@ export function findingSpans(finding: Located, locate: ModelLocator): { span?: S
   else if (scenario !== undefined && FACTOR_RULES.has(finding.rule)) span = locate.factor(scenario, finding.key);
   else if (scenario !== undefined) span = locate.cause(scenario);
   for (const party of finding.parties) {
-    if (party.role === 'layer' && party !== primary && party.tag !== undefined) add('layer', party.tag, locate.layer(scenario, party.tag));
+    if (party.role === 'layer' && party !== primary && party.tag !== undefined)
+      add('layer', party.tag, locate.layer(scenario, party.tag));
     if (party.role === 'cause' && scenario !== undefined && (primary !== undefined || FACTOR_RULES.has(finding.rule))) {
       add('cause', party.tag ?? 'external', locate.cause(scenario));
     }

@@ -76,7 +76,13 @@ const PART_HELP = 'write `part "units/area-100.bulk"`: one quoted path to a .bul
  * names, recursively. A part named twice is read once; a part that names a file on its own path back
  * to the loaded file is a cycle, reported with the chain of files.
  */
-export function readParts(file: string, parsed: ParsedFile, read: PartReader | undefined, decode: Decoder, diagnostics: Diagnostic[]): PartedFile {
+export function readParts(
+  file: string,
+  parsed: ParsedFile,
+  read: PartReader | undefined,
+  decode: Decoder,
+  diagnostics: Diagnostic[],
+): PartedFile {
   const parts = new Map<string, string[]>();
   const files: string[] = [];
   const expand = (from: string, statements: Statement[], chain: string[]): Statement[] => {
@@ -88,34 +94,48 @@ export function readParts(file: string, parsed: ParsedFile, read: PartReader | u
       }
       const target = statement.name;
       if (!target || statement.attributes.length > 0 || statement.children.length > 0) {
-        diagnostics.push(error('BH124', 'a `part` statement names one file and nothing else', tokenSpan(statement.keyword), { help: PART_HELP }));
+        diagnostics.push(
+          error('BH124', 'a `part` statement names one file and nothing else', tokenSpan(statement.keyword), {
+            help: PART_HELP,
+          }),
+        );
         continue;
       }
       if (!/\.bulk$/i.test(target.value) || /^([\\/]|[A-Za-z]:)/.test(target.value)) {
-        diagnostics.push(error('BH124', `\`${target.value}\` is not a relative path to a .bulk file`, tokenSpan(target), { help: PART_HELP }));
+        diagnostics.push(
+          error('BH124', `\`${target.value}\` is not a relative path to a .bulk file`, tokenSpan(target), {
+            help: PART_HELP,
+          }),
+        );
         continue;
       }
       if (!read) {
-        diagnostics.push(error('BH123', `the part file \`${target.value}\` cannot be read here`, tokenSpan(target), {
-          help: 'a model split over files is read from disk: run `bulkhead view MAIN.bulk` (or check, report) on the main file',
-        }));
+        diagnostics.push(
+          error('BH123', `the part file \`${target.value}\` cannot be read here`, tokenSpan(target), {
+            help: 'a model split over files is read from disk: run `bulkhead view MAIN.bulk` (or check, report) on the main file',
+          }),
+        );
         continue;
       }
       const path = joinRelative(from, target.value);
       const loop = chain.indexOf(path);
       if (loop !== -1) {
         const cycle = [...chain.slice(loop), path];
-        diagnostics.push(error('BH122', `part files name one another in a cycle: ${cycle.join(' -> ')}`, tokenSpan(target), {
-          help: 'a part file may not name, directly or through other parts, a file that names it; remove one `part` statement',
-        }));
+        diagnostics.push(
+          error('BH122', `part files name one another in a cycle: ${cycle.join(' -> ')}`, tokenSpan(target), {
+            help: 'a part file may not name, directly or through other parts, a file that names it; remove one `part` statement',
+          }),
+        );
         continue;
       }
       if (parts.has(path)) continue;
       const got = read(path);
       if (!(got instanceof Uint8Array)) {
-        diagnostics.push(error('BH123', `the part file \`${path}\` cannot be read: ${got.problem}`, tokenSpan(target), {
-          help: 'check the path, which is relative to the file that names it',
-        }));
+        diagnostics.push(
+          error('BH123', `the part file \`${path}\` cannot be read: ${got.problem}`, tokenSpan(target), {
+            help: 'check the path, which is relative to the file that names it',
+          }),
+        );
         continue;
       }
       const own: Diagnostic[] = [];
@@ -127,11 +147,24 @@ export function readParts(file: string, parsed: ParsedFile, read: PartReader | u
       for (const s of partParsed.statements) stampStatement(s, path);
       for (const s of partParsed.statements) {
         if (s.keyword.value !== 'site') continue;
-        diagnostics.push(error('BH124', 'a part file does not name the site; only the main file has a `site` statement', tokenSpan(s.keyword), {
-          help: 'move the `site` statement to the main model file',
-        }));
+        diagnostics.push(
+          error(
+            'BH124',
+            'a part file does not name the site; only the main file has a `site` statement',
+            tokenSpan(s.keyword),
+            {
+              help: 'move the `site` statement to the main model file',
+            },
+          ),
+        );
       }
-      out.push(...expand(path, partParsed.statements.filter((s) => s.keyword.value !== 'site'), [...chain, path]));
+      out.push(
+        ...expand(
+          path,
+          partParsed.statements.filter((s) => s.keyword.value !== 'site'),
+          [...chain, path],
+        ),
+      );
     }
     return out;
   };

@@ -51,7 +51,10 @@ function describeItem(path: readonly PropertyKey[], raw?: unknown): string {
   for (let i = 0; i < path.length; i++) {
     const key = path[i];
     const index = path[i + 1];
-    const next = typeof at === 'object' && at !== null && Object.hasOwn(at, key as string) ? (at as Record<PropertyKey, unknown>)[key as string] : undefined;
+    const next =
+      typeof at === 'object' && at !== null && Object.hasOwn(at, key as string)
+        ? (at as Record<PropertyKey, unknown>)[key as string]
+        : undefined;
     if (typeof key === 'string' && typeof index === 'number') {
       const item = Array.isArray(next) ? next[index] : undefined;
       const word = (Object.hasOwn(ITEM_NAMES, key) ? ITEM_NAMES[key] : undefined) ?? key;
@@ -72,7 +75,12 @@ function article(type: string): string {
 const POSITIONAL = ['tag', 'id', 'name', 'function', 'title', 'finding'];
 
 /** `raw` is the input as read, so an item is named by its tag rather than its place in a list. */
-export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name: FieldNamer, raw?: unknown): Diagnostic[] {
+export function issueToDiagnostics(
+  issue: z.core.$ZodIssue,
+  spans: SpanMap,
+  name: FieldNamer,
+  raw?: unknown,
+): Diagnostic[] {
   const path = issue.path;
   const last = path[path.length - 1];
   const field = typeof last === 'string' ? name(last) : describeItem(path, raw);
@@ -84,40 +92,67 @@ export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name
     case 'invalid_type': {
       const received = (issue as { received?: string }).received;
       if (issue.expected === 'number' && (received === 'Infinity' || received === 'NaN')) {
-        return [error('BH305', `\`${field}\` is not a finite number`, span, {
-          help: 'the value is too large to hold; write a number such as 1e-4 or 0.1',
-        })];
+        return [
+          error('BH305', `\`${field}\` is not a finite number`, span, {
+            help: 'the value is too large to hold; write a number such as 1e-4 or 0.1',
+          }),
+        ];
       }
       if (input === undefined) {
         if (path.length === 1 && typeof last === 'string') {
-          return [error('BH200', `the model has no \`${field}\``, span, {
-            help: last === 'site' ? 'start the model with `site "Site name"`' : `add ${field}`,
-          })];
+          return [
+            error('BH200', `the model has no \`${field}\``, span, {
+              help: last === 'site' ? 'start the model with `site "Site name"`' : `add ${field}`,
+            }),
+          ];
         }
-        return [error('BH200', `missing \`${field}\` in ${describeItem(path, raw)}`, span, {
-          help: typeof last !== 'string'
-            ? 'add the missing item'
-            : !isBulk
-              ? `add "${last}": ...`
-              : POSITIONAL.includes(last)
-                ? `give the ${last} right after the keyword`
-                : `add ${field}=...`,
-        })];
+        return [
+          error('BH200', `missing \`${field}\` in ${describeItem(path, raw)}`, span, {
+            help:
+              typeof last !== 'string'
+                ? 'add the missing item'
+                : !isBulk
+                  ? `add "${last}": ...`
+                  : POSITIONAL.includes(last)
+                    ? `give the ${last} right after the keyword`
+                    : `add ${field}=...`,
+          }),
+        ];
       }
       if (path.length === 0) {
-        return [error('BH201', `a JSON model is an object with \`site\`, \`elements\`, ...; found ${Array.isArray(input) ? 'a list' : input === null ? 'null' : `a ${typeof input}`}`, span, {
-          help: 'run `bulkhead convert FILE.bulk --to json` to see the shape',
-        })];
+        return [
+          error(
+            'BH201',
+            `a JSON model is an object with \`site\`, \`elements\`, ...; found ${Array.isArray(input) ? 'a list' : input === null ? 'null' : `a ${typeof input}`}`,
+            span,
+            {
+              help: 'run `bulkhead convert FILE.bulk --to json` to see the shape',
+            },
+          ),
+        ];
       }
-      const quotedNumber = issue.expected === 'number' && typeof input === 'string' && input.trim() !== '' && Number.isFinite(Number(input));
-      return [error('BH201', `\`${field}\` should be ${article(issue.expected)}`, span, quotedNumber ? { help: 'write the number without quotes' } : {})];
+      const quotedNumber =
+        issue.expected === 'number' &&
+        typeof input === 'string' &&
+        input.trim() !== '' &&
+        Number.isFinite(Number(input));
+      return [
+        error(
+          'BH201',
+          `\`${field}\` should be ${article(issue.expected)}`,
+          span,
+          quotedNumber ? { help: 'write the number without quotes' } : {},
+        ),
+      ];
     }
     case 'invalid_value': {
       const options = issue.values.map(String);
       const given = String(input ?? '');
-      return [error('BH202', `\`${given}\` is not allowed for \`${field}\``, span, {
-        help: didYouMean(given, options) ?? `use one of: ${options.join(', ')}`,
-      })];
+      return [
+        error('BH202', `\`${given}\` is not allowed for \`${field}\``, span, {
+          help: didYouMean(given, options) ?? `use one of: ${options.join(', ')}`,
+        }),
+      ];
     }
     case 'unrecognized_keys':
       return issue.keys.map((key) => {
@@ -133,27 +168,38 @@ export function issueToDiagnostics(issue: z.core.$ZodIssue, spans: SpanMap, name
         const itemPath = path[path.length - 1] === discriminator ? path.slice(0, -1) : path;
         const what = describeItem(itemPath, raw).replace(/ (\d+|`[^`]*`)( of .*)?$/, '');
         const options = ((issue as { options?: unknown[] }).options ?? []).map(String);
-        const value = input && typeof input === 'object' ? (input as Record<string, unknown>)[discriminator] : undefined;
+        const value =
+          input && typeof input === 'object' ? (input as Record<string, unknown>)[discriminator] : undefined;
         if (value === undefined) {
-          return [error('BH200', `missing \`${name(discriminator)}\` in ${describeItem(itemPath, raw)}`, span, {
-            help: `say which ${what} this is: one of ${options.join(', ')}`,
-          })];
+          return [
+            error('BH200', `missing \`${name(discriminator)}\` in ${describeItem(itemPath, raw)}`, span, {
+              help: `say which ${what} this is: one of ${options.join(', ')}`,
+            }),
+          ];
         }
-        return [error('BH202', `unknown ${what} ${discriminator} \`${String(value)}\``, span, {
-          help: didYouMean(String(value), options) ?? `use one of: ${options.join(', ')}`,
-        })];
+        return [
+          error('BH202', `unknown ${what} ${discriminator} \`${String(value)}\``, span, {
+            help: didYouMean(String(value), options) ?? `use one of: ${options.join(', ')}`,
+          }),
+        ];
       }
       return [error('BH201', `\`${field}\` has the wrong shape`, span)];
     }
     case 'too_small':
       if (issue.origin === 'array') {
-        return [error('BH201', `\`${field}\` is an empty list`, span, { help: `leave \`${field}\` out instead of giving an empty list` })];
+        return [
+          error('BH201', `\`${field}\` is an empty list`, span, {
+            help: `leave \`${field}\` out instead of giving an empty list`,
+          }),
+        ];
       }
       return [error('BH201', `\`${field}\`: ${issue.message.toLowerCase()}`, span)];
     case 'invalid_format':
-      return [error('BH201', `${describeItem(path, raw)} holds a line break or control character`, span, {
-        help: 'a comment is one line of plain text; split it into several comments',
-      })];
+      return [
+        error('BH201', `${describeItem(path, raw)} holds a line break or control character`, span, {
+          help: 'a comment is one line of plain text; split it into several comments',
+        }),
+      ];
     default:
       return [error('BH201', `\`${field}\`: ${issue.message.toLowerCase()}`, span)];
   }

@@ -1,8 +1,23 @@
 // Checks beyond the schema: tags, references and their kinds, cycles, numbers in range, voting,
 // and the shape of each scenario. Every problem is reported, each at the narrowest span we have.
 import { error, type Diagnostic, type Span } from '../diagnostics/diagnostic.ts';
-import { ELEMENT_GROUPS, groupOf, LINK_FIELDS, LINK_TARGETS, SUPPORT_LINK_KINDS, type ElementGroup } from '../model/kinds.ts';
-import { PER_100_M_ROWS, TAG_MAX_LENGTH, TAG_PATTERN, type Element, type Model, type PlantFunction, type Scenario } from '../model/schema.ts';
+import {
+  ELEMENT_GROUPS,
+  groupOf,
+  LINK_FIELDS,
+  LINK_TARGETS,
+  SUPPORT_LINK_KINDS,
+  type ElementGroup,
+} from '../model/kinds.ts';
+import {
+  PER_100_M_ROWS,
+  TAG_MAX_LENGTH,
+  TAG_PATTERN,
+  type Element,
+  type Model,
+  type PlantFunction,
+  type Scenario,
+} from '../model/schema.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { didYouMean, Suggester } from '../util/suggest.ts';
 import type { FieldNamer } from './schema-issues.ts';
@@ -47,7 +62,10 @@ class Validator {
 
   private span(ref: PathRef): Span | undefined {
     const path = typeof ref === 'string' ? ref : ref();
-    return spanAt(this.input.spans, path.split('.').map((p) => (/^\d+$/.test(p) ? Number(p) : p)));
+    return spanAt(
+      this.input.spans,
+      path.split('.').map((p) => (/^\d+$/.test(p) ? Number(p) : p)),
+    );
   }
 
   private push(code: Diagnostic['code'], message: string, path: PathRef, extra: Partial<Diagnostic> = {}): void {
@@ -100,8 +118,12 @@ class Validator {
       firstPath.set(tag, path);
       if (entry) this.byTag.set(tag, entry);
     };
-    model.elements.forEach((element, i) => claim(element.tag, () => this.path('elements', i, 'tag'), { kind: 'element', element }, 'tag'));
-    model.functions.forEach((fn, i) => claim(fn.tag, () => this.path('functions', i, 'tag'), { kind: 'function', fn }, 'tag'));
+    model.elements.forEach((element, i) =>
+      claim(element.tag, () => this.path('elements', i, 'tag'), { kind: 'element', element }, 'tag'),
+    );
+    model.functions.forEach((fn, i) =>
+      claim(fn.tag, () => this.path('functions', i, 'tag'), { kind: 'function', fn }, 'tag'),
+    );
     firstPath.clear();
     model.scenarios.forEach((s, i) => claim(s.id, this.path('scenarios', i, 'id'), undefined, 'scenario id'));
     firstPath.clear();
@@ -111,7 +133,9 @@ class Validator {
   private unknown(tag: string, path: PathRef, field: string): void {
     if (this.input.brokenTags.has(tag)) return;
     this.push('BH300', `unknown tag \`${tag}\` in \`${this.input.name(field)}\``, path, {
-      help: (this.tagSuggester ??= new Suggester(this.byTag.keys())).didYouMean(tag) ?? 'define it as an element or function, or check the spelling',
+      help:
+        (this.tagSuggester ??= new Suggester(this.byTag.keys())).didYouMean(tag) ??
+        'define it as an element or function, or check the spelling',
     });
   }
 
@@ -123,7 +147,11 @@ class Validator {
       return undefined;
     }
     if (entry.kind === 'function') {
-      this.push('BH302', `\`${tag}\` is a ${entry.fn.kind} function; \`${this.input.name(field)}\` needs an element`, path);
+      this.push(
+        'BH302',
+        `\`${tag}\` is a ${entry.fn.kind} function; \`${this.input.name(field)}\` needs an element`,
+        path,
+      );
       return undefined;
     }
     return entry.element;
@@ -144,11 +172,16 @@ class Validator {
           const kinds = SUPPORT_LINK_KINDS[link];
           const ok = allowed?.includes(groupOf(target.kind)) && (!kinds || kinds.includes(target.kind));
           if (!ok) {
-            this.push('BH302', `\`${element.tag}\` (${element.kind}) cannot be linked by \`${this.input.name(link)}\` to \`${tag}\` (${target.kind})`, path, {
-              help: allowed
-                ? `\`${this.input.name(link)}\` on a ${element.kind} takes ${(kinds ?? allowed).join(', ')}`
-                : `a ${element.kind} has no \`${this.input.name(link)}\` link`,
-            });
+            this.push(
+              'BH302',
+              `\`${element.tag}\` (${element.kind}) cannot be linked by \`${this.input.name(link)}\` to \`${tag}\` (${target.kind})`,
+              path,
+              {
+                help: allowed
+                  ? `\`${this.input.name(link)}\` on a ${element.kind} takes ${(kinds ?? allowed).join(', ')}`
+                  : `a ${element.kind} has no \`${this.input.name(link)}\` link`,
+              },
+            );
           }
         });
       }
@@ -172,9 +205,14 @@ class Validator {
     if (cycles.length === 0) this.checkDepth(edges);
     for (const cycle of cycles) {
       const tags = cycle.map((i) => elements[i]!.tag);
-      this.push('BH303', `dependency cycle: ${[...tags, tags[0]].map((t) => `\`${t}\``).join(' -> ')}`, this.path('elements', cycle[0]!, 'tag'), {
-        help: 'links point from an element to what it relies on; one of these links runs the wrong way',
-      });
+      this.push(
+        'BH303',
+        `dependency cycle: ${[...tags, tags[0]].map((t) => `\`${t}\``).join(' -> ')}`,
+        this.path('elements', cycle[0]!, 'tag'),
+        {
+          help: 'links point from an element to what it relies on; one of these links runs the wrong way',
+        },
+      );
     }
   }
 
@@ -183,37 +221,64 @@ class Validator {
     const { deepest, depth } = longestChain(edges);
     if (depth <= MAX_DEPENDENCY_DEPTH) return;
     const tag = this.input.model.elements[deepest]!.tag;
-    this.push('BH107', `\`${tag}\` relies on a chain of ${depth} links, one through the next; the limit is ${MAX_DEPENDENCY_DEPTH}`, this.path('elements', deepest, 'tag'), {
-      help: 'a real chain (transmitter, cable, junction box, I/O card, controller, circuit, UPS) is a few links long; link each element to what it relies on directly',
-    });
+    this.push(
+      'BH107',
+      `\`${tag}\` relies on a chain of ${depth} links, one through the next; the limit is ${MAX_DEPENDENCY_DEPTH}`,
+      this.path('elements', deepest, 'tag'),
+      {
+        help: 'a real chain (transmitter, cable, junction box, I/O card, controller, circuit, UPS) is a few links long; link each element to what it relies on directly',
+      },
+    );
   }
 
-  private role(fnIndex: number, field: string, tags: readonly string[], groups: ElementGroup[], kinds?: readonly string[]): void {
+  private role(
+    fnIndex: number,
+    field: string,
+    tags: readonly string[],
+    groups: ElementGroup[],
+    kinds?: readonly string[],
+  ): void {
     tags.forEach((tag, j) => {
       const path = () => this.path('functions', fnIndex, field, ...(tags.length > 1 || field.endsWith('s') ? [j] : []));
       const element = this.element(tag, path, field);
       if (!element) return;
       if (!groups.includes(groupOf(element.kind)) || (kinds && !kinds.includes(element.kind))) {
         const wanted = kinds ?? groups.flatMap((g) => ELEMENT_GROUPS[g]);
-        this.push('BH315', `\`${tag}\` is a ${element.kind}; \`${this.input.name(field)}\` needs a ${wanted.join(' or ')}`, path);
+        this.push(
+          'BH315',
+          `\`${tag}\` is a ${element.kind}; \`${this.input.name(field)}\` needs a ${wanted.join(' or ')}`,
+          path,
+        );
       }
     });
   }
 
-  private voting(fnIndex: number, field: 'sensorVoting' | 'finalVoting', voting: string | undefined, channels: number): void {
+  private voting(
+    fnIndex: number,
+    field: 'sensorVoting' | 'finalVoting',
+    voting: string | undefined,
+    channels: number,
+  ): void {
     const list = field === 'sensorVoting' ? 'sensors' : 'finals';
     const path = this.path('functions', fnIndex, voting === undefined ? list : field);
     if (voting === undefined) {
       if (channels > 1) {
-        this.push('BH306', `${channels} channels in \`${this.input.name(list)}\` but no \`${this.input.name(field)}\``, path, {
-          help: `say how they vote, e.g. ${this.input.name(field)}=1oo${channels}`,
-        });
+        this.push(
+          'BH306',
+          `${channels} channels in \`${this.input.name(list)}\` but no \`${this.input.name(field)}\``,
+          path,
+          {
+            help: `say how they vote, e.g. ${this.input.name(field)}=1oo${channels}`,
+          },
+        );
       }
       return;
     }
     const match = /^(\d+)oo(\d+)(D?)$/.exec(voting);
     if (!match || (match[3] === 'D' && voting !== '1oo2D')) {
-      this.push('BH306', `\`${voting}\` is not MooN voting`, path, { help: 'write M out of N as MooN, e.g. 1oo2 or 2oo3 (1oo2D for a pair with diagnostics)' });
+      this.push('BH306', `\`${voting}\` is not MooN voting`, path, {
+        help: 'write M out of N as MooN, e.g. 1oo2 or 2oo3 (1oo2D for a pair with diagnostics)',
+      });
       return;
     }
     const m = Number(match[1]);
@@ -223,16 +288,23 @@ class Validator {
         help: `MooN means M of the N channels must act; M=${m} cannot exceed N=${n}`,
       });
     } else if (n !== channels) {
-      this.push('BH306', `voting ${voting} names ${n} channels but \`${this.input.name(list)}\` has ${channels}`, path, {
-        help: `list ${n} tags in \`${this.input.name(list)}\`, or vote ${m <= channels ? `${m}oo${channels}` : `1oo${channels}`}`,
-      });
+      this.push(
+        'BH306',
+        `voting ${voting} names ${n} channels but \`${this.input.name(list)}\` has ${channels}`,
+        path,
+        {
+          help: `list ${n} tags in \`${this.input.name(list)}\`, or vote ${m <= channels ? `${m}oo${channels}` : `1oo${channels}`}`,
+        },
+      );
     }
   }
 
   private probability(value: number | undefined, path: PathRef, what: string): void {
     if (value === undefined) return;
     if (!(Number.isFinite(value) && value > 0 && value <= 1)) {
-      this.push('BH304', `${what} ${value} is outside (0, 1]`, path, { help: 'a probability is above 0 and at most 1' });
+      this.push('BH304', `${what} ${value} is outside (0, 1]`, path, {
+        help: 'a probability is above 0 and at most 1',
+      });
     }
   }
 
@@ -281,9 +353,12 @@ class Validator {
 
   private checkCategoriesAndPolicy(): void {
     const { model } = this.input;
-    model.categories.forEach((c, i) => this.positive(c.tolerable, this.path('categories', i, 'tolerable'), 'tolerable frequency'));
+    model.categories.forEach((c, i) =>
+      this.positive(c.tolerable, this.path('categories', i, 'tolerable'), 'tolerable frequency'),
+    );
     const policy = model.policy;
-    if (policy?.minResponseMinutes !== undefined) this.positive(policy.minResponseMinutes, 'policy.minResponseMinutes', 'minimum response time');
+    if (policy?.minResponseMinutes !== undefined)
+      this.positive(policy.minResponseMinutes, 'policy.minResponseMinutes', 'minimum response time');
     this.probability(policy?.presenceLimit, 'policy.presenceLimit', 'presence limit');
     const creditLimit = policy?.conditionCreditLimit;
     if (creditLimit !== undefined && !(Number.isFinite(creditLimit) && creditLimit >= 1)) {
@@ -300,29 +375,48 @@ class Validator {
     this.categoryIds ??= new Set(model.categories.map((c) => c.id));
     if (!this.categoryIds.has(scenario.category) && !this.input.brokenCategories.has(scenario.category)) {
       this.push('BH311', `unknown consequence category \`${scenario.category}\``, at('category'), {
-        help: (this.categorySuggester ??= new Suggester(this.categoryIds)).didYouMean(scenario.category) ?? 'define it with a `category` statement',
+        help:
+          (this.categorySuggester ??= new Suggester(this.categoryIds)).didYouMean(scenario.category) ??
+          'define it with a `category` statement',
       });
     }
     const cause = scenario.cause;
     const named = [cause.function, cause.element, cause.external].filter((v) => v !== undefined).length;
     if (named !== 1) {
-      this.push('BH314', named === 0 ? 'the cause names no function, element or external event' : 'the cause names more than one of function, element and external', at('cause'), {
-        help: 'write one of: cause function=LIC-101, cause element=P-101A, cause external="..."',
-      });
+      this.push(
+        'BH314',
+        named === 0
+          ? 'the cause names no function, element or external event'
+          : 'the cause names more than one of function, element and external',
+        at('cause'),
+        {
+          help: 'write one of: cause function=LIC-101, cause element=P-101A, cause external="..."',
+        },
+      );
     }
     let causeFunction: PlantFunction | undefined;
     if (cause.function !== undefined) {
       const entry = this.byTag.get(cause.function);
       if (!entry) this.unknown(cause.function, at('cause', 'function'), 'function');
       else if (entry.kind === 'element') {
-        this.push('BH315', `\`${cause.function}\` is an element; \`${name('function')}\` names a function`, at('cause', 'function'), {
-          help: `write cause element=${cause.function}`,
-        });
+        this.push(
+          'BH315',
+          `\`${cause.function}\` is an element; \`${name('function')}\` names a function`,
+          at('cause', 'function'),
+          {
+            help: `write cause element=${cause.function}`,
+          },
+        );
       } else causeFunction = entry.fn;
     }
     if (cause.element !== undefined) this.element(cause.element, at('cause', 'element'), 'element');
     if (cause.only !== undefined) {
-      if (cause.function === undefined) this.push('BH314', `\`${name('only')}\` narrows a function cause; this cause names no function`, at('cause', 'only'));
+      if (cause.function === undefined)
+        this.push(
+          'BH314',
+          `\`${name('only')}\` narrows a function cause; this cause names no function`,
+          at('cause', 'only'),
+        );
       this.element(cause.only, at('cause', 'only'), 'only');
     }
     if (cause.frequency === undefined && cause.typical === undefined) {
@@ -330,12 +424,18 @@ class Validator {
         help: 'add frequency=0.1 (per year) with basis="...", or typical=bpcs-loop-failure to use the default table',
       });
     } else if (cause.frequency !== undefined && cause.typical !== undefined) {
-      this.push('BH310', 'the cause gives both a frequency and a typical value', at('cause', 'typical'), { help: 'keep one of them' });
+      this.push('BH310', 'the cause gives both a frequency and a typical value', at('cause', 'typical'), {
+        help: 'keep one of them',
+      });
     }
     this.positive(cause.frequency, at('cause', 'frequency'), 'frequency');
     this.checkPipeLength(cause, at);
-    (scenario.enablers ?? []).forEach((e, j) => this.probability(e.probability, at('enablers', j, 'probability'), 'probability'));
-    (scenario.modifiers ?? []).forEach((m, j) => this.probability(m.probability, at('modifiers', j, 'probability'), 'probability'));
+    (scenario.enablers ?? []).forEach((e, j) =>
+      this.probability(e.probability, at('enablers', j, 'probability'), 'probability'),
+    );
+    (scenario.modifiers ?? []).forEach((m, j) =>
+      this.probability(m.probability, at('modifiers', j, 'probability'), 'probability'),
+    );
     const claimed = new Map<string, number>();
     (scenario.layers ?? []).forEach((layer, j) => {
       const path = at('layers', j, 'function');
@@ -366,13 +466,23 @@ class Validator {
     const { name } = this.input;
     const piping = cause.typical !== undefined && PER_100_M_ROWS.has(cause.typical);
     if (piping && cause.pipeMetres === undefined) {
-      this.push('BH330', `\`${name('typical')}=${cause.typical}\` is per 100 m of pipe; the cause gives no length`, at('cause', 'typical'), {
-        help: `add ${name('pipeMetres')}=250 (the metres of pipe the scenario covers), or give frequency= with its basis`,
-      });
+      this.push(
+        'BH330',
+        `\`${name('typical')}=${cause.typical}\` is per 100 m of pipe; the cause gives no length`,
+        at('cause', 'typical'),
+        {
+          help: `add ${name('pipeMetres')}=250 (the metres of pipe the scenario covers), or give frequency= with its basis`,
+        },
+      );
     } else if (!piping && cause.pipeMetres !== undefined) {
-      this.push('BH331', `\`${name('pipeMetres')}\` scales only the per-100 m piping rows of \`${name('typical')}\``, at('cause', 'pipeMetres'), {
-        help: `use it with ${name('typical')}=piping-leak or piping-breach, or leave it out`,
-      });
+      this.push(
+        'BH331',
+        `\`${name('pipeMetres')}\` scales only the per-100 m piping rows of \`${name('typical')}\``,
+        at('cause', 'pipeMetres'),
+        {
+          help: `use it with ${name('typical')}=piping-leak or piping-breach, or leave it out`,
+        },
+      );
     }
     this.positive(cause.pipeMetres, at('cause', 'pipeMetres'), 'pipe length');
   }
@@ -389,7 +499,8 @@ class Validator {
 
   private checkJustifications(): void {
     (this.input.model.justifications ?? []).forEach((j, i) => {
-      if (!/^\d{4}-\d{2}-\d{2}$/.test(j.date)) this.push('BH317', `date \`${j.date}\` is not YYYY-MM-DD`, `justifications.${i}.date`);
+      if (!/^\d{4}-\d{2}-\d{2}$/.test(j.date))
+        this.push('BH317', `date \`${j.date}\` is not YYYY-MM-DD`, `justifications.${i}.date`);
     });
   }
 }

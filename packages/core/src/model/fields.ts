@@ -1,7 +1,22 @@
 // Reads the zod schema's shapes so the .bulk reader, printer and loader share one list of fields
 // per statement: the schema stays the only place where a field is declared.
 import { z } from 'zod';
-import { Category, Cause, CommonCause, FailureData, Element, Enabler, Justification, LayerClaim, Modifier, PlantFunction, Policy, RuleSetting, Scenario, Site } from './schema.ts';
+import {
+  Category,
+  Cause,
+  CommonCause,
+  FailureData,
+  Element,
+  Enabler,
+  Justification,
+  LayerClaim,
+  Modifier,
+  PlantFunction,
+  Policy,
+  RuleSetting,
+  Scenario,
+  Site,
+} from './schema.ts';
 
 export type FieldType =
   | { type: 'string' }
@@ -39,8 +54,30 @@ export const COMMENT_FIELDS = new Set(['comments', 'trailingComment']);
 
 /** Fields whose values are free text: always quoted when printed. */
 export const TEXT_FIELDS = new Set([
-  'name', 'description', 'title', 'basis', 'pfdBasis', 'pfhBasis', 'testBasis', 'hraBasis', 'creditBasis', 'reason', 'by', 'make', 'model', 'external',
-  'document', 'revision', 'status', 'basedOn', 'preparedBy', 'checkedBy', 'approvedBy', 'study', 'studyNode', 'studyDeviation',
+  'name',
+  'description',
+  'title',
+  'basis',
+  'pfdBasis',
+  'pfhBasis',
+  'testBasis',
+  'hraBasis',
+  'creditBasis',
+  'reason',
+  'by',
+  'make',
+  'model',
+  'external',
+  'document',
+  'revision',
+  'status',
+  'basedOn',
+  'preparedBy',
+  'checkedBy',
+  'approvedBy',
+  'study',
+  'studyNode',
+  'studyDeviation',
 ]);
 
 export function kebab(field: string): string {
@@ -76,7 +113,10 @@ export const SINGLE_SPECS: Record<'site' | 'policy', StatementSpec> = {
   site: { schema: Site, positional: 'name' },
   policy: { schema: Policy },
 };
-export const LIST_SPECS: Record<'category' | 'rule' | 'scenario' | 'failure-data' | 'common-cause' | 'accept', StatementSpec & { collection: string }> = {
+export const LIST_SPECS: Record<
+  'category' | 'rule' | 'scenario' | 'failure-data' | 'common-cause' | 'accept',
+  StatementSpec & { collection: string }
+> = {
   category: { schema: Category, positional: 'id', collection: 'categories' },
   rule: { schema: RuleSetting, positional: 'id', collection: 'rules' },
   scenario: { schema: Scenario, positional: 'id', collection: 'scenarios' },
@@ -94,7 +134,9 @@ export const SCENARIO_LINE_SPECS: ReadonlyMap<string, ScenarioLineSpec> = new Ma
 ]);
 /** The single and list statements by keyword, for lookups by the user's word (never `keyword in SPECS`). */
 export const SINGLE_SPEC_BY_KEYWORD: ReadonlyMap<string, StatementSpec> = new Map(Object.entries(SINGLE_SPECS));
-export const LIST_SPEC_BY_KEYWORD: ReadonlyMap<string, StatementSpec & { collection: string }> = new Map(Object.entries(LIST_SPECS));
+export const LIST_SPEC_BY_KEYWORD: ReadonlyMap<string, StatementSpec & { collection: string }> = new Map(
+  Object.entries(LIST_SPECS),
+);
 export const ELEMENT_SPECS: ReadonlyMap<string, StatementSpec> = elementSpecs;
 export const FUNCTION_SPECS: ReadonlyMap<string, StatementSpec> = functionSpecs;
 

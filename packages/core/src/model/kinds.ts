@@ -121,8 +121,19 @@ export const SUPPORT_LINK_KINDS: Partial<Record<LinkField, readonly ElementKind[
  * connections, relief devices, people) and the supports themselves do not.
  */
 export const ACTIVE_KINDS: ReadonlySet<ElementKind> = new Set<ElementKind>([
-  'transmitter', 'switch', 'detector', 'io-card', 'controller', 'logic-solver', 'console',
-  'solenoid', 'positioner', 'actuator', 'motor-starter', 'control-valve', 'shutdown-valve',
+  'transmitter',
+  'switch',
+  'detector',
+  'io-card',
+  'controller',
+  'logic-solver',
+  'console',
+  'solenoid',
+  'positioner',
+  'actuator',
+  'motor-starter',
+  'control-valve',
+  'shutdown-valve',
 ]);
 
 /** The links that carry a supply to an element. */

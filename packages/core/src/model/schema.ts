@@ -47,7 +47,8 @@ export const Site = z
     revision: Text.optional().meta({ description: 'Revision of the evidence list, such as A or 2' }),
     status: Text.optional().meta({ description: 'Issue status, such as "for review" or "approved for construction"' }),
     basedOn: z.array(Text).min(1).optional().meta({
-      description: 'The source documents and their revisions the model was built from, such as "P&ID 100-PID-001 rev C"',
+      description:
+        'The source documents and their revisions the model was built from, such as "P&ID 100-PID-001 rev C"',
     }),
     preparedBy: Text.optional(),
     checkedBy: Text.optional(),
@@ -87,7 +88,8 @@ export const Policy = z
     minResponseMinutes: z.number().optional().meta({ description: 'Least time available for operator response' }),
     presenceLimit: Probability.optional().meta({ description: 'Highest presence probability creditable' }),
     conditionCreditLimit: z.number().optional().meta({
-      description: 'Most combined credit (a factor, 100 = two orders of magnitude) taken for enablers and modifiers together',
+      description:
+        'Most combined credit (a factor, 100 = two orders of magnitude) taken for enablers and modifiers together',
     }),
     basis: Text.optional(),
     ...commentFields,
@@ -112,7 +114,16 @@ const linkFields = {
 };
 const identityFields = { make: Text.optional(), model: Text.optional(), technology: Text.optional() };
 
-export const VARIABLES = ['level', 'pressure', 'flow', 'temperature', 'analysis', 'position', 'speed', 'other'] as const;
+export const VARIABLES = [
+  'level',
+  'pressure',
+  'flow',
+  'temperature',
+  'analysis',
+  'position',
+  'speed',
+  'other',
+] as const;
 export const SYSTEMS = ['bpcs', 'sis', 'machine', 'relay'] as const;
 export const FAIL_POSITIONS = ['closed', 'open', 'in-place', 'off', 'on'] as const;
 /** How an active element that declares no supply link gets its energy (see rules/supply-route.ts). */
@@ -151,7 +162,11 @@ export const Element = z
       ...identityFields,
       ...supplyField,
     }),
-    elementOf(ELEMENT_GROUPS.actuation, { failsTo: z.enum(FAIL_POSITIONS).optional(), ...identityFields, ...supplyField }),
+    elementOf(ELEMENT_GROUPS.actuation, {
+      failsTo: z.enum(FAIL_POSITIONS).optional(),
+      ...identityFields,
+      ...supplyField,
+    }),
     elementOf(ELEMENT_GROUPS.support, identityFields),
     elementOf(ELEMENT_GROUPS.mechanical, identityFields),
     elementOf(ELEMENT_GROUPS.people, supplyField),
@@ -169,12 +184,23 @@ const instrumentedFields = {
   solver: Tag,
   finals: TagList,
   finalVoting: Voting.optional(),
-  trip: z.enum(TRIP_ACTIONS).optional().meta({ description: 'What the final elements must do to reach the safe state' }),
+  trip: z
+    .enum(TRIP_ACTIONS)
+    .optional()
+    .meta({ description: 'What the final elements must do to reach the safe state' }),
   tripMode: z.enum(TRIP_MODES).optional(),
 };
 
 export const ControlLoop = z
-  .strictObject({ kind: z.literal('loop'), ...functionCommon, sensors: TagList, solver: Tag, finals: TagList, ...claimedPfd, ...commentFields })
+  .strictObject({
+    kind: z.literal('loop'),
+    ...functionCommon,
+    sensors: TagList,
+    solver: Tag,
+    finals: TagList,
+    ...claimedPfd,
+    ...commentFields,
+  })
   .meta({ id: 'ControlLoop', description: 'A BPCS control loop' });
 
 export const Sif = z
@@ -184,7 +210,10 @@ export const Sif = z
     ...instrumentedFields,
     sil: z.number().optional().meta({ description: 'SIL claimed, 1 to 4' }),
     ...claimedPfd,
-    pfh: z.number().optional().meta({ description: 'Dangerous failure rate, per hour (PFH), used in high-demand mode' }),
+    pfh: z
+      .number()
+      .optional()
+      .meta({ description: 'Dangerous failure rate, per hour (PFH), used in high-demand mode' }),
     pfhBasis: Text.optional(),
     ...commentFields,
   })
@@ -192,7 +221,10 @@ export const Sif = z
 
 export const InstrumentedTrip = z
   .strictObject({ kind: z.literal('trip'), ...functionCommon, ...instrumentedFields, ...claimedPfd, ...commentFields })
-  .meta({ id: 'InstrumentedTrip', description: 'Another instrumented safeguard: a BPCS interlock, a machine panel trip' });
+  .meta({
+    id: 'InstrumentedTrip',
+    description: 'Another instrumented safeguard: a BPCS interlock, a machine panel trip',
+  });
 
 export const AlarmResponse = z
   .strictObject({
@@ -205,7 +237,9 @@ export const AlarmResponse = z
     finals: TagList.optional(),
     minutes: z.number().meta({ description: 'Time available for the response, minutes' }),
     ...claimedPfd,
-    hraBasis: Text.optional().meta({ description: 'Documented human-reliability analysis that supports a PFD below 0.1' }),
+    hraBasis: Text.optional().meta({
+      description: 'Documented human-reliability analysis that supports a PFD below 0.1',
+    }),
     ...commentFields,
   })
   .meta({ id: 'AlarmResponse', description: 'An alarm with operator response' });
@@ -245,7 +279,10 @@ export const TYPICAL_CAUSES = [
 export const CAUSE_DIRECTIONS = ['open', 'closed', 'on', 'off', 'high', 'low'] as const;
 
 /** Rows given per 100 m of pipe: the cause must say how many metres (pipe-metres), and the figure scales with it. */
-export const PER_100_M_ROWS: ReadonlySet<(typeof TYPICAL_CAUSES)[number]> = new Set(['piping-leak', 'piping-breach'] as const);
+export const PER_100_M_ROWS: ReadonlySet<(typeof TYPICAL_CAUSES)[number]> = new Set([
+  'piping-leak',
+  'piping-breach',
+] as const);
 
 export const Cause = z
   .strictObject({
@@ -259,7 +296,10 @@ export const Cause = z
     }),
     frequency: PerYear.optional(),
     typical: z.enum(TYPICAL_CAUSES).optional(),
-    pipeMetres: z.number().optional().meta({ description: 'Length of pipe, metres: scales the per-100 m piping rows of typical=' }),
+    pipeMetres: z
+      .number()
+      .optional()
+      .meta({ description: 'Length of pipe, metres: scales the per-100 m piping rows of typical=' }),
     basis: Text.optional(),
     ...commentFields,
   })
@@ -286,7 +326,10 @@ export const LayerClaim = z
     function: Tag,
     pfd: Probability.optional(),
     basis: Text.optional(),
-    acts: z.enum(ACTS).optional().meta({ description: 'Whether the layer acts before or after the SIF; absent: the default for its kind' }),
+    acts: z
+      .enum(ACTS)
+      .optional()
+      .meta({ description: 'Whether the layer acts before or after the SIF; absent: the default for its kind' }),
     ...commentFields,
   })
   .meta({ id: 'LayerClaim' });
@@ -296,12 +339,17 @@ export const Scenario = z
     id: Tag,
     title: Text.optional(),
     category: Tag,
-    study: Text.optional().meta({ description: 'The hazard study the scenario comes from: its document number and revision' }),
+    study: Text.optional().meta({
+      description: 'The hazard study the scenario comes from: its document number and revision',
+    }),
     studyNode: Text.optional().meta({ description: 'The node of the hazard study' }),
     studyDeviation: Text.optional().meta({ description: 'The deviation of the hazard study, such as "high level"' }),
-    studyRecommendations: TagList.optional().meta({ description: 'Recommendation numbers of the hazard study this scenario answers' }),
+    studyRecommendations: TagList.optional().meta({
+      description: 'Recommendation numbers of the hazard study this scenario answers',
+    }),
     outcome: Tag.optional().meta({
-      description: 'The consequence this scenario leads to, shared by scenarios that lead to the same one: their frequencies sum against one tolerable frequency',
+      description:
+        'The consequence this scenario leads to, shared by scenarios that lead to the same one: their frequencies sum against one tolerable frequency',
     }),
     cause: Cause,
     enablers: nonEmpty(Enabler).optional(),
@@ -324,14 +372,26 @@ export const FailureData = z
     model: Text.optional(),
     lambdaDu: z.number().optional().meta({ description: 'Dangerous undetected failure rate, per hour' }),
     lambdaDd: z.number().optional().meta({ description: 'Dangerous detected failure rate, per hour' }),
-    lambdaD: z.number().optional().meta({ description: 'Dangerous failure rate, per hour: give it with dc instead of lambda-du and lambda-dd' }),
+    lambdaD: z
+      .number()
+      .optional()
+      .meta({ description: 'Dangerous failure rate, per hour: give it with dc instead of lambda-du and lambda-dd' }),
     dc: z.number().optional().meta({ description: 'Diagnostic coverage, 0 to 1 (with lambda-d)' }),
     lambdaSd: z.number().optional().meta({ description: 'Safe detected failure rate, per hour (1oo2D groups)' }),
-    hft: z.number().optional().meta({ description: 'Hardware fault tolerance inside the device (a redundant logic solver); absent: 0' }),
+    hft: z
+      .number()
+      .optional()
+      .meta({ description: 'Hardware fault tolerance inside the device (a redundant logic solver); absent: 0' }),
     basis: Text.optional().meta({ description: 'Where the failure rates come from' }),
     proofTestHours: z.number().optional().meta({ description: 'Proof-test interval T1, hours' }),
-    proofTestCoverage: z.number().optional().meta({ description: 'Share of dangerous undetected failures a proof test reveals, 0 to 1; absent: 1' }),
-    missionHours: z.number().optional().meta({ description: 'Mission time, hours: how long failures a proof test misses stay hidden' }),
+    proofTestCoverage: z
+      .number()
+      .optional()
+      .meta({ description: 'Share of dangerous undetected failures a proof test reveals, 0 to 1; absent: 1' }),
+    missionHours: z
+      .number()
+      .optional()
+      .meta({ description: 'Mission time, hours: how long failures a proof test misses stay hidden' }),
     mttrHours: z.number().optional().meta({ description: 'Mean time to restoration (and mean repair time), hours' }),
     testBasis: Text.optional().meta({ description: 'Where the proof-test, coverage and repair figures come from' }),
     ...commentFields,
@@ -342,9 +402,15 @@ export const SUBSYSTEMS = ['sensors', 'solver', 'finals'] as const;
 export const CommonCause = z
   .strictObject({
     function: Tag,
-    group: z.enum(SUBSYSTEMS).meta({ description: 'The voted group: the SIF\'s sensors or final elements (solver is refused: a logic solver is one element, with its hft= on its failure data)' }),
+    group: z.enum(SUBSYSTEMS).meta({
+      description:
+        "The voted group: the SIF's sensors or final elements (solver is refused: a logic solver is one element, with its hft= on its failure data)",
+    }),
     beta: z.number().meta({ description: 'Common-cause factor for dangerous undetected failures, 0 to 1' }),
-    betaD: z.number().optional().meta({ description: 'Common-cause factor for dangerous detected failures; absent: beta / 2' }),
+    betaD: z
+      .number()
+      .optional()
+      .meta({ description: 'Common-cause factor for dangerous detected failures; absent: beta / 2' }),
     basis: Text.optional(),
     ...commentFields,
   })

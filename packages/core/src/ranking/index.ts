@@ -54,25 +54,34 @@ interface ScenarioFigure {
 export function rankCommonCauses(model: Model, analysis: Analysis): RankedCommonCause[] {
   const independence = analysis.findings.filter((f) => RULE_IDS.has(f.rule) && f.scenario !== undefined);
   const byScenario = new Map<string, Finding[]>();
-  for (const f of independence) (byScenario.get(f.scenario!) ?? byScenario.set(f.scenario!, []).get(f.scenario!)!).push(f);
+  for (const f of independence)
+    (byScenario.get(f.scenario!) ?? byScenario.set(f.scenario!, []).get(f.scenario!)!).push(f);
   const scenarios = new Map(model.scenarios.map((s) => [s.id, s]));
   const bpcs = bpcsFactsOf(model);
   const functions = new Map(model.functions.map((f) => [f.tag, f]));
   const figure = (scenario: Scenario, findings: readonly Finding[]): ScenarioFigure => {
     const { assessment } = assessScenario({ model, scenario, findings, bpcs, functions, alternatives: 0 });
     const mitigated = assessment.mitigatedAfter;
-    return { mitigated, excess: Math.max(0, mitigated - assessment.tolerable), meets: meetsCriterion(mitigated, assessment.tolerable, assessment.edge) };
+    return {
+      mitigated,
+      excess: Math.max(0, mitigated - assessment.tolerable),
+      meets: meetsCriterion(mitigated, assessment.tolerable, assessment.edge),
+    };
   };
   const baseline = new Map<string, ScenarioFigure>();
-  const baselineOf = (id: string) => baseline.get(id) ?? baseline.set(id, figure(scenarios.get(id)!, byScenario.get(id) ?? [])).get(id)!;
+  const baselineOf = (id: string) =>
+    baseline.get(id) ?? baseline.set(id, figure(scenarios.get(id)!, byScenario.get(id) ?? [])).get(id)!;
 
   const about = new Map<string, Finding[]>();
-  for (const f of independence) if (f.element !== undefined) (about.get(f.element) ?? about.set(f.element, []).get(f.element)!).push(f);
+  for (const f of independence)
+    if (f.element !== undefined) (about.get(f.element) ?? about.set(f.element, []).get(f.element)!).push(f);
   const elements = new Map(model.elements.map((e) => [e.tag, e]));
   const rows: Omit<RankedCommonCause, 'rank'>[] = [];
   for (const [tag, findings] of about) {
     const open = findings.filter(isOpen);
-    const layers = new Set(open.flatMap((f) => f.parties.filter((p) => p.role === 'layer').map((p) => `${f.scenario} ${p.tag}`)));
+    const layers = new Set(
+      open.flatMap((f) => f.parties.filter((p) => p.role === 'layer').map((p) => `${f.scenario} ${p.tag}`)),
+    );
     const touched = [...new Set(open.map((f) => f.scenario!))].sort(compareText);
     let frequencyCost = 0;
     let gapReduction = 0;
@@ -80,12 +89,24 @@ export function rankCommonCauses(model: Model, analysis: Analysis): RankedCommon
     const wouldMeet: string[] = [];
     for (const id of touched) {
       const before = baselineOf(id);
-      const after = figure(scenarios.get(id)!, (byScenario.get(id) ?? []).filter((f) => f.element !== tag));
+      const after = figure(
+        scenarios.get(id)!,
+        (byScenario.get(id) ?? []).filter((f) => f.element !== tag),
+      );
       frequencyCost += drop(before.mitigated, after.mitigated);
       gapReduction += drop(before.excess, after.excess);
       if (!before.meets && after.meets) wouldMeet.push(id);
-      const mine = new Set(open.filter((f) => f.scenario === id).flatMap((f) => f.parties.filter((p) => p.role === 'layer').map((p) => p.tag)));
-      const resolved = figure(scenarios.get(id)!, (byScenario.get(id) ?? []).filter((f) => !(isOpen(f) && f.parties.some((p) => p.role === 'layer' && mine.has(p.tag)))));
+      const mine = new Set(
+        open
+          .filter((f) => f.scenario === id)
+          .flatMap((f) => f.parties.filter((p) => p.role === 'layer').map((p) => p.tag)),
+      );
+      const resolved = figure(
+        scenarios.get(id)!,
+        (byScenario.get(id) ?? []).filter(
+          (f) => !(isOpen(f) && f.parties.some((p) => p.role === 'layer' && mine.has(p.tag))),
+        ),
+      );
       frequencyAtStake += drop(before.mitigated, resolved.mitigated);
     }
     const element = elements.get(tag);
@@ -103,6 +124,13 @@ export function rankCommonCauses(model: Model, analysis: Analysis): RankedCommon
       wouldMeet,
     });
   }
-  rows.sort((a, b) => b.frequencyCost - a.frequencyCost || b.frequencyAtStake - a.frequencyAtStake || b.layers - a.layers || b.scenarios.length - a.scenarios.length || compareText(a.element, b.element));
+  rows.sort(
+    (a, b) =>
+      b.frequencyCost - a.frequencyCost ||
+      b.frequencyAtStake - a.frequencyAtStake ||
+      b.layers - a.layers ||
+      b.scenarios.length - a.scenarios.length ||
+      compareText(a.element, b.element),
+  );
   return rows.map((row, i) => ({ rank: i + 1, ...row }));
 }

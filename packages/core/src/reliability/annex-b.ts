@@ -46,8 +46,8 @@ export function architectureName(a: Architecture): string {
 const EQUATIONS: Record<string, Omit<Equation, 'architecture'>> = {
   '1oo1': { pfd: 'lambdaD x tCE', pfh: 'lambdaDU', clause: 'B.3.2.2.1, B.3.3.2.1' },
   '1oo2': {
-    pfd: "2((1-betaD)lambdaDD + (1-beta)lambdaDU)^2 tCE tGE + betaD lambdaDD MTTR + beta lambdaDU (T1/2 + MRT)",
-    pfh: "2((1-betaD)lambdaDD + (1-beta)lambdaDU)(1-beta)lambdaDU tCE + beta lambdaDU",
+    pfd: '2((1-betaD)lambdaDD + (1-beta)lambdaDU)^2 tCE tGE + betaD lambdaDD MTTR + beta lambdaDU (T1/2 + MRT)',
+    pfh: '2((1-betaD)lambdaDD + (1-beta)lambdaDU)(1-beta)lambdaDU tCE + beta lambdaDU',
     clause: 'B.3.2.2.2, B.3.3.2.2',
   },
   '2oo2': { pfd: '2 lambdaD tCE', pfh: '2 lambdaDU', clause: 'B.3.2.2.3, B.3.3.2.3' },
@@ -77,7 +77,12 @@ export function equationFor(a: Architecture): Equation | undefined {
   const known = EQUATIONS[name];
   if (known) return { architecture: name, ...known };
   if (!a.diagnostic && a.m === a.n) {
-    return { architecture: name, pfd: `${a.n} lambdaD tCE`, pfh: `${a.n} lambdaDU`, clause: 'B.3.2.2.3 extended to N channels in series' };
+    return {
+      architecture: name,
+      pfd: `${a.n} lambdaD tCE`,
+      pfh: `${a.n} lambdaDU`,
+      clause: 'B.3.2.2.3 extended to N channels in series',
+    };
   }
   return undefined;
 }
@@ -134,7 +139,11 @@ export function groupPfd(a: Architecture, f: GroupFigures): number | undefined {
     case '1oo2D': {
       const { tce, tge } = primed(f);
       const pair = (1 - f.beta) * f.lambdaDu + (1 - f.betaD) * f.lambdaDd + f.lambdaSd;
-      return 2 * (1 - f.beta) * f.lambdaDu * pair * tce * tge + 2 * (1 - ONE_OO_TWO_D_K) * f.lambdaDd * tce + f.beta * f.lambdaDu * (f.t1 / 2 + f.mrt);
+      return (
+        2 * (1 - f.beta) * f.lambdaDu * pair * tce * tge +
+        2 * (1 - ONE_OO_TWO_D_K) * f.lambdaDd * tce +
+        f.beta * f.lambdaDu * (f.t1 / 2 + f.mrt)
+      );
     }
     default:
       return !a.diagnostic && a.m === a.n ? a.n * lambdaD(f) * tCE(f) : undefined;

@@ -6,7 +6,8 @@ import type { Tracer } from '../trace/trace.ts';
 import type { FailureDataIndex } from './figures.ts';
 import { SubsystemCalculator, type SubsystemResult } from './subsystems.ts';
 
-export type VerifyFindingCode = 'no-basis' | 'no-test-basis' | 'common-cause-default' | 'common-cause-no-basis' | 'incomplete' | 'hft-short';
+export type VerifyFindingCode =
+  'no-basis' | 'no-test-basis' | 'common-cause-default' | 'common-cause-no-basis' | 'incomplete' | 'hft-short';
 
 /** A problem with the verification's inputs or result. Stable code, subject, words. */
 export interface VerifyFinding {
@@ -15,7 +16,11 @@ export interface VerifyFinding {
   message: string;
 }
 
-export const SUBSYSTEM_WORDS: Record<Subsystem, string> = { sensors: 'sensors', solver: 'logic solver', finals: 'final elements' };
+export const SUBSYSTEM_WORDS: Record<Subsystem, string> = {
+  sensors: 'sensors',
+  solver: 'logic solver',
+  finals: 'final elements',
+};
 
 export interface SifCalculation {
   subsystems: SubsystemResult[];
@@ -35,19 +40,45 @@ function basisFindings(results: readonly SubsystemResult[]): VerifyFinding[] {
     for (const input of r.inputs) {
       if (seen.has(input.row)) continue;
       seen.add(input.row);
-      if (input.basis === undefined) out.push({ code: 'no-basis', subject: input.row, message: `failure data ${input.row} (used for ${input.tag}) gives rates with no basis` });
+      if (input.basis === undefined)
+        out.push({
+          code: 'no-basis',
+          subject: input.row,
+          message: `failure data ${input.row} (used for ${input.tag}) gives rates with no basis`,
+        });
       if (input.testBasis === undefined && (input.t1 !== undefined || input.missionHours !== undefined)) {
-        out.push({ code: 'no-test-basis', subject: input.row, message: `failure data ${input.row} gives a proof-test interval with no test-basis` });
+        out.push({
+          code: 'no-test-basis',
+          subject: input.row,
+          message: `failure data ${input.row} gives a proof-test interval with no test-basis`,
+        });
       }
     }
     if (r.beta?.fromDefault) {
-      out.push({ code: 'common-cause-default', subject: r.subsystem, message: `the ${SUBSYSTEM_WORDS[r.subsystem]} group has no common-cause factors: beta ${r.beta.beta} taken by default (top of the IEC 61508-6 Annex D range, from memory)` });
+      out.push({
+        code: 'common-cause-default',
+        subject: r.subsystem,
+        message: `the ${SUBSYSTEM_WORDS[r.subsystem]} group has no common-cause factors: beta ${r.beta.beta} taken by default (top of the IEC 61508-6 Annex D range, from memory)`,
+      });
     } else if (r.beta && r.beta.basis === undefined) {
-      out.push({ code: 'common-cause-no-basis', subject: r.subsystem, message: `the common-cause factors of the ${SUBSYSTEM_WORDS[r.subsystem]} group give no basis` });
+      out.push({
+        code: 'common-cause-no-basis',
+        subject: r.subsystem,
+        message: `the common-cause factors of the ${SUBSYSTEM_WORDS[r.subsystem]} group give no basis`,
+      });
     }
-    for (const m of r.missing) out.push({ code: 'incomplete', subject: m.tag, message: `${m.tag} ${m.why}: the ${SUBSYSTEM_WORDS[r.subsystem]} subsystem is not computed` });
+    for (const m of r.missing)
+      out.push({
+        code: 'incomplete',
+        subject: m.tag,
+        message: `${m.tag} ${m.why}: the ${SUBSYSTEM_WORDS[r.subsystem]} subsystem is not computed`,
+      });
     for (const tag of r.sharedWithoutData) {
-      out.push({ code: 'incomplete', subject: tag, message: `${tag} is shared by the ${SUBSYSTEM_WORDS[r.subsystem]} channels and has no failure data: its failure defeats the group, and the figure leaves it out` });
+      out.push({
+        code: 'incomplete',
+        subject: tag,
+        message: `${tag} is shared by the ${SUBSYSTEM_WORDS[r.subsystem]} channels and has no failure data: its failure defeats the group, and the figure leaves it out`,
+      });
     }
   }
   return out;
@@ -58,7 +89,12 @@ export function computeSif(tracer: Tracer, data: FailureDataIndex, sif: Sif): Si
   const subsystems = [calc.votedGroup(sif, 'sensors'), calc.solver(sif), calc.votedGroup(sif, 'finals')];
   const findings = basisFindings(subsystems);
   if (!subsystems.every((s) => s.pfd !== undefined)) return { subsystems, findings };
-  return { subsystems, findings, pfd: subsystems.reduce((s, r) => s + r.pfd!, 0), pfh: subsystems.reduce((s, r) => s + r.pfh!, 0) };
+  return {
+    subsystems,
+    findings,
+    pfd: subsystems.reduce((s, r) => s + r.pfd!, 0),
+    pfh: subsystems.reduce((s, r) => s + r.pfh!, 0),
+  };
 }
 
 /**
@@ -68,5 +104,10 @@ export function computeSif(tracer: Tracer, data: FailureDataIndex, sif: Sif): Si
  */
 export function verificationComplete(calc: SifCalculation): calc is SifCalculation & { pfd: number; pfh: number } {
   if (calc.pfd === undefined || calc.pfh === undefined || calc.findings.length > 0) return false;
-  return calc.subsystems.every((s) => s.withoutData.length === 0 && s.notes.every((n) => !n.includes('not computed')) && s.inputs.every((i) => i.defaults.length === 0));
+  return calc.subsystems.every(
+    (s) =>
+      s.withoutData.length === 0 &&
+      s.notes.every((n) => !n.includes('not computed')) &&
+      s.inputs.every((i) => i.defaults.length === 0),
+  );
 }

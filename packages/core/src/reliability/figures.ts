@@ -36,7 +36,8 @@ export class FailureDataIndex {
   constructor(private readonly model: Model) {
     for (const row of model.failureData ?? []) {
       if (row.element !== undefined) this.byElement.set(row.element, row);
-      else if (row.make !== undefined && row.model !== undefined) this.byMakeModel.set(`${row.make}\u0000${row.model}`, row);
+      else if (row.make !== undefined && row.model !== undefined)
+        this.byMakeModel.set(`${row.make}\u0000${row.model}`, row);
     }
     this.elements = new Map(model.elements.map((e) => [e.tag, e]));
   }
@@ -45,7 +46,8 @@ export class FailureDataIndex {
     const own = this.byElement.get(tag);
     if (own) return own;
     const e = this.elements.get(tag);
-    if (e === undefined || !('make' in e) || e.make === undefined || !('model' in e) || e.model === undefined) return undefined;
+    if (e === undefined || !('make' in e) || e.make === undefined || !('model' in e) || e.model === undefined)
+      return undefined;
     return this.byMakeModel.get(`${e.make}\u0000${e.model}`);
   }
 
@@ -105,8 +107,16 @@ export function inSeries(parts: readonly ElementFigures[]): ChannelFigures {
     return total === 0 ? fallback : parts.reduce((s, p) => s + weight(p) * value(p), 0) / total;
   };
   const longest = Math.max(0, ...parts.map((p) => p.t1Effective ?? 0));
-  const t1 = weighted((p) => p.lambdaDu, (p) => p.t1Effective ?? 0, longest);
-  const mttr = weighted((p) => p.lambdaDd + p.lambdaDu, (p) => p.mttr, DEFAULT_MTTR_HOURS);
+  const t1 = weighted(
+    (p) => p.lambdaDu,
+    (p) => p.t1Effective ?? 0,
+    longest,
+  );
+  const mttr = weighted(
+    (p) => p.lambdaDd + p.lambdaDu,
+    (p) => p.mttr,
+    DEFAULT_MTTR_HOURS,
+  );
   return { lambdaDu, lambdaDd, lambdaSd, t1, mttr };
 }
 

@@ -5,7 +5,14 @@ import type { ElementGroup } from '../model/kinds.ts';
 import type { FunctionKindOf, Subsystem } from '../model/schema.ts';
 import type { Tracer } from '../trace/trace.ts';
 import { ANNEX_B, equationFor, groupPfd, groupPfh, type Architecture, type Equation } from './annex-b.ts';
-import { FailureDataIndex, groupFigures, inSeries, sameChannels, worstChannel, type ElementFigures } from './figures.ts';
+import {
+  FailureDataIndex,
+  groupFigures,
+  inSeries,
+  sameChannels,
+  worstChannel,
+  type ElementFigures,
+} from './figures.ts';
 
 /** Which element groups each subsystem counts. Signal paths (I/O cards) belong to the logic solver (issue 16, item 6). */
 const MEMBERS: Record<Subsystem, ReadonlySet<ElementGroup>> = {
@@ -134,14 +141,17 @@ export class SubsystemCalculator {
     }
     const equation = equationFor(architecture);
     if (equation === undefined) {
-      result.notes.push(`${ANNEX_B} gives no simplified equation for ${voting}: not computed (use a fault tree or Markov model)`);
+      result.notes.push(
+        `${ANNEX_B} gives no simplified equation for ${voting}: not computed (use a fault tree or Markov model)`,
+      );
       return result;
     }
     result.equation = equation;
     if (result.missing.length) return result;
     if (channels.length > 1 && architecture.m < architecture.n) result.beta = this.betaOf(sif.tag, subsystem);
     const beta = result.beta ?? { beta: 0, betaD: 0 };
-    if (!sameChannels(channelFigures)) result.notes.push('channels differ: computed with the largest of each figure among them (conservative)');
+    if (!sameChannels(channelFigures))
+      result.notes.push('channels differ: computed with the largest of each figure among them (conservative)');
     const group = groupFigures(worstChannel(channelFigures), beta.beta, beta.betaD);
     result.groupPfd = groupPfd(architecture, group)!;
     result.groupPfh = groupPfh(architecture, group)!;
@@ -153,7 +163,12 @@ export class SubsystemCalculator {
   private betaOf(fn: string, subsystem: Subsystem): NonNullable<SubsystemResult['beta']> {
     const row = this.data.commonCauseOf(fn, subsystem);
     if (row === undefined) return { beta: DEFAULT_BETA, betaD: DEFAULT_BETA * BETA_D_SHARE, fromDefault: true };
-    return { beta: row.beta, betaD: row.betaD ?? row.beta * BETA_D_SHARE, ...(row.basis !== undefined ? { basis: row.basis } : {}), fromDefault: false };
+    return {
+      beta: row.beta,
+      betaD: row.betaD ?? row.beta * BETA_D_SHARE,
+      ...(row.basis !== undefined ? { basis: row.basis } : {}),
+      fromDefault: false,
+    };
   }
 
   /**
@@ -194,7 +209,8 @@ export class SubsystemCalculator {
       }
       counted.push(pfdOf(figures));
       const users = trace.channels.filter((c) => c.elements.includes(tag)).map((c) => c.head);
-      if (tag !== sif.solver && users.length > 1) result.notes.push(`${tag} serves ${users.join(', ')}: counted once here, in series with the logic solver`);
+      if (tag !== sif.solver && users.length > 1)
+        result.notes.push(`${tag} serves ${users.join(', ')}: counted once here, in series with the logic solver`);
     }
     result.channels = counted.map((c) => ({ head: c.tag, elements: [c.tag] }));
     if (result.missing.length) return result;

@@ -32,8 +32,10 @@ export const MAX_WHAT_IF_ACTIONS = 200;
 function todoOf(group: readonly ReportFinding[], layers: readonly string[]): string {
   const f = group[0]!;
   const who = layers.length ? layers.join(', ') : 'the scenario';
-  if (f.rule === 'same-make-model') return `Use a diverse make or model in ${who}, or record a justification for identical devices: ${f.title}`;
-  if (f.element === undefined) return `${f.severity === 'voids-credit' ? 'Correct the model or the design' : 'Correct the model, or record a justification'}: ${f.message.replace(/`/g, '')}`;
+  if (f.rule === 'same-make-model')
+    return `Use a diverse make or model in ${who}, or record a justification for identical devices: ${f.title}`;
+  if (f.element === undefined)
+    return `${f.severity === 'voids-credit' ? 'Correct the model or the design' : 'Correct the model, or record a justification'}: ${f.message.replace(/`/g, '')}`;
   return f.severity === 'voids-credit'
     ? `Change the design so that ${who} no longer relies on ${f.element} (${f.title}), or take no credit`
     : `Separate ${who} from ${f.element} (${f.title}), or record a justification that accepts it`;
@@ -48,8 +50,14 @@ export function groupActions(doc: ReportDocument): Action[] {
     (groups.get(key) ?? groups.set(key, []).get(key)!).push(f);
   }
   const actions = [...groups.values()].map((group) => {
-    const layers = [...new Set(group.flatMap((f) => f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined).map((p) => p.tag!)))].sort(compareTags);
-    const severity = group.some((f) => f.severity === 'voids-credit') ? ('voids-credit' as const) : ('needs-justification' as const);
+    const layers = [
+      ...new Set(
+        group.flatMap((f) => f.parties.filter((p) => p.role === 'layer' && p.tag !== undefined).map((p) => p.tag!)),
+      ),
+    ].sort(compareTags);
+    const severity = group.some((f) => f.severity === 'voids-credit')
+      ? ('voids-credit' as const)
+      : ('needs-justification' as const);
     return {
       id: '',
       severity,
@@ -61,7 +69,12 @@ export function groupActions(doc: ReportDocument): Action[] {
       layers,
     };
   });
-  actions.sort((a, b) => SEVERITY_RANK[a.severity] - SEVERITY_RANK[b.severity] || compareTags(a.scenarios[0] ?? '', b.scenarios[0] ?? '') || compareTags(a.findings[0]!, b.findings[0]!));
+  actions.sort(
+    (a, b) =>
+      SEVERITY_RANK[a.severity] - SEVERITY_RANK[b.severity] ||
+      compareTags(a.scenarios[0] ?? '', b.scenarios[0] ?? '') ||
+      compareTags(a.findings[0]!, b.findings[0]!),
+  );
   return actions.map((a, i) => ({ ...a, id: `A${i + 1}` }));
 }
 
@@ -79,7 +92,12 @@ export function withWorth(actions: Action[], model: Model, doc: ReportDocument):
     const id = [...keys].sort().join(' ');
     let after = cache.get(id);
     if (!after) {
-      const closing = keys.map((finding) => ({ finding, by: 'what-if', date: '2000-01-01', reason: 'what-if: the action is closed' }));
+      const closing = keys.map((finding) => ({
+        finding,
+        by: 'what-if',
+        date: '2000-01-01',
+        reason: 'what-if: the action is closed',
+      }));
       const closed = analyze({ ...model, justifications: [...(model.justifications ?? []), ...closing] });
       cache.set(id, (after = new Map(closed.assessments.map((s) => [s.scenario, s.mitigatedAfter]))));
     }
@@ -87,11 +105,21 @@ export function withWorth(actions: Action[], model: Model, doc: ReportDocument):
   };
   return actions.map((a) => {
     const closed = afterClosing(a.findings);
-    const onLayers = open.filter((f) => f.scenario !== undefined && a.scenarios.includes(f.scenario) && f.parties.some((p) => p.role === 'layer' && p.tag !== undefined && a.layers.includes(p.tag)));
+    const onLayers = open.filter(
+      (f) =>
+        f.scenario !== undefined &&
+        a.scenarios.includes(f.scenario) &&
+        f.parties.some((p) => p.role === 'layer' && p.tag !== undefined && a.layers.includes(p.tag)),
+    );
     const cleared = afterClosing([...new Set([...a.findings, ...onLayers.map((f) => f.key)])]);
     return {
       ...a,
-      worth: a.scenarios.map((scenario) => ({ scenario, now: now.get(scenario) ?? NaN, closed: closed.get(scenario) ?? NaN, layersCleared: cleared.get(scenario) ?? NaN })),
+      worth: a.scenarios.map((scenario) => ({
+        scenario,
+        now: now.get(scenario) ?? NaN,
+        closed: closed.get(scenario) ?? NaN,
+        layersCleared: cleared.get(scenario) ?? NaN,
+      })),
     };
   });
 }
@@ -115,7 +143,8 @@ export const ACTION_COLUMNS = [
 
 /** RFC 4180 like the other CSV report: one row per action; owner, due date and status left blank to fill. */
 export function renderActionsCsv(actions: readonly Action[]): string {
-  const figures = (a: Action, pick: 'now' | 'closed' | 'layersCleared') => (a.worth ?? []).map((w) => `${w.scenario}=${csvFigure(w[pick])}`).join(LIST_SEPARATOR);
+  const figures = (a: Action, pick: 'now' | 'closed' | 'layersCleared') =>
+    (a.worth ?? []).map((w) => `${w.scenario}=${csvFigure(w[pick])}`).join(LIST_SEPARATOR);
   const records = actions.map((a) => ({
     action: a.id,
     severity: a.severity,
@@ -132,5 +161,10 @@ export function renderActionsCsv(actions: readonly Action[]): string {
     due_date: '',
     status: '',
   }));
-  return stringify(records, { header: true, columns: [...ACTION_COLUMNS], record_delimiter: '\r\n', quoted_match: /^\s|\s$/ });
+  return stringify(records, {
+    header: true,
+    columns: [...ACTION_COLUMNS],
+    record_delimiter: '\r\n',
+    quoted_match: /^\s|\s$/,
+  });
 }

@@ -3,7 +3,11 @@
 const ALIKE_RULES = new Set(['same-make-model']);
 
 /** The devices a like-for-like finding compares, or undefined when the finding is about a shared element. */
-export function alikeDevices(f: { rule: string; paths: readonly (readonly string[])[]; element?: string | undefined }): string[] | undefined {
+export function alikeDevices(f: {
+  rule: string;
+  paths: readonly (readonly string[])[];
+  element?: string | undefined;
+}): string[] | undefined {
   if (!ALIKE_RULES.has(f.rule)) return undefined;
   const devices = [...new Set(f.paths.map((p) => p[p.length - 1]).filter((t): t is string => t !== undefined))];
   return devices.length ? devices.sort() : f.element !== undefined ? [f.element] : [];

@@ -53,5 +53,7 @@ export function codeList(tags: readonly string[], separator = ', '): Rich {
 }
 
 export function plain(text: Rich): string {
-  return text.map((p) => (typeof p === 'string' ? p : 'code' in p ? p.code : 'strong' in p ? p.strong : p.text)).join('');
+  return text
+    .map((p) => (typeof p === 'string' ? p : 'code' in p ? p.code : 'strong' in p ? p.strong : p.text))
+    .join('');
 }

@@ -1,6 +1,13 @@
 // Builds the report document from a model and its analysis: joins traces, findings and assessments per
 // scenario and layer, sorts everything one way, and adds the header (file, hash, rules, policy, cautions).
-import type { Analysis, Finding, FunctionTrace, LayerAssessment, RuleInForce, ScenarioAssessment } from '../vocabulary/types.ts';
+import type {
+  Analysis,
+  Finding,
+  FunctionTrace,
+  LayerAssessment,
+  RuleInForce,
+  ScenarioAssessment,
+} from '../vocabulary/types.ts';
 import type { SpanMap } from '../bulk/to-model.ts';
 import { JUSTIFICATION_RULES } from '../justify/apply.ts';
 import type { Model } from '../model/schema.ts';
@@ -66,7 +73,8 @@ function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
   // RuleInForce carries no rationale: take it from the rule catalogue, so a rule with no finding in this run
   // still shows why it exists; a rule from elsewhere takes it from its first finding.
   const rationaleOf = new Map<string, string>(CATALOGUE.map((r) => [r.id, r.rationale]));
-  for (const f of [...analysis.findings].sort(compareFindings)) if (!rationaleOf.has(f.rule)) rationaleOf.set(f.rule, f.rationale);
+  for (const f of [...analysis.findings].sort(compareFindings))
+    if (!rationaleOf.has(f.rule)) rationaleOf.set(f.rule, f.rationale);
   const rules = new Map<string, RuleInForce & { rationale?: string }>();
   for (const r of analysis.rules) rules.set(r.id, r);
   // Rules raised outside the rule table (justification checks) still belong in the rule set shown.
@@ -74,7 +82,14 @@ function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
     if (!rules.has(r.id) && analysis.findings.some((f) => f.rule === r.id)) rules.set(r.id, r);
   }
   for (const f of analysis.findings) {
-    if (!rules.has(f.rule)) rules.set(f.rule, { id: f.rule, title: f.title, severity: f.severity, defaultSeverity: f.severity, source: f.source });
+    if (!rules.has(f.rule))
+      rules.set(f.rule, {
+        id: f.rule,
+        title: f.title,
+        severity: f.severity,
+        defaultSeverity: f.severity,
+        source: f.source,
+      });
   }
   return [...rules.values()].sort(byTag((r) => r.id)).map((r) =>
     present({
@@ -89,7 +104,11 @@ function rulesInForce(analysis: Analysis): ReportDocument['rules'] {
   );
 }
 
-function causeElements(model: Model, assessment: ScenarioAssessment, traces: Map<string, FunctionTrace>): string[] | null {
+function causeElements(
+  model: Model,
+  assessment: ScenarioAssessment,
+  traces: Map<string, FunctionTrace>,
+): string[] | null {
   // The analysis gives the cause set the rules compared (an element cause, a narrowed cause included).
   const given = assessment.cause.elements;
   if (given !== undefined) return [...given].sort(compareTags);
@@ -108,7 +127,14 @@ function elementTitles(model: Model): Map<string, string | undefined> {
 
 function traceElements(trace: FunctionTrace | undefined, titles: Map<string, string | undefined>) {
   return [...(trace?.elements ?? [])].sort(byTag((e) => e.tag)).map((e) =>
-    present({ tag: e.tag, kind: e.kind, group: e.group, title: titles.get(e.tag), path: [...e.path], links: [...e.links] }),
+    present({
+      tag: e.tag,
+      kind: e.kind,
+      group: e.group,
+      title: titles.get(e.tag),
+      path: [...e.path],
+      links: [...e.links],
+    }),
   );
 }
 
@@ -119,7 +145,9 @@ function layerReport(
   inCause: Set<string>,
   titles: Map<string, string | undefined>,
 ): LayerReport {
-  const aboutLayer = scenarioFindings.filter((f) => f.parties.some((p) => p.role === 'layer' && p.tag === layer.function));
+  const aboutLayer = scenarioFindings.filter((f) =>
+    f.parties.some((p) => p.role === 'layer' && p.tag === layer.function),
+  );
   const decided = new Set(layer.findings);
   return present({
     function: layer.function,
@@ -188,18 +216,34 @@ function scenarioReport(
     modifiers: assessment.modifiers.map((m) => present({ ...m })),
     layers,
     lopa: [
-      { figure: 'claimed' as const, layers: layers.map((l) => l.function), mitigated: assessment.mitigatedClaimed, meets: assessment.meetsClaimed },
-      { figure: 'after-independence' as const, layers: tagsWhere((l) => l.credited), mitigated: assessment.mitigatedAfter, meets: assessment.meetsAfter },
+      {
+        figure: 'claimed' as const,
+        layers: layers.map((l) => l.function),
+        mitigated: assessment.mitigatedClaimed,
+        meets: assessment.meetsClaimed,
+      },
+      {
+        figure: 'after-independence' as const,
+        layers: tagsWhere((l) => l.credited),
+        mitigated: assessment.mitigatedAfter,
+        meets: assessment.meetsAfter,
+      },
       {
         figure: 'if-accepted' as const,
         layers: tagsWhere((l) => l.creditedIfAccepted),
         mitigated: assessment.mitigatedIfAccepted,
-        meets: assessment.meetsIfAccepted ?? meetsCriterion(assessment.mitigatedIfAccepted, assessment.tolerable, assessment.edge),
+        meets:
+          assessment.meetsIfAccepted ??
+          meetsCriterion(assessment.mitigatedIfAccepted, assessment.tolerable, assessment.edge),
       },
     ],
     gap: assessment.gap,
-    sif: assessment.sif ? present({ ...assessment.sif, pfhBand: assessment.sif.pfhBand ? { ...assessment.sif.pfhBand } : undefined }) : undefined,
-    alternatives: assessment.alternatives.map((a) => present({ layers: [...a.layers], pfdProduct: a.pfdProduct, mitigated: a.mitigated })),
+    sif: assessment.sif
+      ? present({ ...assessment.sif, pfhBand: assessment.sif.pfhBand ? { ...assessment.sif.pfhBand } : undefined })
+      : undefined,
+    alternatives: assessment.alternatives.map((a) =>
+      present({ layers: [...a.layers], pfdProduct: a.pfdProduct, mitigated: a.mitigated }),
+    ),
     findings: scenarioFindings.map((f) => f.key),
   });
 }
@@ -301,7 +345,11 @@ export function buildReportDocument(input: ReportInput, options: { siteWide?: bo
     summary: {
       scenarios: scenarios.length,
       scenariosMeetingAfter: scenarios.filter((s) => s.lopa[1]!.meets).length,
-      findings: { 'voids-credit': count('voids-credit'), 'needs-justification': count('needs-justification'), note: count('note') },
+      findings: {
+        'voids-credit': count('voids-credit'),
+        'needs-justification': count('needs-justification'),
+        note: count('note'),
+      },
       accepted: findings.filter((f) => f.accepted).length,
     },
     scenarios,

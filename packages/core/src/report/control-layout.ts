@@ -28,7 +28,9 @@ export function signOff(doc: ReportDocument): Block[] {
     { type: 'heading', level: 2, text: ['Sign-off'] },
     {
       type: 'paragraph',
-      text: ['Each signature needs its date (YYYY-MM-DD): an undated signature does not issue this revision. Sign only after reading the cautions and the assumptions.'],
+      text: [
+        'Each signature needs its date (YYYY-MM-DD): an undated signature does not issue this revision. Sign only after reading the cautions and the assumptions.',
+      ],
     },
     {
       type: 'table',
@@ -52,12 +54,15 @@ const CHECKED_TEXT: Record<NonNullable<ReportDocument['sources']>[number]['check
   yes: 'yes',
   partly: 'partly: the clauses marked [from memory] were not',
   'from-memory': 'no: cited from memory',
-  'no-source': 'not applicable: common practice or owner\'s policy',
+  'no-source': "not applicable: common practice or owner's policy",
 };
 
 /** The references a rule cites, as appendix ids: "R1, R3". */
 export function referencesOf(doc: ReportDocument, rule: string): string {
-  return (doc.sources ?? []).filter((s) => s.rules.includes(rule)).map((s) => s.id).join(', ');
+  return (doc.sources ?? [])
+    .filter((s) => s.rules.includes(rule))
+    .map((s) => s.id)
+    .join(', ');
 }
 
 export function sourcesAppendix(doc: ReportDocument): Block {
@@ -69,13 +74,22 @@ export function sourcesAppendix(doc: ReportDocument): Block {
       { type: 'heading', level: 2, text: ['Appendix C: sources'] },
       {
         type: 'paragraph',
-        text: ['Every work the rules cite, once. A clause the rules do not mark from memory was read against the text when the rule was written; a clause marked [from memory] was not, and should be checked before it is relied on.'],
+        text: [
+          'Every work the rules cite, once. A clause the rules do not mark from memory was read against the text when the rule was written; a clause marked [from memory] was not, and should be checked before it is relied on.',
+        ],
       },
       {
         type: 'table',
         caption: 'Sources cited by the rules in force',
         head: ['Ref', 'Work', 'Edition', 'Clauses cited', 'Checked against the text', 'Cited by'],
-        rows: (doc.sources ?? []).map((s) => [[s.id], [s.work], [s.edition ?? 'not stated'], [s.clauses.join('; ')], [CHECKED_TEXT[s.checked]], codeList(s.rules)]),
+        rows: (doc.sources ?? []).map((s) => [
+          [s.id],
+          [s.work],
+          [s.edition ?? 'not stated'],
+          [s.clauses.join('; ')],
+          [CHECKED_TEXT[s.checked]],
+          codeList(s.rules),
+        ]),
         rowHeaders: true,
       },
     ],
@@ -85,6 +99,8 @@ export function sourcesAppendix(doc: ReportDocument): Block {
 /** The text every printed page carries at its foot: which document, of which model file, at which hash. */
 export function runningFooter(doc: ReportDocument): string {
   const c = doc.control;
-  const issue = [c?.document, c?.revision !== undefined ? `rev ${c.revision}` : undefined, c?.status].filter((x) => x !== undefined).join(' ');
+  const issue = [c?.document, c?.revision !== undefined ? `rev ${c.revision}` : undefined, c?.status]
+    .filter((x) => x !== undefined)
+    .join(' ');
   return `${issue ? `${issue} · ` : ''}${doc.model.file} · SHA-256 ${doc.model.sha256}`;
 }

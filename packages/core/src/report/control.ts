@@ -11,7 +11,10 @@ function present<T extends object>(entries: T): { [K in keyof T]: Exclude<T[K], 
   return Object.fromEntries(Object.entries(entries).filter(([, v]) => v !== undefined)) as never;
 }
 
-export function documentControl(model: Model, given: { document?: string; revision?: string; status?: string } = {}): Control {
+export function documentControl(
+  model: Model,
+  given: { document?: string; revision?: string; status?: string } = {},
+): Control {
   const site = model.site;
   return present({
     document: given.document ?? site.document,
@@ -28,8 +31,14 @@ export function documentControl(model: Model, given: { document?: string; revisi
 function edgeAssumption(model: Model): string {
   const used = new Set(model.scenarios.map((s) => s.category));
   // Sorted, so the text does not follow the order the categories were written in.
-  const below = model.categories.filter((c) => used.has(c.id) && (c.edge ?? 'below') === 'below').map((c) => c.id).sort(compareTags);
-  const atMost = model.categories.filter((c) => used.has(c.id) && c.edge === 'at-most').map((c) => c.id).sort(compareTags);
+  const below = model.categories
+    .filter((c) => used.has(c.id) && (c.edge ?? 'below') === 'below')
+    .map((c) => c.id)
+    .sort(compareTags);
+  const atMost = model.categories
+    .filter((c) => used.has(c.id) && c.edge === 'at-most')
+    .map((c) => c.id)
+    .sort(compareTags);
   const parts = [
     below.length ? `strictly below the tolerable frequency for ${below.join(', ')}` : '',
     atMost.length ? `at most equal to it for ${atMost.join(', ')}` : '',

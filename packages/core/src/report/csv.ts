@@ -119,7 +119,8 @@ function rowsOf(byKey: Findings, s: ScenarioReport, layer: LayerReport): Record<
       element_path: e.path.join(PATH_SEPARATOR),
       element_findings: e.findings.join(LIST_SEPARATOR),
       element_worst_severity: worst,
-      element_findings_accepted: findings.length === 0 ? '' : accepted === findings.length ? 'all' : accepted === 0 ? 'none' : 'some',
+      element_findings_accepted:
+        findings.length === 0 ? '' : accepted === findings.length ? 'all' : accepted === 0 ? 'none' : 'some',
     };
   });
 }
@@ -141,9 +142,16 @@ function findingRow(f: ReportDocument['findings'][number]): Record<CsvColumn, st
 export function renderCsv(doc: ReportDocument): string {
   const byKey: Findings = new Map(doc.findings.map((f) => [f.key, f]));
   const records = doc.scenarios.flatMap((s) => s.layers.flatMap((layer) => rowsOf(byKey, s, layer)));
-  const shown = new Set(records.flatMap((r) => [...r.layer_findings.split(LIST_SEPARATOR), ...r.element_findings.split(LIST_SEPARATOR)]));
+  const shown = new Set(
+    records.flatMap((r) => [...r.layer_findings.split(LIST_SEPARATOR), ...r.element_findings.split(LIST_SEPARATOR)]),
+  );
   records.push(...doc.findings.filter((f) => !shown.has(f.key)).map(findingRow));
   // RFC 4180: CRLF line ends, a header row, fields quoted when they must be (and when a space at either
   // end would otherwise be trimmed by a spreadsheet).
-  return stringify(records, { header: true, columns: [...CSV_COLUMNS], record_delimiter: '\r\n', quoted_match: /^\s|\s$/ });
+  return stringify(records, {
+    header: true,
+    columns: [...CSV_COLUMNS],
+    record_delimiter: '\r\n',
+    quoted_match: /^\s|\s$/,
+  });
 }

@@ -17,7 +17,8 @@ const Sourced = z
   .strictObject({
     value: z.number(),
     origin: z.enum(['model', 'sil-band', 'default']).meta({
-      description: 'model: the user wrote it; sil-band: the conservative edge of the claimed SIL; default: the built-in table',
+      description:
+        'model: the user wrote it; sil-band: the conservative edge of the claimed SIL; default: the built-in table',
     }),
     basis: z.string().optional(),
   })
@@ -84,7 +85,8 @@ const LayerReason = z
     rule: z.string(),
     severity: Severity,
     effect: z.enum(['voids', 'caps', 'unverified', 'conflict', 'note']).meta({
-      description: 'voids: no credit; caps: PFD limited to cap; unverified: incomplete trace; conflict: with the layer in `with`; note: none',
+      description:
+        'voids: no credit; caps: PFD limited to cap; unverified: incomplete trace; conflict: with the layer in `with`; note: none',
     }),
     accepted: z.boolean().optional(),
     element: z.string().optional(),
@@ -108,15 +110,27 @@ const Layer = z
     elements: z.array(LayerElement),
     missing: Tags.meta({ description: 'Parts the layer needs but the model does not give (unverified)' }),
     findings: Tags.meta({ description: 'Keys of the findings that decide the verdict' }),
-    allowedPfdIfAccepted: z.number().optional().meta({ description: 'The PFD allowed in the "if accepted" figure, when it differs' }),
+    allowedPfdIfAccepted: z
+      .number()
+      .optional()
+      .meta({ description: 'The PFD allowed in the "if accepted" figure, when it differs' }),
     solver: z.string().optional().meta({ description: 'The controller or logic solver the layer runs in' }),
     system: z.enum(['bpcs', 'sis', 'machine', 'relay']).optional(),
-    reasons: z.array(LayerReason).optional().meta({ description: 'What each finding that bears on the layer does to its credit' }),
+    reasons: z
+      .array(LayerReason)
+      .optional()
+      .meta({ description: 'What each finding that bears on the layer does to its credit' }),
     acts: z.enum(['before', 'after', 'unknown']).optional().meta({
-      description: "Whether it acts before or after the scenario's SIF; unknown is taken the conservative way in each figure",
+      description:
+        "Whether it acts before or after the scenario's SIF; unknown is taken the conservative way in each figure",
     }),
-    actsStated: z.boolean().optional().meta({ description: 'The layer line states the order (acts=); otherwise the default for its kind' }),
-    claimedPfh: Sourced.optional().meta({ description: "High demand only: the SIF's PFH (per hour) as claimed or from its SIL band" }),
+    actsStated: z
+      .boolean()
+      .optional()
+      .meta({ description: 'The layer line states the order (acts=); otherwise the default for its kind' }),
+    claimedPfh: Sourced.optional().meta({
+      description: "High demand only: the SIF's PFH (per hour) as claimed or from its SIL band",
+    }),
     allowedPfh: z.number().optional().meta({ description: 'High demand only: the PFH (per hour) the rules allow' }),
   })
   .meta({ id: 'LayerReport' });
@@ -142,10 +156,19 @@ const SifRequirement = z
     note: z.string(),
     requiredPfh: z.number().optional().meta({ description: 'High demand only: the PFH (per hour) the SIF must reach' }),
     lowDemandSil: z.number().optional(),
-    noReductionNeeded: z.boolean().optional().meta({ description: 'The other credited layers already meet the criterion' }),
-    otherReading: z.string().optional().meta({ description: 'At an exact decade edge, the SIL under the other edge convention' }),
+    noReductionNeeded: z
+      .boolean()
+      .optional()
+      .meta({ description: 'The other credited layers already meet the criterion' }),
+    otherReading: z
+      .string()
+      .optional()
+      .meta({ description: 'At an exact decade edge, the SIL under the other edge convention' }),
     order: z.string().optional().meta({ description: 'Which credited layers act before and after the SIF' }),
-    formula: z.string().optional().meta({ description: 'High demand only: how the hazard frequency is worked out, and its source' }),
+    formula: z
+      .string()
+      .optional()
+      .meta({ description: 'High demand only: how the hazard frequency is worked out, and its source' }),
   })
   .meta({ id: 'SifRequirement' });
 
@@ -173,7 +196,10 @@ const Scenario = z
       element: z.string().optional(),
       external: z.string().optional(),
       frequency: Sourced,
-      frequencyAfter: z.number().optional().meta({ description: 'The frequency used after independence, when a limit rule replaces the claimed one' }),
+      frequencyAfter: z
+        .number()
+        .optional()
+        .meta({ description: 'The frequency used after independence, when a limit rule replaces the claimed one' }),
       frequencyIfAccepted: z.number().optional(),
       elements: Tags.nullable().meta({
         description: "The cause's element set, sorted; null when the analysis did not give it",
@@ -286,7 +312,10 @@ export const ReportDocument = z
         approvedBy: z.string().optional(),
       })
       .optional()
-      .meta({ id: 'DocumentControl', description: 'Document number, revision and status from the model or the command line' }),
+      .meta({
+        id: 'DocumentControl',
+        description: 'Document number, revision and status from the model or the command line',
+      }),
     assumptions: Tags.optional().meta({ description: 'The conventions and policy in force that the figures rest on' }),
     sources: z
       .array(
@@ -304,7 +333,10 @@ export const ReportDocument = z
       )
       .optional()
       .meta({ description: 'Every source the rules cite, once' }),
-    date: z.string().optional().meta({ description: 'Only when given on the command line, so output stays reproducible' }),
+    date: z
+      .string()
+      .optional()
+      .meta({ description: 'Only when given on the command line, so output stays reproducible' }),
     cautions: Tags,
     conventions: Tags,
     policy: z.array(PolicySwitch),

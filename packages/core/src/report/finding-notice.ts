@@ -19,7 +19,8 @@ function primarySpan(finding: Finding, locate: ModelLocator): { span?: Span | un
   if (!span) return {};
   const layer = [...finding.parties].reverse().find((p) => p.role === 'layer' && p.tag !== undefined);
   if (layer?.tag) return { span, role: `the claim of layer ${layer.tag}` };
-  if (finding.scenario && FACTOR_RULES.has(finding.rule)) return { span, role: `the enabler or modifier of ${finding.scenario}` };
+  if (finding.scenario && FACTOR_RULES.has(finding.rule))
+    return { span, role: `the enabler or modifier of ${finding.scenario}` };
   return { span, role: finding.scenario ? `the cause of ${finding.scenario}` : 'the accept statement' };
 }
 
@@ -28,13 +29,19 @@ export function findingNotice(finding: Finding, locate: ModelLocator): Notice {
   const facts: NoticeFact[] = [];
   finding.parties.forEach((party, i) => {
     const path = finding.paths[i];
-    if (path && path.length > 1) facts.push({ label: party.role === 'cause' ? 'cause' : 'layer', text: path.join(' -> ') });
+    if (path && path.length > 1)
+      facts.push({ label: party.role === 'cause' ? 'cause' : 'layer', text: path.join(' -> ') });
   });
   const alike = alikeDevices(finding);
   const elementSpan = finding.element ? locate.element(finding.element) : undefined;
   if (alike) facts.push({ label: 'devices', text: `${alike.join(', ')}: the same make and model; nothing is shared` });
-  else if (finding.element && elementSpan) facts.push({ label: 'element', text: `${finding.element}, defined at ${place(elementSpan)}` });
-  if (finding.accepted) facts.push({ label: 'accepted', text: `by ${finding.accepted.by} on ${finding.accepted.date}: ${finding.accepted.reason}` });
+  else if (finding.element && elementSpan)
+    facts.push({ label: 'element', text: `${finding.element}, defined at ${place(elementSpan)}` });
+  if (finding.accepted)
+    facts.push({
+      label: 'accepted',
+      text: `by ${finding.accepted.by} on ${finding.accepted.date}: ${finding.accepted.reason}`,
+    });
   facts.push({ label: 'why', text: `${finding.rationale} (${finding.source})` });
   return {
     kind: finding.accepted ? `Accepted (${KINDS[finding.severity].toLowerCase()})` : KINDS[finding.severity],

@@ -72,7 +72,11 @@ function block(b: Block, out: string[]): void {
       out.push('<ul>', ...b.items.map((item) => `<li>${rich(item)}</li>`), '</ul>');
       return;
     case 'caution':
-      out.push(`<aside class="caution" aria-labelledby="caution-title">`, `<h2 id="caution-title">${escapeHtml(b.title)}</h2>`, '<ul>');
+      out.push(
+        `<aside class="caution" aria-labelledby="caution-title">`,
+        `<h2 id="caution-title">${escapeHtml(b.title)}</h2>`,
+        '<ul>',
+      );
       out.push(...b.items.map((item) => `<li>${rich(item)}</li>`), '</ul>', '</aside>');
       return;
     case 'table':
@@ -80,8 +84,14 @@ function block(b: Block, out: string[]): void {
         out.push(`<p><em>${escapeHtml(b.caption)}: none.</em></p>`);
         return;
       }
-      out.push(b.sign ? '<table class="sign">' : b.compact ? '<table class="worksheet">' : '<table>', `<caption>${escapeHtml(b.caption)}</caption>`);
-      out.push(`<thead><tr>${b.head.map((h) => `<th scope="col">${escapeHtml(h)}</th>`).join('')}</tr></thead>`, '<tbody>');
+      out.push(
+        b.sign ? '<table class="sign">' : b.compact ? '<table class="worksheet">' : '<table>',
+        `<caption>${escapeHtml(b.caption)}</caption>`,
+      );
+      out.push(
+        `<thead><tr>${b.head.map((h) => `<th scope="col">${escapeHtml(h)}</th>`).join('')}</tr></thead>`,
+        '<tbody>',
+      );
       for (const row of b.rows) out.push(`<tr>${row.map((c, i) => cell(c, b.rowHeaders && i === 0)).join('')}</tr>`);
       out.push('</tbody>', '</table>');
       return;

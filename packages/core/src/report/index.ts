@@ -42,7 +42,9 @@ export function renderReport(input: ReportInput, format: ReportFormat, contents:
   if (contents === 'worksheet') {
     if (format === 'csv') return renderWorksheetCsv(doc);
     const blocks = layoutWorksheet(doc);
-    return format === 'md' ? renderMarkdown(blocks) : renderHtml(blocks, `LOPA worksheet: ${doc.site.name}`, { footer, landscape: true });
+    return format === 'md'
+      ? renderMarkdown(blocks)
+      : renderHtml(blocks, `LOPA worksheet: ${doc.site.name}`, { footer, landscape: true });
   }
   if (contents === 'actions') return renderActionsCsv(withWorth(groupActions(doc), input.model, doc));
   switch (format) {
@@ -68,7 +70,14 @@ export {
   type ReportFinding,
   type ScenarioReport,
 } from './document.ts';
-export { CSV_COLUMNS, CSV_SIGNIFICANT_FIGURES, LIST_SEPARATOR, PATH_SEPARATOR, csvFigure, guardFormula } from './csv.ts';
+export {
+  CSV_COLUMNS,
+  CSV_SIGNIFICANT_FIGURES,
+  LIST_SEPARATOR,
+  PATH_SEPARATOR,
+  csvFigure,
+  guardFormula,
+} from './csv.ts';
 export { SARIF_LEVELS, FINGERPRINT } from './sarif.ts';
 export { escapeHtml } from './html.ts';
 export { escapeMarkdown } from './markdown.ts';
@@ -77,4 +86,10 @@ export { WORKSHEET_COLUMNS, worksheetRows, type WorksheetRow } from './worksheet
 export { ACTION_COLUMNS, groupActions, withWorth, type Action } from './actions.ts';
 export { decidingReasons, decidingText, type Deciding } from './deciding.ts';
 export { sourceList, splitCitations, readCitation, type SourceEntry } from './sources.ts';
-export { renderCutSetsText, renderCommonCausesText, renderCommonCausesCsv, COMMON_CAUSE_CSV_COLUMNS, CUT_SET_METHOD } from './site-wide.ts';
+export {
+  renderCutSetsText,
+  renderCommonCausesText,
+  renderCommonCausesCsv,
+  COMMON_CAUSE_CSV_COLUMNS,
+  CUT_SET_METHOD,
+} from './site-wide.ts';

@@ -66,7 +66,15 @@ function summary(doc: ReportDocument): Block[] {
     {
       type: 'table',
       caption: 'Scenarios at a glance',
-      head: ['Scenario', 'Tolerable', 'As claimed', 'After independence', 'If accepted', 'Meets after independence', 'Required SIL'],
+      head: [
+        'Scenario',
+        'Tolerable',
+        'As claimed',
+        'After independence',
+        'If accepted',
+        'Meets after independence',
+        'Required SIL',
+      ],
       rows: doc.scenarios.map((s) => [
         [code(s.id)],
         [formatFrequency(s.tolerable)],
@@ -104,19 +112,35 @@ function ruleSet(doc: ReportDocument): Block[] {
 }
 
 function findingLines(f: ReportFinding): Rich[] {
-  const lines: Rich[] = [[strong(SEVERITY_LABELS[f.severity]), ' ', code(f.rule), ` (${f.title}): `, ...richFromMessage(f.message)]];
+  const lines: Rich[] = [
+    [strong(SEVERITY_LABELS[f.severity]), ' ', code(f.rule), ` (${f.title}): `, ...richFromMessage(f.message)],
+  ];
   const alike = alikeDevices(f);
   if (alike) lines.push(['Devices of the same make and model (nothing is shared): ', ...codeList(alike)]);
   else if (f.element) lines.push(['Shared element: ', code(f.element)]);
   f.parties.forEach((p, i) => {
     const path = f.paths[i];
     const who = p.role === 'cause' ? 'From the cause' : 'From layer';
-    if (path && path.length > 0) lines.push([`${who}${p.tag && p.role === 'layer' ? ' ' : ''}`, ...(p.role === 'layer' && p.tag ? [code(p.tag)] : []), ': ', ...pathText(path)]);
+    if (path && path.length > 0)
+      lines.push([
+        `${who}${p.tag && p.role === 'layer' ? ' ' : ''}`,
+        ...(p.role === 'layer' && p.tag ? [code(p.tag)] : []),
+        ': ',
+        ...pathText(path),
+      ]);
   });
   lines.push([`Why: ${f.rationale} Sources: ${f.source}.`]);
   const justified = justifiedKeyOf(f);
-  if (justified !== undefined) lines.push(['To resolve: remove or correct the ', code('accept'), ' statement for ', code(justified), '; no justification can accept this finding.']);
-  else if (f.accepted) lines.push([strong('Accepted'), ` by ${f.accepted.by} on ${f.accepted.date}: ${f.accepted.reason}`]);
+  if (justified !== undefined)
+    lines.push([
+      'To resolve: remove or correct the ',
+      code('accept'),
+      ' statement for ',
+      code(justified),
+      '; no justification can accept this finding.',
+    ]);
+  else if (f.accepted)
+    lines.push([strong('Accepted'), ` by ${f.accepted.by} on ${f.accepted.date}: ${f.accepted.reason}`]);
   else if (f.severity === 'note') lines.push(['A note changes no credit and needs no acceptance. Key: ', code(f.key)]);
   else lines.push(['Open: no justification accepts it yet. Key for a justification: ', code(f.key)]);
   return lines;
@@ -128,10 +152,17 @@ type Reason = NonNullable<LayerReport['reasons']>[number];
 
 /** What a finding does to this layer's credit, as the assessment applied it. */
 function effectLine(r: Reason): Rich {
-  const other: Rich = r.with === undefined ? [] : r.with === 'cause' ? [' (shared with the cause)'] : [' (shared with layer ', code(r.with), ')'];
+  const other: Rich =
+    r.with === undefined
+      ? []
+      : r.with === 'cause'
+        ? [' (shared with the cause)']
+        : [' (shared with layer ', code(r.with), ')'];
   const withLayer: Rich = r.with === undefined || r.with === 'cause' ? [] : [' with layer ', code(r.with)];
   const effect: Record<Reason['effect'], Rich> = {
-    voids: [r.severity === 'needs-justification' && !r.accepted ? 'no credit until a justification accepts it' : 'no credit'],
+    voids: [
+      r.severity === 'needs-justification' && !r.accepted ? 'no credit until a justification accepts it' : 'no credit',
+    ],
     caps: [`PFD limited to ${r.cap === undefined ? 'a cap' : formatProbability(r.cap)}`],
     unverified: ['independence unverified, no credit'],
     conflict: ['conflict', ...withLayer, ': the two are not credited together'],
@@ -148,18 +179,30 @@ function effectLine(r: Reason): Rich {
 function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Block[] {
   const out: Block[] = [];
   const intro: Record<LayerReport['verdict'], string> = {
-    independent: 'No element the layer relies on is shared with the cause or another credited layer in a way that voids or withholds credit.',
+    independent:
+      'No element the layer relies on is shared with the cause or another credited layer in a way that voids or withholds credit.',
     voided: 'Credit voided by the findings below.',
     unverified: 'Independence unverified: the model does not give every part the layer needs, so it earns no credit.',
     open: 'Credit withheld until the findings below are accepted by a justification.',
     accepted: 'Credited because the findings below are accepted by justifications in the model.',
-    'not-selected': 'Independent on its own, but a better set of mutually independent layers was credited (see alternatives).',
+    'not-selected':
+      'Independent on its own, but a better set of mutually independent layers was credited (see alternatives).',
   };
-  out.push({ type: 'paragraph', text: [strong(`Verdict: ${VERDICT_LABELS[layer.verdict]}.`), ` ${intro[layer.verdict]}`] });
+  out.push({
+    type: 'paragraph',
+    text: [strong(`Verdict: ${VERDICT_LABELS[layer.verdict]}.`), ` ${intro[layer.verdict]}`],
+  });
   if (layer.missing.length > 0) {
-    out.push({ type: 'paragraph', text: [`Missing from the model: ${layer.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`] });
+    out.push({
+      type: 'paragraph',
+      text: [`Missing from the model: ${layer.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`],
+    });
   }
-  if (layer.solver) out.push({ type: 'paragraph', text: ['Runs in ', code(layer.solver), layer.system ? ` (${SYSTEM_LABELS[layer.system]}).` : '.'] });
+  if (layer.solver)
+    out.push({
+      type: 'paragraph',
+      text: ['Runs in ', code(layer.solver), layer.system ? ` (${SYSTEM_LABELS[layer.system]}).` : '.'],
+    });
   const reasonOf = new Map((layer.reasons ?? []).map((r) => [r.key, r]));
   for (const key of layer.findings) {
     const f = byKey.get(key);
@@ -169,12 +212,17 @@ function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Blo
   }
   // Findings about the layer that did not decide its verdict (notes, fails-safe supports) stay in view.
   const deciding = new Set(layer.findings);
-  const others = [...new Set([...(layer.reasons ?? []).map((r) => r.key), ...layer.elements.flatMap((e) => e.findings)])].filter((k) => !deciding.has(k));
+  const others = [
+    ...new Set([...(layer.reasons ?? []).map((r) => r.key), ...layer.elements.flatMap((e) => e.findings)]),
+  ].filter((k) => !deciding.has(k));
   if (others.length > 0) {
     out.push({ type: 'paragraph', text: ['Also reported about this layer, without effect on its verdict:'] });
     out.push({
       type: 'list',
-      items: others.map((k) => byKey.get(k)).filter((f) => f !== undefined).map((f) => [strong(SEVERITY_LABELS[f.severity]), ' ', code(f.key), ': ', ...richFromMessage(f.message)]),
+      items: others
+        .map((k) => byKey.get(k))
+        .filter((f) => f !== undefined)
+        .map((f) => [strong(SEVERITY_LABELS[f.severity]), ' ', code(f.key), ': ', ...richFromMessage(f.message)]),
     });
   }
   return out;
@@ -182,7 +230,11 @@ function explanation(layer: LayerReport, byKey: Map<string, ReportFinding>): Blo
 
 function layerBlocks(s: ScenarioReport, layer: LayerReport, byKey: Map<string, ReportFinding>): Block[] {
   return [
-    { type: 'heading', level: 4, text: [code(layer.function), ` (${layer.kind})${layer.title ? `: ${layer.title}` : ''}`] },
+    {
+      type: 'heading',
+      level: 4,
+      text: [code(layer.function), ` (${layer.kind})${layer.title ? `: ${layer.title}` : ''}`],
+    },
     ...explanation(layer, byKey),
     {
       type: 'table',
@@ -206,13 +258,18 @@ function causeFigures(s: ScenarioReport): string {
   const { frequencyAfter, frequencyIfAccepted } = s.cause;
   if (frequencyAfter === undefined && frequencyIfAccepted === undefined) return '';
   const after = frequencyAfter !== undefined ? ` Used after independence: ${formatFrequency(frequencyAfter)}.` : '';
-  const accepted = frequencyIfAccepted !== undefined ? ` Used if the open findings are accepted: ${formatFrequency(frequencyIfAccepted)}.` : '';
+  const accepted =
+    frequencyIfAccepted !== undefined
+      ? ` Used if the open findings are accepted: ${formatFrequency(frequencyIfAccepted)}.`
+      : '';
   return `${after}${accepted}`;
 }
 
 /** Before or after the SIF, and whether the model says so or the default for the kind of layer was used. */
 function actsText(s: ScenarioReport, l: ScenarioReport['layers'][number]): string {
-  const pfh = l.claimedPfh ? `; high demand, judged by PFH ${formatProbability(l.allowedPfh ?? l.claimedPfh.value)} /h` : '';
+  const pfh = l.claimedPfh
+    ? `; high demand, judged by PFH ${formatProbability(l.allowedPfh ?? l.claimedPfh.value)} /h`
+    : '';
   if (l.function === s.sif?.function) return `the SIF${pfh}`;
   const acts = l.acts === 'unknown' || l.acts === undefined ? 'order unknown' : `acts ${l.acts}`;
   return `${acts} (${l.actsStated ? 'stated' : 'default'})${pfh}`;
@@ -225,7 +282,10 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>, c
     { type: 'paragraph', text: [`Criterion: ${criterionText(s)}.`] },
     ...(s.study ? [{ type: 'paragraph' as const, text: [`From the hazard study: ${studyText(s)}.`] }] : []),
     { type: 'heading', level: 3, text: ['Initiating cause'] },
-    { type: 'paragraph', text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.${causeFigures(s)}`] },
+    {
+      type: 'paragraph',
+      text: [`${s.cause.label}. Frequency ${sourcedFrequency(s.cause.frequency)}.${causeFigures(s)}`],
+    },
     {
       type: 'paragraph',
       text:
@@ -245,13 +305,19 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>, c
         ...s.enablers.map((e) => [
           [`enabling condition: ${e.title}`],
           [formatProbability(e.probability)],
-          [e.allowed ? 'yes' : `no${e.allowedIfAccepted ? ', yes if accepted' : ''}`, ...(e.finding ? [' (', code(e.finding), ')'] : [])],
+          [
+            e.allowed ? 'yes' : `no${e.allowedIfAccepted ? ', yes if accepted' : ''}`,
+            ...(e.finding ? [' (', code(e.finding), ')'] : []),
+          ],
           [e.basis ?? ''],
         ]),
         ...s.modifiers.map((m) => [
           [`${m.kind} modifier${m.title ? `: ${m.title}` : ''}`],
           [formatProbability(m.probability)],
-          [m.allowed ? 'yes' : `no${m.allowedIfAccepted ? ', yes if accepted' : ''}`, ...(m.finding ? [' (', code(m.finding), ')'] : [])],
+          [
+            m.allowed ? 'yes' : `no${m.allowedIfAccepted ? ', yes if accepted' : ''}`,
+            ...(m.finding ? [' (', code(m.finding), ')'] : []),
+          ],
           [m.basis ?? ''],
         ]),
       ],
@@ -263,12 +329,23 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>, c
     {
       type: 'table',
       caption: `Layers claimed in ${s.id} and their verdicts`,
-      head: ['Layer', 'Kind and order', 'Claimed PFD', 'Allowed PFD', 'Verdict', 'Credited after independence', 'Credited if accepted'],
+      head: [
+        'Layer',
+        'Kind and order',
+        'Claimed PFD',
+        'Allowed PFD',
+        'Verdict',
+        'Credited after independence',
+        'Credited if accepted',
+      ],
       rows: s.layers.map((l) => [
         [code(l.function)],
         [`${l.kind}; ${actsText(s, l)}`],
         [sourcedProbability(l.claimedPfd)],
-        [formatProbability(l.allowedPfd) + (l.allowedPfdIfAccepted !== undefined ? ` (${formatProbability(l.allowedPfdIfAccepted)} if accepted)` : '')],
+        [
+          formatProbability(l.allowedPfd) +
+            (l.allowedPfdIfAccepted !== undefined ? ` (${formatProbability(l.allowedPfdIfAccepted)} if accepted)` : ''),
+        ],
         verdictCell(l),
         [yesNo(l.credited)],
         [yesNo(l.creditedIfAccepted)],
@@ -297,7 +374,11 @@ function scenarioSection(s: ScenarioReport, byKey: Map<string, ReportFinding>, c
   if (s.alternatives.length > 0) {
     blocks.push({
       type: 'list',
-      items: s.alternatives.map((a) => ['Alternative credit set: ', ...(a.layers.length ? codeList(a.layers) : ['none']), `, PFD product ${formatProbability(a.pfdProduct)}${a.mitigated !== undefined ? `, mitigated ${formatFrequency(a.mitigated)}` : ''}`]),
+      items: s.alternatives.map((a) => [
+        'Alternative credit set: ',
+        ...(a.layers.length ? codeList(a.layers) : ['none']),
+        `, PFD product ${formatProbability(a.pfdProduct)}${a.mitigated !== undefined ? `, mitigated ${formatFrequency(a.mitigated)}` : ''}`,
+      ]),
     });
   }
   blocks.push(...cutSets);
@@ -312,9 +393,19 @@ function appendices(doc: ReportDocument): Block[] {
     blocks: [
       { type: 'heading', level: 2, text: ['Appendix A: what every function relies on'] },
       ...doc.functions.flatMap((fn): Block[] => [
-        { type: 'heading', level: 3, text: [code(fn.function), ` (${fn.kind})${fn.title ? `: ${fn.title}` : ''}`], id: anchorOf('function', fn.function) },
+        {
+          type: 'heading',
+          level: 3,
+          text: [code(fn.function), ` (${fn.kind})${fn.title ? `: ${fn.title}` : ''}`],
+          id: anchorOf('function', fn.function),
+        },
         ...(fn.missing.length
-          ? [{ type: 'paragraph' as const, text: [`Missing from the model: ${fn.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`] }]
+          ? [
+              {
+                type: 'paragraph' as const,
+                text: [`Missing from the model: ${fn.missing.map((m) => MISSING_LABELS[m] ?? m).join('; ')}.`],
+              },
+            ]
           : []),
         {
           type: 'table',
@@ -329,7 +420,9 @@ function appendices(doc: ReportDocument): Block[] {
   // A finding already written out in full under the layer it decides is listed here in one row; the
   // others (about a cause, a modifier, a note, the model) are written out here, once.
   const detailed = new Map<string, string>();
-  for (const s of doc.scenarios) for (const l of s.layers) for (const key of l.findings) if (!detailed.has(key)) detailed.set(key, `${s.id}, layer ${l.function}`);
+  for (const s of doc.scenarios)
+    for (const l of s.layers)
+      for (const key of l.findings) if (!detailed.has(key)) detailed.set(key, `${s.id}, layer ${l.function}`);
   const listed = doc.findings.filter((f) => detailed.has(f.key));
   const findings: Block = {
     type: 'section',
@@ -342,14 +435,24 @@ function appendices(doc: ReportDocument): Block[] {
         type: 'table',
         caption: 'Findings written out in full in their scenario, under the layer they decide',
         head: ['Finding', 'Severity', 'Written out under', 'State'],
-        rows: listed.map((f) => [[code(f.key)], [SEVERITY_LABELS[f.severity]], [detailed.get(f.key)!], [f.accepted ? `accepted by ${f.accepted.by} on ${f.accepted.date}` : 'open']]),
+        rows: listed.map((f) => [
+          [code(f.key)],
+          [SEVERITY_LABELS[f.severity]],
+          [detailed.get(f.key)!],
+          [f.accepted ? `accepted by ${f.accepted.by} on ${f.accepted.date}` : 'open'],
+        ]),
         rowHeaders: true,
       },
-      ...doc.findings.filter((f) => !detailed.has(f.key)).flatMap((f): Block[] => [
-        { type: 'heading', level: 3, text: [code(f.key)], id: anchorOf('finding', f.key) },
-        { type: 'paragraph', text: [f.scenario ? 'Scenario ' : 'Model-wide', ...(f.scenario ? [code(f.scenario)] : []), '.'] },
-        { type: 'list', items: findingLines(f) },
-      ]),
+      ...doc.findings
+        .filter((f) => !detailed.has(f.key))
+        .flatMap((f): Block[] => [
+          { type: 'heading', level: 3, text: [code(f.key)], id: anchorOf('finding', f.key) },
+          {
+            type: 'paragraph',
+            text: [f.scenario ? 'Scenario ' : 'Model-wide', ...(f.scenario ? [code(f.scenario)] : []), '.'],
+          },
+          { type: 'list', items: findingLines(f) },
+        ]),
     ],
   };
   return [traces, findings];
@@ -357,7 +460,9 @@ function appendices(doc: ReportDocument): Block[] {
 
 export function layoutReport(doc: ReportDocument): Block[] {
   // Each finding cites its sources by their Appendix C references, so a source is written out once.
-  const byKey = new Map(doc.findings.map((f) => [f.key, { ...f, source: `${referencesOf(doc, f.rule) || 'none'} (Appendix C)` }]));
+  const byKey = new Map(
+    doc.findings.map((f) => [f.key, { ...f, source: `${referencesOf(doc, f.rule) || 'none'} (Appendix C)` }]),
+  );
   const findings = doc.findings.map((f) => byKey.get(f.key)!);
   return [
     { type: 'section', kind: 'front', id: 'front', blocks: [...header(doc), ...summary(doc), ...ruleSet(doc)] },

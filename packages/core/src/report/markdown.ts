@@ -41,7 +41,11 @@ function block(b: Block): string[] {
       return [`${'#'.repeat(b.level)} ${rich(b.text)}`];
     case 'paragraph':
       // A paragraph that starts like a list item or a setext underline would turn into one.
-      return [rich(b.text).replace(/^([-+=>])/, '\\$1').replace(/^(\d+)([.)])/, '$1\\$2')];
+      return [
+        rich(b.text)
+          .replace(/^([-+=>])/, '\\$1')
+          .replace(/^(\d+)([.)])/, '$1\\$2'),
+      ];
     case 'list':
       return [b.items.map((item) => `- ${rich(item)}`).join('\n')];
     case 'caution':

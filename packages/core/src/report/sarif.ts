@@ -103,8 +103,13 @@ class ResultBuilder {
     const out: Sarif.Location[] = [];
     let id = 1;
     const alike = alikeDevices(f);
-    if (alike) for (const tag of alike) out.push(this.location(this.locator.element(tag), `\`${tag}\`, of the same make and model, is defined here`, id++));
-    else if (f.element !== undefined) out.push(this.location(this.locator.element(f.element), `shared element \`${f.element}\` is defined here`, id++));
+    if (alike)
+      for (const tag of alike)
+        out.push(
+          this.location(this.locator.element(tag), `\`${tag}\`, of the same make and model, is defined here`, id++),
+        );
+    else if (f.element !== undefined)
+      out.push(this.location(this.locator.element(f.element), `shared element \`${f.element}\` is defined here`, id++));
     // The layer the primary location names (the last claimed one, as in findingSpans) is not repeated here.
     const primaryLayer = f.parties.map((p) => p.role === 'layer' && p.tag !== undefined).lastIndexOf(true);
     f.parties.forEach((p, i) => {
@@ -112,7 +117,9 @@ class ResultBuilder {
       const path = f.paths[i];
       const via = path && path.length > 0 ? ` (${path.join(' -> ')})` : '';
       if (p.role === 'cause' && f.scenario !== undefined) {
-        out.push(this.location(this.locator.cause(f.scenario), `the initiating cause of \`${f.scenario}\`${via}`, id++));
+        out.push(
+          this.location(this.locator.cause(f.scenario), `the initiating cause of \`${f.scenario}\`${via}`, id++),
+        );
       } else if (p.role === 'layer' && p.tag !== undefined) {
         out.push(this.location(this.locator.layer(f.scenario, p.tag), `the other layer \`${p.tag}\`${via}`, id++));
       }
@@ -159,7 +166,11 @@ class ResultBuilder {
         key: f.key,
         severity: f.severity,
         ...(f.scenario !== undefined ? { scenario: f.scenario } : {}),
-        ...(alikeDevices(f) ? { sameMakeModel: alikeDevices(f) } : f.element !== undefined ? { sharedElement: f.element } : {}),
+        ...(alikeDevices(f)
+          ? { sameMakeModel: alikeDevices(f) }
+          : f.element !== undefined
+            ? { sharedElement: f.element }
+            : {}),
         rationale: f.rationale,
         source: f.source,
       },
@@ -199,7 +210,10 @@ export function renderSarif(doc: ReportDocument, input: ReportInput): string {
         ],
         artifacts: [
           { location: { uri: artifactUri(doc.model.file) }, hashes: { 'sha-256': doc.model.sha256 } },
-          ...(input.parts ?? []).map((part) => ({ location: { uri: artifactUri(part.file) }, hashes: { 'sha-256': part.sha256 } })),
+          ...(input.parts ?? []).map((part) => ({
+            location: { uri: artifactUri(part.file) },
+            hashes: { 'sha-256': part.sha256 },
+          })),
         ],
         columnKind: 'utf16CodeUnits',
         results: doc.findings.map((f) => builder.result(f, ruleIds.indexOf(f.rule))),

@@ -17,7 +17,8 @@ function setsOfOrder(s: ScenarioCutSetsReport, order: number): CutSetReport[] {
   return s.cutSets.filter((c) => c.elements.length === order);
 }
 
-const partyText = (party: string): Rich => (party === 'cause' ? ['From the cause: '] : ['From layer ', code(party), ': ']);
+const partyText = (party: string): Rich =>
+  party === 'cause' ? ['From the cause: '] : ['From layer ', code(party), ': '];
 
 /** A single point of failure in full: the element, the path from the cause and from each layer, the findings. */
 function singlePoint(c: CutSetReport): Block {
@@ -25,9 +26,16 @@ function singlePoint(c: CutSetReport): Block {
   return {
     type: 'list',
     items: [
-      [strong('Single point of failure:'), ' ', code(element), ' alone starts the scenario and defeats every claimed layer.'],
+      [
+        strong('Single point of failure:'),
+        ' ',
+        code(element),
+        ' alone starts the scenario and defeats every claimed layer.',
+      ],
       ...c.paths.map((p) => [...partyText(p.party), ...pathText(p.path)]),
-      c.findings.length ? ['Findings about it: ', ...codeList(c.findings)] : ['No finding names it: the rules in force did not flag this dependency; review it.'],
+      c.findings.length
+        ? ['Findings about it: ', ...codeList(c.findings)]
+        : ['No finding names it: the rules in force did not flag this dependency; review it.'],
     ],
   };
 }
@@ -41,7 +49,10 @@ interface SetGroup {
  * Groups the sets by a member they share, most sets first (ties by tag), each set in exactly one group:
  * a common element shows once with all its partners instead of once per set.
  */
-export function groupBySharedMember(sets: readonly CutSetReport[], compare: (a: string, b: string) => number): SetGroup[] {
+export function groupBySharedMember(
+  sets: readonly CutSetReport[],
+  compare: (a: string, b: string) => number,
+): SetGroup[] {
   const groups: SetGroup[] = [];
   let left = [...sets];
   while (left.length > 0) {
@@ -59,9 +70,16 @@ function groupRow(group: SetGroup, findings: ReadonlyMap<string, ReportFinding>)
   const partners: Rich = [];
   group.sets.forEach((c, i) => {
     if (i > 0) partners.push(', ');
-    partners.push(...codeList(c.elements.filter((e) => e !== group.element), ' + '));
+    partners.push(
+      ...codeList(
+        c.elements.filter((e) => e !== group.element),
+        ' + ',
+      ),
+    );
   });
-  const about = [...new Set(group.sets.flatMap((c) => c.findings))].filter((k) => findings.get(k)?.element === group.element);
+  const about = [...new Set(group.sets.flatMap((c) => c.findings))].filter(
+    (k) => findings.get(k)?.element === group.element,
+  );
   return [
     [code(group.element)],
     // Each path starts at the side's function (the cause's loop, or the layer itself), as `bulkhead cut-sets` prints it.
@@ -73,21 +91,44 @@ function groupRow(group: SetGroup, findings: ReadonlyMap<string, ReportFinding>)
 }
 
 /** The cut-set subsection of one scenario's section; nothing when the report carries no cut sets. */
-export function scenarioCutSetBlocks(doc: ReportDocument, scenario: string, findings: ReadonlyMap<string, ReportFinding>, compare: (a: string, b: string) => number): Block[] {
+export function scenarioCutSetBlocks(
+  doc: ReportDocument,
+  scenario: string,
+  findings: ReadonlyMap<string, ReportFinding>,
+  compare: (a: string, b: string) => number,
+): Block[] {
   const s = doc.cutSets?.scenarios.find((x) => x.scenario === scenario);
   if (!s) return [];
   const blocks: Block[] = [{ type: 'heading', level: 3, text: [`Minimal cut sets up to order ${s.maxOrder}`] }];
   if (s.noStartingElement) {
-    blocks.push({ type: 'paragraph', text: ['No cut set: no element of the model starts the scenario (an external cause).'] });
+    blocks.push({
+      type: 'paragraph',
+      text: ['No cut set: no element of the model starts the scenario (an external cause).'],
+    });
     return blocks;
   }
-  const layers: Rich = s.layers.length ? ['every claimed layer (', ...codeList(s.layers), ')'] : ['no claimed layer, so any element of the cause alone is a cut set'];
+  const layers: Rich = s.layers.length
+    ? ['every claimed layer (', ...codeList(s.layers), ')']
+    : ['no claimed layer, so any element of the cause alone is a cut set'];
   blocks.push({
     type: 'paragraph',
-    text: [`${countByOrder(s)}. A cut set is a smallest set of elements whose joint failure starts the scenario and defeats `, ...layers, '; the method is stated in the site-wide section.'],
+    text: [
+      `${countByOrder(s)}. A cut set is a smallest set of elements whose joint failure starts the scenario and defeats `,
+      ...layers,
+      '; the method is stated in the site-wide section.',
+    ],
   });
   const caution = [...s.incompleteLayers, ...s.unknownLayers];
-  if (caution.length) blocks.push({ type: 'paragraph', text: [strong('Caution:'), ' ', ...codeList(caution), ' has an incomplete or missing trace; the cut sets are only as complete as the model.'] });
+  if (caution.length)
+    blocks.push({
+      type: 'paragraph',
+      text: [
+        strong('Caution:'),
+        ' ',
+        ...codeList(caution),
+        ' has an incomplete or missing trace; the cut sets are only as complete as the model.',
+      ],
+    });
   blocks.push(...setsOfOrder(s, 1).map(singlePoint));
   const larger = s.cutSets.filter((c) => c.elements.length > 1);
   if (larger.length > 0) {
@@ -123,8 +164,17 @@ function cutSetSummary(cutSets: CutSetsReport): Block[] {
     {
       type: 'paragraph',
       text: singles.length
-        ? [strong(`${plural(singles.length, 'scenario')} of ${all.length} can be started and left unprotected by one element:`), ' ', ...codeList(singles), '.']
-        : [`No scenario of ${all.length} can be started and left unprotected by one element (cut sets up to order ${cutSets.maxOrder}).`],
+        ? [
+            strong(
+              `${plural(singles.length, 'scenario')} of ${all.length} can be started and left unprotected by one element:`,
+            ),
+            ' ',
+            ...codeList(singles),
+            '.',
+          ]
+        : [
+            `No scenario of ${all.length} can be started and left unprotected by one element (cut sets up to order ${cutSets.maxOrder}).`,
+          ],
     },
     { type: 'paragraph', text: [cutSets.method] },
     {
@@ -167,7 +217,18 @@ function rankingBlocks(commonCauses: NonNullable<ReportDocument['commonCauses']>
     {
       type: 'table',
       caption: 'Common-cause ranking: elements that take part in findings, in the order stated above',
-      head: ['Rank', 'Element', 'Kind and title', 'Layers', 'Scenarios', 'Open of all findings', 'Alone it costs', 'Summed gap lower by', 'At stake in its layers', 'Would meet without it'],
+      head: [
+        'Rank',
+        'Element',
+        'Kind and title',
+        'Layers',
+        'Scenarios',
+        'Open of all findings',
+        'Alone it costs',
+        'Summed gap lower by',
+        'At stake in its layers',
+        'Would meet without it',
+      ],
       rows: commonCauses.elements.map((r) => [
         [String(r.rank)],
         [code(r.element)],

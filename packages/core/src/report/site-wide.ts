@@ -14,7 +14,13 @@ export function countByOrder(s: Pick<ScenarioCutSets, 'maxOrder' | 'cutSets'>): 
   const counts: string[] = [];
   for (let order = 1; order <= Math.min(s.maxOrder, 9); order++) {
     const n = s.cutSets.filter((c) => c.elements.length === order).length;
-    counts.push(order === 1 ? plural(n, 'single point') : order === 2 ? `${n} ${n === 1 ? 'pair' : 'pairs'}` : `${n} of order ${order}`);
+    counts.push(
+      order === 1
+        ? plural(n, 'single point')
+        : order === 2
+          ? `${n} ${n === 1 ? 'pair' : 'pairs'}`
+          : `${n} of order ${order}`,
+    );
   }
   return counts.join(', ');
 }
@@ -37,16 +43,22 @@ export function renderCutSetsText(model: Model, all: readonly ScenarioCutSets[])
   for (const s of all) {
     const title = titles.get(s.scenario);
     lines.push(`== ${s.scenario}${title ? `: ${title}` : ''} ==`);
-    lines.push(`  layers claimed: ${s.layers.length ? s.layers.join(', ') : 'none (any cause element alone is a cut set)'}`);
+    lines.push(
+      `  layers claimed: ${s.layers.length ? s.layers.join(', ') : 'none (any cause element alone is a cut set)'}`,
+    );
     if (s.noStartingElement) {
       lines.push('  no cut set: no element of the model starts the scenario (an external cause)', '');
       continue;
     }
     lines.push(`  ${countByOrder(s)}`);
-    if (s.incompleteLayers.length) lines.push(`  caution: ${s.incompleteLayers.join(', ')} has an incomplete trace; its cut sets are only as complete as the model`);
+    if (s.incompleteLayers.length)
+      lines.push(
+        `  caution: ${s.incompleteLayers.join(', ')} has an incomplete trace; its cut sets are only as complete as the model`,
+      );
     s.cutSets.forEach((c, i) => {
       lines.push(`  ${i + 1}. ${c.elements.join(' + ')}`);
-      for (const p of c.paths) lines.push(`       ${p.element}  ${p.party === 'cause' ? 'cause' : `layer`} ${p.path.join(' -> ')}`);
+      for (const p of c.paths)
+        lines.push(`       ${p.element}  ${p.party === 'cause' ? 'cause' : `layer`} ${p.path.join(' -> ')}`);
       if (c.findings.length) lines.push(`       findings: ${c.findings.join(', ')}`);
     });
     lines.push('');
@@ -73,7 +85,9 @@ export function renderCommonCausesText(ranking: readonly RankedCommonCause[]): s
     lines.push(
       `${String(r.rank).padStart(3)}. ${r.element} (${r.kind}${r.title ? `, ${r.title}` : ''}): ${plural(r.layers, 'layer')} in ${plural(r.scenarios.length, 'scenario')}${r.scenarios.length ? ` (${r.scenarios.join(', ')})` : ''}; ${r.openFindings} of ${plural(r.findings, 'finding')} open`,
     );
-    lines.push(`       alone it costs ${frequency(r.frequencyCost)} (summed gap lower by ${frequency(r.gapReduction)}); ${frequency(r.frequencyAtStake)} at stake in its layers${meet}`);
+    lines.push(
+      `       alone it costs ${frequency(r.frequencyCost)} (summed gap lower by ${frequency(r.gapReduction)}); ${frequency(r.frequencyAtStake)} at stake in its layers${meet}`,
+    );
   }
   lines.push('', ASSESSMENT_CAUTION);
   return `${lines.join('\n')}\n`;

@@ -47,7 +47,13 @@ interface Citation {
 export function readCitation(text: string): Citation {
   const memory = FROM_MEMORY.test(text);
   const bare = text.replace(FROM_MEMORY, '').trim();
-  if (NO_SOURCE.test(bare)) return { work: 'Common practice or owner\'s policy (no published source)', clause: bare, memory: false, noSource: true };
+  if (NO_SOURCE.test(bare))
+    return {
+      work: "Common practice or owner's policy (no published source)",
+      clause: bare,
+      memory: false,
+      noSource: true,
+    };
   const titled = /^(.*?)\s*\((\d{4})\),?\s*(.*)$/.exec(bare); // CCPS, Title (2001), ch. 6
   const coloned = /^([A-Z][\w/. -]*?\d[\w.-]*):(\d{4})\s*(.*)$/.exec(bare); // IEC 61511-1:2016 9.4
   const dashed = /^([A-Z][\w/]*-[A-Z]?[\d.]+)-(\d{4})\s*(.*)$/.exec(bare); // ANSI/ISA-S84.01-1996 Annex B
@@ -68,7 +74,20 @@ export function sourceList(rules: readonly { id: string; source: string }[]): So
       const c = readCitation(text);
       const key = `${c.work}\u0000${c.edition ?? ''}`;
       let entry = entries.get(key);
-      if (!entry) entries.set(key, (entry = { id: '', work: c.work, ...(c.edition ? { edition: c.edition } : {}), clauses: [], checked: 'yes', rules: [], memory: 0, cited: 0 }));
+      if (!entry)
+        entries.set(
+          key,
+          (entry = {
+            id: '',
+            work: c.work,
+            ...(c.edition ? { edition: c.edition } : {}),
+            clauses: [],
+            checked: 'yes',
+            rules: [],
+            memory: 0,
+            cited: 0,
+          }),
+        );
       const clause = c.clause === '' ? '' : `${c.clause}${c.memory ? ' [from memory]' : ''}`;
       if (clause !== '' && !entry.clauses.includes(clause)) entry.clauses.push(clause);
       if (!entry.rules.includes(rule.id)) entry.rules.push(rule.id);
@@ -80,7 +99,8 @@ export function sourceList(rules: readonly { id: string; source: string }[]): So
   return [...entries.values()].map(({ memory, cited, ...e }, i) => ({
     ...e,
     id: `R${i + 1}`,
-    checked: e.checked === 'no-source' ? 'no-source' : memory === 0 ? 'yes' : memory === cited ? 'from-memory' : 'partly',
+    checked:
+      e.checked === 'no-source' ? 'no-source' : memory === 0 ? 'yes' : memory === cited ? 'from-memory' : 'partly',
   }));
 }
 

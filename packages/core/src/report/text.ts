@@ -75,16 +75,29 @@ export function silText(sil: number): string {
 export function sifText(s: ScenarioReport): Rich | undefined {
   const sif = s.sif;
   if (!sif) return undefined;
-  const who: Rich = sif.function ? ['Required of ', code(sif.function), ': '] : ['A SIF that closes the gap would need: '];
+  const who: Rich = sif.function
+    ? ['Required of ', code(sif.function), ': ']
+    : ['A SIF that closes the gap would need: '];
   const relation = edgeRelation(s.edge);
-  const note = sif.note ? ` ${sif.note[0]!.toUpperCase()}${sif.note.slice(1)}${/[.!?]$/.test(sif.note) ? '' : '.'}` : '';
-  if (sif.noReductionNeeded) return [...who, `no risk reduction (the other credited layers already meet the criterion).${note}`];
+  const note = sif.note
+    ? ` ${sif.note[0]!.toUpperCase()}${sif.note.slice(1)}${/[.!?]$/.test(sif.note) ? '' : '.'}`
+    : '';
+  if (sif.noReductionNeeded)
+    return [...who, `no risk reduction (the other credited layers already meet the criterion).${note}`];
   const other = sif.otherReading !== undefined ? ` At this exact edge, the other reading: ${sif.otherReading}.` : '';
   const pfd = `PFD ${relation} ${formatProbability(sif.requiredPfd)} (RRF ${relation === '<' ? '>' : '>='} ${formatRatio(sif.requiredRrf)})`;
   if (sif.mode === 'high-demand' && sif.requiredPfh !== undefined) {
-    const band = sif.pfhBand ? `, the PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h` : '';
-    const low = sif.lowDemandSil !== undefined ? ` In low-demand terms ${pfd}, ${silText(sif.lowDemandSil)}, which does not apply at this demand.` : '';
-    return [...who, `high demand: PFH ${relation} ${formatProbability(sif.requiredPfh)} /h: ${silText(sif.sil)}${band}.${other}${low}${note}`];
+    const band = sif.pfhBand
+      ? `, the PFH band of SIL ${sif.pfhBand.sil}, ${formatProbability(sif.pfhBand.low)} to ${formatProbability(sif.pfhBand.high)} /h`
+      : '';
+    const low =
+      sif.lowDemandSil !== undefined
+        ? ` In low-demand terms ${pfd}, ${silText(sif.lowDemandSil)}, which does not apply at this demand.`
+        : '';
+    return [
+      ...who,
+      `high demand: PFH ${relation} ${formatProbability(sif.requiredPfh)} /h: ${silText(sif.sil)}${band}.${other}${low}${note}`,
+    ];
   }
   return [...who, `${pfd}: ${silText(sif.sil)}.${other}${note}`];
 }

@@ -49,7 +49,9 @@ export function studyText(s: ScenarioReport): string {
     st.document !== undefined ? `study ${st.document}` : '',
     st.node !== undefined ? `node ${st.node}` : '',
     st.deviation !== undefined ? `deviation ${st.deviation}` : '',
-    st.recommendations ? `recommendation${st.recommendations.length === 1 ? '' : 's'} ${st.recommendations.join(' ')}` : '',
+    st.recommendations
+      ? `recommendation${st.recommendations.length === 1 ? '' : 's'} ${st.recommendations.join(' ')}`
+      : '',
   ]
     .filter(Boolean)
     .join(', ');
@@ -60,7 +62,9 @@ function basisOf(value: ScenarioReport['cause']['frequency']): string {
   return `${value.origin === 'default' ? 'default' : 'SIL band'}${value.basis ? `: ${value.basis}` : ''}`;
 }
 
-function factors(list: readonly { title?: string | undefined; kind?: string | undefined; probability: number; allowed: boolean }[]): string {
+function factors(
+  list: readonly { title?: string | undefined; kind?: string | undefined; probability: number; allowed: boolean }[],
+): string {
   return list
     .map((f) => `${f.title ?? f.kind} ${formatProbability(f.probability)}${f.allowed ? '' : ' (not applied)'}`)
     .join('; ');
@@ -99,7 +103,8 @@ function rowOf(s: ScenarioReport, layer: LayerReport | undefined): WorksheetRow 
     ratio_to_tolerable: s.gap,
     demand_mode: s.sif?.mode,
     required_rrf: s.sif && !s.sif.noReductionNeeded && s.sif.mode === 'low-demand' ? s.sif.requiredRrf : undefined,
-    required_pfh_per_hour: s.sif && !s.sif.noReductionNeeded && s.sif.mode === 'high-demand' ? s.sif.requiredPfh : undefined,
+    required_pfh_per_hour:
+      s.sif && !s.sif.noReductionNeeded && s.sif.mode === 'high-demand' ? s.sif.requiredPfh : undefined,
     required_sil: s.sif ? (s.sif.noReductionNeeded ? 'none' : s.sif.sil) : undefined,
   };
 }
@@ -113,14 +118,27 @@ export function worksheetRows(doc: ReportDocument): WorksheetRow[] {
 export function worksheetCells(row: WorksheetRow, first: boolean): string[] {
   const frequency = (x: unknown) => (typeof x === 'number' ? formatFrequency(x) : '');
   const probability = (x: unknown) => (typeof x === 'number' ? formatProbability(x) : '');
-  const sil = row.required_sil === undefined ? '' : row.required_sil === 'none' ? 'none needed' : Number(row.required_sil) >= 5 ? 'beyond SIL 4' : Number(row.required_sil) === 0 ? 'no SIL' : `SIL ${row.required_sil}`;
+  const sil =
+    row.required_sil === undefined
+      ? ''
+      : row.required_sil === 'none'
+        ? 'none needed'
+        : Number(row.required_sil) >= 5
+          ? 'beyond SIL 4'
+          : Number(row.required_sil) === 0
+            ? 'no SIL'
+            : `SIL ${row.required_sil}`;
   // Scenario figures are printed on the scenario's first row only, so each reads once.
   const scenario = (text: string) => (first ? text : '');
   return [
     scenario([row.scenario, row.scenario_title, row.study_reference].filter(Boolean).join(': ')),
     scenario(`${row.category}; ${frequency(row.tolerable_per_year)}`),
     scenario(`${row.cause}; ${frequency(row.cause_frequency_per_year)} (${row.cause_basis})`),
-    scenario([row.enablers ? `enablers: ${row.enablers}` : '', row.modifiers ? `modifiers: ${row.modifiers}` : ''].filter(Boolean).join('; ')),
+    scenario(
+      [row.enablers ? `enablers: ${row.enablers}` : '', row.modifiers ? `modifiers: ${row.modifiers}` : '']
+        .filter(Boolean)
+        .join('; '),
+    ),
     `${row.layer}${row.layer_kind ? ` (${row.layer_kind})` : ''}`,
     row.pfd_claimed === undefined ? '' : `${probability(row.pfd_claimed)} / ${probability(row.pfd_allowed)}`,
     `${row.independence ?? ''}${row.decided_by ? `${row.independence === 'voided' ? ' by ' : ': '}${row.decided_by}` : ''}`,
@@ -130,7 +148,9 @@ export function worksheetCells(row: WorksheetRow, first: boolean): string[] {
     scenario(
       [
         typeof row.required_rrf === 'number' ? `RRF ${formatRatio(row.required_rrf)}` : '',
-        typeof row.required_pfh_per_hour === 'number' ? `PFH ${formatProbability(row.required_pfh_per_hour)} /h (high demand)` : '',
+        typeof row.required_pfh_per_hour === 'number'
+          ? `PFH ${formatProbability(row.required_pfh_per_hour)} /h (high demand)`
+          : '',
         sil,
       ]
         .filter(Boolean)
@@ -162,13 +182,17 @@ export function layoutWorksheet(doc: ReportDocument): Block[] {
     { type: 'caution', title: 'Caution', items: doc.cautions.map((c) => [c]) },
     {
       type: 'paragraph',
-      text: ['One row per scenario and claimed layer; the scenario figures are printed on its first row. PFDs and frequencies to two significant figures (the CSV worksheet holds them in full). The evidence list gives the findings behind each verdict.'],
+      text: [
+        'One row per scenario and claimed layer; the scenario figures are printed on its first row. PFDs and frequencies to two significant figures (the CSV worksheet holds them in full). The evidence list gives the findings behind each verdict.',
+      ],
     },
     {
       type: 'table',
       caption: 'LOPA worksheet, before and after independence',
       head: WORKSHEET_HEAD,
-      rows: rows.map((row, i) => worksheetCells(row, i === 0 || rows[i - 1]!.scenario !== row.scenario).map((cell) => [cell])),
+      rows: rows.map((row, i) =>
+        worksheetCells(row, i === 0 || rows[i - 1]!.scenario !== row.scenario).map((cell) => [cell]),
+      ),
       rowHeaders: false,
       compact: true,
     },
@@ -179,7 +203,17 @@ export function layoutWorksheet(doc: ReportDocument): Block[] {
 /** RFC 4180, CRLF, one row per scenario and layer, figures to six significant figures (csvFigure). */
 export function renderWorksheetCsv(doc: ReportDocument): string {
   const records = worksheetRows(doc).map((row) =>
-    Object.fromEntries(WORKSHEET_COLUMNS.map((c) => [c, row[c] === undefined ? '' : typeof row[c] === 'number' ? csvFigure(row[c]) : guardFormula(String(row[c]))])),
+    Object.fromEntries(
+      WORKSHEET_COLUMNS.map((c) => [
+        c,
+        row[c] === undefined ? '' : typeof row[c] === 'number' ? csvFigure(row[c]) : guardFormula(String(row[c])),
+      ]),
+    ),
   );
-  return stringify(records, { header: true, columns: [...WORKSHEET_COLUMNS], record_delimiter: '\r\n', quoted_match: /^\s|\s$/ });
+  return stringify(records, {
+    header: true,
+    columns: [...WORKSHEET_COLUMNS],
+    record_delimiter: '\r\n',
+    quoted_match: /^\s|\s$/,
+  });
 }

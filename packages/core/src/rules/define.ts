@@ -80,10 +80,19 @@ export type Rule = SharedElementRule | ScenarioRule;
 type Check<R> = Omit<R, 'type' | keyof RuleMeta>;
 
 function metaOf(entry: RuleEntry<IndependenceRuleId>): RuleMeta {
-  return { id: entry.id, title: entry.title, rationale: entry.rationale, source: entry.source, defaultSeverity: entry.defaultSeverity };
+  return {
+    id: entry.id,
+    title: entry.title,
+    rationale: entry.rationale,
+    source: entry.source,
+    defaultSeverity: entry.defaultSeverity,
+  };
 }
 
-export function defineSharedRule(entry: RuleEntry<IndependenceRuleId>, check: Check<SharedElementRule>): SharedElementRule {
+export function defineSharedRule(
+  entry: RuleEntry<IndependenceRuleId>,
+  check: Check<SharedElementRule>,
+): SharedElementRule {
   return { type: 'shared', ...metaOf(entry), ...check };
 }
 
@@ -105,8 +114,20 @@ export function sideRef(side: Side): SideRef {
   return ref;
 }
 
-export function findingKey(rule: string, scenario: string | undefined, parties: Party[], element?: string, detail?: string): string {
-  return [rule, scenario ?? '-', parties.map(partyKey).join('+'), ...(element ? [element] : []), ...(detail ? [detail] : [])].join(':');
+export function findingKey(
+  rule: string,
+  scenario: string | undefined,
+  parties: Party[],
+  element?: string,
+  detail?: string,
+): string {
+  return [
+    rule,
+    scenario ?? '-',
+    parties.map(partyKey).join('+'),
+    ...(element ? [element] : []),
+    ...(detail ? [detail] : []),
+  ].join(':');
 }
 
 /**
@@ -130,7 +151,9 @@ const KEYED_BY_BOTH_SIDES = new Set(['same-make-model']);
  * The key the finding had with its two layers the other way round, as keys were once given in list
  * order: a justification written against it still accepts the finding. Undefined unless both parties are layers.
  */
-export function mirroredKeyOf(finding: Pick<Finding, 'key' | 'rule' | 'scenario' | 'parties' | 'element'>): string | undefined {
+export function mirroredKeyOf(
+  finding: Pick<Finding, 'key' | 'rule' | 'scenario' | 'parties' | 'element'>,
+): string | undefined {
   const [first, second] = finding.parties;
   if (finding.parties.length !== 2 || first?.role !== 'layer' || second?.role !== 'layer') return undefined;
   const head = findingKey(finding.rule, finding.scenario, finding.parties, finding.element);
@@ -145,6 +168,11 @@ export function mirroredKeyOf(finding: Pick<Finding, 'key' | 'rule' | 'scenario'
 export type { Finding };
 
 /** The data every shared-element message starts from (catalogue/words.ts SharedVerdictData). */
-export function sharedData(element: Element, pair: PairContext, severity: SeverityLevel, beneath: string[]): SharedVerdictData {
+export function sharedData(
+  element: Element,
+  pair: PairContext,
+  severity: SeverityLevel,
+  beneath: string[],
+): SharedVerdictData {
   return { a: sideRef(pair.a), b: sideRef(pair.b), element: element.tag, kind: element.kind, severity, beneath };
 }

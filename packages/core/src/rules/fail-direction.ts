@@ -80,7 +80,8 @@ export function judgeCauseSide(cause: Side, lost: string, power: boolean, ctx: S
   const direction: CauseDirection | undefined = ctx.scenario.cause.drivesTo;
   const who = cause.party.tag !== undefined ? { cause: cause.party.tag } : {};
   if (direction === undefined) return { dangerous: true, why: { reason: 'no-direction' } };
-  if (direction === 'high' || direction === 'low') return { dangerous: true, why: { reason: 'output-direction', direction } };
+  if (direction === 'high' || direction === 'low')
+    return { dangerous: true, why: { reason: 'output-direction', direction } };
   const start = cause.elements.values().next().value?.path[0];
   const fn = start !== undefined && start === cause.fn?.tag ? cause.fn : undefined;
   let channels: { head: string; members: ReadonlySet<string> }[];
@@ -89,7 +90,9 @@ export function judgeCauseSide(cause: Side, lost: string, power: boolean, ctx: S
     if (!everyOutput && fn.sensors.some((s) => ctx.tracer.closure(s).has(lost))) {
       return { dangerous: true, why: { reason: 'sensor-relies', ...who } };
     }
-    channels = fn.finals.map((head) => ({ head, members: ctx.tracer.closure(head) })).filter((c) => everyOutput || c.members.has(lost));
+    channels = fn.finals
+      .map((head) => ({ head, members: ctx.tracer.closure(head) }))
+      .filter((c) => everyOutput || c.members.has(lost));
   } else if (start !== undefined && !fn) {
     const members = ctx.tracer.closure(start);
     channels = members.has(lost) ? [{ head: start, members }] : [];
@@ -108,6 +111,7 @@ export function judgeCauseSide(cause: Side, lost: string, power: boolean, ctx: S
     for (const x of p) positions.add(x);
   }
   const moved = { heads: channels.map((c) => c.head), positions: [...positions].sort(), ...who, direction };
-  if (positions.has(direction) || positions.has('in-place')) return { dangerous: true, why: { reason: 'moves-dangerous', ...moved } };
+  if (positions.has(direction) || positions.has('in-place'))
+    return { dangerous: true, why: { reason: 'moves-dangerous', ...moved } };
   return { dangerous: false, why: { reason: 'moves-away', ...moved } };
 }

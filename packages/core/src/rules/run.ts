@@ -4,7 +4,18 @@
 import type { Finding, Party, TracedElement } from '../vocabulary/types.ts';
 import type { Element, Model, PlantFunction, Scenario, SeverityLevel } from '../model/schema.ts';
 import type { Tracer } from '../trace/trace.ts';
-import { findingKey, SEVERITY_RANK, sidesInKeyOrder, type FindingDraft, type PairContext, type ResolvedPolicy, type Rule, type ScenarioContext, type SharedElementRule, type Side } from './define.ts';
+import {
+  findingKey,
+  SEVERITY_RANK,
+  sidesInKeyOrder,
+  type FindingDraft,
+  type PairContext,
+  type ResolvedPolicy,
+  type Rule,
+  type ScenarioContext,
+  type SharedElementRule,
+  type Side,
+} from './define.ts';
 import { RULES } from './registry.ts';
 import { renderMessage } from '../catalogue/catalogue.ts';
 
@@ -34,7 +45,8 @@ export function causeSide(env: RuleEnvironment, scenario: Scenario): Side {
     const start = cause.only !== undefined && env.acceptedKeys.has(narrowedKey) ? cause.only : cause.function;
     return { party, ...(fn ? { fn } : {}), elements: byTag(env.tracer.paths(start)) };
   }
-  if (cause.element !== undefined) return { party: { role: 'cause', tag: cause.element }, elements: byTag(env.tracer.paths(cause.element)) };
+  if (cause.element !== undefined)
+    return { party: { role: 'cause', tag: cause.element }, elements: byTag(env.tracer.paths(cause.element)) };
   return { party: { role: 'cause' }, elements: new Map() };
 }
 
@@ -67,7 +79,12 @@ export function scenarioContext(env: RuleEnvironment, scenario: Scenario): Scena
  * Tracing stops at process equipment, as in the paths. A start that is itself such an element (an
  * element cause) reaches nothing beyond itself.
  */
-function reachedAvoiding(tracer: Tracer, side: Side, rank: ReadonlyMap<string, number>, level: number): ReadonlyMap<string, string | undefined> {
+function reachedAvoiding(
+  tracer: Tracer,
+  side: Side,
+  rank: ReadonlyMap<string, number>,
+  level: number,
+): ReadonlyMap<string, string | undefined> {
   const first = side.elements.values().next();
   if (first.done) return new Map();
   const start = first.value.path[0]!;
@@ -94,7 +111,9 @@ function pathTo(reached: ReadonlyMap<string, string | undefined>, tag: string): 
 }
 
 function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): (FindingDraft & { rule: Rule })[] {
-  const common = [...pair.b.elements.keys()].filter((tag) => pair.a.elements.has(tag) && pair.tracer.group(tag) !== 'equipment');
+  const common = [...pair.b.elements.keys()].filter(
+    (tag) => pair.a.elements.has(tag) && pair.tracer.group(tag) !== 'equipment',
+  );
   const claimed: { tag: string; rule: SharedElementRule; severity: SeverityLevel }[] = [];
   for (const tag of common) {
     const element = pair.element(tag);
@@ -107,7 +126,12 @@ function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): 
   // What a shared element relies on is shared too. List it on its own only where one side reaches it
   // by some route that passes no other shared element at least as serious: judged over every route,
   // not the one shortest path, so accepting the upper finding cannot hide a second, direct dependency.
-  const rank = new Map(claimed.map((c) => [c.tag, c.rule.coversDependencies?.(pair.element(c.tag)) ? Infinity : SEVERITY_RANK[c.severity]]));
+  const rank = new Map(
+    claimed.map((c) => [
+      c.tag,
+      c.rule.coversDependencies?.(pair.element(c.tag)) ? Infinity : SEVERITY_RANK[c.severity],
+    ]),
+  );
   const reach = new Map<string, ReadonlyMap<string, string | undefined>>();
   const reachOf = (side: Side, c: (typeof claimed)[number]) => {
     const level = rank.get(c.tag)!;
@@ -123,7 +147,10 @@ function sharedDrafts(pair: PairContext, shared: readonly SharedElementRule[]): 
   };
   return kept.map((c) => {
     const element = pair.element(c.tag);
-    const beneath = claimed.filter((o) => o.tag !== c.tag && !kept.includes(o) && pair.tracer.closure(c.tag).has(o.tag)).map((o) => o.tag).sort();
+    const beneath = claimed
+      .filter((o) => o.tag !== c.tag && !kept.includes(o) && pair.tracer.closure(c.tag).has(o.tag))
+      .map((o) => o.tag)
+      .sort();
     return {
       rule: c.rule,
       parties: [pair.a.party, pair.b.party],
@@ -163,5 +190,10 @@ export function runRules(env: RuleEnvironment, scenario: Scenario, rules: readon
       rationale: d.rule.rationale,
       source: d.rule.source,
     }))
-    .sort((a, b) => SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity] || order.get(a.rule)! - order.get(b.rule)! || (a.key < b.key ? -1 : a.key > b.key ? 1 : 0));
+    .sort(
+      (a, b) =>
+        SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity] ||
+        order.get(a.rule)! - order.get(b.rule)! ||
+        (a.key < b.key ? -1 : a.key > b.key ? 1 : 0),
+    );
 }

@@ -19,7 +19,10 @@ export function judged(element: Element, pair: PairContext, judgeCause: boolean)
     : pair.a.party.role === 'layer' && failsSafeOnLoss(pair.a, element, pair)
       ? pair.a.party.tag
       : undefined;
-  const cause = judgeCause && pair.a.party.role === 'cause' ? judgeCauseSide(pair.a, element.tag, isPowerSupport(element), pair) : undefined;
+  const cause =
+    judgeCause && pair.a.party.role === 'cause'
+      ? judgeCauseSide(pair.a, element.tag, isPowerSupport(element), pair)
+      : undefined;
   return { ...(safeLayer !== undefined ? { safeLayer } : {}), ...(cause ? { cause } : {}) };
 }
 

@@ -149,7 +149,8 @@ export class Tracer {
     if (solver === undefined) return true;
     const { edgeStart, edgeTarget, edgeRole, groups } = this.index;
     const branches: number[] = [];
-    for (let e = edgeStart[node]!; e < edgeStart[node + 1]!; e++) if (edgeRole[e] === 'signalVia') branches.push(edgeTarget[e]!);
+    for (let e = edgeStart[node]!; e < edgeStart[node + 1]!; e++)
+      if (edgeRole[e] === 'signalVia') branches.push(edgeTarget[e]!);
     if (branches.length < 2 || this.closureOf(target).has(solver)) return true;
     const servesOthersOnly = some(this.closureOf(target), (t) => groups[this.index.ids.get(t)!] === 'solver');
     return !(servesOthersOnly && branches.some((b) => this.closureOf(b).has(solver)));
@@ -188,7 +189,11 @@ export class Tracer {
    */
   private reach(start: number, fn?: number): number[] {
     const { edgeStart, edgeTarget, edgeRole, groups } = this.index;
-    const solver = this.index.isFunction(start) ? this.solverOf(start) : fn !== undefined ? this.solverOf(fn) : undefined;
+    const solver = this.index.isFunction(start)
+      ? this.solverOf(start)
+      : fn !== undefined
+        ? this.solverOf(fn)
+        : undefined;
     const walk = ++this.walk;
     const order = [start];
     this.stamp[start] = walk;
@@ -211,7 +216,9 @@ export class Tracer {
   /** What one channel of a function relies on: its head and everything reached from it by that role. */
   private channelElements(fn: number, head: number): string[] {
     const { tags } = this.index;
-    return this.reach(head, fn).map((n) => tags[n]!).sort();
+    return this.reach(head, fn)
+      .map((n) => tags[n]!)
+      .sort();
   }
 
   traceFunction(tag: string): FunctionTrace {
@@ -224,13 +231,15 @@ export class Tracer {
     let solver = false;
     for (let e = edgeStart[f]!; e < edgeStart[f + 1]!; e++) {
       const role = edgeRole[e];
-      if (role === 'sensor' || role === 'final') channels.push({ role, head: tags[edgeTarget[e]!]!, elements: this.channelElements(f, edgeTarget[e]!) });
+      if (role === 'sensor' || role === 'final')
+        channels.push({ role, head: tags[edgeTarget[e]!]!, elements: this.channelElements(f, edgeTarget[e]!) });
       if (role === 'solver' || role === 'raisedIn') solver = true;
     }
     const missing: MissingPart[] = [];
     const sensors = channels.filter((c) => c.role === 'sensor');
     const finals = channels.filter((c) => c.role === 'final');
-    const reachesProcess = (elements: Iterable<string>) => some(elements, (t) => PROCESS_SIDE.has(groups[this.index.ids.get(t)!]!));
+    const reachesProcess = (elements: Iterable<string>) =>
+      some(elements, (t) => PROCESS_SIDE.has(groups[this.index.ids.get(t)!]!));
     const kind = this.index.kinds[f]!;
     if (kind === 'device') {
       const device = edgeStart[f]! < edgeStart[f + 1]! ? edgeTarget[edgeStart[f]!]! : undefined;

@@ -33,7 +33,12 @@ export function heldExactly(literal: string): boolean {
 
 /** A number the user wrote with more digits than a double holds: refused, so nothing is silently rewritten. */
 export function tooPrecise(literal: string, span: Span): Diagnostic {
-  return error('BH121', `\`${literal}\` has more significant digits than a number can hold; it would be read as ${String(Number(literal))}`, span, {
-    help: 'write it with at most 15 significant digits; the value it would be read as is shown above',
-  });
+  return error(
+    'BH121',
+    `\`${literal}\` has more significant digits than a number can hold; it would be read as ${String(Number(literal))}`,
+    span,
+    {
+      help: 'write it with at most 15 significant digits; the value it would be read as is shown above',
+    },
+  );
 }

@@ -43,7 +43,8 @@ export function suggest(word: string, candidates: Iterable<string>): string | un
   let bestDistance = limit + 1;
   const extending: string[] = [];
   for (const candidate of candidates) {
-    if (word.length >= 3 && candidate.length > word.length && candidate.toLowerCase().startsWith(word.toLowerCase())) extending.push(candidate);
+    if (word.length >= 3 && candidate.length > word.length && candidate.toLowerCase().startsWith(word.toLowerCase()))
+      extending.push(candidate);
     const d = editDistance(word, candidate, limit);
     if (d < bestDistance || (d === bestDistance && best !== undefined && candidate < best)) {
       best = candidate;

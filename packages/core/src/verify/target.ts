@@ -56,8 +56,10 @@ function grouped(outcome: string, members: readonly ScenarioAssessment[], sif: s
   const before = withSif.reduce((s, a) => s + a.tolerable / a.sif!.requiredPfd, 0);
   const othersMitigated = others.reduce((s, a) => s + a.mitigatedAfter, 0);
   const notes: string[] = [];
-  if (new Set(members.map((a) => a.tolerable)).size > 1) notes.push('the scenarios name different tolerable frequencies: the lowest is used');
-  if (withSif.length < members.filter((a) => a.sif?.function === sif).length) notes.push('high-demand scenarios of the group are judged alone by PFH');
+  if (new Set(members.map((a) => a.tolerable)).size > 1)
+    notes.push('the scenarios name different tolerable frequencies: the lowest is used');
+  if (withSif.length < members.filter((a) => a.sif?.function === sif).length)
+    notes.push('high-demand scenarios of the group are judged alone by PFH');
   return {
     scenarios: members.map((a) => a.scenario),
     outcome,
@@ -84,7 +86,12 @@ export function sifTarget(model: Model, assessments: readonly ScenarioAssessment
     if (group) candidates.push(group);
   }
   const lowest = (key: 'requiredPfd' | 'requiredPfh') =>
-    candidates.filter((c) => c[key] !== undefined).reduce<TargetCandidate | undefined>((best, c) => (best === undefined || c[key]! < best[key]! ? c : best), undefined);
+    candidates
+      .filter((c) => c[key] !== undefined)
+      .reduce<TargetCandidate | undefined>(
+        (best, c) => (best === undefined || c[key]! < best[key]! ? c : best),
+        undefined,
+      );
   const governingPfd = lowest('requiredPfd');
   const governingPfh = lowest('requiredPfh');
   return { candidates, ...(governingPfd ? { governingPfd } : {}), ...(governingPfh ? { governingPfh } : {}) };

@@ -40,7 +40,15 @@ export interface SifVerification {
   againstClaim?: { pfdMeets?: boolean; pfhMeets?: boolean };
   /** The SIL the computed figure reaches (0: below SIL 1). */
   silReached?: number;
-  architecture: { sil: number; mode: 'low-demand' | 'high-demand'; required: number; source: string; bySubsystem: { subsystem: Subsystem; hft: number; meets: boolean }[] } | undefined;
+  architecture:
+    | {
+        sil: number;
+        mode: 'low-demand' | 'high-demand';
+        required: number;
+        source: string;
+        bySubsystem: { subsystem: Subsystem; hft: number; meets: boolean }[];
+      }
+    | undefined;
   /** Whether the inputs are complete enough for `check` to credit the SIF at its computed figure (issue 16, item 3). */
   complete: boolean;
   /** Shared elements of voted groups, as the independence rules see them, now in the figure. */
@@ -62,11 +70,19 @@ type Sif = FunctionKindOf<'sif'>;
 /** The SIL the most demanding requirement needs, when the SIF claims none: the higher of the two modes'. */
 function targetSil(target: SifTarget): number | undefined {
   const low = target.governingPfd ? requiredSil(target.governingPfd.requiredPfd!, target.governingPfd.edge) : undefined;
-  const high = target.governingPfh ? requiredSilForPfh(target.governingPfh.requiredPfh!, target.governingPfh.edge) : undefined;
+  const high = target.governingPfh
+    ? requiredSilForPfh(target.governingPfh.requiredPfh!, target.governingPfh.edge)
+    : undefined;
   return low === undefined ? high : high === undefined ? low : Math.max(low, high);
 }
 
-export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tracer, data: FailureDataIndex): SifVerification {
+export function verifySif(
+  model: Model,
+  sif: Sif,
+  analysis: Analysis,
+  tracer: Tracer,
+  data: FailureDataIndex,
+): SifVerification {
   const calculation = computeSif(tracer, data, sif);
   const { subsystems, findings, pfd, pfh } = calculation;
   const target = sifTarget(model, analysis.assessments, sif.tag);
@@ -75,7 +91,11 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
     sif: sif.tag,
     ...(sif.title !== undefined ? { title: sif.title } : {}),
     subsystems,
-    claimed: { ...(sif.pfd !== undefined ? { pfd: sif.pfd } : {}), ...(sif.pfh !== undefined ? { pfh: sif.pfh } : {}), ...(sif.sil !== undefined ? { sil: sif.sil } : {}) },
+    claimed: {
+      ...(sif.pfd !== undefined ? { pfd: sif.pfd } : {}),
+      ...(sif.pfh !== undefined ? { pfh: sif.pfh } : {}),
+      ...(sif.sil !== undefined ? { sil: sif.sil } : {}),
+    },
     target,
     architecture: undefined,
     complete: verificationComplete(calculation),
@@ -100,11 +120,20 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
         const value = high ? pfh : pfd;
         // A required figure at or below zero: the other scenarios of the outcome use up the tolerable frequency.
         const ratio = required > 0 ? value / required : Number.POSITIVE_INFINITY;
-        return { mode: g.mode, scenarios: g.scenarios, required, computed: value, meets: !incomplete && required > 0 && meetsCriterion(value, required, g.edge), ratio };
+        return {
+          mode: g.mode,
+          scenarios: g.scenarios,
+          required,
+          computed: value,
+          meets: !incomplete && required > 0 && meetsCriterion(value, required, g.edge),
+          ratio,
+        };
       });
     if (checks.length) {
       result.againstTargets = checks;
-      result.againstTarget = checks.reduce((worst, c) => (!c.meets && worst.meets) || (c.meets === worst.meets && c.ratio > worst.ratio) ? c : worst);
+      result.againstTarget = checks.reduce((worst, c) =>
+        (!c.meets && worst.meets) || (c.meets === worst.meets && c.ratio > worst.ratio) ? c : worst,
+      );
     }
     result.silReached = target.governingPfh ? requiredSilForPfh(pfh, 'below') : requiredSil(pfd, 'below');
   }
@@ -115,7 +144,11 @@ export function verifySif(model: Model, sif: Sif, analysis: Analysis, tracer: Tr
     const bySubsystem = subsystems.map((s) => ({ subsystem: s.subsystem, hft: s.hft, meets: s.hft >= required }));
     result.architecture = { sil, mode, required, source: HFT_SOURCE, bySubsystem };
     for (const s of bySubsystem.filter((b) => !b.meets)) {
-      findings.push({ code: 'hft-short', subject: s.subsystem, message: `HFT of the ${SUBSYSTEM_WORDS[s.subsystem]} is ${s.hft}; SIL ${sil} in ${mode} needs ${required} (${HFT_SOURCE})` });
+      findings.push({
+        code: 'hft-short',
+        subject: s.subsystem,
+        message: `HFT of the ${SUBSYSTEM_WORDS[s.subsystem]} is ${s.hft}; SIL ${sil} in ${mode} needs ${required} (${HFT_SOURCE})`,
+      });
     }
   }
   return result;

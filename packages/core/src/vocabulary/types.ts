@@ -203,9 +203,24 @@ export interface ScenarioAssessment {
     elements?: string[];
   };
   /** allowed, allowedIfAccepted, finding: as for modifiers (an enabler with no basis is not applied until accepted). */
-  enablers: { title: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
+  enablers: {
+    title: string;
+    probability: number;
+    basis?: string;
+    allowed: boolean;
+    allowedIfAccepted?: boolean;
+    finding?: string;
+  }[];
   /** allowed: in the headline figure; allowedIfAccepted: in the "if accepted" figure; finding: the key that bars it. */
-  modifiers: { kind: string; title?: string; probability: number; basis?: string; allowed: boolean; allowedIfAccepted?: boolean; finding?: string }[];
+  modifiers: {
+    kind: string;
+    title?: string;
+    probability: number;
+    basis?: string;
+    allowed: boolean;
+    allowedIfAccepted?: boolean;
+    finding?: string;
+  }[];
   layers: LayerAssessment[];
   /** Mitigated frequency with every claim taken at face value, per year. */
   mitigatedClaimed: number;

@@ -8,7 +8,8 @@ export const causeNoBasis = ruleEntry({
   title: 'Cause frequency without a basis',
   rationale:
     'An initiating-event frequency drives every figure of the scenario; one given without a basis (failure data, site history, a table row) is used as given but stays open until a basis is recorded or a justification accepts it.',
-  source: 'CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015); CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013)',
+  source:
+    'CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015); CCPS, Guidelines for Enabling Conditions and Conditional Modifiers in Layer of Protection Analysis (2013)',
   defaultSeverity: 'needs-justification',
   messages: {
     'no-basis': (d: { frequency: number }) =>

@@ -5,7 +5,8 @@ export const layerNoPfd = ruleEntry({
   id: 'layer-no-pfd',
   kind: 'assessment',
   title: 'Layer with no PFD and no default',
-  rationale: 'A layer with neither a claimed PFD nor a row in the defaults table earns no credit: no number is taken as given.',
+  rationale:
+    'A layer with neither a claimed PFD nor a row in the defaults table earns no credit: no number is taken as given.',
   source: 'common practice, no source',
   defaultSeverity: 'voids-credit',
   messages: {

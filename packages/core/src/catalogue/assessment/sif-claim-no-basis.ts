@@ -22,7 +22,8 @@ export const sifClaimNoBasis = ruleEntry({
   source: 'IEC 61511-1:2016 11.9 (SIF probability of failure verification) [from memory for the clause]',
   defaultSeverity: 'needs-justification',
   messages: {
-    'no-sil': (d: UnverifiedClaim) => `${head(d)} and no SIL: it earns no credit until a basis is recorded or a justification accepts it`,
+    'no-sil': (d: UnverifiedClaim) =>
+      `${head(d)} and no SIL: it earns no credit until a basis is recorded or a justification accepts it`,
     'at-band-edge': (d: UnverifiedClaim & { sil: number; edge: number }) =>
       `${head(d)}: credited at the edge of SIL ${d.sil}, ${figure(d, d.edge)}, until a basis is recorded or a justification accepts it`,
   },

@@ -12,7 +12,8 @@ export const causeNarrowed = ruleEntry({
   source: 'CCPS, Guidelines for Initiating Events and Independent Protection Layers (2015), BPCS loop failure',
   defaultSeverity: 'needs-justification',
   messages: {
-    narrowed: (d: { loop: string; only: string }) => `the cause is narrowed from loop \`${d.loop}\` to \`${d.only}\`; until accepted, the whole loop counts as the cause`,
+    narrowed: (d: { loop: string; only: string }) =>
+      `the cause is narrowed from loop \`${d.loop}\` to \`${d.only}\`; until accepted, the whole loop counts as the cause`,
     'outside-loop': (d: { loop: string; only: string }) =>
       `the cause is narrowed to \`${d.only}\`, which loop \`${d.loop}\` does not use; the whole loop counts as the cause`,
   },

@@ -17,8 +17,10 @@ export const incompleteTrace = ruleEntry({
   id: 'incomplete-trace',
   kind: 'independence',
   title: 'Incomplete trace: independence unverified',
-  rationale: 'What the model does not say is never taken as independence; complete the model or record an accepted justification.',
-  source: 'CCPS, Layer of Protection Analysis (2001), ch. 6 (an IPL must be auditable); conservative default of this tool',
+  rationale:
+    'What the model does not say is never taken as independence; complete the model or record an accepted justification.',
+  source:
+    'CCPS, Layer of Protection Analysis (2001), ch. 6 (an IPL must be auditable); conservative default of this tool',
   defaultSeverity: 'voids-credit',
   messages: {
     untraced: (d: { function: string; missing: MissingPart[] }) =>

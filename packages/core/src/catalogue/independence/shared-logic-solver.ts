@@ -9,7 +9,8 @@ export const sharedLogicSolver = ruleEntry({
   title: 'Shared controller or logic solver',
   rationale:
     'A controller that fails in the cause cannot be relied on to act against it, and two BPCS layers in one controller earn at most one credit. Older CCPS practice allowed a shared BPCS controller under conditions; set policy shared-solver=allow or same-controller-layers=both to follow it.',
-  source: 'IEC 61511-1:2016 9.3 (BPCS layers, one controller); CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance)',
+  source:
+    'IEC 61511-1:2016 9.3 (BPCS layers, one controller); CCPS, Layer of Protection Analysis (2001), ch. 6 (older allowance)',
   defaultSeverity: 'voids-credit',
   messages: {
     shared: (d: SharedVerdictData & { bpcsLayers: 'no' | 'both-credited' | 'limited' }) =>

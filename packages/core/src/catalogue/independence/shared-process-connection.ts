@@ -8,7 +8,8 @@ export const sharedProcessConnection = ruleEntry({
   kind: 'independence',
   title: 'Shared process connection',
   rationale: 'A nozzle, tapping or root valve that plugs, freezes or is left isolated defeats every instrument on it.',
-  source: 'CCPS, Layer of Protection Analysis (2001), ch. 6 (independence); IEC 61511-1:2016 9.4 (common cause between layers)',
+  source:
+    'CCPS, Layer of Protection Analysis (2001), ch. 6 (independence); IEC 61511-1:2016 9.4 (common cause between layers)',
   defaultSeverity: 'voids-credit',
   messages: { shared: sharedElementWords('process connection') },
 });

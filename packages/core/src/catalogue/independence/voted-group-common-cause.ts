@@ -34,12 +34,25 @@ export const votedGroupCommonCause = ruleEntry({
   source: 'IEC 61508-6:2010 Annex B and D (common cause in voted groups); ISA-TR84.00.02 (simplified PFD equations)',
   defaultSeverity: 'needs-justification',
   messages: {
-    'counted-within-claim': (d: CountedData) => `${counted(d)}, within the claimed PFD ${formatProbability(d.claimed)}: credited at the claim`,
+    'counted-within-claim': (d: CountedData) =>
+      `${counted(d)}, within the claimed PFD ${formatProbability(d.claimed)}: credited at the claim`,
     'counted-claim-missed': (d: CountedData) =>
       `${counted(d)}, ${missed(d)}: credited at the computed figure until the claim is justified`,
-    'shared-in-group': (d: { role: 'sensor' | 'final'; channels: string[]; function: string; element: string; kind: string }) =>
+    'shared-in-group': (d: {
+      role: 'sensor' | 'final';
+      channels: string[];
+      function: string;
+      element: string;
+      kind: string;
+    }) =>
       `the ${d.role} channels ${tagList(d.channels)} of \`${d.function}\` all rely on ${d.kind} \`${d.element}\`: the voted group is no better than one channel`,
-    'own-solver-card': (d: { role: 'sensor' | 'final'; channels: string[]; function: string; element: string; solver: string }) =>
+    'own-solver-card': (d: {
+      role: 'sensor' | 'final';
+      channels: string[];
+      function: string;
+      element: string;
+      solver: string;
+    }) =>
       `the ${d.role} channels ${tagList(d.channels)} of \`${d.function}\` share \`${d.element}\`, a card of its own logic solver \`${d.solver}\`: part of the logic-solver subsystem, counted there by \`bulkhead verify\`, not a common cause of the voted group`,
   },
 });

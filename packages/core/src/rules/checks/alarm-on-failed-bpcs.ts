@@ -6,14 +6,21 @@ import { say } from '../../catalogue/catalogue.ts';
 import { alarmOnFailedBpcs as entry } from '../../catalogue/independence/alarm-on-failed-bpcs.ts';
 
 function allowedBySolverPolicy(element: Element, pair: PairContext): boolean {
-  return pair.policy.sharedSolver === 'allow' && (element.kind === 'controller' || element.kind === 'logic-solver') && pair.a.party.tag !== element.tag;
+  return (
+    pair.policy.sharedSolver === 'allow' &&
+    (element.kind === 'controller' || element.kind === 'logic-solver') &&
+    pair.a.party.tag !== element.tag
+  );
 }
 
 export const alarmOnFailedBpcs = defineSharedRule(entry, {
   groups: ['solver', 'people'],
   coversDependencies: (element) => element.kind === 'controller' || element.kind === 'logic-solver',
   claims: (element, pair) =>
-    pair.a.party.role === 'cause' && pair.a.fn !== undefined && pair.b.fn?.kind === 'alarm' && (element.kind !== 'operator'),
+    pair.a.party.role === 'cause' &&
+    pair.a.fn !== undefined &&
+    pair.b.fn?.kind === 'alarm' &&
+    element.kind !== 'operator',
   // The older practice the policy switch follows: an alarm with its own sensor and I/O may run in the
   // failing loop's controller. Its own sensor or card shared with the loop is still reported by their rules.
   judge: (element, pair, inForce) => (allowedBySolverPolicy(element, pair) ? 'note' : inForce),

@@ -10,11 +10,16 @@ export const causeNarrowed = defineScenarioRule(entry, {
     const { cause } = ctx.scenario;
     if (cause.function === undefined || cause.only === undefined) return [];
     const inLoop = ctx.tracer.closure(cause.only).size > 0 && ctx.cause.elements.has(cause.only);
-    return [{
-      parties: [{ role: 'cause', tag: cause.function }],
-      element: cause.only,
-      paths: [ctx.cause.elements.get(cause.only)?.path ?? [cause.function, cause.only]],
-      says: say(inLoop ? 'cause-narrowed/narrowed' : 'cause-narrowed/outside-loop', { loop: cause.function, only: cause.only }),
-    }];
+    return [
+      {
+        parties: [{ role: 'cause', tag: cause.function }],
+        element: cause.only,
+        paths: [ctx.cause.elements.get(cause.only)?.path ?? [cause.function, cause.only]],
+        says: say(inLoop ? 'cause-narrowed/narrowed' : 'cause-narrowed/outside-loop', {
+          loop: cause.function,
+          only: cause.only,
+        }),
+      },
+    ];
   },
 });

@@ -9,12 +9,14 @@ export const incompleteTrace = defineScenarioRule(entry, {
     return ctx.layers.flatMap((layer) => {
       const trace = layer.fn ? ctx.tracer.traceFunction(layer.fn.tag) : undefined;
       if (!trace || trace.missing.length === 0) return [];
-      return [{
-        parties: [layer.party],
-        paths: [[layer.fn!.tag]],
-        keyDetail: trace.missing.join('+'),
-        says: say('incomplete-trace/untraced', { function: layer.fn!.tag, missing: [...trace.missing] }),
-      }];
+      return [
+        {
+          parties: [layer.party],
+          paths: [[layer.fn!.tag]],
+          keyDetail: trace.missing.join('+'),
+          says: say('incomplete-trace/untraced', { function: layer.fn!.tag, missing: [...trace.missing] }),
+        },
+      ];
     });
   },
 });

@@ -3,7 +3,14 @@
 import { groupOf } from '../../model/kinds.ts';
 import type { Element } from '../../model/schema.ts';
 import { say } from '../../catalogue/catalogue.ts';
-import { defineScenarioRule, sideRef, sidesInKeyOrder, type FindingDraft, type ScenarioContext, type Side } from '../define.ts';
+import {
+  defineScenarioRule,
+  sideRef,
+  sidesInKeyOrder,
+  type FindingDraft,
+  type ScenarioContext,
+  type Side,
+} from '../define.ts';
 import { sameMakeModel as entry } from '../../catalogue/independence/same-make-model.ts';
 
 function identity(element: Element): string | undefined {
@@ -48,7 +55,8 @@ export const sameMakeModel = defineScenarioRule(entry, {
   check(ctx) {
     const sides = sidesInKeyOrder(ctx);
     const drafts: FindingDraft[] = [];
-    for (let i = 0; i < sides.length; i++) for (let j = i + 1; j < sides.length; j++) drafts.push(...compare(sides[i]!, sides[j]!, ctx));
+    for (let i = 0; i < sides.length; i++)
+      for (let j = i + 1; j < sides.length; j++) drafts.push(...compare(sides[i]!, sides[j]!, ctx));
     return drafts;
   },
 });

@@ -6,5 +6,6 @@ import { say } from '../../catalogue/catalogue.ts';
 
 export const sharedActuation = defineSharedRule(entry, {
   groups: ['actuation'],
-  message: (element, pair, severity, beneath) => say('shared-actuation/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-actuation/shared', sharedData(element, pair, severity, beneath)),
 });

@@ -7,5 +7,6 @@ import { say } from '../../catalogue/catalogue.ts';
 export const sharedBridle = defineSharedRule(entry, {
   groups: ['connection'],
   claims: (element) => element.kind === 'bridle' || element.kind === 'manifold',
-  message: (element, pair, severity, beneath) => say('shared-bridle/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-bridle/shared', sharedData(element, pair, severity, beneath)),
 });

@@ -6,5 +6,6 @@ import { say } from '../../catalogue/catalogue.ts';
 export const sharedConsole = defineSharedRule(entry, {
   groups: ['people'],
   claims: (element) => element.kind === 'console',
-  message: (element, pair, severity, beneath) => say('shared-console/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-console/shared', sharedData(element, pair, severity, beneath)),
 });

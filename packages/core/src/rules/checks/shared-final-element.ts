@@ -6,5 +6,6 @@ import { say } from '../../catalogue/catalogue.ts';
 
 export const sharedFinalElement = defineSharedRule(entry, {
   groups: ['final', 'mechanical'],
-  message: (element, pair, severity, beneath) => say('shared-final-element/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-final-element/shared', sharedData(element, pair, severity, beneath)),
 });

@@ -6,5 +6,6 @@ import { say } from '../../catalogue/catalogue.ts';
 
 export const sharedHousing = defineSharedRule(entry, {
   groups: ['housing'],
-  message: (element, pair, severity, beneath) => say('shared-housing/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-housing/shared', sharedData(element, pair, severity, beneath)),
 });

@@ -6,5 +6,6 @@ import { say } from '../../catalogue/catalogue.ts';
 
 export const sharedImpulseLine = defineSharedRule(entry, {
   groups: ['impulse'],
-  message: (element, pair, severity, beneath) => say('shared-impulse-line/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-impulse-line/shared', sharedData(element, pair, severity, beneath)),
 });

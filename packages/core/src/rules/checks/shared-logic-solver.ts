@@ -23,12 +23,17 @@ export const sharedLogicSolver = defineSharedRule(entry, {
     // Two BPCS layers in one controller: the assessment's bpcs-same-controller rule limits their credit.
     if (bothBpcsLayers(pair)) return 'note';
     // The older allowance is for a loop failure, never for the failure of the controller itself.
-    if (pair.a.party.role === 'cause' && pair.a.party.tag !== element.tag && pair.policy.sharedSolver === 'allow') return 'note';
+    if (pair.a.party.role === 'cause' && pair.a.party.tag !== element.tag && pair.policy.sharedSolver === 'allow')
+      return 'note';
     return inForce;
   },
   message: (element, pair, severity, beneath) =>
     say('shared-logic-solver/shared', {
       ...sharedData(element, pair, severity, beneath),
-      bpcsLayers: !bothBpcsLayers(pair) ? 'no' : pair.policy.sameControllerLayers === 'both' ? 'both-credited' : 'limited',
+      bpcsLayers: !bothBpcsLayers(pair)
+        ? 'no'
+        : pair.policy.sameControllerLayers === 'both'
+          ? 'both-credited'
+          : 'limited',
     }),
 });

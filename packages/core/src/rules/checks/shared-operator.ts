@@ -6,5 +6,6 @@ import { say } from '../../catalogue/catalogue.ts';
 export const sharedOperator = defineSharedRule(entry, {
   groups: ['people'],
   claims: (element) => element.kind === 'operator',
-  message: (element, pair, severity, beneath) => say('shared-operator/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-operator/shared', sharedData(element, pair, severity, beneath)),
 });

@@ -7,5 +7,6 @@ import { say } from '../../catalogue/catalogue.ts';
 export const sharedProcessConnection = defineSharedRule(entry, {
   groups: ['connection'],
   claims: (element) => element.kind === 'nozzle' || element.kind === 'tapping' || element.kind === 'root-valve',
-  message: (element, pair, severity, beneath) => say('shared-process-connection/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-process-connection/shared', sharedData(element, pair, severity, beneath)),
 });

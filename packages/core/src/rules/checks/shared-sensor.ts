@@ -5,5 +5,6 @@ import { say } from '../../catalogue/catalogue.ts';
 
 export const sharedSensor = defineSharedRule(entry, {
   groups: ['sensor'],
-  message: (element, pair, severity, beneath) => say('shared-sensor/shared', sharedData(element, pair, severity, beneath)),
+  message: (element, pair, severity, beneath) =>
+    say('shared-sensor/shared', sharedData(element, pair, severity, beneath)),
 });

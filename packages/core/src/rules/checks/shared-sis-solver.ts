@@ -7,7 +7,13 @@ import type { Element } from '../../model/schema.ts';
 import { sharedSisSolver as entry } from '../../catalogue/independence/shared-sis-solver.ts';
 
 function bothLayersInSis(element: Element, pair: PairContext): boolean {
-  return pair.a.party.role === 'layer' && pair.b.party.role === 'layer' && element.kind === 'logic-solver' && 'system' in element && element.system === 'sis';
+  return (
+    pair.a.party.role === 'layer' &&
+    pair.b.party.role === 'layer' &&
+    element.kind === 'logic-solver' &&
+    'system' in element &&
+    element.system === 'sis'
+  );
 }
 
 export const sharedSisSolver = defineSharedRule(entry, {
@@ -15,5 +21,10 @@ export const sharedSisSolver = defineSharedRule(entry, {
   claims: bothLayersInSis,
   // The solver with its power and cabinet is one unit: what is said of it covers them.
   coversDependencies: () => true,
-  message: (element, pair, _severity, beneath) => say('shared-sis-solver/both-layers', { layers: [pair.a.party.tag!, pair.b.party.tag!], element: element.tag, beneath }),
+  message: (element, pair, _severity, beneath) =>
+    say('shared-sis-solver/both-layers', {
+      layers: [pair.a.party.tag!, pair.b.party.tag!],
+      element: element.tag,
+      beneath,
+    }),
 });

@@ -8,5 +8,6 @@ import { sharedSupport as entry } from '../../catalogue/independence/shared-supp
 export const sharedSupport = defineSharedRule(entry, {
   groups: ['support'],
   judge: (element, pair, inForce) => severityOf(judged(element, pair, true), inForce),
-  message: (element, pair, _severity, beneath) => say('shared-support/support', supportData(element, pair, judged(element, pair, true), beneath)),
+  message: (element, pair, _severity, beneath) =>
+    say('shared-support/support', supportData(element, pair, judged(element, pair, true), beneath)),
 });

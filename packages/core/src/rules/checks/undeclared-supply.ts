@@ -10,7 +10,14 @@
 import { ACTIVE_KINDS } from '../../model/kinds.ts';
 import type { SeverityLevel } from '../../model/schema.ts';
 import { say } from '../../catalogue/catalogue.ts';
-import { defineScenarioRule, sideRef, SEVERITY_RANK, type FindingDraft, type ScenarioContext, type Side } from '../define.ts';
+import {
+  defineScenarioRule,
+  sideRef,
+  SEVERITY_RANK,
+  type FindingDraft,
+  type ScenarioContext,
+  type Side,
+} from '../define.ts';
 import { failsSafeWhenLost } from '../fail-direction.ts';
 import { undeclaredSupply as entry } from '../../catalogue/independence/undeclared-supply.ts';
 
@@ -31,7 +38,11 @@ function layerDrafts(layer: Side, ctx: ScenarioContext, inForce: SeverityLevel):
       element: tag,
       paths: [traced.path],
       severity: stops ? inForce : 'note',
-      says: say(stops ? 'undeclared-supply/layer-unverified' : 'undeclared-supply/layer-fails-safe', { element: tag, kind: traced.kind, layer: sideRef(layer) }),
+      says: say(stops ? 'undeclared-supply/layer-unverified' : 'undeclared-supply/layer-fails-safe', {
+        element: tag,
+        kind: traced.kind,
+        layer: sideRef(layer),
+      }),
     });
   }
   return out;
@@ -44,7 +55,9 @@ function causeDrafts(ctx: ScenarioContext, inForce: SeverityLevel): FindingDraft
   const out: FindingDraft[] = [];
   for (const layer of ctx.layers) {
     if (!layer.fn) continue;
-    const vulnerable = [...layer.elements.values()].find((e) => ACTIVE_KINDS.has(e.kind) && stopsLayer(layer, e.tag, ctx));
+    const vulnerable = [...layer.elements.values()].find(
+      (e) => ACTIVE_KINDS.has(e.kind) && stopsLayer(layer, e.tag, ctx),
+    );
     if (!vulnerable) continue;
     for (const e of unsupplied) {
       out.push({
@@ -52,7 +65,13 @@ function causeDrafts(ctx: ScenarioContext, inForce: SeverityLevel): FindingDraft
         element: e.tag,
         paths: [e.path, vulnerable.path],
         severity,
-        says: say('undeclared-supply/cause-unverified', { element: e.tag, kind: e.kind, cause: sideRef(ctx.cause), layer: sideRef(layer), stoppable: vulnerable.tag }),
+        says: say('undeclared-supply/cause-unverified', {
+          element: e.tag,
+          kind: e.kind,
+          cause: sideRef(ctx.cause),
+          layer: sideRef(layer),
+          stoppable: vulnerable.tag,
+        }),
       });
     }
   }
@@ -62,6 +81,9 @@ function causeDrafts(ctx: ScenarioContext, inForce: SeverityLevel): FindingDraft
 export const undeclaredSupply = defineScenarioRule(entry, {
   check(ctx) {
     const inForce = ctx.severity(UNDECLARED_SUPPLY_RULE);
-    return [...ctx.layers.flatMap((layer) => (layer.fn ? layerDrafts(layer, ctx, inForce) : [])), ...causeDrafts(ctx, inForce)];
+    return [
+      ...ctx.layers.flatMap((layer) => (layer.fn ? layerDrafts(layer, ctx, inForce) : [])),
+      ...causeDrafts(ctx, inForce),
+    ];
   },
 });

@@ -10,5 +10,6 @@ export const utilityLossCause = defineSharedRule(entry, {
   claims: (element, pair) => pair.a.party.role === 'cause' && pair.a.party.tag === element.tag,
   // The cause is the loss of this very utility: its cause side is dangerous by definition.
   judge: (element, pair, inForce) => severityOf(judged(element, pair, false), inForce),
-  message: (element, pair, _severity, beneath) => say('utility-loss-cause/support', supportData(element, pair, judged(element, pair, false), beneath)),
+  message: (element, pair, _severity, beneath) =>
+    say('utility-loss-cause/support', supportData(element, pair, judged(element, pair, false), beneath)),
 });

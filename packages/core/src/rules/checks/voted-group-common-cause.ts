@@ -21,12 +21,15 @@ export const votedGroupCommonCause = defineScenarioRule(entry, {
         closures.forEach((closure, i) => {
           for (const tag of closure) {
             if (solverSide.has(tag) || ctx.tracer.group(tag) === 'equipment') continue;
-            if (closures.some((other, j) => j !== i && other.has(tag))) (shared.get(tag) ?? shared.set(tag, []).get(tag)!).push(heads[i]!);
+            if (closures.some((other, j) => j !== i && other.has(tag)))
+              (shared.get(tag) ?? shared.set(tag, []).get(tag)!).push(heads[i]!);
           }
         });
         // Report only the elements closest to the channels: what a shared element relies on is shared too.
         const candidates = [...shared.keys()];
-        const reported = candidates.filter((tag) => !candidates.some((other) => other !== tag && ctx.tracer.closure(other).has(tag)));
+        const reported = candidates.filter(
+          (tag) => !candidates.some((other) => other !== tag && ctx.tracer.closure(other).has(tag)),
+        );
         for (const tag of reported.sort()) {
           const element = ctx.element(tag);
           if (ctx.tracer.group(tag) === 'support' && failsSafeOnLoss(layer, element, ctx)) continue;
@@ -39,7 +42,13 @@ export const votedGroupCommonCause = defineScenarioRule(entry, {
               element: tag,
               paths: [layer.elements.get(tag)?.path ?? [fn.tag, tag]],
               severity: 'note',
-              says: say('voted-group-common-cause/own-solver-card', { role, channels, function: fn.tag, element: tag, solver: fn.solver }),
+              says: say('voted-group-common-cause/own-solver-card', {
+                role,
+                channels,
+                function: fn.tag,
+                element: tag,
+                solver: fn.solver,
+              }),
             });
             continue;
           }
@@ -47,7 +56,13 @@ export const votedGroupCommonCause = defineScenarioRule(entry, {
             parties: [layer.party],
             element: tag,
             paths: [layer.elements.get(tag)?.path ?? [fn.tag, tag]],
-            says: say('voted-group-common-cause/shared-in-group', { role, channels, function: fn.tag, element: tag, kind: element.kind }),
+            says: say('voted-group-common-cause/shared-in-group', {
+              role,
+              channels,
+              function: fn.tag,
+              element: tag,
+              kind: element.kind,
+            }),
           });
         }
       }
