@@ -165,18 +165,22 @@ export function writeCheck(
 }
 
 /** Lines joined by newlines, passed on in pieces; the run of newlines at the very end becomes one. */
-class LineWriter {
+export class LineWriter {
   private buffer = '';
   private started = false;
 
-  constructor(private readonly write: (text: string) => void) {}
+  /** `flushAt`: how much text is held before it is passed on (small in tests, to cross many boundaries). */
+  constructor(
+    private readonly write: (text: string) => void,
+    private readonly flushAt = 1 << 16,
+  ) {}
 
   push(...lines: string[]): void {
     for (const line of lines) {
       this.buffer += this.started ? `\n${line}` : line;
       this.started = true;
     }
-    if (this.buffer.length > 1 << 16) {
+    if (this.buffer.length > this.flushAt) {
       // Trailing newlines stay behind: only at the end is it known whether they are the last ones.
       const kept = this.buffer.length - /\n*$/.exec(this.buffer)![0].length;
       this.write(this.buffer.slice(0, kept));
