@@ -1,4 +1,5 @@
-// Layout benchmark: how long ELK takes (elk.bundled.js, the code the viewer's worker runs) for the
+// Layout benchmark: how long layout takes (stage columns for a scenario, elk.bundled.js for the site
+// overview: the code the viewer's worker runs) for the
 // demo's scenarios, a focused scenario of about 300 nodes, and a 5,000-element site's overview.
 // `runLayoutBench()` is for bench/run.ts; `npx tsx bench/layout.ts` prints the table on its own.
 import { pathToFileURL } from 'node:url';
@@ -77,10 +78,7 @@ export function formatLayoutBench(results: LayoutBenchResult[]): string {
     (r) =>
       `${r.name.padEnd(44)} ${String(r.nodes).padStart(5)} ${String(r.edges).padStart(5)} ${String(r.medianMs).padStart(7)} ${String(r.maxMs).padStart(7)} ${r.limitMs ? `< ${r.limitMs}`.padStart(7) : '       '} ${r.ok ? 'ok' : 'SLOW'}`,
   );
-  return (
-    [`${'layout (elk.bundled.js, in process)'.padEnd(44)} nodes edges  median     max  target`, ...rows].join('\n') +
-    '\n'
-  );
+  return [`${'layout (in process)'.padEnd(44)} nodes edges  median     max  target`, ...rows].join('\n') + '\n';
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? '').href) {

@@ -66,6 +66,16 @@ export interface DrawnCluster {
   height: number;
 }
 
+/** A stage column's heading on a scenario sheet: "Sensors" over the sensors. */
+export interface DrawnStage {
+  label: string;
+  x: number;
+  y: number;
+  width: number;
+  /** Down to the foot of the sheet: the column's band is drawn this tall behind its boxes. */
+  height: number;
+}
+
 export interface Drawing {
   view: Scene['view'];
   title: string;
@@ -76,6 +86,8 @@ export interface Drawing {
   boxes: DrawnBox[];
   edges: DrawnEdge[];
   clusters: DrawnCluster[];
+  /** Stage columns of a scenario sheet, left to right; absent in the overview. */
+  stages?: DrawnStage[];
   findings: FindingPath[];
   notes: string[];
 }
@@ -244,4 +256,25 @@ export function offsetPolyline(points: readonly Point[], offset: number): Point[
 
 export function round(n: number): number {
   return Math.round(n * 10) / 10;
+}
+
+/**
+ * The drawn edges of a scene from a route per edge (running from the box that relies to the box relied
+ * on, so the arrowhead points at what is relied on): one lane per side that relies on the edge, side
+ * by side, classed by side and by whether a finding's path runs along it.
+ */
+export function drawEdges(scene: Scene, routes: ReadonlyMap<string, Point[]>): DrawnEdge[] {
+  return scene.edges.flatMap((e) => {
+    const points = routes.get(e.id);
+    if (!points || points.length < 2) return [];
+    const lanes =
+      e.sides.length === 0
+        ? [{ points, classes: ['lane'] }]
+        : e.sides.map((side, i) => ({
+            side,
+            points: offsetPolyline(points, (i - (e.sides.length - 1) / 2) * LANE_GAP),
+            classes: ['lane', `side-${side}`, ...(e.onPath.includes(side) ? ['on-path'] : [])],
+          }));
+    return [{ id: e.id, source: e.source, target: e.target, link: e.link, lanes }];
+  });
 }

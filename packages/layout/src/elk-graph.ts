@@ -1,17 +1,7 @@
 // Scene to ELK graph and ELK result to Drawing: the pure half of layout, with no ELK code in it, so
 // the viewer's main bundle can import it while elkjs itself runs only in the worker (or in Node).
 import type { ElkExtendedEdge, ElkNode } from 'elkjs/lib/elk-api.js';
-import {
-  drawBox,
-  boxSize,
-  LANE_GAP,
-  offsetPolyline,
-  round,
-  type DrawnCluster,
-  type DrawnEdge,
-  type Drawing,
-  type Point,
-} from './drawing.ts';
+import { drawBox, drawEdges, boxSize, round, type DrawnCluster, type Drawing, type Point } from './drawing.ts';
 import type { Scene, SceneNode } from './scene.ts';
 
 /** ELK layout options. Values must be strings (elkjs parses them). */
@@ -46,12 +36,10 @@ function elkNode(node: SceneNode, scene: Scene): ElkNode {
 }
 
 /**
- * The ELK graph for a scene. Edges are given to ELK from the lower rank to the higher, so layering
- * reads process side, sensors, I/O, solvers, final elements from left to right. Ranks only orient
- * edges; hard columns (ELK partitions) made drawings three times wider than tall, too small to read.
+ * The ELK graph for the site overview (a scenario is drawn in stage columns by ./stage-columns.ts,
+ * without ELK): areas and the systems of solvers that group them, each link as relied on.
  */
 export function toElk(scene: Scene): ElkNode {
-  const partitioned = scene.view === 'scenario';
   const byId = new Map(scene.nodes.map((n) => [n.id, n]));
   const inCluster = new Map<string, string>();
   for (const c of scene.clusters) for (const child of c.children) if (byId.has(child)) inCluster.set(child, c.id);
@@ -62,15 +50,7 @@ export function toElk(scene: Scene): ElkNode {
   }
   const edges: ElkExtendedEdge[] = scene.edges
     .filter((e) => byId.has(e.source) && byId.has(e.target) && e.source !== e.target)
-    .map((e) => {
-      const forward = byId.get(e.source)!.partition <= byId.get(e.target)!.partition;
-      // Within one column the process side reads from what is relied on to what relies on it.
-      const flip = partitioned
-        ? !forward ||
-          (byId.get(e.source)!.partition === byId.get(e.target)!.partition && byId.get(e.source)!.partition <= 3)
-        : false;
-      return { id: e.id, sources: [flip ? e.target : e.source], targets: [flip ? e.source : e.target] };
-    });
+    .map((e) => ({ id: e.id, sources: [e.source], targets: [e.target] }));
   return {
     id: 'root',
     layoutOptions: {
@@ -118,30 +98,15 @@ export function fromElk(scene: Scene, laidOut: ElkNode): Drawing {
   };
   walk(laidOut);
   const routes = new Map<string, Point[]>();
-  const sourceOf = new Map(scene.edges.map((e) => [e.id, e.source]));
-  // toElk may have turned an edge round to set the reading order; its route is turned back here, so
-  // every drawn line runs from the box that relies to the box relied on and its arrowhead points there.
   const collect = (elk: ElkNode) => {
     for (const e of elk.edges ?? []) {
       const points = endpoints(e);
-      routes.set(e.id, e.sources[0] === sourceOf.get(e.id) ? points : points.reverse());
+      routes.set(e.id, points);
     }
     for (const child of elk.children ?? []) collect(child);
   };
   collect(laidOut);
-  const edges: DrawnEdge[] = scene.edges.flatMap((e) => {
-    const points = routes.get(e.id);
-    if (!points || points.length < 2) return [];
-    const lanes =
-      e.sides.length === 0
-        ? [{ points, classes: ['lane'] }]
-        : e.sides.map((side, i) => ({
-            side,
-            points: offsetPolyline(points, (i - (e.sides.length - 1) / 2) * LANE_GAP),
-            classes: ['lane', `side-${side}`, ...(e.onPath.includes(side) ? ['on-path'] : [])],
-          }));
-    return [{ id: e.id, source: e.source, target: e.target, link: e.link, lanes }];
-  });
+  const edges = drawEdges(scene, routes);
   boxes.sort((a, b) => a.id.localeCompare(b.id));
   return {
     view: scene.view,

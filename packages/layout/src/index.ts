@@ -15,6 +15,8 @@ export {
 } from './scene.ts';
 export { siteOverview, OVERVIEW_NODE_LIMIT } from './overview.ts';
 export { toElk, fromElk } from './elk-graph.ts';
+export { layoutStageColumns, STAGES, type Stage } from './stage-columns.ts';
+export { countCrossings } from './orthogonal-routes.ts';
 export { warmUpScene } from './warm-up.ts';
 export {
   offsetPolyline,
@@ -26,6 +28,7 @@ export {
   type DrawnEdge,
   type DrawnLane,
   type DrawnCluster,
+  type DrawnStage,
   type DrawnText,
   type DrawnMark,
   type Point,

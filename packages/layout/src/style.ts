@@ -64,6 +64,8 @@ export const DRAWING_CSS = `
 .bh-drawing .title-value{font-family:ui-monospace,"DejaVu Sans Mono","Liberation Mono",monospace;font-size:11px;fill:#111}
 .bh-drawing .through .body{stroke:#111;stroke-width:2.4;stroke-dasharray:5 2}
 .bh-drawing .lane.on-path{stroke-width:3.2;opacity:1}
+.bh-drawing .stage-band{fill:#ece9e1;opacity:.55}
+.bh-drawing .stage-label{font-size:12px;font-weight:700;fill:#3b3f45;text-anchor:middle;letter-spacing:.04em}
 .bh-drawing .cluster{fill:none;stroke:#8a8f96;stroke-width:1.2;stroke-dasharray:6 3}
 .bh-drawing .cluster-label{font-size:12px;font-weight:700;fill:#3b3f45}
 .bh-drawing.focusing .box:not(.in-focus){opacity:.3}

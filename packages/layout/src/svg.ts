@@ -93,6 +93,11 @@ export function toSvg(drawing: Drawing, view: ViewState = {}, title: readonly Ti
     );
   });
   out.push(`<g transform="translate(0 ${header})">`);
+  for (const st of drawing.stages ?? []) {
+    out.push(
+      `<g class="stage"><rect class="stage-band" x="${st.x}" y="${st.y}" width="${st.width}" height="${st.height}" rx="6"/><text class="stage-label" x="${st.x + st.width / 2}" y="${st.y + 18}">${escapeXml(st.label)}</text></g>`,
+    );
+  }
   for (const c of drawing.clusters) {
     out.push(`<rect class="cluster" x="${c.x}" y="${c.y}" width="${c.width}" height="${c.height}" rx="8"/>`);
     out.push(`<text class="cluster-label" x="${c.x + 10}" y="${c.y + 19}">${escapeXml(c.label)}</text>`);

@@ -35,5 +35,5 @@ export function warmUpScene(size = 60): Scene {
         onPath: [],
       });
   }
-  return { view: 'scenario', title: 'warm-up', sides: [], nodes, edges, findings: [], clusters: [], notes: [] };
+  return { view: 'overview', title: 'warm-up', sides: [], nodes, edges, findings: [], clusters: [], notes: [] };
 }

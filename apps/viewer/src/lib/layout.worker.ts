@@ -1,7 +1,7 @@
 // The layout worker: runs elkjs off the main thread. elk.bundled.js installs its own `self.onmessage`
 // when evaluated in a worker, so we assign ours after the import (replacing it), never addEventListener.
 import ELK from 'elkjs/lib/elk.bundled.js';
-import { fromElk, toElk, warmUpScene, type Scene } from '@bulkhead/layout';
+import { fromElk, layoutStageColumns, toElk, warmUpScene, type Scene } from '@bulkhead/layout';
 
 const elk = new ELK();
 // Pay ELK's JIT warm-up while the page is still loading the model, not on the first real layout.
@@ -16,10 +16,12 @@ self.onmessage = async (ev: MessageEvent<Request>) => {
     return;
   }
   try {
-    await warm;
     const started = performance.now();
-    const laidOut = await elk.layout(toElk(request.scene));
-    const drawing = fromElk(request.scene, laidOut);
+    // A scenario is a sheet in stage columns, laid out without ELK; only the overview waits for it.
+    const drawing =
+      request.scene.view === 'scenario'
+        ? layoutStageColumns(request.scene)
+        : await warm.then(async () => fromElk(request.scene, await elk.layout(toElk(request.scene))));
     self.postMessage({ id: request.id, drawing, ms: Math.round(performance.now() - started) });
   } catch (e) {
     self.postMessage({ id: request.id, error: e instanceof Error ? e.message : String(e) });

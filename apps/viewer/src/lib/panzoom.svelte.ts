@@ -55,26 +55,34 @@ export class PanZoom {
       this.y = margin - content.y * this.k;
       return;
     }
-    this.x = this.width / 2 - (focus.x + focus.width / 2) * this.k;
-    this.y = this.height / 2 - (focus.y + focus.height / 2) * this.k;
+    // Centred on the shared elements, but never leaving blank paper inside the view when the sheet
+    // could fill it: the headings stay at the top and no column is cut off for empty margin.
+    const within = (v: number, low: number, high: number) => Math.min(Math.max(v, Math.min(low, high)), high);
+    this.x = within(
+      this.width / 2 - (focus.x + focus.width / 2) * this.k,
+      this.width - margin - (content.x + content.width) * this.k,
+      margin - content.x * this.k,
+    );
+    this.y = within(
+      this.height / 2 - (focus.y + focus.height / 2) * this.k,
+      this.height - margin - (content.y + content.height) * this.k,
+      margin - content.y * this.k,
+    );
   }
 
   /**
    * Centres the view on `b` at a scale that shows it whole if it can, never below the reading scale
-   * (nor above 110%); when `b` is too large for that, `keep` (the shared element) is brought into view.
+   * (nor above 110%); when `b` is too large for that, the view centres on `keep` (the shared element,
+   * where the chains meet) instead, so the part of the proof that matters is in the middle.
    */
   centre(b: Bounds, keep?: Bounds): void {
     if (this.width === 0) return;
-    const k = clamp(
-      Math.max(
-        READABLE_SCALE,
-        Math.min((this.width * 0.85) / Math.max(b.width, 1), (this.height * 0.85) / Math.max(b.height, 1), 1.1),
-      ),
-    );
+    const fit = Math.min((this.width * 0.85) / Math.max(b.width, 1), (this.height * 0.85) / Math.max(b.height, 1), 1.1);
+    const k = clamp(Math.max(READABLE_SCALE, fit));
+    const on = keep && fit < READABLE_SCALE ? keep : b;
     this.k = k;
-    this.x = this.width / 2 - (b.x + b.width / 2) * k;
-    this.y = this.height / 2 - (b.y + b.height / 2) * k;
-    if (keep) this.reveal(keep);
+    this.x = this.width / 2 - (on.x + on.width / 2) * k;
+    this.y = this.height / 2 - (on.y + on.height / 2) * k;
   }
 
   /** Pans (never zooms) just enough that `b` is inside the view with a margin: keyboard focus on an off-screen box. */
