@@ -55,19 +55,9 @@ export class PanZoom {
       this.y = margin - content.y * this.k;
       return;
     }
-    // Centred on the shared elements, but never leaving blank paper inside the view when the sheet
-    // could fill it: the headings stay at the top and no column is cut off for empty margin.
-    const within = (v: number, low: number, high: number) => Math.min(Math.max(v, Math.min(low, high)), high);
-    this.x = within(
-      this.width / 2 - (focus.x + focus.width / 2) * this.k,
-      this.width - margin - (content.x + content.width) * this.k,
-      margin - content.x * this.k,
-    );
-    this.y = within(
-      this.height / 2 - (focus.y + focus.height / 2) * this.k,
-      this.height - margin - (content.y + content.height) * this.k,
-      margin - content.y * this.k,
-    );
+    this.x = this.width / 2 - (focus.x + focus.width / 2) * this.k;
+    this.y = this.height / 2 - (focus.y + focus.height / 2) * this.k;
+    this.keepPaperInView(content, margin);
   }
 
   /**
@@ -75,7 +65,7 @@ export class PanZoom {
    * (nor above 110%); when `b` is too large for that, the view centres on `keep` (the shared element,
    * where the chains meet) instead, so the part of the proof that matters is in the middle.
    */
-  centre(b: Bounds, keep?: Bounds): void {
+  centre(b: Bounds, keep?: Bounds, content?: Bounds): void {
     if (this.width === 0) return;
     const fit = Math.min((this.width * 0.85) / Math.max(b.width, 1), (this.height * 0.85) / Math.max(b.height, 1), 1.1);
     const k = clamp(Math.max(READABLE_SCALE, fit));
@@ -83,6 +73,17 @@ export class PanZoom {
     this.k = k;
     this.x = this.width / 2 - (on.x + on.width / 2) * k;
     this.y = this.height / 2 - (on.y + on.height / 2) * k;
+    if (content) this.keepPaperInView(content);
+  }
+
+  /**
+   * Pans so no blank paper shows inside the view where the sheet could fill it: the stage headings
+   * stay at the top and no column is cut off for an empty margin. Zoom is left as it is.
+   */
+  private keepPaperInView(content: Bounds, margin = 24): void {
+    const within = (v: number, low: number, high: number) => Math.min(Math.max(v, Math.min(low, high)), high);
+    this.x = within(this.x, this.width - margin - (content.x + content.width) * this.k, margin - content.x * this.k);
+    this.y = within(this.y, this.height - margin - (content.y + content.height) * this.k, margin - content.y * this.k);
   }
 
   /** Pans (never zooms) just enough that `b` is inside the view with a margin: keyboard focus on an off-screen box. */
