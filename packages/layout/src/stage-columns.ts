@@ -7,6 +7,7 @@
 // Deterministic: the same scene gives the same drawing, so a save that changes one attribute leaves
 // every box where it was.
 import { drawBox, boxSize, drawEdges, type Drawing, type DrawnStage } from './drawing.ts';
+import { alignChains } from './column-alignment.ts';
 import { countCrossings, routeEdges, type PlacedColumn } from './orthogonal-routes.ts';
 import type { Scene, SceneNode } from './scene.ts';
 
@@ -141,7 +142,7 @@ function crossings(links: readonly [string, string][], column: Map<string, numbe
 function arrange(
   scene: Scene,
   sizes: Map<string, { width: number; height: number }>,
-): { columns: Block[][]; used: number[] } {
+): { columns: Block[][]; used: number[]; tops: number[][] } {
   const column = new Map<string, number>();
   const byStage: SceneNode[][] = STAGES.map(() => []);
   for (const n of scene.nodes) byStage[stageOf(n)]!.push(n);
@@ -197,20 +198,33 @@ function arrange(
       }
     if (!improved) break;
   }
-  return { columns: order, used };
+  const tops = alignChains(
+    order.map((blocks) =>
+      blocks.map((b) => ({ ids: b.nodes.map((n) => n.id), heights: b.nodes.map((n) => sizes.get(n.id)!.height) })),
+    ),
+    neighbours,
+    { chain: CHAIN_GAP, block: BLOCK_GAP, top: ORIGIN.top },
+  );
+  return { columns: order, used, tops };
 }
 
-function place(columns: Block[][], sizes: Map<string, { width: number; height: number }>): PlacedColumn[] {
-  return columns.map((blocks) => {
+function place(
+  columns: Block[][],
+  sizes: Map<string, { width: number; height: number }>,
+  tops?: number[][],
+): PlacedColumn[] {
+  return columns.map((blocks, c) => {
     const width = Math.max(...blocks.flatMap((b) => b.nodes.map((n) => sizes.get(n.id)!.width)));
     const boxes: PlacedColumn['boxes'] = [];
     let y = ORIGIN.top;
-    for (const block of blocks)
+    blocks.forEach((block, b) => {
+      y = tops?.[c]?.[b] ?? y;
       block.nodes.forEach((n, i) => {
         const size = sizes.get(n.id)!;
         boxes.push({ id: n.id, y, width: size.width, height: size.height, chainNext: i < block.nodes.length - 1 });
         y += size.height + (i < block.nodes.length - 1 ? CHAIN_GAP : BLOCK_GAP);
       });
+    });
     return { width, boxes };
   });
 }
@@ -218,8 +232,8 @@ function place(columns: Block[][], sizes: Map<string, { width: number; height: n
 /** Lays out a focused-scenario scene in stage columns; pure and synchronous (no ELK). */
 export function layoutStageColumns(scene: Scene): Drawing {
   const sizes = new Map(scene.nodes.map((n) => [n.id, boxSize(n, scene.sides)]));
-  const { columns, used } = arrange(scene, sizes);
-  const placed = place(columns, sizes);
+  const { columns, used, tops } = arrange(scene, sizes);
+  const placed = place(columns, sizes, tops);
   const routed = routeEdges(scene, placed, ORIGIN);
   const nodes = new Map(scene.nodes.map((n) => [n.id, n]));
   const boxes = placed.flatMap((col, c) =>
