@@ -55,4 +55,32 @@ describe('the graph at several screen sizes', () => {
       await screenshot(page, `fit-${width}x${height}`);
     });
   }
+
+  it('keeps the stage headings in view, pinned over their columns when the sheet is scrolled below them', async () => {
+    await page.setViewportSize({ width: 1024, height: 768 });
+    await focusScenario(page, 'S-101');
+    const graph = (await page.locator('svg[data-testid=graph]').boundingBox())!;
+    // Scroll the sheet up past its headings (arrow keys pan while a box has focus).
+    await page.locator(`${GRAPH_BOX}[data-tag="BPCS-C1"]`).focus();
+    for (let i = 0; i < 3; i++) await page.keyboard.press('ArrowDown');
+    const inSheet = await page
+      .locator('svg[data-testid=graph] g.stage text.stage-label')
+      .evaluateAll((els) => els.map((e) => e.getBoundingClientRect().toJSON() as DOMRect));
+    expect(inSheet.every((r) => r.bottom < graph.y)).toBe(true);
+    const pinned = page.locator('[data-testid=pinned-stages] text.stage-label');
+    expect(await pinned.count()).toBe(inSheet.length);
+    // Each pinned heading sits in the graph's top strip, over the middle of its column's band.
+    const bands = await page
+      .locator('svg[data-testid=graph] g.stage rect.stage-band')
+      .evaluateAll((els) => els.map((e) => e.getBoundingClientRect().toJSON() as DOMRect));
+    const labels = await pinned.evaluateAll((els) => els.map((e) => e.getBoundingClientRect().toJSON() as DOMRect));
+    labels.forEach((r, i) => {
+      expect(r.top).toBeGreaterThanOrEqual(graph.y - 0.5);
+      expect(r.bottom).toBeLessThanOrEqual(graph.y + 26);
+      expect(Math.abs(r.x + r.width / 2 - (bands[i]!.x + bands[i]!.width / 2))).toBeLessThan(2);
+    });
+    await screenshot(page, 'pinned-stages');
+    await page.click('button:text-is("Fit")');
+    await expect.poll(() => pinned.count()).toBe(0);
+  });
 });
