@@ -1,6 +1,9 @@
-// `bulkhead view FILE [--port N]`: serves the built viewer for one model file on 127.0.0.1 and
-// pushes every save to the page. Builds nothing at run time: without apps/viewer/dist it says how.
+// `bulkhead view FILE [--port N] [--compare OLD]`: serves the built viewer for one model file on 127.0.0.1
+// and pushes every save to the page; with --compare the page opens comparing FILE with the earlier
+// revision OLD, which is served and followed too. Builds nothing at run time: without apps/viewer/dist it
+// says how.
 import { statSync } from 'node:fs';
+import { resolve } from 'node:path';
 import { analyze, loadModelText } from '@bulkhead/core';
 import { printDiagnostics, readModel, readPartFile, UsageError } from '../io.ts';
 import { renderCheck } from './check-render.ts';
@@ -37,14 +40,38 @@ function savedFiles(file: string, changed: string[]): string {
   return changed.length === 1 && changed[0] === file ? '' : `${changed.join(', ')}; `;
 }
 
-export function viewCommand(file: string, portText: string | undefined, distDir = VIEWER_DIST): number {
+/**
+ * The earlier revision must load when the command starts, as every command's input must: its errors are
+ * printed with file, line, column and code, and the command stops. A later save that breaks it only
+ * shows in the page.
+ */
+function earlierLoads(compare: string, file: string): boolean {
+  const earlier = readModel(compare);
+  if (earlier.model && !earlier.diagnostics.some((d) => d.severity === 'error')) {
+    if (resolve(compare) === resolve(file))
+      process.stderr.write(`bulkhead view: --compare names the model file itself; nothing will differ\n`);
+    return true;
+  }
+  process.stderr.write(`bulkhead view: the earlier revision \`${compare}\` (--compare) does not load:\n`);
+  printDiagnostics(earlier);
+  return false;
+}
+
+export function viewCommand(
+  file: string,
+  portText: string | undefined,
+  distDir = VIEWER_DIST,
+  compare?: string,
+): number {
   const asked = parsePort(portText);
+  if (compare !== undefined && compare.trim() === '') throw new UsageError('--compare needs an earlier model file');
   try {
     if (!statSync(file).isFile()) throw new Error('not a file');
   } catch {
     process.stderr.write(`bulkhead view: cannot read \`${file}\`: no such file\n`);
     return 2;
   }
+  if (compare !== undefined && !earlierLoads(compare, file)) return 2;
   if (!hasBuiltViewer(distDir)) {
     process.stderr.write(
       `bulkhead view: the viewer is not built (no ${distDir}index.html).\n` +
@@ -62,16 +89,21 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
   const start = (port: number, fallback: boolean): void => {
     startViewServer({
       file,
+      ...(compare !== undefined ? { compare } : {}),
       distDir,
       port,
-      onChange: (state, changed) =>
+      onChange: (state, changed, kind) => {
+        const which = kind === 'model' ? file : compare!;
+        const role = kind === 'model' ? '' : ' (the earlier revision compared with)';
         process.stdout.write(
-          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(file, changed)}${file} ${describe(file, state)}\n`,
-        ),
+          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(which, changed)}${which}${role} ${describe(which, state)}\n`,
+        );
+      },
     }).then(
       (server) => {
+        const against = compare !== undefined ? `\n  compared with the earlier revision ${compare}` : '';
         process.stdout.write(
-          `bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`,
+          `bulkhead view: ${file}${against}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`,
         );
         const stop = () => void server.close().then(() => process.exit(0));
         process.once('SIGINT', stop);
