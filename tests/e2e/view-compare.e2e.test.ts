@@ -50,6 +50,9 @@ describe('bulkhead view NEW --compare OLD', () => {
     // The diff has something to show in S-101, or the checks below would pass on an empty page.
     expect(truth.disappeared.some((f) => f.scenario === 'S-101' && f.element)).toBe(true);
     expect(session.view.output()).toContain(`compared with the earlier revision ${older}`);
+    // The terminal also says what `bulkhead diff OLD NEW` says first.
+    const headline = spawnSync(process.execPath, [BIN, 'diff', older, newer], { cwd: ROOT, encoding: 'utf8' });
+    expect(session.view.output()).toContain(`since ${older}: ${headline.stdout.split('\n')[0]}`);
     expect(await page.innerText('[data-testid=graph-compare-now]')).toBe('MF-100-LOPA-001 rev B');
     expect(await page.innerText('[data-testid=graph-compare-old]')).toBe('MF-100-LOPA-001 rev A');
     await page.waitForSelector('svg[data-testid=graph][data-scenario="S-101"] g.box[data-change]');

@@ -4,7 +4,7 @@
 // says how.
 import { statSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { analyze, loadModelText } from '@bulkhead/core';
+import { analyze, diffRevisions, loadModelText, renderDiffText, type Model } from '@bulkhead/core';
 import { printDiagnostics, readModel, readPartFile, UsageError } from '../io.ts';
 import { renderCheck } from './check-render.ts';
 import { hasBuiltViewer } from '../view/assets.ts';
@@ -21,8 +21,8 @@ export function parsePort(text: string | undefined): number | undefined {
   return Number(text);
 }
 
-function describe(file: string, state: FileState): string {
-  if ('missing' in state) return `${state.missing}; the page says so and keeps the last good view`;
+function describe(file: string, state: FileState, keeps = 'the last good view'): string {
+  if ('missing' in state) return `${state.missing}; the page says so and keeps ${keeps}`;
   let result;
   try {
     result = loadModelText(file, Buffer.from(state.text, 'latin1'), { readPart: readPartFile });
@@ -32,7 +32,7 @@ function describe(file: string, state: FileState): string {
   const errors = result.diagnostics.filter((d) => d.severity === 'error');
   if (errors.length === 0) return 'loads cleanly';
   const first = errors[0]!.span;
-  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${first.file ?? file}:${first.line}:${first.column}` : ''}; the page keeps the last good view`;
+  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${first.file ?? file}:${first.line}:${first.column}` : ''}; the page keeps ${keeps}`;
 }
 
 /** The part files a save touched, when it was not the model file alone, named before the model's verdict. */
@@ -45,16 +45,16 @@ function savedFiles(file: string, changed: string[]): string {
  * printed with file, line, column and code, and the command stops. A later save that breaks it only
  * shows in the page.
  */
-function earlierLoads(compare: string, file: string): boolean {
+function readEarlier(compare: string, file: string): Model | undefined {
   const earlier = readModel(compare);
   if (earlier.model && !earlier.diagnostics.some((d) => d.severity === 'error')) {
     if (resolve(compare) === resolve(file))
       process.stderr.write(`bulkhead view: --compare names the model file itself; nothing will differ\n`);
-    return true;
+    return earlier.model;
   }
   process.stderr.write(`bulkhead view: the earlier revision \`${compare}\` (--compare) does not load:\n`);
   printDiagnostics(earlier);
-  return false;
+  return undefined;
 }
 
 export function viewCommand(
@@ -71,7 +71,8 @@ export function viewCommand(
     process.stderr.write(`bulkhead view: cannot read \`${file}\`: no such file\n`);
     return 2;
   }
-  if (compare !== undefined && !earlierLoads(compare, file)) return 2;
+  const earlier = compare !== undefined ? readEarlier(compare, file) : undefined;
+  if (compare !== undefined && !earlier) return 2;
   if (!hasBuiltViewer(distDir)) {
     process.stderr.write(
       `bulkhead view: the viewer is not built (no ${distDir}index.html).\n` +
@@ -81,11 +82,15 @@ export function viewCommand(
   }
   // The terminal gets the same analysis as `bulkhead check`, so the URL comes with the verdicts.
   const initial = readModel(file);
-  if (initial.model)
-    process.stdout.write(
-      renderCheck({ ...initial, model: initial.model }, analyze(initial.model, { spans: initial.spans })) + '\n',
-    );
-  else printDiagnostics(initial);
+  if (initial.model) {
+    const analysis = analyze(initial.model, { spans: initial.spans });
+    process.stdout.write(renderCheck({ ...initial, model: initial.model }, analysis) + '\n');
+    // And with --compare, the headline of `bulkhead diff OLD FILE`.
+    if (earlier && compare !== undefined) {
+      const diff = diffRevisions({ model: earlier, label: compare }, { model: initial.model, label: file, analysis });
+      process.stdout.write(`since ${compare}: ${renderDiffText(diff).split('\n')[0]}\n`);
+    }
+  } else printDiagnostics(initial);
   const start = (port: number, fallback: boolean): void => {
     startViewServer({
       file,
@@ -96,7 +101,7 @@ export function viewCommand(
         const which = kind === 'model' ? file : compare!;
         const role = kind === 'model' ? '' : ' (the earlier revision compared with)';
         process.stdout.write(
-          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(which, changed)}${which}${role} ${describe(which, state)}\n`,
+          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(which, changed)}${which}${role} ${describe(which, state, kind === 'model' ? undefined : 'the last comparison')}\n`,
         );
       },
     }).then(
