@@ -31,12 +31,35 @@ describe('bulkhead view', () => {
     }
   });
 
+  it('should exit 2 with a coded notice, before serving anything, when the --compare file is missing or does not load', () => {
+    const dir = mkdtempSync(join(tmpdir(), 'bulkhead-view-compare-cmd-'));
+    const model = join(dir, 'm.bulk');
+    writeFileSync(model, 'site "x"\n');
+    const missing = run('view', model, '--compare', join(dir, 'no-such-old.bulk'), '--port', '0');
+    expect(missing.status).toBe(2);
+    expect(missing.stderr).toContain('no-such-old.bulk');
+    expect(missing.stderr).toMatch(/BH104/);
+    expect(missing.stdout).not.toMatch(/open http/);
+    // The attribute with no value sits on line 2, column 17 (where the value should start).
+    const broken = join(dir, 'old.bulk');
+    writeFileSync(broken, 'site "x"\nvessel V-1 bogus=\n');
+    const bad = run('view', model, '--compare', broken, '--port', '0');
+    expect(bad.status).toBe(2);
+    expect(bad.stderr).toContain(`${broken}:2:17`);
+    expect(bad.stderr).toMatch(/BH116/);
+    expect(bad.stderr).not.toMatch(/\n\s+at /);
+    const empty = run('view', model, '--compare=', '--port', '0');
+    expect(empty.status).toBe(2);
+    expect(empty.stderr).toMatch(/--compare needs an earlier model file/);
+  });
+
   it('should be listed in the help, with its own page', () => {
     expect(run('--help').stdout).toMatch(/view FILE \[--port N\]/);
     const page = run('view', '--help');
     expect(page.status).toBe(0);
     expect(page.stdout).toMatch(/127\.0\.0\.1/);
     expect(page.stdout).toMatch(/npm run build -w @bulkhead\/viewer/);
+    expect(page.stdout).toMatch(/--compare OLD/);
   });
 });
 

@@ -97,7 +97,7 @@ describe('the view server on a model split over part files', () => {
       await events.ready;
       const before = server.revision();
       writeFileSync(file, text);
-      expect(JSON.parse(await events.change)).toEqual({ revision: before + 1 });
+      expect(JSON.parse(await events.change)).toEqual({ revision: before + 1, changed: ['model'] });
       events.close();
       const sent = (JSON.parse((await get(server.port, '/parts')).body) as SentParts).parts;
       expect(sent.some((part) => 'text' in part && part.text === text)).toBe(true);

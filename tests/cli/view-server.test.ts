@@ -103,7 +103,7 @@ describe('startViewServer', () => {
     await new Promise((r) => setTimeout(r, 700));
     expect(server.revision()).toBe(before);
     writeFileSync(model, 'site "Renamed site"\n');
-    expect(JSON.parse(await events.change)).toEqual({ revision: before + 1 });
+    expect(JSON.parse(await events.change)).toEqual({ revision: before + 1, changed: ['model'] });
     expect((await get(server.port, '/model')).body).toBe('site "Renamed site"\n');
     events.close();
   });

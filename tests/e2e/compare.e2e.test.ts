@@ -3,38 +3,21 @@
 // (`bulkhead diff OLD NEW --format json`): each scenario's verdict change in the matrix, and every finding
 // that appeared, disappeared or changed severity or acceptance in the list, each marked in words and a
 // symbol (no colour needed). A save of the served file compares again with the same earlier file.
-import { spawnSync } from 'node:child_process';
 import { copyFileSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seriousViolations } from './axe.ts';
 import { copyTo, DEMO, GRAPH_BOX, openViewer, ROOT, screenshot, type Session, tempDir } from './harness.ts';
+import {
+  cliDiff,
+  expectChangedFindingsAsDiff,
+  expectedChangeCells,
+  expectGraphMarksAsDiff,
+  matrixChangeCells,
+} from './diff-truth.ts';
 
 const REV_B = join(ROOT, 'fixtures/demo/marrow-fen-rev-b.bulk');
-const BIN = join(ROOT, 'packages/cli/bin/bulkhead.js');
-
-interface CliFindingRef {
-  key: string;
-  scenario?: string;
-  element?: string;
-}
-interface CliDiff {
-  verdicts: { scenario: string; change: string }[];
-  appeared: CliFindingRef[];
-  disappeared: CliFindingRef[];
-  severityChanged: { new: CliFindingRef }[];
-  acceptanceChanged: { new: CliFindingRef }[];
-}
-
-function cliDiff(older: string, newer: string): CliDiff {
-  const run = spawnSync(process.execPath, [BIN, 'diff', older, newer, '--format', 'json'], {
-    cwd: ROOT,
-    encoding: 'utf8',
-  });
-  if (run.status !== 0) throw new Error(`bulkhead diff failed (${run.status}): ${run.stderr}`);
-  return JSON.parse(run.stdout) as CliDiff;
-}
 
 describe('comparing two revisions in the viewer', () => {
   const file = join(tempDir('bulkhead-compare-'), 'marrow-fen.bulk');
@@ -54,44 +37,13 @@ describe('comparing two revisions in the viewer', () => {
     await session?.close();
   });
 
-  const changeCells = () =>
-    page
-      .locator('[data-testid=matrix] tr[data-scenario]')
-      .evaluateAll((rows) =>
-        Object.fromEntries(
-          rows.map((r) => [
-            r.getAttribute('data-scenario')!,
-            r.querySelector('[data-cell=change]')?.getAttribute('data-change'),
-          ]),
-        ),
-      );
-  const changedFindings = () =>
-    page
-      .locator('[data-testid=compare-findings] tbody tr')
-      .evaluateAll((rows) =>
-        rows.map((r) => `${r.getAttribute('data-change')} ${r.getAttribute('data-finding')}`).sort(),
-      );
-
   it("marks each scenario's verdict change and each changed finding as the CLI's diff has them", async () => {
     expect(truth.verdicts.some((v) => v.change === 'better')).toBe(true);
     expect(truth.disappeared.length).toBeGreaterThan(0);
     await page.setInputFiles('[data-testid=compare-open]', DEMO);
     await page.waitForSelector('[data-testid=compare-summary]');
-    const expectedCells = Object.fromEntries(
-      truth.verdicts.filter((v) => v.change !== 'removed').map((v) => [v.scenario, v.change]),
-    );
-    expect(await changeCells()).toEqual(expectedCells);
-    const changedKeys = [...truth.severityChanged, ...truth.acceptanceChanged].map((c) => c.new.key);
-    const shown = await changedFindings();
-    expect(shown.filter((s) => s.startsWith('new ') || s.startsWith('gone '))).toEqual(
-      [...truth.appeared.map((f) => `new ${f.key}`), ...truth.disappeared.map((f) => `gone ${f.key}`)].sort(),
-    );
-    expect(
-      shown
-        .filter((s) => s.startsWith('worse ') || s.startsWith('better '))
-        .map((s) => s.split(' ')[1])
-        .sort(),
-    ).toEqual(changedKeys.sort());
+    expect(await matrixChangeCells(page)).toEqual(expectedChangeCells(truth));
+    await expectChangedFindingsAsDiff(page, truth);
     // Without colour: every mark comes with its words, and the legend names each mark.
     expect(await page.locator('[data-testid=matrix] tr[data-scenario="S-101"] [data-cell=change]').innerText()).toMatch(
       /^▼ better/,
@@ -106,30 +58,7 @@ describe('comparing two revisions in the viewer', () => {
   it('marks on the graph each element of the scenario whose findings changed, and keys the marks in the legend', async () => {
     await page.click('[data-testid=mode-graph]');
     await page.waitForSelector('svg[data-testid=graph][data-scenario="S-101"] g.box');
-    // The worst news shows when an element has several: worse, then new, then better, then gone.
-    const byElement = new Map<string, string>();
-    const changed = [...truth.severityChanged, ...truth.acceptanceChanged].map((c) => c.new);
-    for (const [change, refs] of [
-      ['new', truth.appeared],
-      ['gone', truth.disappeared],
-    ] as const)
-      for (const f of refs) if (f.scenario === 'S-101' && f.element) byElement.set(f.element, change);
-    // A changed finding's direction is the viewer's own call (severity and acceptance); only its presence is checked here.
-    for (const f of changed) if (f.scenario === 'S-101' && f.element) byElement.set(f.element, 'worse|better');
-    const marked = await page
-      .locator('svg[data-testid=graph] g.box[data-change]')
-      .evaluateAll((gs) => gs.map((g) => [g.getAttribute('data-tag')!, g.getAttribute('data-change')!]));
-    expect(marked.length).toBeGreaterThan(0);
-    for (const [tag, change] of marked) expect(byElement.get(tag)?.split('|'), tag).toContain(change);
-    const drawn = new Set(
-      await page.locator('svg[data-testid=graph] g.box').evaluateAll((gs) => gs.map((g) => g.getAttribute('data-tag'))),
-    );
-    for (const tag of byElement.keys())
-      if (drawn.has(tag))
-        expect(
-          marked.map(([t]) => t),
-          tag,
-        ).toContain(tag);
+    await expectGraphMarksAsDiff(page, truth, 'S-101');
     expect(await page.innerText('[data-testid=graph-compare-key]')).toContain('▲ worse');
     expect(await seriousViolations(page)).toEqual([]);
     copyTo(await screenshot(page, 'compare-graph'), join(ROOT, 'docs/viewer-compare-graph.png'));
@@ -148,7 +77,7 @@ describe('comparing two revisions in the viewer', () => {
       undefined,
       { timeout: 10_000 },
     );
-    const cells = await changeCells();
+    const cells = await matrixChangeCells(page);
     expect(Object.values(cells).every((c) => c === 'same')).toBe(true);
   });
 

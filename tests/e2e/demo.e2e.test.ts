@@ -217,10 +217,10 @@ describe('the demo in the viewer', () => {
   it('exports the current view as a standalone SVG', async () => {
     await focus('S-101');
     const [download] = await Promise.all([page.waitForEvent('download'), page.click('[data-testid=export]')]);
-    // The file name carries the model file, the scenario and the revision (the content hash, as the
-    // demo states no revision of its own), so exports of two revisions never overwrite each other.
+    // The file name carries the model file, the scenario and the revision (the model's `revision="A"`
+    // and the content hash), so exports of two revisions never overwrite each other.
     const sha256 = createHash('sha256').update(readFileSync(DEMO)).digest('hex');
-    expect(download.suggestedFilename()).toBe(`marrow-fen_S-101_sha-${sha256.slice(0, 12)}.svg`);
+    expect(download.suggestedFilename()).toBe(`marrow-fen_S-101_rev-A_sha-${sha256.slice(0, 12)}.svg`);
     const text = readFileSync((await download.path())!, 'utf8');
     expect(text).toContain('<g class="title-block">');
     for (const row of ['Marrow Fen Chemical Works, Unit 100', 'marrow-fen.bulk', sha256, 'LOPA per year'])

@@ -34,10 +34,10 @@ export interface ViewProcess {
   stop: () => void;
 }
 
-/** Spawns `bulkhead view FILE --port N` and resolves once it prints its URL. */
-export async function startView(file: string): Promise<ViewProcess> {
+/** Spawns `bulkhead view FILE --port N [...extra]` and resolves once it prints its URL. */
+export async function startView(file: string, extra: string[] = []): Promise<ViewProcess> {
   const port = await freePort();
-  const child = spawn(process.execPath, [BIN, 'view', file, '--port', String(port)], {
+  const child = spawn(process.execPath, [BIN, 'view', file, '--port', String(port), ...extra], {
     cwd: ROOT,
     detached: true,
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -185,9 +185,9 @@ export interface Session {
   close: () => Promise<void>;
 }
 
-/** `bulkhead view FILE`, a browser, and a page opened on it (waiting for `waitFor` when given). */
-export async function openViewer(file: string, waitFor?: string): Promise<Session> {
-  const view = await startView(file);
+/** `bulkhead view FILE [...extra]`, a browser, and a page opened on it (waiting for `waitFor` when given). */
+export async function openViewer(file: string, waitFor?: string, extra: string[] = []): Promise<Session> {
+  const view = await startView(file, extra);
   const context = await launch();
   const page = await context.newPage();
   const seen = watchPage(page);

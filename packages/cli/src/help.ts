@@ -18,7 +18,9 @@ commands:
          [--date YYYY-MM-DD] [--document NO] [--revision REV] [--status TEXT] [--fail-on LEVEL]
                         write the evidence list, the LOPA worksheet or the actions list
                         (report --json-schema: the JSON report's schema)
-  view FILE [--port N]  show the model's graph and LOPA in a browser; follows every save
+  view FILE [--port N] [--compare OLD]
+                        show the model's graph and LOPA in a browser; follows every save
+                        (--compare: opens comparing with an earlier revision)
   cut-sets FILE [--order N] [--format text|json]
                         per scenario, the smallest sets of elements that start it and defeat every layer
   common-causes FILE [--format text|json|csv]
@@ -104,17 +106,24 @@ gives each rule's rationale and source once, at the end.
 Colour only when standard output is a terminal; none under NO_COLOR or a pipe.
 exit codes: 0 no unaccepted finding at or above --fail-on, 1 there is one, 2 bad input or usage
 `,
-  view: `usage: bulkhead view FILE [--port N]
+  view: `usage: bulkhead view FILE [--port N] [--compare OLD]
 
 Serves the viewer for FILE on http://127.0.0.1 (never another address) and prints the URL to open. The
 page lays out each scenario's cause and claimed layers, marks shared elements, and shows the findings and
 the LOPA as claimed and after independence. Every save of FILE reaches the page within a second; a save
-with errors shows them and keeps the last good view. Serves only the viewer's own files and FILE.
+with errors shows them and keeps the last good view. Serves only the viewer's own files, FILE, OLD and
+the part files they name.
 
-  --port N     listen on port N (default 4780, or any free port if that one is taken; 0: any free port)
+  --port N       listen on port N (default 4780, or any free port if that one is taken; 0: any free port)
+  --compare OLD  open the page comparing FILE with the earlier revision OLD, as \`bulkhead diff OLD FILE\`
+                 does: each scenario's verdict change in the matrix, each changed finding marked on the
+                 graph and listed. Revisions are named by the model's document and revision, else by
+                 file name. Each save of FILE compares again; a save of OLD is followed too, and if it
+                 stops loading the page says so and keeps the last comparison
 
 Needs the built viewer: run \`npm run build -w @bulkhead/viewer\` once (exit 2 says so if it is missing).
-exit codes: 2 bad usage, file missing, viewer not built, or port taken; otherwise runs until Ctrl+C (0)
+exit codes: 2 bad usage, file missing, OLD does not load, viewer not built, or port taken; otherwise runs
+until Ctrl+C (0)
 `,
   diff: `usage: bulkhead diff OLD NEW [--format text|md|json|sarif] [--fail-on worse]
        bulkhead diff FILE --git REV [--format ...] [--fail-on worse]

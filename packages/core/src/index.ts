@@ -84,3 +84,4 @@ export * from './cutsets/index.ts';
 export * from './ranking/index.ts';
 export * from './diff/index.ts';
 export * from './verify/index.ts';
+export { modelContentHash, modelFilesWords, type ModelContentHash, type ModelFileBytes } from './util/content-hash.ts';

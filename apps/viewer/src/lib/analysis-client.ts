@@ -1,7 +1,7 @@
 // The page's side of the analysis worker (analysis.worker.ts). Loads are answered in order; for the
 // focus and the details only the newest request matters, so an answer to an older one is dropped.
 import type { Details } from './details.ts';
-import type { AnalysisReply, CompareOutcome, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
+import type { AnalysisReply, CompareOutcome, EarlierFile, LoadOutcome, WhatIfOutcome } from './analysis-protocol.ts';
 import type { WhatIf } from './what-if.ts';
 import type { ServedParts } from './live.ts';
 import type { FocusView, RankingView, TagMatch } from './site-view.ts';
@@ -62,7 +62,7 @@ export class AnalysisClient {
   }
 
   /** What changed from an earlier file (kept in the worker) to what the page shows; null: the one kept. */
-  compare(earlier: { fileName: string; bytes: Uint8Array } | null): Promise<CompareOutcome> {
+  compare(earlier: EarlierFile | null): Promise<CompareOutcome> {
     return this.requests.send({ compare: earlier }, (r) => ('compared' in r ? { value: r.compared } : undefined), {
       channel: 'compare',
     });

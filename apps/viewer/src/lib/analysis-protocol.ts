@@ -17,7 +17,14 @@ export type AnalysisRequest =
   | { id: number; whatIf: WhatIf }
   | { id: number; ranking: true }
   /** An earlier revision to compare with (kept in the worker); null: compare again with the one kept. */
-  | { id: number; compare: { fileName: string; bytes: Uint8Array } | null };
+  | { id: number; compare: EarlierFile | null };
+
+/** An earlier revision's file, with its part files when the server sends them. */
+export interface EarlierFile {
+  fileName: string;
+  bytes: Uint8Array;
+  parts?: ServedParts;
+}
 
 /** A comparison: the earlier file's errors when it does not load, else the changes. */
 export interface CompareOutcome {

@@ -8,6 +8,7 @@ import type {
   AnalysisReply,
   AnalysisRequest,
   CompareOutcome,
+  EarlierFile,
   LoadOutcome,
   WhatIfOutcome,
 } from './analysis-protocol.ts';
@@ -27,10 +28,21 @@ let ranked: { of: typeof current; view: RankingView } | undefined;
 let earlier: { model: Model; analysis: Analysis; fileName: string } | undefined;
 let currentFileName = '';
 
-function compare(file: { fileName: string; bytes: Uint8Array } | null): CompareOutcome {
+/** Part files as the reader asks for them; a part the server did not send is said so, never read elsewhere. */
+function servedPartReader(parts: ServedParts | undefined) {
+  const served = parts ? new Map(parts) : undefined;
+  return served
+    ? {
+        readPart: (path: string) =>
+          served.get(path) ?? { problem: 'the view server had not sent it yet; the page reloads on the next save' },
+      }
+    : {};
+}
+
+function compare(file: EarlierFile | null): CompareOutcome {
   if (!current) throw new Error('no model is loaded');
   if (file) {
-    const result = loadModelText(file.fileName, file.bytes);
+    const result = loadModelText(file.fileName, file.bytes, servedPartReader(file.parts));
     const errors = result.diagnostics.filter((d) => d.severity === 'error');
     if (!result.model || errors.length > 0) return { diagnostics: errors };
     earlier = {
@@ -67,17 +79,7 @@ function load(id: number, fileName: string, bytes: Uint8Array, parts: ServedPart
   const files = parts?.length ? ` and ${parts.length} part file${parts.length === 1 ? '' : 's'}` : '';
   reply({ id, progress: `reading ${fileName}${files} (${Math.ceil((bytes.length + partBytes) / 1024)} kB)` });
   // Served parts are all the model can name: the server found them by the same reading of the same file.
-  const served = parts ? new Map(parts) : undefined;
-  const result = loadModelText(
-    fileName,
-    bytes,
-    served
-      ? {
-          readPart: (path) =>
-            served.get(path) ?? { problem: 'the view server had not sent it yet; the page reloads on the next save' },
-        }
-      : {},
-  );
+  const result = loadModelText(fileName, bytes, servedPartReader(parts));
   const failed = result.diagnostics.some((d) => d.severity === 'error');
   // The file's lines are needed only to show the errors' excerpts.
   const source = failed ? result.source : { file: result.source.file, lines: [] };

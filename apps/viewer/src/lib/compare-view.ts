@@ -30,9 +30,34 @@ export interface ChangedFinding {
   message: string;
 }
 
+/** A revision as the compare names it: its label, and the file it was read from. */
+export interface RevisionName {
+  /** "MF-100-LOPA-001 rev A" from the model's `document=` and `revision=`; the file name when it states no revision. */
+  label: string;
+  /** "rev A", for a narrow column head; the file name when the model states no revision. */
+  short: string;
+  fileName: string;
+}
+
+export function revisionName(
+  site: { document?: string | undefined; revision?: string | undefined },
+  fileName: string,
+): RevisionName {
+  if (site.revision === undefined) return { label: fileName, short: fileName, fileName };
+  const short = `rev ${site.revision}`;
+  return { label: site.document !== undefined ? `${site.document} ${short}` : short, short, fileName };
+}
+
+/** "MF-100-LOPA-001 rev A (marrow-fen.bulk)": the label with its file, or the file name alone. */
+export function revisionWords(revision: RevisionName): string {
+  return revision.label === revision.fileName ? revision.fileName : `${revision.label} (${revision.fileName})`;
+}
+
 export interface CompareView {
-  /** The earlier file's name. */
-  old: string;
+  /** The earlier revision, compared with. */
+  old: RevisionName;
+  /** The revision the page shows. */
+  now: RevisionName;
   /** Each scenario of either revision (by its id in this one), with how its verdict changed and why. */
   scenarios: { scenario: string; change: VerdictChange; why?: string }[];
   findings: ChangedFinding[];
@@ -67,7 +92,8 @@ export function compareView(
     ref(c.new, direction(c.old, c.new), c.old),
   );
   return {
-    old: old.fileName,
+    old: revisionName(old.model.site, old.fileName),
+    now: revisionName(now.model.site, now.fileName),
     scenarios: diff.verdicts.map((v) => ({
       scenario: v.scenario,
       change: v.change,

@@ -47,6 +47,9 @@ export const SEARCH_LIMIT = 25;
 
 export interface SiteSummary {
   siteName: string;
+  /** The model's document number and revision (`site document= revision=`), for the title block and the compare. */
+  document?: string;
+  revision?: string;
   elements: number;
   functions: number;
   scenarios: ScenarioRow[];
@@ -76,6 +79,8 @@ export function summariseSite(model: Model, analysis: Analysis): SiteSummary {
     if (f.scenario !== undefined && isOpen(f)) open.set(f.scenario, (open.get(f.scenario) ?? 0) + 1);
   return {
     siteName: model.site.name,
+    ...(model.site.document !== undefined ? { document: model.site.document } : {}),
+    ...(model.site.revision !== undefined ? { revision: model.site.revision } : {}),
     elements: model.elements.length,
     functions: model.functions.length,
     findings: analysis.findings.length,

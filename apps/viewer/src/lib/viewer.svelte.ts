@@ -11,9 +11,10 @@ import type { LoadOutcome } from './analysis-protocol.ts';
 import type { ServedParts } from './live.ts';
 import type { FocusView, SiteSummary } from './site-view.ts';
 import type { ViewLink } from './link.ts';
-import { sha256Hex } from './sheet.ts';
+import { modelContentHash } from '@bulkhead/core';
 import { isWhatIf, NO_WHAT_IF, type WhatIf } from './what-if.ts';
 import type { CompareView } from './compare-view.ts';
+import type { EarlierFile } from './analysis-protocol.ts';
 
 export type Origin = 'served' | 'opened';
 
@@ -21,8 +22,18 @@ export interface GoodSite {
   summary: SiteSummary;
   fileName: string;
   revision: number;
-  /** SHA-256 of the file's bytes as loaded, for the sheet's title block and export names. */
+  /** core's modelContentHash of the file and its parts as loaded (the report's hash), for the title block. */
   sha256: string;
+  /** How many files the hash covers: the model file and its parts. */
+  files: number;
+}
+
+/** Why the earlier revision compared with does not load just now; the comparison shown is its last good one. */
+export interface CompareTrouble {
+  fileName: string;
+  diagnostics: Diagnostic[];
+  /** The served earlier file is gone or unreadable. */
+  missing?: string;
 }
 
 /** An overview with more areas than this is shown as a table, not laid out as a graph. */
@@ -57,6 +68,9 @@ export class Viewer {
   matrix = $state(false);
   /** What changed since an earlier file the reviewer opened to compare with; undefined: no comparison. */
   comparison = $state.raw<CompareView | undefined>();
+  compareTrouble = $state.raw<CompareTrouble | undefined>();
+  /** The comparison itself failed (not the earlier file's errors: those are compareTrouble). */
+  compareFailure = $state<string | undefined>();
   /** Bumped whenever a finding is clicked, so the graph re-centres even on the same finding. */
   centreRequest = $state(0);
   private revision = 0;
@@ -101,11 +115,14 @@ export class Viewer {
   ): Promise<void> {
     this.progress = `reading ${fileName}`;
     let outcome: LoadOutcome;
-    let sha256: string;
+    let hash: { sha256: string; files: unknown[] };
     try {
-      [outcome, sha256] = await Promise.all([
+      [outcome, hash] = await Promise.all([
         client.load(fileName, bytes, parts, (stage) => (this.progress = stage)),
-        sha256Hex(bytes),
+        modelContentHash(
+          { name: fileName, bytes },
+          (parts ?? []).flatMap(([name, part]) => (part instanceof Uint8Array ? [{ name, bytes: part }] : [])),
+        ),
       ]);
     } catch (e) {
       this.analysisError = e instanceof Error ? e.message : String(e);
@@ -132,7 +149,9 @@ export class Viewer {
     performance.mark('bulkhead:analysed');
     const summary = outcome.summary;
     const sameFile = this.good?.fileName === fileName;
-    this.good = { summary, fileName, revision: ++this.revision, sha256 };
+    this.good = { summary, fileName, revision: ++this.revision, sha256: hash.sha256, files: hash.files.length };
+    // A new revision of the file is compared again with the earlier one kept.
+    if (this.comparison) void this.compare(client, null);
     if (!sameFile) {
       this.focus = summary.scenarios[0]?.id;
       this.selected = undefined;
@@ -216,9 +235,43 @@ export class Viewer {
       this.whatIf = question;
       this.whatIfStatements = { add: outcome.add, remove: outcome.remove };
       this.good = { ...good, summary: outcome.summary, revision: ++this.revision };
+      if (this.comparison) void this.compare(client, null);
     } catch (e) {
       if (!(e instanceof SupersededError)) this.analysisError = e instanceof Error ? e.message : String(e);
     }
+  }
+
+  /**
+   * Compares what the page shows with an earlier revision (null: the one the worker keeps). If the earlier
+   * file does not load, its errors are kept to show and the last comparison stays.
+   */
+  async compare(client: AnalysisClient, earlier: EarlierFile | null): Promise<void> {
+    try {
+      const outcome = await client.compare(earlier);
+      this.compareFailure = undefined;
+      if (outcome.diagnostics.length > 0) {
+        this.compareTrouble = {
+          fileName: earlier?.fileName ?? this.comparison?.old.fileName ?? '',
+          diagnostics: outcome.diagnostics,
+        };
+        return;
+      }
+      if (earlier) this.compareTrouble = undefined;
+      if (outcome.view) this.comparison = outcome.view;
+    } catch (e) {
+      if (!(e instanceof SupersededError)) this.compareFailure = e instanceof Error ? e.message : String(e);
+    }
+  }
+
+  /** The served earlier revision is gone or unreadable: say so, keep the last comparison. */
+  markEarlierMissing(fileName: string, reason: string): void {
+    this.compareTrouble = { fileName, diagnostics: [], missing: reason };
+  }
+
+  stopComparing(): void {
+    this.comparison = undefined;
+    this.compareTrouble = undefined;
+    this.compareFailure = undefined;
   }
 
   /** What is in view, as a link (lib/link.ts). */

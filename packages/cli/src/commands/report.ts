@@ -1,8 +1,10 @@
 // `bulkhead report FILE --format md|html|csv|json|sarif [-o OUT] [--date YYYY-MM-DD] [--fail-on LEVEL]`:
 // writes the evidence list; exits 1 when an unaccepted finding is at or above --fail-on (CI gate).
 import { createHash } from 'node:crypto';
+import { basename, dirname, relative, sep } from 'node:path';
 import {
   analyze,
+  modelContentHash,
   FORMATS_OF,
   isReportContents,
   isReportFormat,
@@ -42,7 +44,7 @@ function checkDate(date: string): string {
   return date;
 }
 
-export function reportCommand(file: string | undefined, options: ReportOptions): number {
+export async function reportCommand(file: string | undefined, options: ReportOptions): Promise<number> {
   if (options.jsonSchema) {
     process.stdout.write(`${JSON.stringify(reportJsonSchema(), null, 2)}\n`);
     return 0;
@@ -80,6 +82,16 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
     return 2;
   }
   const analysis = analyze(result.model, { spans: result.spans });
+  // The hash the viewer's title block shows too: parts named by their path from the model file's folder.
+  const content = result.partBytes
+    ? await modelContentHash(
+        { name: basename(file), bytes: result.bytes },
+        [...result.partBytes].map(([part, bytes]) => ({
+          name: relative(dirname(file), part).split(sep).join('/'),
+          bytes,
+        })),
+      )
+    : undefined;
   const text = renderReport(
     {
       model: result.model,
@@ -94,6 +106,7 @@ export function reportCommand(file: string | undefined, options: ReportOptions):
             })),
           }
         : {}),
+      ...(content ? { contentSha256: content.sha256 } : {}),
       toolVersion: cliVersion(),
       ...(date ? { date } : {}),
       spans: result.spans,

@@ -160,9 +160,9 @@ export const COMMANDS = new Map<string, CommandSpec>([
   [
     'view',
     {
-      options: { port: { type: 'string' } },
+      options: { port: { type: 'string' }, compare: { type: 'string' } },
       positionals: { min: 1, max: 1, what: 'a model file' },
-      run: (v, [file]) => viewCommand(file!, str(v.port)),
+      run: (v, [file]) => viewCommand(file!, str(v.port), undefined, str(v.compare)),
     },
   ],
 ]);

@@ -1,7 +1,10 @@
-// `bulkhead view FILE [--port N]`: serves the built viewer for one model file on 127.0.0.1 and
-// pushes every save to the page. Builds nothing at run time: without apps/viewer/dist it says how.
+// `bulkhead view FILE [--port N] [--compare OLD]`: serves the built viewer for one model file on 127.0.0.1
+// and pushes every save to the page; with --compare the page opens comparing FILE with the earlier
+// revision OLD, which is served and followed too. Builds nothing at run time: without apps/viewer/dist it
+// says how.
 import { statSync } from 'node:fs';
-import { analyze, loadModelText } from '@bulkhead/core';
+import { resolve } from 'node:path';
+import { analyze, diffRevisions, loadModelText, renderDiffText, type Model } from '@bulkhead/core';
 import { printDiagnostics, readModel, readPartFile, UsageError } from '../io.ts';
 import { renderCheck } from './check-render.ts';
 import { hasBuiltViewer } from '../view/assets.ts';
@@ -18,8 +21,8 @@ export function parsePort(text: string | undefined): number | undefined {
   return Number(text);
 }
 
-function describe(file: string, state: FileState): string {
-  if ('missing' in state) return `${state.missing}; the page says so and keeps the last good view`;
+function describe(file: string, state: FileState, keeps = 'the last good view'): string {
+  if ('missing' in state) return `${state.missing}; the page says so and keeps ${keeps}`;
   let result;
   try {
     result = loadModelText(file, Buffer.from(state.text, 'latin1'), { readPart: readPartFile });
@@ -29,7 +32,7 @@ function describe(file: string, state: FileState): string {
   const errors = result.diagnostics.filter((d) => d.severity === 'error');
   if (errors.length === 0) return 'loads cleanly';
   const first = errors[0]!.span;
-  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${first.file ?? file}:${first.line}:${first.column}` : ''}; the page keeps the last good view`;
+  return `${errors.length} error${errors.length === 1 ? '' : 's'}${first ? `, first at ${first.file ?? file}:${first.line}:${first.column}` : ''}; the page keeps ${keeps}`;
 }
 
 /** The part files a save touched, when it was not the model file alone, named before the model's verdict. */
@@ -37,14 +40,39 @@ function savedFiles(file: string, changed: string[]): string {
   return changed.length === 1 && changed[0] === file ? '' : `${changed.join(', ')}; `;
 }
 
-export function viewCommand(file: string, portText: string | undefined, distDir = VIEWER_DIST): number {
+/**
+ * The earlier revision must load when the command starts, as every command's input must: its errors are
+ * printed with file, line, column and code, and the command stops. A later save that breaks it only
+ * shows in the page.
+ */
+function readEarlier(compare: string, file: string): Model | undefined {
+  const earlier = readModel(compare);
+  if (earlier.model && !earlier.diagnostics.some((d) => d.severity === 'error')) {
+    if (resolve(compare) === resolve(file))
+      process.stderr.write(`bulkhead view: --compare names the model file itself; nothing will differ\n`);
+    return earlier.model;
+  }
+  process.stderr.write(`bulkhead view: the earlier revision \`${compare}\` (--compare) does not load:\n`);
+  printDiagnostics(earlier);
+  return undefined;
+}
+
+export function viewCommand(
+  file: string,
+  portText: string | undefined,
+  distDir = VIEWER_DIST,
+  compare?: string,
+): number {
   const asked = parsePort(portText);
+  if (compare !== undefined && compare.trim() === '') throw new UsageError('--compare needs an earlier model file');
   try {
     if (!statSync(file).isFile()) throw new Error('not a file');
   } catch {
     process.stderr.write(`bulkhead view: cannot read \`${file}\`: no such file\n`);
     return 2;
   }
+  const earlier = compare !== undefined ? readEarlier(compare, file) : undefined;
+  if (compare !== undefined && !earlier) return 2;
   if (!hasBuiltViewer(distDir)) {
     process.stderr.write(
       `bulkhead view: the viewer is not built (no ${distDir}index.html).\n` +
@@ -54,24 +82,33 @@ export function viewCommand(file: string, portText: string | undefined, distDir 
   }
   // The terminal gets the same analysis as `bulkhead check`, so the URL comes with the verdicts.
   const initial = readModel(file);
-  if (initial.model)
-    process.stdout.write(
-      renderCheck({ ...initial, model: initial.model }, analyze(initial.model, { spans: initial.spans })) + '\n',
-    );
-  else printDiagnostics(initial);
+  if (initial.model) {
+    const analysis = analyze(initial.model, { spans: initial.spans });
+    process.stdout.write(renderCheck({ ...initial, model: initial.model }, analysis) + '\n');
+    // And with --compare, the headline of `bulkhead diff OLD FILE`.
+    if (earlier && compare !== undefined) {
+      const diff = diffRevisions({ model: earlier, label: compare }, { model: initial.model, label: file, analysis });
+      process.stdout.write(`since ${compare}: ${renderDiffText(diff).split('\n')[0]}\n`);
+    }
+  } else printDiagnostics(initial);
   const start = (port: number, fallback: boolean): void => {
     startViewServer({
       file,
+      ...(compare !== undefined ? { compare } : {}),
       distDir,
       port,
-      onChange: (state, changed) =>
+      onChange: (state, changed, kind) => {
+        const which = kind === 'model' ? file : compare!;
+        const role = kind === 'model' ? '' : ' (the earlier revision compared with)';
         process.stdout.write(
-          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(file, changed)}${file} ${describe(file, state)}\n`,
-        ),
+          `${new Date().toLocaleTimeString()} ${'text' in state ? 'saved' : 'changed'}: ${savedFiles(which, changed)}${which}${role} ${describe(which, state, kind === 'model' ? undefined : 'the last comparison')}\n`,
+        );
+      },
     }).then(
       (server) => {
+        const against = compare !== undefined ? `\n  compared with the earlier revision ${compare}` : '';
         process.stdout.write(
-          `bulkhead view: ${file}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`,
+          `bulkhead view: ${file}${against}\n  open ${server.url}\n  the page follows every save; Ctrl+C stops\n`,
         );
         const stop = () => void server.close().then(() => process.exit(0));
         process.once('SIGINT', stop);

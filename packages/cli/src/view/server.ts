@@ -1,5 +1,6 @@
 // The `bulkhead view` server (node:http, no framework): serves the built viewer, the model file at
-// /model, the part files it names at /parts, and server-sent events at /events on every save of any of
+// /model, the part files it names at /parts, an earlier revision to compare with (`--compare OLD`) at
+// /earlier and its parts at /earlier-parts, and server-sent events at /events on every save of any of
 // them. Binds 127.0.0.1; anything else is 404.
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import { unwatchFile, watch, watchFile, type FSWatcher } from 'node:fs';
@@ -26,8 +27,13 @@ export const MISSING_HEADER = 'X-Bulkhead-Missing';
 /** A local page needs one live connection per tab; more than this is a leak or a misbehaving client. */
 export const MAX_EVENT_CLIENTS = 16;
 
+/** Which of the served models a save changed: the one shown, or the earlier revision it is compared with. */
+export type ServedKind = 'model' | 'earlier';
+
 export interface ViewServerOptions {
   file: string;
+  /** An earlier revision of the model to compare with, served and watched like the model itself. */
+  compare?: string;
   distDir: string;
   /** 0 asks the system for a free port. */
   port: number;
@@ -35,7 +41,7 @@ export interface ViewServerOptions {
    * Called after each save is seen, with the model file's new text or why there is none, and the files
    * that changed (the model file as given, part files joined to its folder), for a console line.
    */
-  onChange?: (file: FileState, changed: string[]) => void;
+  onChange?: (file: FileState, changed: string[], kind: ServedKind) => void;
 }
 
 export interface ViewServer {
@@ -97,9 +103,13 @@ export function requestPath(rawUrl: string | undefined): string | undefined {
 export function startViewServer(options: ViewServerOptions): Promise<ViewServer> {
   const assets: Map<string, Asset> = readAssets(options.distDir);
   const clients = new Set<ServerResponse>();
-  const fileName = basename(options.file);
   let revision = 0;
-  let last: SiteFiles = readSiteFiles(options.file);
+  /** Each served model, with its files as last pushed to pages. */
+  const served = new Map<ServedKind, { file: string; last: SiteFiles }>([
+    ['model', { file: options.file, last: readSiteFiles(options.file) }],
+  ]);
+  if (options.compare !== undefined)
+    served.set('earlier', { file: options.compare, last: readSiteFiles(options.compare) });
   let port = 0;
 
   function allowedHost(req: IncomingMessage): boolean {
@@ -116,9 +126,14 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     if (req.method !== 'GET' && !head) {
       return send(res, 405, 'text/plain; charset=utf-8', 'only GET\n', { Allow: 'GET, HEAD' });
     }
-    if (path === '/model') {
-      const named = { 'Cache-Control': 'no-store', [MODEL_FILE_HEADER]: encodeURIComponent(fileName) };
-      const state = readState(options.file);
+    // Without --compare there is no earlier revision: "nothing" (204), which the page asks for and a
+    // browser does not log as a failed load the way it does a 404.
+    if ((path === '/earlier' || path === '/earlier-parts') && !served.has('earlier'))
+      return send(res, 204, 'text/plain; charset=utf-8', '', { 'Cache-Control': 'no-store' }, head);
+    const model = path === '/model' ? served.get('model') : path === '/earlier' ? served.get('earlier') : undefined;
+    if (model) {
+      const named = { 'Cache-Control': 'no-store', [MODEL_FILE_HEADER]: encodeURIComponent(basename(model.file)) };
+      const state = readState(model.file);
       // The bytes go as they are (latin1 keeps every byte), so the page's loader judges them, not us.
       if ('text' in state)
         return send(res, 200, 'application/octet-stream', Buffer.from(state.text, 'latin1'), named, head);
@@ -131,13 +146,15 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
         head,
       );
     }
-    if (path === '/parts') {
+    const partsOf =
+      path === '/parts' ? served.get('model') : path === '/earlier-parts' ? served.get('earlier') : undefined;
+    if (partsOf) {
       // Read afresh like /model; the page loads the model with exactly these files.
       return send(
         res,
         200,
         'application/json; charset=utf-8',
-        partsBody(readSiteFiles(options.file).parts),
+        partsBody(readSiteFiles(partsOf.file).parts),
         { 'Cache-Control': 'no-store' },
         head,
       );
@@ -175,9 +192,9 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     );
   }
 
-  function push(): void {
+  function push(changed: ServedKind[]): void {
     revision++;
-    const message = `event: change\ndata: ${JSON.stringify({ revision })}\n\n`;
+    const message = `event: change\ndata: ${JSON.stringify({ revision, changed })}\n\n`;
     for (const c of clients) c.write(message);
   }
 
@@ -189,42 +206,49 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
     timer = setTimeout(() => settle(false), WATCH_DEBOUNCE_MS);
   }
   function settle(confirmed: boolean): void {
-    const site = readSiteFiles(options.file);
-    if (sameSite(site, last)) return;
-    if (!confirmed && [site.main, ...site.parts.values()].some((state) => 'missing' in state)) {
+    const now = [...served].map(([kind, { file, last }]) => ({ kind, file, last, site: readSiteFiles(file) }));
+    const moved = now.filter(({ site, last }) => !sameSite(site, last));
+    if (moved.length === 0) return;
+    if (
+      !confirmed &&
+      moved.some(({ site }) => [site.main, ...site.parts.values()].some((state) => 'missing' in state))
+    ) {
       timer = setTimeout(() => settle(true), MISSING_GRACE_MS);
       return;
     }
-    const changedFiles = changedBetween(last, site);
-    last = site;
-    follow(site);
-    push();
-    try {
-      options.onChange?.(site.main, changedFiles);
-    } catch {
-      // A console line is not worth the server: the page still gets the change.
+    for (const { kind, file, site } of moved) served.set(kind, { file, last: site });
+    follow();
+    push(moved.map(({ kind }) => kind));
+    for (const { kind, file, last, site } of moved) {
+      try {
+        options.onChange?.(site.main, changedBetween(file, last, site), kind);
+      } catch {
+        // A console line is not worth the server: the page still gets the change.
+      }
     }
   }
 
-  function changedBetween(before: SiteFiles, after: SiteFiles): string[] {
-    const changedFiles = sameState(before.main, after.main) ? [] : [options.file];
+  function changedBetween(file: string, before: SiteFiles, after: SiteFiles): string[] {
+    const changedFiles = sameState(before.main, after.main) ? [] : [file];
     for (const part of new Set([...before.parts.keys(), ...after.parts.keys()])) {
       const was = before.parts.get(part);
       const now = after.parts.get(part);
-      if (!was || !now || !sameState(was, now)) changedFiles.push(join(dirname(options.file), part));
+      if (!was || !now || !sameState(was, now)) changedFiles.push(join(dirname(file), part));
     }
     return changedFiles;
   }
 
   // Watch each file's directory (editors often save by renaming a new file over the old) and poll each
-  // file as well, because fs.watch misses events on some file systems. The set follows the model's parts.
+  // file as well, because fs.watch misses events on some file systems. The set follows the models' parts.
   const polled = new Set<string>();
   const watchers = new Map<string, FSWatcher>();
-  function follow(site: SiteFiles): void {
-    const wanted = new Set([
-      resolve(options.file),
-      ...[...site.parts.keys()].map((part) => partOnDisk(options.file, part)),
-    ]);
+  function follow(): void {
+    const wanted = new Set(
+      [...served.values()].flatMap(({ file, last }) => [
+        resolve(file),
+        ...[...last.parts.keys()].map((part) => partOnDisk(file, part)),
+      ]),
+    );
     for (const file of polled) {
       if (wanted.has(file)) continue;
       unwatchFile(file, changed);
@@ -260,7 +284,7 @@ export function startViewServer(options: ViewServerOptions): Promise<ViewServer>
       // A folder that cannot be watched (missing, no permission) is left to polling.
     }
   }
-  follow(last);
+  follow();
   const keepalive = setInterval(() => {
     for (const c of clients) c.write(': keep-alive\n\n');
   }, KEEPALIVE_MS);

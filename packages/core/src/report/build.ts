@@ -32,6 +32,11 @@ export interface ReportInput {
   sha256: string;
   /** The part files the model names, in the order first read, each with the SHA-256 of the bytes read. */
   parts?: { file: string; sha256: string }[];
+  /**
+   * With part files: the hash over the model file and every part (modelContentHash), which the report
+   * names the model by. Without parts the model's hash is `sha256`, the file's own.
+   */
+  contentSha256?: string;
   toolVersion: string;
   /** YYYY-MM-DD, only when the user asks for it: without it the output is reproducible. */
   date?: string;
@@ -332,7 +337,11 @@ export function buildReportDocument(input: ReportInput, options: { siteWide?: bo
   return present({
     formatVersion: REPORT_FORMAT_VERSION,
     tool: { name: 'bulkhead' as const, version: input.toolVersion },
-    model: { file: input.file, sha256: input.sha256 },
+    model: present({
+      file: input.file,
+      sha256: input.parts?.length ? (input.contentSha256 ?? input.sha256) : input.sha256,
+      parts: input.parts?.length ? input.parts.map((p) => ({ file: p.file, sha256: p.sha256 })) : undefined,
+    }),
     site: present({ name: model.site.name, description: model.site.description }),
     date: input.date,
     control: documentControl(model, input.control),

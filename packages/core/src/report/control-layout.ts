@@ -3,6 +3,7 @@
 // sources appendix that lists every work the rules cite once, with its edition and how it was checked.
 import type { ReportDocument } from './document.ts';
 import { code, codeList, type Block, type Rich } from './blocks.ts';
+import { modelFilesWords } from '../util/content-hash.ts';
 
 /** What the page shows where the model and the command line give nothing: a blank to fill, said so. */
 const NOT_GIVEN = 'not given (set it in the model or on the command line)';
@@ -14,7 +15,12 @@ export function issueBlock(doc: ReportDocument): Block {
     [['Revision'], [c?.revision ?? NOT_GIVEN]],
     [['Status'], [c?.status ?? NOT_GIVEN]],
     [['Model file'], [code(doc.model.file)]],
-    [['SHA-256 of the model file'], [code(doc.model.sha256)]],
+    ...(doc.model.parts
+      ? [
+          [['SHA-256 of the model'], [code(doc.model.sha256), ` over ${modelFilesWords(doc.model.parts.length + 1)}`]],
+          [['Part files'], doc.model.parts.flatMap((p, i) => [...(i ? ['; '] : []), code(p.file), ' SHA-256 ', code(p.sha256)])],
+        ]
+      : [[['SHA-256 of the model file'], [code(doc.model.sha256)]]]),
     [['Built from'], c?.basedOn.length ? [c.basedOn.join('; ')] : ['no source documents named in the model']],
   ];
   return { type: 'table', caption: 'Document control', head: ['Item', 'Value'], rows, rowHeaders: true };
@@ -102,5 +108,6 @@ export function runningFooter(doc: ReportDocument): string {
   const issue = [c?.document, c?.revision !== undefined ? `rev ${c.revision}` : undefined, c?.status]
     .filter((x) => x !== undefined)
     .join(' ');
-  return `${issue ? `${issue} · ` : ''}${doc.model.file} · SHA-256 ${doc.model.sha256}`;
+  const files = doc.model.parts ? ` (${modelFilesWords(doc.model.parts.length + 1).split(':')[0]})` : '';
+  return `${issue ? `${issue} · ` : ''}${doc.model.file}${files} · SHA-256 ${doc.model.sha256}`;
 }

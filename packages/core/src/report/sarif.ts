@@ -209,7 +209,8 @@ export function renderSarif(doc: ReportDocument, input: ReportInput): string {
           },
         ],
         artifacts: [
-          { location: { uri: artifactUri(doc.model.file) }, hashes: { 'sha-256': doc.model.sha256 } },
+          // The model file's own hash: with parts, doc.model.sha256 covers them all.
+          { location: { uri: artifactUri(doc.model.file) }, hashes: { 'sha-256': input.sha256 } },
           ...(input.parts ?? []).map((part) => ({
             location: { uri: artifactUri(part.file) },
             hashes: { 'sha-256': part.sha256 },
