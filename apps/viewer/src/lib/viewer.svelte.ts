@@ -63,6 +63,8 @@ export class Viewer {
 
   /** Why the served file cannot be read just now (deleted, renamed, a directory); undefined when it can. */
   missing = $state<string | undefined>();
+  /** The served file was missing and the last load read it again: said once, until the next load or focus. */
+  back = $state(false);
 
   errors: Diagnostic[] = $derived(this.result?.diagnostics.filter((d) => d.severity === 'error') ?? []);
   warnings: Diagnostic[] = $derived(this.result?.diagnostics.filter((d) => d.severity === 'warning') ?? []);
@@ -89,6 +91,7 @@ export class Viewer {
     this.fileName = fileName;
     this.origin = 'served';
     this.missing = reason;
+    this.back = false;
   }
 
   /** Reads and analyses a file in the worker; on errors the diagnostics show and the last good view stays. */
@@ -113,6 +116,7 @@ export class Viewer {
       return;
     }
     this.progress = undefined;
+    this.back = this.missing !== undefined;
     this.missing = undefined;
     this.result = outcome;
     // A new load replaces the model a what-if was made from (the worker has dropped it).
@@ -179,6 +183,7 @@ export class Viewer {
   focusScenario(id: string | undefined): void {
     this.matrix = false;
     if (this.focus === id) return;
+    this.back = false;
     this.focus = id;
     this.finding = undefined;
     this.selected = undefined;
