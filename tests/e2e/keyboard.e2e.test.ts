@@ -145,8 +145,22 @@ describe('the viewer with the keyboard alone', () => {
     expect(await page.getAttribute('[data-testid=cautions]', 'open')).not.toBeNull();
   });
 
-  it('what-if: Enter asks it, Tab reaches every control (undo, the lines to paste), Space goes back to the file', async () => {
+  it('what-if: Enter asks each kind (accept, withdraw, twin), Tab reaches every control, the lines copy, Space goes back', async () => {
     await focusScenario(page, 'S-101');
+    // A finding the file accepts, so the proof offers to withdraw that acceptance.
+    const key = (await page
+      .locator('[data-testid=findings] button:has(.sev-needs-justification)')
+      .first()
+      .getAttribute('data-finding'))!;
+    writeFileSync(
+      file,
+      `${readFileSync(DEMO, 'utf8')}accept ${key} by="A. Reviewer" date=2026-01-05 reason="Checked by the team"\n`,
+    );
+    await page.waitForSelector(`[data-finding="${key}"] .sev-accepted`, { timeout: 10_000 });
+    await page.click(`[data-finding="${key}"]`);
+    expect(await tabTo(page, '[data-testid=what-if-reject]')).toBe(true);
+    await page.keyboard.press('Enter');
+    await page.waitForSelector('[data-testid=what-if] li[data-change=reject]');
     await page.click('[data-finding^="shared-bridle:"]');
     expect(await tabTo(page, '[data-testid=what-if-accept]')).toBe(true);
     await page.keyboard.press('Enter');
@@ -157,11 +171,18 @@ describe('the viewer with the keyboard alone', () => {
     const walk = await walkWithTab(page);
     expectAllReached(walk, 45);
     expect(walk.controls.some((c) => c.html.includes('data-testid="what-if-add"'))).toBe(true);
-    expect(walk.controls.filter((c) => c.html.startsWith('<button') && c.html.includes('undo'))).toHaveLength(2);
+    expect(walk.controls.filter((c) => c.html.startsWith('<button') && c.html.includes('undo'))).toHaveLength(3);
     await expectFocusMarks(page, ['[data-testid=what-if] li button', '[data-testid=what-if-add]']);
+    expect(await tabTo(page, '[data-testid=what-if-copy]')).toBe(true);
+    await page.keyboard.press('Enter');
+    const lines = await page.inputValue('[data-testid=what-if-add]');
+    expect(lines).toContain('BR-101');
+    await expect.poll(() => page.evaluate(() => navigator.clipboard.readText())).toBe(lines);
     expect(await tabTo(page, '[data-testid=what-if-reset]')).toBe(true);
     await page.keyboard.press(' ');
     await page.waitForSelector('[data-testid=what-if]', { state: 'detached' });
+    writeFileSync(file, readFileSync(DEMO));
+    await page.waitForSelector(`[data-finding="${key}"] .sev-needs-justification`, { timeout: 10_000 });
   });
 
   it('tag search: typed, its results reached with Tab, Enter shows the tag', async () => {
