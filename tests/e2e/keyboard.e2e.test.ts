@@ -118,6 +118,28 @@ describe('the viewer with the keyboard alone', () => {
     ]);
   });
 
+  it('a box with focus: arrow keys pan the graph and + and - zoom it, as dragging and the wheel do', async () => {
+    expect(await tabTo(page, GRAPH_BOX)).toBe(true);
+    const view = () =>
+      page.evaluate(() => {
+        const t = document.querySelector('svg[data-testid=graph] > g')!.getAttribute('transform')!;
+        const [x, y, k] = /translate\(([-\d.e]+) ([-\d.e]+)\) scale\(([-\d.e]+)\)/.exec(t)!.slice(1).map(Number);
+        return { x: x!, y: y!, k: k! };
+      });
+    const before = await view();
+    await page.keyboard.press('ArrowLeft');
+    await page.keyboard.press('ArrowUp');
+    const panned = await view();
+    expect(panned.x).toBeGreaterThan(before.x);
+    expect(panned.y).toBeGreaterThan(before.y);
+    expect(panned.k).toBe(before.k);
+    await page.keyboard.press('+');
+    expect((await view()).k).toBeGreaterThan(before.k);
+    await page.keyboard.press('-');
+    await page.keyboard.press('-');
+    expect((await view()).k).toBeLessThan(before.k);
+  });
+
   it("the proof's Copy puts the accept statement on the clipboard, from the keyboard", async () => {
     expect(await tabTo(page, '[data-testid=proof] .accept button')).toBe(true);
     await page.keyboard.press('Enter');
