@@ -161,6 +161,35 @@ describe('the viewer with the keyboard alone', () => {
     await page.waitForSelector('[data-testid=details]', { state: 'detached' });
   });
 
+  it("closing the card or the proof from inside it gives focus back to the box or the finding's line", async () => {
+    const box = `${GRAPH_BOX}[data-tag="BR-101"]`;
+    const focusIs = (selector: string) =>
+      expect.poll(() => page.evaluate((s) => document.activeElement?.matches(s) ?? false, selector)).toBe(true);
+    expect(await tabTo(page, box)).toBe(true);
+    await page.keyboard.press('Enter');
+    expect(await tabTo(page, 'button[aria-label="Close details"]')).toBe(true);
+    await page.keyboard.press('Enter');
+    await page.waitForSelector('[data-testid=details]', { state: 'detached' });
+    await focusIs(box);
+    await page.keyboard.press(' ');
+    expect(await tabTo(page, 'button[aria-label="Close details"]')).toBe(true);
+    await page.keyboard.press('Escape');
+    await page.waitForSelector('[data-testid=details]', { state: 'detached' });
+    await focusIs(box);
+    const finding = '[data-testid=findings] button[data-finding^="shared-bridle:"]';
+    expect(await tabTo(page, finding)).toBe(true);
+    await page.keyboard.press('Enter');
+    expect(await tabTo(page, '[data-testid=proof] button.close')).toBe(true);
+    await page.keyboard.press('Enter');
+    await page.waitForSelector('[data-testid=proof]', { state: 'detached' });
+    await focusIs(finding);
+    await page.keyboard.press('Enter');
+    expect(await tabTo(page, '[data-testid=proof-link]')).toBe(true);
+    await page.keyboard.press('Escape');
+    await page.waitForSelector('[data-testid=proof]', { state: 'detached' });
+    await focusIs(finding);
+  });
+
   it('the cautions open with Enter on their summary', async () => {
     expect(await tabTo(page, '[data-testid=cautions] summary')).toBe(true);
     await page.keyboard.press('Enter');
