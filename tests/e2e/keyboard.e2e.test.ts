@@ -161,34 +161,24 @@ describe('the viewer with the keyboard alone', () => {
     await page.waitForSelector('[data-testid=details]', { state: 'detached' });
   });
 
-  it("closing the card or the proof from inside it gives focus back to the box or the finding's line", async () => {
-    const box = `${GRAPH_BOX}[data-tag="BR-101"]`;
-    const focusIs = (selector: string) =>
-      expect.poll(() => page.evaluate((s) => document.activeElement?.matches(s) ?? false, selector)).toBe(true);
-    expect(await tabTo(page, box)).toBe(true);
-    await page.keyboard.press('Enter');
-    expect(await tabTo(page, 'button[aria-label="Close details"]')).toBe(true);
-    await page.keyboard.press('Enter');
-    await page.waitForSelector('[data-testid=details]', { state: 'detached' });
-    await focusIs(box);
-    await page.keyboard.press(' ');
-    expect(await tabTo(page, 'button[aria-label="Close details"]')).toBe(true);
-    await page.keyboard.press('Escape');
-    await page.waitForSelector('[data-testid=details]', { state: 'detached' });
-    await focusIs(box);
-    const finding = '[data-testid=findings] button[data-finding^="shared-bridle:"]';
-    expect(await tabTo(page, finding)).toBe(true);
-    await page.keyboard.press('Enter');
-    expect(await tabTo(page, '[data-testid=proof] button.close')).toBe(true);
-    await page.keyboard.press('Enter');
-    await page.waitForSelector('[data-testid=proof]', { state: 'detached' });
-    await focusIs(finding);
-    await page.keyboard.press('Enter');
-    expect(await tabTo(page, '[data-testid=proof-link]')).toBe(true);
-    await page.keyboard.press('Escape');
-    await page.waitForSelector('[data-testid=proof]', { state: 'detached' });
-    await focusIs(finding);
-  });
+  const BOX = `${GRAPH_BOX}[data-tag="BR-101"]`;
+  const FINDING = '[data-testid=findings] button[data-finding^="shared-bridle:"]';
+  it.each([
+    ['the card', BOX, 'Enter', 'button[aria-label="Close details"]', 'Enter', '[data-testid=details]'],
+    ['the card', BOX, ' ', 'button[aria-label="Close details"]', 'Escape', '[data-testid=details]'],
+    ['the proof', FINDING, 'Enter', '[data-testid=proof] button.close', 'Enter', '[data-testid=proof]'],
+    ['the proof', FINDING, 'Enter', '[data-testid=proof-link]', 'Escape', '[data-testid=proof]'],
+  ])(
+    '%s: opened from %s with %j, closed from %s inside it with %j: focus goes back to what opened it',
+    async (_, opener, openKey, inside, closeKey, panel) => {
+      expect(await tabTo(page, opener)).toBe(true);
+      await page.keyboard.press(openKey);
+      expect(await tabTo(page, inside)).toBe(true);
+      await page.keyboard.press(closeKey);
+      await page.waitForSelector(panel, { state: 'detached' });
+      await expect.poll(() => page.evaluate((s) => document.activeElement?.matches(s) ?? false, opener)).toBe(true);
+    },
+  );
 
   it('the cautions open with Enter on their summary', async () => {
     expect(await tabTo(page, '[data-testid=cautions] summary')).toBe(true);
