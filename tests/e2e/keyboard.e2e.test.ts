@@ -287,6 +287,8 @@ describe('the viewer with the keyboard alone', () => {
     expect(await tabTo(page, '[data-testid=compare-stop]')).toBe(true);
     await page.keyboard.press('Enter');
     await page.waitForSelector('[data-testid=compare-legend]', { state: 'detached' });
+    // The Stop button is gone; focus is on the button that opens an earlier file, not lost.
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('data-testid'))).toBe('compare-button');
   });
 
   it('"Open model…" opens the file chooser with Enter', async () => {
