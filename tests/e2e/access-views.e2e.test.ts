@@ -31,6 +31,9 @@ describe('the welcome page and the missing-file notice with assistive technology
   it('shows the missing-file notice and the welcome, with no serious or critical axe violation', async () => {
     await page.waitForSelector('[data-testid=missing]');
     await page.waitForSelector('.welcome h1');
+    // No version ever loaded and the file is gone: the header must not say "live", and the status says why.
+    expect(await page.innerText('[data-testid=live]')).toBe('not live: file missing');
+    await expect.poll(() => page.innerText('[data-testid=announce]')).toMatch(/^File missing: marrow-fen\.bulk\. The /);
     await screenshot(page, 'welcome-missing');
     expect(await seriousViolations(page)).toEqual([]);
   });
@@ -39,6 +42,8 @@ describe('the welcome page and the missing-file notice with assistive technology
     copyFileSync(DEMO, file);
     await page.waitForSelector(GRAPH_BOX, { timeout: 10_000 });
     await page.waitForSelector('[data-testid=missing]', { state: 'detached' });
+    await expect.poll(() => page.innerText('[data-testid=announce]')).toMatch(/^marrow-fen\.bulk is back\. /);
+    expect(await page.innerText('[data-testid=live]')).toBe('live: updates on every save');
     // A missing file is a 404 for /model, which the browser logs; nothing else may appear.
     expect(session.seen.errors.filter((e) => !/status of 404/.test(e))).toEqual([]);
   });

@@ -49,6 +49,9 @@ describe('a model with errors', () => {
       expect(text).toContain(`bad.bulk:${d.span!.line}:${d.span!.column}`);
     }
     expect(await page.locator('svg[data-testid=graph]').count()).toBe(0);
+    // Nothing of the file is shown, so the header must not say "live"; the status says why.
+    expect(await page.innerText('[data-testid=live]')).toBe('not live: the saved file does not load');
+    expect(await page.innerText('[data-testid=announce]')).toBe('bad.bulk as saved does not load.');
     await screenshot(page, 'bad-model-served');
   });
 

@@ -32,9 +32,20 @@ describe('the watched file through its life', () => {
     expect(session.view.child.exitCode).toBeNull();
   }
 
+  /**
+   * The page says the file is missing: the notice (each sentence starting with a capital), the header
+   * (never "live" while the file is gone), and the status a screen reader announces.
+   */
   async function showsMissing(says: string) {
     await page.waitForSelector(`[data-testid=missing]:has-text("${says}")`, { timeout: 5_000 });
     await page.waitForSelector('[data-testid=stale-header]');
+    const notice = await page.innerText('[data-testid=missing] p');
+    const sentences = notice.split(/(?<=\.)\s+/);
+    expect(sentences.length).toBeGreaterThan(1);
+    for (const sentence of sentences) expect(sentence, notice).toMatch(/^[A-Z]/);
+    expect(await page.innerText('[data-testid=live]')).toBe('not live: file missing');
+    expect(await page.getAttribute('[data-testid=live]', 'data-live')).toBe('missing');
+    await expect.poll(() => page.innerText('[data-testid=announce]')).toMatch(/^File missing: marrow-fen\.bulk\. /);
     expect(await page.locator(GRAPH_BOX).count()).toBeGreaterThan(0);
     expect(session.view.child.exitCode).toBeNull();
   }
@@ -64,12 +75,14 @@ describe('the watched file through its life', () => {
     await recovers();
   });
 
-  it('deleted: "file missing", then recovery when it is written again', async () => {
+  it('deleted: "file missing", then recovery when it is written again, both announced', async () => {
     rmSync(file);
     await showsMissing('missing');
     await screenshot(page, 'file-missing');
     expect(await seriousViolations(page)).toEqual([]);
     await recovers();
+    await expect.poll(() => page.innerText('[data-testid=announce]')).toMatch(/^marrow-fen\.bulk is back\. Scenario /);
+    expect(await page.getAttribute('[data-testid=live]', 'data-live')).toBe('connected');
   });
 
   it('renamed away and back', async () => {

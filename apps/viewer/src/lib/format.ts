@@ -34,3 +34,11 @@ export const SEVERITY_WORDS: Record<string, string> = {
 export function plural(n: number, word: string): string {
   return `${n} ${word}${n === 1 ? '' : 's'}`;
 }
+
+/** A reason as a sentence: a capital first letter and a full stop ("the file is gone" -> "The file is gone."). */
+export function asSentence(text: string): string {
+  const trimmed = text.trim();
+  if (trimmed === '') return '';
+  const capital = trimmed.charAt(0).toUpperCase() + trimmed.slice(1);
+  return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}

@@ -86,15 +86,20 @@ export class PanZoom {
     this.y = within(this.y, this.height - margin - (content.y + content.height) * this.k, margin - content.y * this.k);
   }
 
-  /** Pans (never zooms) just enough that `b` is inside the view with a margin: keyboard focus on an off-screen box. */
-  reveal(b: Bounds, margin = 40): void {
+  /**
+   * Pans (never zooms) just enough that `b` is inside the view with a margin: keyboard focus on an
+   * off-screen box. `coveredRight` is how much of the view's right side a card covers; the box is
+   * brought out from under it when the rest of the view is wide enough to hold it.
+   */
+  reveal(b: Bounds, margin = 40, coveredRight = 0): void {
     if (this.width === 0) return;
     const left = this.x + b.x * this.k;
     const top = this.y + b.y * this.k;
     const right = left + b.width * this.k;
     const bottom = top + b.height * this.k;
+    const open = this.width - coveredRight >= b.width * this.k + 2 * margin ? this.width - coveredRight : this.width;
     if (left < margin) this.x += margin - left;
-    else if (right > this.width - margin) this.x -= Math.min(right - (this.width - margin), left - margin);
+    else if (right > open - margin) this.x -= Math.min(right - (open - margin), left - margin);
     if (top < margin) this.y += margin - top;
     else if (bottom > this.height - margin) this.y -= Math.min(bottom - (this.height - margin), top - margin);
   }

@@ -71,12 +71,16 @@ export class Viewer {
   compareTrouble = $state.raw<CompareTrouble | undefined>();
   /** The comparison itself failed (not the earlier file's errors: those are compareTrouble). */
   compareFailure = $state<string | undefined>();
+  /** Counts compare questions, so only the newest answer is shown. */
+  private compareAsked = 0;
   /** Bumped whenever a finding is clicked, so the graph re-centres even on the same finding. */
   centreRequest = $state(0);
   private revision = 0;
 
   /** Why the served file cannot be read just now (deleted, renamed, a directory); undefined when it can. */
   missing = $state<string | undefined>();
+  /** The served file was missing and the last load read it again: said once, until the next load or focus. */
+  back = $state(false);
 
   errors: Diagnostic[] = $derived(this.result?.diagnostics.filter((d) => d.severity === 'error') ?? []);
   warnings: Diagnostic[] = $derived(this.result?.diagnostics.filter((d) => d.severity === 'warning') ?? []);
@@ -103,6 +107,7 @@ export class Viewer {
     this.fileName = fileName;
     this.origin = 'served';
     this.missing = reason;
+    this.back = false;
   }
 
   /** Reads and analyses a file in the worker; on errors the diagnostics show and the last good view stays. */
@@ -130,6 +135,7 @@ export class Viewer {
       return;
     }
     this.progress = undefined;
+    this.back = this.missing !== undefined;
     this.missing = undefined;
     this.result = outcome;
     // A new load replaces the model a what-if was made from (the worker has dropped it).
@@ -198,6 +204,7 @@ export class Viewer {
   focusScenario(id: string | undefined): void {
     this.matrix = false;
     if (this.focus === id) return;
+    this.back = false;
     this.focus = id;
     this.finding = undefined;
     this.selected = undefined;
@@ -246,8 +253,11 @@ export class Viewer {
    * file does not load, its errors are kept to show and the last comparison stays.
    */
   async compare(client: AnalysisClient, earlier: EarlierFile | null): Promise<void> {
+    const question = ++this.compareAsked;
     try {
       const outcome = await client.compare(earlier);
+      // An answer to an earlier question, or to one asked before Stop, is dropped.
+      if (question !== this.compareAsked) return;
       this.compareFailure = undefined;
       if (outcome.diagnostics.length > 0) {
         this.compareTrouble = {
@@ -269,6 +279,7 @@ export class Viewer {
   }
 
   stopComparing(): void {
+    this.compareAsked++;
     this.comparison = undefined;
     this.compareTrouble = undefined;
     this.compareFailure = undefined;
