@@ -18,7 +18,10 @@ export function issueBlock(doc: ReportDocument): Block {
     ...(doc.model.parts
       ? [
           [['SHA-256 of the model'], [code(doc.model.sha256), ` over ${modelFilesWords(doc.model.parts.length + 1)}`]],
-          [['Part files'], doc.model.parts.flatMap((p, i) => [...(i ? ['; '] : []), code(p.file), ' SHA-256 ', code(p.sha256)])],
+          [
+            ['Part files'],
+            doc.model.parts.flatMap((p, i) => [...(i ? ['; '] : []), code(p.file), ' SHA-256 ', code(p.sha256)]),
+          ],
         ]
       : [[['SHA-256 of the model file'], [code(doc.model.sha256)]]]),
     [['Built from'], c?.basedOn.length ? [c.basedOn.join('; ')] : ['no source documents named in the model']],

@@ -298,10 +298,13 @@ export const ReportDocument = z
     tool: z.strictObject({ name: z.literal('bulkhead'), version: z.string() }),
     model: z.strictObject({
       file: z.string(),
-      sha256: z.string().regex(/^[0-9a-f]{64}$/).meta({
-        description:
-          "SHA-256 of the model: of the file's bytes, or for a model with part files, of the list `sha256sum` prints for the model file and then each part in code-point order of its path",
-      }),
+      sha256: z
+        .string()
+        .regex(/^[0-9a-f]{64}$/)
+        .meta({
+          description:
+            "SHA-256 of the model: of the file's bytes, or for a model with part files, of the list `sha256sum` prints for the model file and then each part in code-point order of its path",
+        }),
       parts: z
         .array(z.strictObject({ file: z.string(), sha256: z.string().regex(/^[0-9a-f]{64}$/) }))
         .optional()
