@@ -41,6 +41,9 @@ async function expectFocusMarks(page: Page, selectors: string[]) {
   }
 }
 
+const focusedOn = (page: Page, selector: string) =>
+  page.evaluate((s) => document.activeElement?.matches(s) ?? false, selector);
+
 describe('the viewer with the keyboard alone', () => {
   const file = join(tempDir('bulkhead-keys-'), 'marrow-fen.bulk');
   let session: Session;
@@ -180,6 +183,16 @@ describe('the viewer with the keyboard alone', () => {
     },
   );
 
+  it('"Show all paths" takes its own button away: focus moves to the finding\'s line in the list', async () => {
+    expect(await tabTo(page, FINDING)).toBe(true);
+    await page.keyboard.press('Enter');
+    await page.waitForSelector('[data-testid=proof]');
+    expect(await tabTo(page, '[data-testid=show-all-paths]')).toBe(true);
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.locator('[data-testid=show-all-paths]').count()).toBe(0);
+    await expect.poll(() => focusedOn(page, FINDING)).toBe(true);
+  });
+
   it('the cautions open with Enter on their summary', async () => {
     expect(await tabTo(page, '[data-testid=cautions] summary')).toBe(true);
     await page.keyboard.press('Enter');
@@ -219,9 +232,18 @@ describe('the viewer with the keyboard alone', () => {
     const lines = await page.inputValue('[data-testid=what-if-add]');
     expect(lines).toContain('BR-101');
     await expect.poll(() => page.evaluate(() => navigator.clipboard.readText())).toBe(lines);
+    // Undo takes its own button away: focus moves to the next change's undo, not to the page's body.
+    expect(await tabTo(page, '[data-testid=what-if] li button')).toBe(true);
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.locator('[data-testid=what-if] li').count()).toBe(2);
+    await expect.poll(() => focusedOn(page, '[data-testid=what-if] li button')).toBe(true);
     expect(await tabTo(page, '[data-testid=what-if-reset]')).toBe(true);
     await page.keyboard.press(' ');
     await page.waitForSelector('[data-testid=what-if]', { state: 'detached' });
+    // The bar goes with Back (and the proof, whose finding the what-if made): focus moves to the findings.
+    await expect
+      .poll(() => focusedOn(page, '[data-testid=proof] .what-if button, [data-testid=findings] button'))
+      .toBe(true);
     writeFileSync(file, readFileSync(DEMO));
     await page.waitForSelector(`[data-finding="${key}"] .sev-needs-justification`, { timeout: 10_000 });
   });
@@ -235,6 +257,8 @@ describe('the viewer with the keyboard alone', () => {
     expect(await tabTo(page, '[data-tag-result="BR-101"]')).toBe(true);
     await page.keyboard.press('Enter');
     await page.waitForSelector('[data-testid=details][data-tag="BR-101"]');
+    // The results go with the query: focus moves to the box shown.
+    await expect.poll(() => focusedOn(page, `${GRAPH_BOX}[data-tag="BR-101"]`)).toBe(true);
     await page.keyboard.press('Escape');
   });
 

@@ -19,3 +19,31 @@ export async function closeReturningFocus(panel: string, opener: string, close: 
   await tick();
   document.querySelector<HTMLElement | SVGElement>(opener)?.focus();
 }
+
+/**
+ * After an action that removes the control that had focus: once that control is gone, focuses the
+ * first element matching one of `targets`, in order, waiting up to `patienceMs` for the control to
+ * go and a target to appear (a box in a scenario still being laid out). Focus the user moved
+ * elsewhere meanwhile is left alone.
+ */
+export async function focusFirst(targets: readonly string[], patienceMs = 2000): Promise<void> {
+  const from = document.activeElement;
+  await tick();
+  const started = performance.now();
+  for (;;) {
+    const now = document.activeElement;
+    if (now && now !== from && now !== document.body) return;
+    // The action may take a moment (a worker's answer) to take the pressed control away.
+    const gone = !from || !from.isConnected;
+    if (gone)
+      for (const t of targets) {
+        const el = document.querySelector<HTMLElement | SVGElement>(t);
+        if (el) {
+          el.focus();
+          return;
+        }
+      }
+    if (performance.now() - started > patienceMs) return;
+    await new Promise((resolve) => requestAnimationFrame(resolve));
+  }
+}
