@@ -213,7 +213,7 @@ export async function openLiveDemo(prefix: string): Promise<Session & { file: st
   const original = readFileSync(DEMO, 'utf8');
   copyFileSync(DEMO, file);
   const session = await openViewer(file, GRAPH_BOX);
-  await session.page.waitForSelector('[data-testid=live]:has-text("live")');
+  await session.page.waitForSelector('[data-testid=live][data-live=connected]');
   return { ...session, file, original };
 }
 

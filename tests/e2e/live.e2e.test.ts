@@ -16,7 +16,7 @@ describe('live reload from bulkhead view', () => {
     writeFileSync(file, original);
     session = await openViewer(file, GRAPH_BOX);
     page = session.page;
-    await page.waitForSelector('[data-testid=live]:has-text("live")');
+    await page.waitForSelector('[data-testid=live][data-live=connected]');
   });
 
   afterAll(async () => {

@@ -21,7 +21,7 @@ describe('bulkhead view on a model split over part files', () => {
     expect(readFileSync(file, 'utf8')).toContain('part "generated/plant.bulk"');
     session = await openViewer(file, GRAPH_BOX);
     page = session.page;
-    await page.waitForSelector('[data-testid=live]:has-text("live")');
+    await page.waitForSelector('[data-testid=live][data-live=connected]');
   });
 
   afterAll(async () => {
