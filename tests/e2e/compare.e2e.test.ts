@@ -8,7 +8,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { seriousViolations } from './axe.ts';
-import { copyTo, DEMO, GRAPH_BOX, openViewer, ROOT, screenshot, type Session, tempDir } from './harness.ts';
+import { DEMO, docScreenshot, GRAPH_BOX, openViewer, ROOT, type Session, tempDir } from './harness.ts';
 import {
   cliDiff,
   expectChangedFindingsAsDiff,
@@ -52,7 +52,7 @@ describe('comparing two revisions in the viewer', () => {
     for (const words of ['▲ worse', '▼ better', '+ new scenario', '− scenario gone', '+ new finding', '− finding gone'])
       expect(legend).toContain(words);
     expect(await seriousViolations(page)).toEqual([]);
-    copyTo(await screenshot(page, 'compare'), join(ROOT, 'docs/viewer-compare.png'));
+    await docScreenshot(page, 'compare', 'docs/viewer-compare.png');
   });
 
   it('marks on the graph each element of the scenario whose findings changed, and keys the marks in the legend', async () => {
@@ -61,7 +61,7 @@ describe('comparing two revisions in the viewer', () => {
     await expectGraphMarksAsDiff(page, truth, 'S-101');
     expect(await page.innerText('[data-testid=graph-compare-key]')).toContain('▲ worse');
     expect(await seriousViolations(page)).toEqual([]);
-    copyTo(await screenshot(page, 'compare-graph'), join(ROOT, 'docs/viewer-compare-graph.png'));
+    await docScreenshot(page, 'compare-graph', 'docs/viewer-compare-graph.png');
     await page.click('[data-testid=mode-matrix]');
     await page.waitForSelector('[data-testid=compare-summary]');
   });

@@ -109,6 +109,17 @@ export function copyTo(from: string, to: string): void {
   copyFileSync(from, to);
 }
 
+/**
+ * A screenshot for the repository's docs: the pointer moved off the page and the layout time (which
+ * differs on every run) hidden, so an unchanged view gives the same image and docs/ does not churn.
+ */
+export async function docScreenshot(page: Page, name: string, docPath: string): Promise<void> {
+  await page.mouse.move(0, 0);
+  const style = await page.addStyleTag({ content: '[data-testid=layout-status] { visibility: hidden; }' });
+  copyTo(await screenshot(page, name), join(ROOT, docPath));
+  await style.evaluate((el) => (el as Element).remove());
+}
+
 export function tempDir(prefix: string): string {
   return mkdtempSync(join(tmpdir(), prefix));
 }

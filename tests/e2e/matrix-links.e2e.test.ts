@@ -5,16 +5,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { seriousViolations } from './axe.ts';
-import { join } from 'node:path';
 import {
-  copyTo,
   DEMO,
-  sameFigure,
   type DemoTruth,
+  docScreenshot,
   focusScenario,
   launch,
-  ROOT,
-  screenshot,
+  sameFigure,
   startView,
   truthFor,
   viewerForTests,
@@ -51,7 +48,7 @@ describe('the all-scenarios matrix and the tag search', () => {
       }
     }
     expect(await seriousViolations(page)).toEqual([]);
-    copyTo(await screenshot(page, 'matrix'), join(ROOT, 'docs/viewer-matrix.png'));
+    await docScreenshot(page, 'matrix', 'docs/viewer-matrix.png');
   });
 
   it('sorts by gap, both ways, and filters by text and by falling short', async () => {
@@ -110,7 +107,7 @@ describe('the all-scenarios matrix and the tag search', () => {
     expect(await ranking.innerText()).toContain(truth.report.commonCauses.order);
     expect(await seriousViolations(page)).toEqual([]);
     await ranking.scrollIntoViewIfNeeded();
-    copyTo(await screenshot(page, 'ranking'), join(ROOT, 'docs/viewer-ranking.png'));
+    await docScreenshot(page, 'ranking', 'docs/viewer-ranking.png');
     // The top element's link shows it in the first scenario it touches, its card open.
     const top = expected[0]!;
     await ranking.locator(`tr[data-element="${top.element}"] [data-cell=element]`).click();

@@ -5,8 +5,7 @@
 // from the CLI's JSON report and the analysis of the same file (harness.truthFor), not from the page.
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { join } from 'node:path';
-import { copyTo, DEMO, type DemoTruth, focusScenario, ROOT, screenshot, truthFor, viewerForTests } from './harness.ts';
+import { DEMO, type DemoTruth, docScreenshot, focusScenario, truthFor, viewerForTests } from './harness.ts';
 
 const truth: DemoTruth = truthFor(DEMO);
 /** The first view and a finding's view never zoom below this (apps/viewer/src/lib/panzoom.svelte.ts). */
@@ -83,7 +82,7 @@ describe('reviewing a finding in the viewer', () => {
     }
     await page.mouse.move(0, 0);
     await page.addStyleTag({ content: '[data-testid=layout-status] { visibility: hidden; }' });
-    copyTo(await screenshot(page, 'review-proof'), join(ROOT, 'docs/viewer-proof.png'));
+    await docScreenshot(page, 'review-proof', 'docs/viewer-proof.png');
   });
 
   it('closes the proof with Escape', async () => {

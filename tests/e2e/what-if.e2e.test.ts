@@ -8,13 +8,11 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { seriousViolations } from './axe.ts';
 import {
-  copyTo,
   DEMO,
   type DemoTruth,
+  docScreenshot,
   focusScenario,
-  ROOT,
   sameFigure,
-  screenshot,
   tempDir,
   truthFor,
   viewerForTests,
@@ -100,7 +98,7 @@ describe('what-if in the viewer', () => {
     expect(sameFigure(await figure('mitigatedAfter'), after.mitigated)).toBe(true);
     await page.mouse.move(0, 0);
     await page.addStyleTag({ content: '[data-testid=layout-status] { visibility: hidden; }' });
-    copyTo(await screenshot(page, 'what-if'), join(ROOT, 'docs/viewer-what-if.png'));
+    await docScreenshot(page, 'what-if', 'docs/viewer-what-if.png');
   });
 
   it('never writes the file', () => {
